@@ -1,0 +1,112 @@
+// Shared machinery of the C wrappers: floating-point environment guard, output checks,
+// NaN-on-error, and the one place where C++ exceptions are caught.
+#ifndef PUMPLOSS_CAPI_COMMON_HPP
+#define PUMPLOSS_CAPI_COMMON_HPP
+
+#include <cfenv>
+#include <limits>
+#include <new>
+
+#if defined(__SSE2__) || defined(_M_X64) || (defined(_M_IX86_FP) && _M_IX86_FP >= 2)
+#include <xmmintrin.h>
+#define PUMPLOSS_HAVE_MXCSR 1
+#endif
+
+#include "pumploss.h"
+#include "pumploss/status.hpp"
+
+namespace pumploss::capi {
+
+inline constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
+
+/// Masks floating-point traps and clears the flags for the duration of a call, then restores
+/// the caller's environment (flags included), so hosts that poll or trap FP exceptions (some
+/// spreadsheet and Fortran runtimes) see nothing of our intermediate over/underflows. On SSE
+/// targets only MXCSR is saved (a few cycles); elsewhere the whole fenv.
+class fp_guard {
+ public:
+#ifdef PUMPLOSS_HAVE_MXCSR
+  fp_guard() noexcept : saved_(_mm_getcsr()) { _mm_setcsr((saved_ | 0x1F80u) & ~0x3Fu); }
+  ~fp_guard() { _mm_setcsr(saved_); }
+
+ private:
+  unsigned int saved_;
+#else
+  fp_guard() noexcept { std::feholdexcept(&saved_); }
+  ~fp_guard() { std::fesetenv(&saved_); }
+
+ private:
+  std::fenv_t saved_;
+#endif
+ public:
+  fp_guard(const fp_guard&) = delete;
+  fp_guard& operator=(const fp_guard&) = delete;
+};
+
+/// Run a wrapper body: checks the output pointers, guards the FP environment, maps C++
+/// exceptions to codes, and sets every output to NaN on an error status.
+/// `Body` returns pumploss::status.
+template <std::size_t N, class Body>
+inline int call(double* const (&outs)[N], Body&& body) noexcept {
+  bool null_out = false;
+  for (double* p : outs) {
+    if (p == nullptr) null_out = true; else *p = kNaN;
+  }
+  if (null_out) return PUMPLOSS_EMISUSE;
+  status st;
+  {
+    fp_guard guard;
+    try {
+      st = body();
+    } catch (const std::bad_alloc&) {
+      st = status::no_memory;
+    } catch (...) {
+      st = status::internal;
+    }
+  }
+  if (is_error(st)) {
+    for (double* p : outs) *p = kNaN;
+  }
+  return static_cast<int>(st);
+}
+
+/// Run a batch body element by element: null arrays give EMISUSE (non-null outputs NaN-filled
+/// when n allows), each element's status goes to status_out[i] (NaN outputs on its error), and
+/// the summary is OK, the first report code seen, or PUMPLOSS_WPARTIAL when any element failed.
+/// `Elem(i)` returns the element's status and writes its outputs.
+template <std::size_t N, class Elem>
+inline int call_batch(std::size_t n, double* const (&outs)[N], int* status_out, bool inputs_ok,
+                      Elem&& elem) noexcept {
+  bool null_out = status_out == nullptr;
+  for (double* p : outs) null_out = null_out || p == nullptr;
+  if (null_out || !inputs_ok) {
+    for (double* p : outs) {
+      if (p != nullptr) for (std::size_t i = 0; i < n; ++i) p[i] = kNaN;
+    }
+    if (status_out != nullptr) for (std::size_t i = 0; i < n; ++i) status_out[i] = PUMPLOSS_EMISUSE;
+    return PUMPLOSS_EMISUSE;
+  }
+  fp_guard guard;
+  int summary = PUMPLOSS_OK;
+  bool failed = false;
+  try {
+    for (std::size_t i = 0; i < n; ++i) {
+      const status st = elem(i);
+      const int code = static_cast<int>(st);
+      status_out[i] = code;
+      if (is_error(st)) {
+        failed = true;
+        for (double* p : outs) p[i] = kNaN;
+      } else if (code != PUMPLOSS_OK && summary == PUMPLOSS_OK) {
+        summary = code;
+      }
+    }
+  } catch (...) {
+    return PUMPLOSS_EINTERNAL;
+  }
+  return failed ? PUMPLOSS_WPARTIAL : summary;
+}
+
+}  // namespace pumploss::capi
+
+#endif

@@ -1,0 +1,13 @@
+/// @file pumploss.hpp
+/// @brief Umbrella header: includes every public header of the pumploss C++ core.
+#ifndef PUMPLOSS_PUMPLOSS_HPP
+#define PUMPLOSS_PUMPLOSS_HPP
+
+#include "version.hpp"
+#include "status.hpp"
+#include "scalar_traits.hpp"
+#include "units.hpp"
+#include "fluid.hpp"
+// pumploss:umbrella-includes (new subject headers are added above this line)
+
+#endif

@@ -1,0 +1,71 @@
+#!/usr/bin/env python3
+"""ABI tripwire: the functions declared in pumploss.h, listed in pumploss.def, listed in
+tests/capi/exports.txt and (shared builds) exported by libpumploss.so must be the same set,
+and the C caller test must call every one of them."""
+import argparse
+import re
+import subprocess
+import sys
+
+
+def header_functions(path):
+    text = open(path, encoding="utf-8").read()
+    return set(re.findall(r"PUMPLOSS_CALL\s+(pumploss_\w+)\s*\(", text))
+
+
+def def_functions(path):
+    names = set()
+    in_exports = False
+    for line in open(path, encoding="utf-8"):
+        line = line.split(";")[0].strip()
+        if not line:
+            continue
+        if line.upper() == "EXPORTS":
+            in_exports = True
+            continue
+        if in_exports:
+            names.add(line.split()[0])
+    return names
+
+
+def main():
+    ap = argparse.ArgumentParser()
+    ap.add_argument("--header", required=True)
+    ap.add_argument("--def", dest="deffile", required=True)
+    ap.add_argument("--exports", required=True)
+    ap.add_argument("--callers", action="append", default=[])
+    ap.add_argument("--library")
+    a = ap.parse_args()
+    sets = {
+        "pumploss.h": header_functions(a.header),
+        "pumploss.def": def_functions(a.deffile),
+        "exports.txt": {l.strip() for l in open(a.exports) if l.strip()},
+    }
+    if a.library:
+        out = subprocess.run(["nm", "-D", "--defined-only", a.library], check=True,
+                             capture_output=True, text=True).stdout
+        syms = {l.split()[-1] for l in out.splitlines() if l.split() and l.split()[1] in "TtWwDdBbRr" and len(l.split()) == 3}
+        syms = {s.split("@")[0] for s in syms}
+        foreign = sorted(s for s in syms if not s.startswith("pumploss_"))
+        if foreign:
+            print("libpumploss.so exports non-pumploss_ symbols:", foreign[:20])
+            return 1
+        sets["libpumploss.so"] = syms
+    ref = sets["pumploss.h"]
+    ok = True
+    for name, s in sets.items():
+        if s != ref:
+            ok = False
+            print(f"{name} differs from pumploss.h: missing {sorted(ref - s)}, extra {sorted(s - ref)}")
+    called = set()
+    for c in a.callers:
+        called |= set(re.findall(r"\b(pumploss_\w+)\s*\(", open(c, encoding="utf-8").read()))
+    if a.callers and ref - called:
+        ok = False
+        print("not called by any C caller test:", sorted(ref - called))
+    print(f"{len(ref)} C API functions; sets agree: {ok}")
+    return 0 if ok else 1
+
+
+if __name__ == "__main__":
+    sys.exit(main())
