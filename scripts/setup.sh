@@ -11,6 +11,11 @@ PACKAGES=(
   doxygen graphviz                                 # docs
   python3 python3-pytest python3-fluids python3-mpmath python3-scipy  # Python cross-checks
   gfortran                                         # Fortran caller test
+  # pumploss:setup-gap
+  # pumploss:setup-friction
+  # pumploss:setup-efficiency
+  # pumploss:setup-pump
+  # pumploss:setup-capi
 )
 
 missing=()

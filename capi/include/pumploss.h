@@ -247,6 +247,21 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_typical_mineral_oil(double *rho_kg_m3, d
                                                             double *cp_j_kg_k, double *barus_per_pa);
 /** @} */
 
+/* ==== gap ==== */
+/* pumploss:capi-gap (declarations of this subject go above this line) */
+
+/* ==== friction ==== */
+/* pumploss:capi-friction (declarations of this subject go above this line) */
+
+/* ==== efficiency ==== */
+/* pumploss:capi-efficiency (declarations of this subject go above this line) */
+
+/* ==== pump ==== */
+/* pumploss:capi-pump (declarations of this subject go above this line) */
+
+/* ==== capi ==== */
+/* pumploss:capi-capi (declarations of this subject go above this line) */
+
 /* pumploss:capi-declarations (new subjects add their section above this line) */
 
 #ifdef __cplusplus

@@ -27,6 +27,11 @@ _SIGNATURES = {
     "pumploss_unit_convert": ([_D, ctypes.c_char_p, ctypes.c_char_p, _PD], 1),
     "pumploss_iso_vg": ([ctypes.c_int, _PD, _PD, _PD], 3),
     "pumploss_typical_mineral_oil": ([_PD] * 6, 6),
+    # pumploss:py-signatures-gap
+    # pumploss:py-signatures-friction
+    # pumploss:py-signatures-efficiency
+    # pumploss:py-signatures-pump
+    # pumploss:py-signatures-capi
 }
 # "double in, double* out" functions: name -> (n_in, n_out).
 _SCALAR = {
@@ -38,6 +43,11 @@ _SCALAR = {
     "pumploss_kinematic_viscosity": (2, 1),
     "pumploss_oil_density": (6, 1),
     "pumploss_viscosity_barus": (3, 1),
+    # pumploss:py-scalar-gap
+    # pumploss:py-scalar-friction
+    # pumploss:py-scalar-efficiency
+    # pumploss:py-scalar-pump
+    # pumploss:py-scalar-capi
 }
 
 

@@ -8,6 +8,10 @@
 #include "scalar_traits.hpp"
 #include "units.hpp"
 #include "fluid.hpp"
+// pumploss:umbrella-gap
+// pumploss:umbrella-friction
+// pumploss:umbrella-efficiency
+// pumploss:umbrella-pump
 // pumploss:umbrella-includes (new subject headers are added above this line)
 
 #endif

@@ -82,13 +82,27 @@ static void test_fluid(void) {
   CHECK(pumploss_typical_mineral_oil(&rho, NULL, &alpha, &kmod, &cp, &barus) == PUMPLOSS_EMISUSE && is_nan(rho));
 }
 
+/* pumploss:c-caller-gap */
+
+/* pumploss:c-caller-friction */
+
+/* pumploss:c-caller-efficiency */
+
+/* pumploss:c-caller-pump */
+
+/* pumploss:c-caller-capi */
+
 /* pumploss:c-caller-tests (new subjects add their test functions above this line) */
 
 int main(void) {
   test_core();
   test_units();
   test_fluid();
-  /* pumploss:c-caller-calls */
+  /* pumploss:c-caller-calls-gap */
+  /* pumploss:c-caller-calls-friction */
+  /* pumploss:c-caller-calls-efficiency */
+  /* pumploss:c-caller-calls-pump */
+  /* pumploss:c-caller-calls-capi */
   printf("%d passed, %d failed\n", checks - failures, failures);
   return failures == 0 ? 0 : 1;
 }

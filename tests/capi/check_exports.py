@@ -39,7 +39,7 @@ def main():
     sets = {
         "pumploss.h": header_functions(a.header),
         "pumploss.def": def_functions(a.deffile),
-        "exports.txt": {l.strip() for l in open(a.exports) if l.strip()},
+        "exports.txt": {l.split("#")[0].strip() for l in open(a.exports) if l.split("#")[0].strip()},
     }
     if a.library:
         out = subprocess.run(["nm", "-D", "--defined-only", a.library], check=True,
