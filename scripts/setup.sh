@@ -12,6 +12,7 @@ PACKAGES=(
   python3 python3-pytest python3-fluids python3-mpmath python3-scipy  # Python cross-checks
   gfortran                                         # Fortran caller test
   # pumploss:setup-gap
+  python3-numpy                                    # friction cross-checks (ulp distances)
   # pumploss:setup-friction
   # pumploss:setup-efficiency
   # pumploss:setup-pump

@@ -251,6 +251,180 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_typical_mineral_oil(double *rho_kg_m3, d
 /* pumploss:capi-gap (declarations of this subject go above this line) */
 
 /* ==== friction ==== */
+/** @name Friction factor and pipe pressure drop
+ *  Darcy friction factors and the Darcy-Weisbach pressure drop of a straight pipe, tube or
+ *  hose (see @ref theory_friction). @{ */
+/**
+ * Darcy friction factor for any Reynolds number: 64/Re up to Re = 2000, Colebrook-White
+ * (solved to within 1 ulp, fixed work) from Re = 4000, and a straight line in Re between the
+ * two in the transition region (reported as PUMPLOSS_WTRANSITION).
+ * @param reynolds Reynolds number, > 0
+ * @param relative_roughness epsilon/D, 0 to 1
+ * @param f_darcy receives the Darcy friction factor
+ * @return PUMPLOSS_OK; PUMPLOSS_WTRANSITION (2000 < Re < 4000); PUMPLOSS_WREGIME (Re > 1e8 or
+ *         epsilon/D > 0.05); PUMPLOSS_EDOMAIN (Re <= 0, epsilon/D < 0 or > 1);
+ *         PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE for NULL.
+ * @sa pumploss::friction_factor
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_factor(double reynolds, double relative_roughness,
+                                                        double *f_darcy);
+/**
+ * As pumploss_friction_factor() with another constant C of the laminar law f = C/Re.
+ * @param reynolds Reynolds number, > 0
+ * @param relative_roughness epsilon/D, 0 to 1
+ * @param laminar_constant C, > 0 (64 for a round pipe; 75 is used by some for cold oil in
+ *        hoses, common practice, no source)
+ * @param f_darcy receives the Darcy friction factor
+ * @return as pumploss_friction_factor(); PUMPLOSS_EDOMAIN for C <= 0.
+ * @sa pumploss::friction_factor
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_factor_custom_laminar(double reynolds, double relative_roughness,
+                                                                       double laminar_constant, double *f_darcy);
+/**
+ * Laminar friction factor f = C/Re.
+ * @param reynolds Reynolds number, > 0
+ * @param laminar_constant C, > 0 (64 for a round pipe)
+ * @param f_darcy receives f
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME above Re = 2000; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE.
+ * @sa pumploss::friction_laminar
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_laminar(double reynolds, double laminar_constant, double *f_darcy);
+/**
+ * Colebrook-White friction factor (Clamond's method plus one extended-precision Newton step).
+ * @param reynolds Reynolds number, >= 1000 (4e3 to 1e8 tested)
+ * @param relative_roughness epsilon/D, 0 to 1
+ * @param f_darcy receives f
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME outside 4e3 <= Re <= 1e8, epsilon/D <= 0.05;
+ *         PUMPLOSS_EVALIDITY below Re = 1000; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE.
+ * @sa pumploss::friction_colebrook
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_colebrook(double reynolds, double relative_roughness,
+                                                           double *f_darcy);
+/**
+ * Haaland's explicit friction factor (within about 1.5 % of Colebrook).
+ * @param reynolds Reynolds number, > 0
+ * @param relative_roughness epsilon/D, 0 to 1
+ * @param f_darcy receives f
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME outside 4e3 <= Re <= 1e8, epsilon/D <= 0.05; errors
+ *         as pumploss_friction_colebrook().
+ * @sa pumploss::friction_haaland
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_haaland(double reynolds, double relative_roughness,
+                                                         double *f_darcy);
+/**
+ * Swamee-Jain explicit friction factor.
+ * @param reynolds Reynolds number, > 0
+ * @param relative_roughness epsilon/D, 0 to 1
+ * @param f_darcy receives f
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME outside 5e3 <= Re <= 1e8, 1e-6 <= epsilon/D <= 1e-2;
+ *         errors as pumploss_friction_colebrook().
+ * @sa pumploss::friction_swamee_jain
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_swamee_jain(double reynolds, double relative_roughness,
+                                                             double *f_darcy);
+/**
+ * Churchill (1977) friction factor for all regimes.
+ * @param reynolds Reynolds number, > 0
+ * @param relative_roughness epsilon/D, 0 to 1
+ * @param f_darcy receives f
+ * @return PUMPLOSS_OK; PUMPLOSS_WTRANSITION for 2000 < Re < 4000; PUMPLOSS_WREGIME above
+ *         epsilon/D = 0.05; errors as pumploss_friction_colebrook().
+ * @sa pumploss::friction_churchill
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_churchill(double reynolds, double relative_roughness,
+                                                           double *f_darcy);
+/**
+ * Mean velocity in a round bore, v = 4q/(pi D^2).
+ * @param q_m3_s volume flow, m^3/s (any sign)
+ * @param diameter_m inside diameter, m, > 0
+ * @param v_m_s receives the velocity, m/s
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::pipe_velocity
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_velocity(double q_m3_s, double diameter_m, double *v_m_s);
+/**
+ * Reynolds number in a round bore, Re = 4 rho |q| / (pi mu D).
+ * @param q_m3_s volume flow, m^3/s
+ * @param rho_kg_m3 density, kg/m^3, > 0
+ * @param mu_pa_s dynamic viscosity, Pa s, > 0
+ * @param diameter_m inside diameter, m, > 0
+ * @param reynolds receives Re
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::pipe_reynolds
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_reynolds(double q_m3_s, double rho_kg_m3, double mu_pa_s,
+                                                      double diameter_m, double *reynolds);
+/**
+ * Darcy-Weisbach pressure drop of a straight pipe, tube or hose, with
+ * pumploss_friction_factor() (laminar constant 64).
+ * @param q_m3_s volume flow, m^3/s (any sign; the drop has its sign)
+ * @param rho_kg_m3 density, kg/m^3, > 0
+ * @param mu_pa_s dynamic viscosity, Pa s, > 0
+ * @param diameter_m inside diameter, m, > 0
+ * @param length_m length, m, >= 0
+ * @param roughness_m absolute roughness, m, 0 to diameter_m
+ * @param dp_pa receives the pressure drop, Pa
+ * @return PUMPLOSS_OK; PUMPLOSS_WTRANSITION; PUMPLOSS_WREGIME; PUMPLOSS_EDOMAIN (zero or
+ *         negative diameter, negative length, roughness larger than the diameter, ...);
+ *         PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::pipe_pressure_drop
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_pressure_drop(double q_m3_s, double rho_kg_m3, double mu_pa_s,
+                                                           double diameter_m, double length_m, double roughness_m,
+                                                           double *dp_pa);
+/**
+ * Darcy-Weisbach segment with all intermediate values and a chosen laminar constant.
+ * @param q_m3_s volume flow, m^3/s
+ * @param rho_kg_m3 density, kg/m^3, > 0
+ * @param mu_pa_s dynamic viscosity, Pa s, > 0
+ * @param diameter_m inside diameter, m, > 0
+ * @param length_m length, m, >= 0
+ * @param roughness_m absolute roughness, m, 0 to diameter_m
+ * @param laminar_constant C of the laminar law f = C/Re, > 0 (64 for a round pipe)
+ * @param v_m_s receives the mean velocity, m/s
+ * @param reynolds receives the Reynolds number
+ * @param f_darcy receives the friction factor (+infinity at zero flow)
+ * @param dp_pa receives the pressure drop, Pa
+ * @return as pumploss_pipe_pressure_drop().
+ * @sa pumploss::pipe_pressure_drop
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_flow(double q_m3_s, double rho_kg_m3, double mu_pa_s, double diameter_m,
+                                                  double length_m, double roughness_m, double laminar_constant,
+                                                  double *v_m_s, double *reynolds, double *f_darcy, double *dp_pa);
+/**
+ * pumploss_friction_factor() over arrays. No allocation.
+ * @param n number of elements
+ * @param reynolds n Reynolds numbers
+ * @param relative_roughness n relative roughnesses
+ * @param f_darcy receives n friction factors (NaN where an element failed)
+ * @param status receives n per-element status codes
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when any element failed;
+ *         PUMPLOSS_EMISUSE for a NULL array (all outputs NaN / EMISUSE).
+ * @sa pumploss::friction_factor
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_factor_batch(size_t n, const double *reynolds,
+                                                              const double *relative_roughness, double *f_darcy,
+                                                              int *status);
+/**
+ * pumploss_pipe_pressure_drop() over arrays. No allocation.
+ * @param n number of elements
+ * @param q_m3_s n flows, m^3/s
+ * @param rho_kg_m3 n densities, kg/m^3
+ * @param mu_pa_s n dynamic viscosities, Pa s
+ * @param diameter_m n inside diameters, m
+ * @param length_m n lengths, m
+ * @param roughness_m n roughnesses, m
+ * @param dp_pa receives n pressure drops, Pa
+ * @param status receives n per-element status codes
+ * @return as pumploss_friction_factor_batch().
+ * @sa pumploss::pipe_pressure_drop
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_pressure_drop_batch(size_t n, const double *q_m3_s,
+                                                                 const double *rho_kg_m3, const double *mu_pa_s,
+                                                                 const double *diameter_m, const double *length_m,
+                                                                 const double *roughness_m, double *dp_pa,
+                                                                 int *status);
+/** @} */
 /* pumploss:capi-friction (declarations of this subject go above this line) */
 
 /* ==== efficiency ==== */

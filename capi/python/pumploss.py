@@ -28,6 +28,8 @@ _SIGNATURES = {
     "pumploss_iso_vg": ([ctypes.c_int, _PD, _PD, _PD], 3),
     "pumploss_typical_mineral_oil": ([_PD] * 6, 6),
     # pumploss:py-signatures-gap
+    "pumploss_friction_factor_batch": ([ctypes.c_size_t, _PD, _PD, _PD, ctypes.POINTER(ctypes.c_int)], 0),
+    "pumploss_pipe_pressure_drop_batch": ([ctypes.c_size_t] + [_PD] * 7 + [ctypes.POINTER(ctypes.c_int)], 0),
     # pumploss:py-signatures-friction
     # pumploss:py-signatures-efficiency
     # pumploss:py-signatures-pump
@@ -44,6 +46,17 @@ _SCALAR = {
     "pumploss_oil_density": (6, 1),
     "pumploss_viscosity_barus": (3, 1),
     # pumploss:py-scalar-gap
+    "pumploss_friction_factor": (2, 1),
+    "pumploss_friction_factor_custom_laminar": (3, 1),
+    "pumploss_friction_laminar": (2, 1),
+    "pumploss_friction_colebrook": (2, 1),
+    "pumploss_friction_haaland": (2, 1),
+    "pumploss_friction_swamee_jain": (2, 1),
+    "pumploss_friction_churchill": (2, 1),
+    "pumploss_pipe_velocity": (2, 1),
+    "pumploss_pipe_reynolds": (4, 1),
+    "pumploss_pipe_pressure_drop": (6, 1),
+    "pumploss_pipe_flow": (7, 4),
     # pumploss:py-scalar-friction
     # pumploss:py-scalar-efficiency
     # pumploss:py-scalar-pump

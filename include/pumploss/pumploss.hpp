@@ -9,6 +9,7 @@
 #include "units.hpp"
 #include "fluid.hpp"
 // pumploss:umbrella-gap
+#include "friction.hpp"
 // pumploss:umbrella-friction
 // pumploss:umbrella-efficiency
 // pumploss:umbrella-pump

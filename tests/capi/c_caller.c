@@ -84,6 +84,54 @@ static void test_fluid(void) {
 
 /* pumploss:c-caller-gap */
 
+static void test_friction(void) {
+  double f = 0.0, dp = 0.0, v = 0.0, re = 0.0;
+  double res[3], rrs[3], fs[3];
+  double q[2], rho[2], mu[2], d[2], len[2], eps[2], dps[2];
+  int sts[3];
+  /* methods.md 13 row 1 (fluids documentation): Colebrook, Re = 1e5, eps/D = 1e-4 */
+  CHECK(pumploss_friction_factor(1e5, 1e-4, &f) == PUMPLOSS_OK && fabs(f - 0.018513866077) < 1e-12);
+  CHECK(pumploss_friction_factor(3000.0, 1e-4, &f) == PUMPLOSS_WTRANSITION && !is_nan(f));
+  CHECK(pumploss_friction_factor(-1.0, 1e-4, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  CHECK(pumploss_friction_factor(1e5, 1e-4, NULL) == PUMPLOSS_EMISUSE);
+  CHECK(pumploss_friction_factor_custom_laminar(1000.0, 0.0, 75.0, &f) == PUMPLOSS_OK && f == 0.075);
+  CHECK(pumploss_friction_factor_custom_laminar(1000.0, 0.0, 0.0, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  CHECK(pumploss_friction_laminar(1000.0, 64.0, &f) == PUMPLOSS_OK && f == 0.064);
+  CHECK(pumploss_friction_laminar(0.0, 64.0, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  CHECK(pumploss_friction_colebrook(1e4, 0.0, &f) == PUMPLOSS_OK && fabs(f - 0.030882950) < 1e-9);
+  CHECK(pumploss_friction_colebrook(1e4, 2.0, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  /* methods.md 13 rows 3-5 (fluids documentation) */
+  CHECK(pumploss_friction_haaland(1e5, 1e-4, &f) == PUMPLOSS_OK && fabs(f - 0.018265053015) < 1e-12);
+  CHECK(pumploss_friction_haaland(1e5, -1e-4, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  CHECK(pumploss_friction_swamee_jain(1e5, 1e-4, &f) == PUMPLOSS_OK && fabs(f - 0.018452424432) < 1e-7);
+  CHECK(pumploss_friction_swamee_jain(HUGE_VAL, 1e-4, &f) == PUMPLOSS_ENONFINITE && is_nan(f));
+  CHECK(pumploss_friction_churchill(1e5, 1e-4, &f) == PUMPLOSS_OK && fabs(f - 0.018462624566) < 1e-12);
+  CHECK(pumploss_friction_churchill(0.0, 1e-4, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  CHECK(pumploss_pipe_velocity(1e-3, 0.02, &v) == PUMPLOSS_OK && near_rel(v, 3.183098861837907, 1e-14));
+  CHECK(pumploss_pipe_velocity(1e-3, 0.0, &v) == PUMPLOSS_EDOMAIN && is_nan(v));
+  CHECK(pumploss_pipe_reynolds(1e-3, 1000.0, 1e-3, 0.02, &re) == PUMPLOSS_OK && near_rel(re, 63661.97723675813, 1e-14));
+  CHECK(pumploss_pipe_reynolds(1e-3, 1000.0, 0.0, 0.02, &re) == PUMPLOSS_EDOMAIN && is_nan(re));
+  /* methods.md 13 row 20 (self-calculated): 10 L/min, 1/2 in, 5 m, VG 46 at 20 degC: 1.52 bar */
+  CHECK(pumploss_pipe_pressure_drop(10e-3 / 60, 870.0, 133.8e-6 * 870.0, 0.0127, 5.0, 0.0, &dp) == PUMPLOSS_OK &&
+        fabs(dp - 1.52e5) < 0.006e5);
+  CHECK(pumploss_pipe_pressure_drop(1e-4, 870.0, 0.04, 0.012, -1.0, 0.0, &dp) == PUMPLOSS_EDOMAIN && is_nan(dp));
+  CHECK(pumploss_pipe_pressure_drop(1e-4, 870.0, 0.04, 0.012, 1.0, 0.02, &dp) == PUMPLOSS_EDOMAIN && is_nan(dp));
+  CHECK(pumploss_pipe_flow(1e-4, 870.0, 0.04, 0.012, 2.0, 0.0, 64.0, &v, &re, &f, &dp) == PUMPLOSS_OK &&
+        fabs(re * f - 64.0) < 1e-12);
+  CHECK(pumploss_pipe_flow(1e-4, 870.0, 0.04, 0.012, 2.0, 0.0, 64.0, &v, &re, NULL, &dp) == PUMPLOSS_EMISUSE &&
+        is_nan(v) && is_nan(dp));
+  res[0] = 1e5; res[1] = 3000.0; res[2] = -5.0;
+  rrs[0] = 1e-4; rrs[1] = 0.0; rrs[2] = 0.0;
+  CHECK(pumploss_friction_factor_batch(3, res, rrs, fs, sts) == PUMPLOSS_WPARTIAL && sts[0] == PUMPLOSS_OK &&
+        sts[1] == PUMPLOSS_WTRANSITION && sts[2] == PUMPLOSS_EDOMAIN && is_nan(fs[2]) &&
+        fabs(fs[0] - 0.018513866077) < 1e-12);
+  CHECK(pumploss_friction_factor_batch(3, res, NULL, fs, sts) == PUMPLOSS_EMISUSE && is_nan(fs[0]));
+  q[0] = q[1] = 10e-3 / 60; rho[0] = rho[1] = 870.0; mu[0] = mu[1] = 133.8e-6 * 870.0;
+  d[0] = 0.0127; d[1] = 0.0; len[0] = len[1] = 5.0; eps[0] = eps[1] = 0.0;
+  CHECK(pumploss_pipe_pressure_drop_batch(2, q, rho, mu, d, len, eps, dps, sts) == PUMPLOSS_WPARTIAL &&
+        fabs(dps[0] - 1.52e5) < 0.006e5 && sts[1] == PUMPLOSS_EDOMAIN && is_nan(dps[1]));
+  CHECK(pumploss_pipe_pressure_drop_batch(1, q, rho, mu, d, len, eps, NULL, sts) == PUMPLOSS_EMISUSE);
+}
 /* pumploss:c-caller-friction */
 
 /* pumploss:c-caller-efficiency */
@@ -99,6 +147,7 @@ int main(void) {
   test_units();
   test_fluid();
   /* pumploss:c-caller-calls-gap */
+  test_friction();
   /* pumploss:c-caller-calls-friction */
   /* pumploss:c-caller-calls-efficiency */
   /* pumploss:c-caller-calls-pump */
