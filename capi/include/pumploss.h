@@ -256,7 +256,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_typical_mineral_oil(double *rho_kg_m3, d
  *  hose (see @ref theory_friction). @{ */
 /**
  * Darcy friction factor for any Reynolds number: 64/Re up to Re = 2000, Colebrook-White
- * (solved to within 1 ulp, fixed work) from Re = 4000, and a straight line in Re between the
+ * (solved to within 4 ulp, fixed work) from Re = 4000, and a straight line in Re between the
  * two in the transition region (reported as PUMPLOSS_WTRANSITION).
  * @param reynolds Reynolds number, > 0
  * @param relative_roughness epsilon/D, 0 to 1
@@ -290,7 +290,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_factor_custom_laminar(double re
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_laminar(double reynolds, double laminar_constant, double *f_darcy);
 /**
- * Colebrook-White friction factor (Clamond's method plus one extended-precision Newton step).
+ * Colebrook-White friction factor (Clamond's method plus one Newton step in double-double).
  * @param reynolds Reynolds number, >= 1000 (4e3 to 1e8 tested)
  * @param relative_roughness epsilon/D, 0 to 1
  * @param f_darcy receives f

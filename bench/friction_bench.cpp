@@ -1,0 +1,139 @@
+// Benchmarks of friction.hpp: the library's Colebrook-White solve next to the plain
+// fixed-point iteration a user would write by hand, the explicit approximations, and the C
+// wrappers. All cycle through the same 64 (Re, epsilon/D) pairs spread over the Moody chart.
+#include <benchmark/benchmark.h>
+
+#include <array>
+#include <cmath>
+#include <cstddef>
+
+#include "pumploss.h"
+#include "pumploss/friction.hpp"
+
+namespace {
+
+struct point {
+  double re, rr;
+};
+
+const std::array<point, 64>& points() {
+  static const std::array<point, 64> pts = [] {
+    std::array<point, 64> p{};
+    for (std::size_t i = 0; i < p.size(); ++i) {
+      const double re = 4e3 * std::pow(1e8 / 4e3, static_cast<double>(i % 16) / 15.0);
+      const double rrs[4] = {0.0, 1e-5, 1e-3, 0.03};
+      p[i] = {re, rrs[i / 16]};
+    }
+    return p;
+  }();
+  return pts;
+}
+
+/// What a user writes by hand: fixed-point iteration on x = 1/sqrt(f),
+/// x <- -2 log10(eps/(3.7 D) + 2.51 x / Re), until the change is below 1e-14 relative.
+double colebrook_fixed_point(double re, double rr) {
+  double x = 8.0;
+  for (int i = 0; i < 200; ++i) {
+    const double xn = -2.0 * std::log10(rr / 3.7 + 2.51 * x / re);
+    if (std::fabs(xn - x) <= 1e-14 * xn) {
+      x = xn;
+      break;
+    }
+    x = xn;
+  }
+  return 1.0 / (x * x);
+}
+
+void BM_FrictionColebrook(benchmark::State& state) {
+  const auto& p = points();
+  std::size_t i = 0;
+  for (auto _ : state) {
+    const auto r = pumploss::friction_colebrook(p[i].re, p[i].rr);
+    benchmark::DoNotOptimize(r);
+    i = (i + 1) & 63;
+  }
+}
+BENCHMARK(BM_FrictionColebrook);
+
+void BM_FrictionColebrookFixedPoint(benchmark::State& state) {
+  const auto& p = points();
+  std::size_t i = 0;
+  for (auto _ : state) {
+    const double f = colebrook_fixed_point(p[i].re, p[i].rr);
+    benchmark::DoNotOptimize(f);
+    i = (i + 1) & 63;
+  }
+}
+BENCHMARK(BM_FrictionColebrookFixedPoint);
+
+void BM_FrictionHaaland(benchmark::State& state) {
+  const auto& p = points();
+  std::size_t i = 0;
+  for (auto _ : state) {
+    const auto r = pumploss::friction_haaland(p[i].re, p[i].rr);
+    benchmark::DoNotOptimize(r);
+    i = (i + 1) & 63;
+  }
+}
+BENCHMARK(BM_FrictionHaaland);
+
+void BM_FrictionSwameeJain(benchmark::State& state) {
+  const auto& p = points();
+  std::size_t i = 0;
+  for (auto _ : state) {
+    const auto r = pumploss::friction_swamee_jain(p[i].re, p[i].rr);
+    benchmark::DoNotOptimize(r);
+    i = (i + 1) & 63;
+  }
+}
+BENCHMARK(BM_FrictionSwameeJain);
+
+void BM_FrictionChurchill(benchmark::State& state) {
+  const auto& p = points();
+  std::size_t i = 0;
+  for (auto _ : state) {
+    const auto r = pumploss::friction_churchill(p[i].re, p[i].rr);
+    benchmark::DoNotOptimize(r);
+    i = (i + 1) & 63;
+  }
+}
+BENCHMARK(BM_FrictionChurchill);
+
+void BM_CapiFrictionFactor(benchmark::State& state) {
+  const auto& p = points();
+  std::size_t i = 0;
+  double f = 0.0;
+  for (auto _ : state) {
+    benchmark::DoNotOptimize(pumploss_friction_factor(p[i].re, p[i].rr, &f));
+    i = (i + 1) & 63;
+  }
+}
+BENCHMARK(BM_CapiFrictionFactor);
+
+void BM_CapiFrictionFactorBatch(benchmark::State& state) {
+  const auto& p = points();
+  double re[64], rr[64], f[64];
+  int st[64];
+  for (std::size_t i = 0; i < 64; ++i) {
+    re[i] = p[i].re;
+    rr[i] = p[i].rr;
+  }
+  for (auto _ : state) {
+    benchmark::DoNotOptimize(pumploss_friction_factor_batch(64, re, rr, f, st));
+    benchmark::ClobberMemory();
+  }
+  state.SetItemsProcessed(state.iterations() * 64);
+}
+BENCHMARK(BM_CapiFrictionFactorBatch);
+
+void BM_PipePressureDrop(benchmark::State& state) {
+  double q = 2e-4;
+  for (auto _ : state) {
+    benchmark::DoNotOptimize(q);
+    const auto r = pumploss::pipe_pressure_drop(q, 870.0, 0.004, 0.0127, 5.0, 1.5e-6);
+    benchmark::DoNotOptimize(r);
+  }
+}
+BENCHMARK(BM_PipePressureDrop);
+
+}  // namespace
