@@ -425,6 +425,238 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_pressure_drop_batch(size_t n, const
                                                                  const double *roughness_m, double *dp_pa,
                                                                  int *status);
 /** @} */
+/** @name Lines, case drain check and sizing
+ *  A line is an opaque handle: an ordered list of pipes, fittings and lumped components, a
+ *  static height and an oil. Functions taking a handle return PUMPLOSS_EMISUSE for NULL and
+ *  keep a per-handle last message (pumploss_line_last_message()); no global state. A handle
+ *  may be read from several threads, but not changed while others use it. Results are
+ *  engineering estimates; the pump maker's allowed case pressure governs. @{ */
+/** Opaque line handle. */
+typedef struct pumploss_line pumploss_line;
+/** Create an empty line (no elements, height 0, no oil).
+ *  @return the handle, or NULL when out of memory. Free with pumploss_line_destroy(). */
+PUMPLOSS_API pumploss_line *PUMPLOSS_CALL pumploss_line_create(void);
+/** Destroy a line. Destroying NULL is a no-op.
+ *  @param line the handle (or NULL) */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_line_destroy(pumploss_line *line);
+/** The last message of a handle (why the last failing call failed).
+ *  @param line the handle
+ *  @return a sentence owned by the handle, valid until its next call or destruction; a static
+ *          sentence for NULL. */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_line_last_message(const pumploss_line *line);
+/** Append a straight pipe, tube or hose (Darcy-Weisbach).
+ *  @param line the handle
+ *  @param diameter_m inside diameter, m, > 0
+ *  @param length_m length, m, >= 0
+ *  @param roughness_m absolute roughness, m, 0 to diameter_m
+ *  @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE (element not added).
+ *  @sa pumploss::line_pipe */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_pipe(pumploss_line *line, double diameter_m, double length_m,
+                                                      double roughness_m);
+/** Append a fitting with a constant loss coefficient (sharp entrance 0.57, exit 1.0).
+ *  @param line the handle
+ *  @param diameter_m bore the K refers to, m, > 0
+ *  @param k loss coefficient, >= 0
+ *  @return PUMPLOSS_OK or an error (element not added). @sa pumploss::line_fitting_k */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_k(pumploss_line *line, double diameter_m, double k);
+/** Append a fitting by Crane TP-410, K = f_T (L/D)_eq (reported PUMPLOSS_WREGIME in laminar flow).
+ *  @param line the handle
+ *  @param diameter_m bore, m, > 0
+ *  @param l_over_d equivalent length in diameters, >= 0 (gate valve 8, ball valve 3, globe 340)
+ *  @return PUMPLOSS_OK or an error. @sa pumploss::line_fitting_crane */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_crane(pumploss_line *line, double diameter_m,
+                                                               double l_over_d);
+/** Append a fitting by Hooper's 2-K method.
+ *  @param line the handle
+ *  @param diameter_m bore, m, > 0
+ *  @param k1 K_1, >= 0
+ *  @param k_inf K_infinity, >= 0
+ *  @return PUMPLOSS_OK or an error. @sa pumploss::k_hooper */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_hooper(pumploss_line *line, double diameter_m, double k1,
+                                                                double k_inf);
+/** Append a fitting by Darby's 3-K method (nominal size = inside diameter in inches).
+ *  @param line the handle
+ *  @param diameter_m bore, m, > 0
+ *  @param k1 K_1, >= 0
+ *  @param k_i K_i, >= 0
+ *  @param k_d K_d, >= 0
+ *  @return PUMPLOSS_OK or an error. @sa pumploss::k_darby */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_darby(pumploss_line *line, double diameter_m, double k1,
+                                                               double k_i, double k_d);
+/** Append a lumped component dp = dp_ref (q/q_ref)^n (nu/nu_ref)^m (filter, cooler, check valve).
+ *  @param line the handle
+ *  @param q_ref_m3_s reference flow, m^3/s, > 0
+ *  @param dp_ref_pa drop at q_ref and nu_ref, Pa, >= 0
+ *  @param exponent n, > 0
+ *  @param nu_ref_m2_s viscosity of the data, m^2/s, > 0
+ *  @param nu_exponent m, >= 0 (1 for laminar elements such as filter media, 0 none)
+ *  @return PUMPLOSS_OK or an error. @sa pumploss::line_component_power */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_power(pumploss_line *line, double q_ref_m3_s,
+                                                                 double dp_ref_pa, double exponent,
+                                                                 double nu_ref_m2_s, double nu_exponent);
+/** Append a lumped component given by points, interpolated linearly (through 0 below the
+ *  first; extrapolated above the last with PUMPLOSS_WEXTRAPOLATED), times (nu/nu_ref)^m.
+ *  @param line the handle
+ *  @param n number of points, 1 to 16
+ *  @param q_m3_s n flows, increasing, > 0
+ *  @param dp_pa n drops, non-decreasing, >= 0
+ *  @param nu_ref_m2_s viscosity of the data, m^2/s, > 0
+ *  @param nu_exponent m, >= 0
+ *  @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for a bad count or data; PUMPLOSS_EMISUSE for NULL.
+ *  @sa pumploss::line_component_points */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_points(pumploss_line *line, int n, const double *q_m3_s,
+                                                                  const double *dp_pa, double nu_ref_m2_s,
+                                                                  double nu_exponent);
+/** Set the height of the line's outlet above its inlet (static part rho g dz).
+ *  @param line the handle
+ *  @param height_m height, m (negative when the outlet is below the inlet)
+ *  @return PUMPLOSS_OK; PUMPLOSS_ENONFINITE. */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_height(pumploss_line *line, double height_m);
+/** Set the line's oil: ASTM D341 line through two points and the density at a reference
+ *  temperature; the other properties are pumploss_typical_mineral_oil()'s.
+ *  @param line the handle
+ *  @param t1_k first temperature, K
+ *  @param nu1_m2_s kinematic viscosity at t1_k, m^2/s
+ *  @param t2_k second temperature, K
+ *  @param nu2_m2_s kinematic viscosity at t2_k, m^2/s
+ *  @param rho_ref_kg_m3 density at t_ref_k, kg/m^3, > 0
+ *  @param t_ref_k reference temperature of the density, K, > 0
+ *  @return PUMPLOSS_OK or the error of pumploss_d341_coefficients(). */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_oil(pumploss_line *line, double t1_k, double nu1_m2_s, double t2_k,
+                                                     double nu2_m2_s, double rho_ref_kg_m3, double t_ref_k);
+/** Number of elements.
+ *  @param line the handle
+ *  @param count receives the count
+ *  @return PUMPLOSS_OK; PUMPLOSS_EMISUSE. */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_count(const pumploss_line *line, int *count);
+/** The line's height.
+ *  @param line the handle
+ *  @param height_m receives the height, m
+ *  @return PUMPLOSS_OK; PUMPLOSS_EMISUSE. */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_height(const pumploss_line *line, double *height_m);
+/** Total pressure drop at a flow, density and viscosity (static part included).
+ *  @param line the handle
+ *  @param q_m3_s flow, m^3/s
+ *  @param rho_kg_m3 density, kg/m^3, > 0
+ *  @param mu_pa_s dynamic viscosity, Pa s, > 0
+ *  @param dp_pa receives the drop, Pa
+ *  @return PUMPLOSS_OK, a report (worst element) or an error. @sa pumploss::line_pressure_drop */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop(pumploss_line *line, double q_m3_s, double rho_kg_m3,
+                                                           double mu_pa_s, double *dp_pa);
+/** One element's drop and its share of the total.
+ *  @param line the handle
+ *  @param index element index, 0 to count-1
+ *  @param q_m3_s flow, m^3/s
+ *  @param rho_kg_m3 density, kg/m^3
+ *  @param mu_pa_s dynamic viscosity, Pa s
+ *  @param dp_pa receives the element's drop, Pa
+ *  @param share receives the element's drop divided by the line's total (static part included)
+ *  @return as pumploss_line_pressure_drop(); PUMPLOSS_EDOMAIN for a bad index. */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_pressure_drop(pumploss_line *line, int index, double q_m3_s,
+                                                                   double rho_kg_m3, double mu_pa_s, double *dp_pa,
+                                                                   double *share);
+/** Total pressure drop at a flow and oil temperature (the oil set by pumploss_line_set_oil()).
+ *  @param line the handle
+ *  @param q_m3_s flow, m^3/s
+ *  @param t_k oil temperature, K
+ *  @param dp_pa receives the drop, Pa
+ *  @return as pumploss_line_pressure_drop(); PUMPLOSS_EMISUSE when no oil is set.
+ *  @sa pumploss::line_pressure_drop_at */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop_at(pumploss_line *line, double q_m3_s, double t_k,
+                                                              double *dp_pa);
+/** The flow a pressure difference drives through the line (bracket and solve, fixed caps).
+ *  @param line the handle
+ *  @param dp_pa pressure difference, Pa
+ *  @param rho_kg_m3 density, kg/m^3
+ *  @param mu_pa_s dynamic viscosity, Pa s
+ *  @param q_m3_s receives the flow, m^3/s
+ *  @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY when dp does not exceed the static part;
+ *          PUMPLOSS_ENOCONVERGE; element errors. @sa pumploss::line_flow_for_pressure */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(pumploss_line *line, double dp_pa, double rho_kg_m3,
+                                                               double mu_pa_s, double *q_m3_s);
+/** Case drain check: case pressure p_tank + line drop at n temperatures from cold start to
+ *  maximum, against the allowed case pressure.
+ *  @param line the drain line (oil set)
+ *  @param q_drain_m3_s drain flow, m^3/s, >= 0
+ *  @param t_cold_k cold-start temperature, K
+ *  @param t_max_k maximum temperature, K, >= t_cold_k
+ *  @param n_temps number of temperatures, 1 to 1000
+ *  @param p_tank_pa tank pressure at the outlet, Pa
+ *  @param p_allowed_pa allowed case pressure, Pa (same reference)
+ *  @param t_k receives n_temps temperatures, K
+ *  @param case_pressure_pa receives n_temps case pressures, Pa
+ *  @param margin_pa receives n_temps margins (allowed minus case pressure), Pa
+ *  @param pass receives n_temps flags (1 pass, 0 fail)
+ *  @param worst_margin_pa receives the smallest margin, Pa (negative: fails)
+ *  @return PUMPLOSS_OK or a report; errors with NaN outputs. @sa pumploss::drain_check */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(pumploss_line *line, double q_drain_m3_s, double t_cold_k,
+                                                         double t_max_k, int n_temps, double p_tank_pa,
+                                                         double p_allowed_pa, double *t_k, double *case_pressure_pa,
+                                                         double *margin_pa, int *pass, double *worst_margin_pa);
+/** Smallest standard bore (pumploss_standard_bore()) for which the line, with every pipe and
+ *  fitting at that bore, passes the drain check over the temperature range and keeps the
+ *  velocity at or below v_max.
+ *  @param line the drain line (oil set)
+ *  @param q_drain_m3_s drain flow, m^3/s, > 0
+ *  @param t_cold_k cold-start temperature, K
+ *  @param t_max_k maximum temperature, K
+ *  @param n_temps number of temperatures, 2 to 1000
+ *  @param p_tank_pa tank pressure, Pa
+ *  @param p_allowed_pa allowed case pressure, Pa
+ *  @param v_max_m_s largest velocity, m/s (1.5 for drain lines, common practice, no source)
+ *  @param kinds_mask 1 tubes, 2 hoses, 3 both
+ *  @param diameter_m receives the inside diameter, m
+ *  @param velocity_m_s receives the velocity at the drain flow, m/s
+ *  @param worst_margin_pa receives the smallest margin, Pa
+ *  @return PUMPLOSS_OK or a report; PUMPLOSS_EVALIDITY when no standard bore passes.
+ *  @sa pumploss::size_drain_line */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(pumploss_line *line, double q_drain_m3_s, double t_cold_k,
+                                                        double t_max_k, int n_temps, double p_tank_pa,
+                                                        double p_allowed_pa, double v_max_m_s, int kinds_mask,
+                                                        double *diameter_m, double *velocity_m_s,
+                                                        double *worst_margin_pa);
+/** Number of standard bores.
+ *  @return the count. */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(void);
+/** A standard bore (ascending inside diameter).
+ *  @param index 0 to pumploss_standard_bore_count()-1
+ *  @param inside_diameter_m receives the inside diameter, m
+ *  @param kind receives 1 (metric tube) or 2 (hose, dash size = ID in sixteenths of an inch)
+ *  @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for a bad index; PUMPLOSS_EMISUSE for NULL. */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(int index, double *inside_diameter_m, int *kind);
+/** Crane's fully turbulent friction factor f_T of commercial steel.
+ *  @param diameter_m inside diameter, m, > 0
+ *  @param f_t receives f_T
+ *  @return PUMPLOSS_OK; PUMPLOSS_WREGIME outside 5 mm to 1 m; errors. @sa pumploss::crane_ft */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_crane_ft(double diameter_m, double *f_t);
+/** Hooper 2-K loss coefficient.
+ *  @param k1 K_1
+ *  @param k_inf K_infinity
+ *  @param diameter_m bore, m
+ *  @param reynolds Reynolds number
+ *  @param k receives K
+ *  @return PUMPLOSS_OK or an error. @sa pumploss::k_hooper */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_hooper(double k1, double k_inf, double diameter_m, double reynolds,
+                                                 double *k);
+/** Darby 3-K loss coefficient.
+ *  @param k1 K_1
+ *  @param k_i K_i
+ *  @param k_d K_d
+ *  @param nominal_size_in nominal size, inches
+ *  @param reynolds Reynolds number
+ *  @param k receives K
+ *  @return PUMPLOSS_OK or an error. @sa pumploss::k_darby */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_darby(double k1, double k_i, double k_d, double nominal_size_in,
+                                                double reynolds, double *k);
+/** Equivalent length of a loss coefficient, L = K D / f.
+ *  @param k loss coefficient
+ *  @param diameter_m bore, m
+ *  @param f_darcy Darcy friction factor
+ *  @param length_m receives the length, m
+ *  @return PUMPLOSS_OK or an error. @sa pumploss::equivalent_length */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_equivalent_length(double k, double diameter_m, double f_darcy,
+                                                          double *length_m);
+/** @} */
 /* pumploss:capi-friction (declarations of this subject go above this line) */
 
 /* ==== efficiency ==== */

@@ -30,6 +30,26 @@ _SIGNATURES = {
     # pumploss:py-signatures-gap
     "pumploss_friction_factor_batch": ([ctypes.c_size_t, _PD, _PD, _PD, ctypes.POINTER(ctypes.c_int)], 0),
     "pumploss_pipe_pressure_drop_batch": ([ctypes.c_size_t] + [_PD] * 7 + [ctypes.POINTER(ctypes.c_int)], 0),
+    "pumploss_line_add_pipe": ([ctypes.c_void_p, _D, _D, _D], 0),
+    "pumploss_line_add_fitting_k": ([ctypes.c_void_p, _D, _D], 0),
+    "pumploss_line_add_fitting_crane": ([ctypes.c_void_p, _D, _D], 0),
+    "pumploss_line_add_fitting_hooper": ([ctypes.c_void_p, _D, _D, _D], 0),
+    "pumploss_line_add_fitting_darby": ([ctypes.c_void_p, _D, _D, _D, _D], 0),
+    "pumploss_line_add_component_power": ([ctypes.c_void_p, _D, _D, _D, _D, _D], 0),
+    "pumploss_line_add_component_points": ([ctypes.c_void_p, ctypes.c_int, _PD, _PD, _D, _D], 0),
+    "pumploss_line_set_height": ([ctypes.c_void_p, _D], 0),
+    "pumploss_line_set_oil": ([ctypes.c_void_p, _D, _D, _D, _D, _D, _D], 0),
+    "pumploss_line_height": ([ctypes.c_void_p, _PD], 1),
+    "pumploss_line_element_count": ([ctypes.c_void_p, ctypes.POINTER(ctypes.c_int)], 0),
+    "pumploss_line_pressure_drop": ([ctypes.c_void_p, _D, _D, _D, _PD], 1),
+    "pumploss_line_element_pressure_drop": ([ctypes.c_void_p, ctypes.c_int, _D, _D, _D, _PD, _PD], 2),
+    "pumploss_line_pressure_drop_at": ([ctypes.c_void_p, _D, _D, _PD], 1),
+    "pumploss_line_flow_for_pressure": ([ctypes.c_void_p, _D, _D, _D, _PD], 1),
+    "pumploss_line_drain_check": ([ctypes.c_void_p, _D, _D, _D, ctypes.c_int, _D, _D, _PD, _PD, _PD,
+                                   ctypes.POINTER(ctypes.c_int), _PD], 0),
+    "pumploss_line_size_drain": ([ctypes.c_void_p, _D, _D, _D, ctypes.c_int, _D, _D, _D, ctypes.c_int,
+                                  _PD, _PD, _PD], 3),
+    "pumploss_standard_bore": ([ctypes.c_int, _PD, ctypes.POINTER(ctypes.c_int)], 0),
     # pumploss:py-signatures-friction
     # pumploss:py-signatures-efficiency
     # pumploss:py-signatures-pump
@@ -57,6 +77,10 @@ _SCALAR = {
     "pumploss_pipe_reynolds": (4, 1),
     "pumploss_pipe_pressure_drop": (6, 1),
     "pumploss_pipe_flow": (7, 4),
+    "pumploss_crane_ft": (1, 1),
+    "pumploss_k_hooper": (4, 1),
+    "pumploss_k_darby": (5, 1),
+    "pumploss_equivalent_length": (3, 1),
     # pumploss:py-scalar-friction
     # pumploss:py-scalar-efficiency
     # pumploss:py-scalar-pump

@@ -10,6 +10,7 @@
 #include "fluid.hpp"
 // pumploss:umbrella-gap
 #include "friction.hpp"
+#include "line.hpp"
 // pumploss:umbrella-friction
 // pumploss:umbrella-efficiency
 // pumploss:umbrella-pump

@@ -132,6 +132,63 @@ static void test_friction(void) {
         fabs(dps[0] - 1.52e5) < 0.006e5 && sts[1] == PUMPLOSS_EDOMAIN && is_nan(dps[1]));
   CHECK(pumploss_pipe_pressure_drop_batch(1, q, rho, mu, d, len, eps, NULL, sts) == PUMPLOSS_EMISUSE);
 }
+static void test_line(void) {
+  pumploss_line *h;
+  double dp = 0.0, share = 0.0, q = 0.0, d = 0.0, v = 0.0, worst = 0.0, height = 0.0, k = 0.0;
+  double t[3], pc[3], m[3], qs[2], dps[2];
+  int pass[3], n = 0, kind = 0;
+  pumploss_line_destroy(NULL);
+  CHECK(strlen(pumploss_line_last_message(NULL)) > 0);
+  h = pumploss_line_create();
+  CHECK(h != NULL);
+  if (h == NULL) return;
+  CHECK(pumploss_line_add_pipe(h, 0.0, 5.0, 0.0) == PUMPLOSS_EDOMAIN);
+  CHECK(strlen(pumploss_line_last_message(h)) > 0);
+  CHECK(pumploss_line_add_pipe(h, 0.0127, 5.0, 0.0) == PUMPLOSS_OK);
+  CHECK(pumploss_line_add_fitting_k(h, 0.0127, -1.0) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_line_add_fitting_crane(h, 0.0127, 8.0) == PUMPLOSS_OK);
+  CHECK(pumploss_line_add_fitting_hooper(h, 0.0127, 800.0, 0.4) == PUMPLOSS_OK);
+  CHECK(pumploss_line_add_fitting_darby(h, 0.0127, 800.0, 0.14, 4.0) == PUMPLOSS_OK);
+  CHECK(pumploss_line_add_component_power(h, 1e-4, 0.0, 1.0, 46e-6, 1.0) == PUMPLOSS_OK);
+  qs[0] = 1e-4; qs[1] = 2e-4; dps[0] = 0.0; dps[1] = 0.0;
+  CHECK(pumploss_line_add_component_points(h, 2, qs, dps, 46e-6, 1.0) == PUMPLOSS_OK);
+  CHECK(pumploss_line_add_component_points(h, 2, NULL, dps, 46e-6, 1.0) == PUMPLOSS_EMISUSE);
+  CHECK(pumploss_line_add_fitting_k(h, 0.0127, 1.0) == PUMPLOSS_OK);
+  CHECK(pumploss_line_element_count(h, &n) == PUMPLOSS_OK && n == 7);
+  CHECK(pumploss_line_set_height(h, 0.0) == PUMPLOSS_OK);
+  CHECK(pumploss_line_height(h, &height) == PUMPLOSS_OK && height == 0.0);
+  /* methods.md 13 row 20 (self-calculated): 1.52 bar in the pipe at 20 degC */
+  CHECK(pumploss_line_element_pressure_drop(h, 0, 10e-3 / 60, 870.0, 133.8e-6 * 870.0, &dp, &share) ==
+            PUMPLOSS_WREGIME && fabs(dp - 1.52e5) < 0.006e5 && share > 0.9 && share < 1.0);
+  CHECK(pumploss_line_pressure_drop(h, 10e-3 / 60, 870.0, 0.0, &dp) == PUMPLOSS_EDOMAIN && is_nan(dp));
+  CHECK(pumploss_line_pressure_drop_at(h, 10e-3 / 60, 293.15, &dp) == PUMPLOSS_EMISUSE && is_nan(dp));
+  CHECK(pumploss_line_set_oil(h, 313.15, 46e-6, 373.15, 6.8e-6, 870.0, 288.15) == PUMPLOSS_OK);
+  CHECK(pumploss_line_set_oil(h, 313.15, 46e-6, 313.15, 6.8e-6, 870.0, 288.15) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_line_pressure_drop_at(h, 10e-3 / 60, 293.15, &dp) == PUMPLOSS_WREGIME && dp > 1.5e5);
+  CHECK(pumploss_line_flow_for_pressure(h, 1e5, 870.0, 0.04, &q) == PUMPLOSS_WREGIME && q > 0.0);
+  CHECK(pumploss_line_flow_for_pressure(h, -1e5, 870.0, 0.04, &q) == PUMPLOSS_EVALIDITY && is_nan(q));
+  CHECK(pumploss_line_drain_check(h, 10e-3 / 60, 273.15, 323.15, 3, 0.0, 2e5, t, pc, m, pass, &worst) ==
+            PUMPLOSS_WREGIME && pass[0] == 0 && pass[2] == 1 && worst == m[0]);
+  CHECK(pumploss_line_drain_check(h, 10e-3 / 60, 273.15, 323.15, 0, 0.0, 2e5, t, pc, m, pass, &worst) ==
+            PUMPLOSS_EDOMAIN && is_nan(worst));
+  CHECK(pumploss_line_size_drain(h, 10e-3 / 60, 273.15, 323.15, 6, 0.0, 2e5, 1.5, 3, &d, &v, &worst) !=
+            PUMPLOSS_EVALIDITY && d > 0.0127 && v <= 1.5 && worst >= 0.0);
+  CHECK(pumploss_line_size_drain(h, 10e-3 / 60, 273.15, 323.15, 6, 0.0, -1.0, 1.5, 3, &d, &v, &worst) ==
+            PUMPLOSS_EVALIDITY && is_nan(d));
+  pumploss_line_destroy(h);
+  CHECK(pumploss_standard_bore_count() > 10);
+  CHECK(pumploss_standard_bore(0, &d, &kind) == PUMPLOSS_OK && d > 0.0 && (kind == 1 || kind == 2));
+  CHECK(pumploss_standard_bore(-1, &d, &kind) == PUMPLOSS_EDOMAIN && is_nan(d));
+  /* methods.md 13 rows 8-10 (fluids documentation) */
+  CHECK(pumploss_crane_ft(0.1, &k) == PUMPLOSS_OK && fabs(k - 0.0162885) < 1e-7);
+  CHECK(pumploss_crane_ft(-0.1, &k) == PUMPLOSS_EDOMAIN && is_nan(k));
+  CHECK(pumploss_k_hooper(1500.0, 4.0, 0.0508, 1e4, &k) == PUMPLOSS_OK && fabs(k - 6.15) < 1e-12);
+  CHECK(pumploss_k_hooper(1500.0, 4.0, 0.0508, 0.0, &k) == PUMPLOSS_EDOMAIN && is_nan(k));
+  CHECK(pumploss_k_darby(950.0, 0.25, 4.0, 12.0, 1e4, &k) == PUMPLOSS_OK && fabs(k - 0.8195103) < 1e-7);
+  CHECK(pumploss_k_darby(950.0, 0.25, 4.0, -12.0, 1e4, &k) == PUMPLOSS_EDOMAIN && is_nan(k));
+  CHECK(pumploss_equivalent_length(0.5, 0.02, 0.025, &d) == PUMPLOSS_OK && fabs(d - 0.4) < 1e-15);
+  CHECK(pumploss_equivalent_length(0.5, 0.02, 0.0, &d) == PUMPLOSS_EDOMAIN && is_nan(d));
+}
 /* pumploss:c-caller-friction */
 
 /* pumploss:c-caller-efficiency */
@@ -148,6 +205,7 @@ int main(void) {
   test_fluid();
   /* pumploss:c-caller-calls-gap */
   test_friction();
+  test_line();
   /* pumploss:c-caller-calls-friction */
   /* pumploss:c-caller-calls-efficiency */
   /* pumploss:c-caller-calls-pump */

@@ -1,0 +1,302 @@
+// C API for line.hpp: the opaque line handle (elements, height, oil), its pressure drop, the
+// flow a pressure allows, the case drain check and drain line sizing; fitting coefficients.
+#include <string>
+#include <vector>
+
+#include "capi_common.hpp"
+#include "pumploss/line.hpp"
+
+using pumploss::status;
+using pumploss::capi::call;
+using pumploss::capi::fp_guard;
+using pumploss::capi::kNaN;
+
+struct pumploss_line {
+  pumploss::line<double> line;
+  pumploss::oil<double> oil = pumploss::typical_mineral_oil<double>({0.0, 0.0});
+  bool has_oil = false;
+  std::string message = "no error";
+};
+
+namespace {
+
+int set_message(pumploss_line* h, status st, const char* what) {
+  if (h != nullptr) {
+    h->message = std::string(what) + ": " + pumploss::status_message(static_cast<int>(st));
+  }
+  return static_cast<int>(st);
+}
+
+/// Validate an element by evaluating it once, then append it.
+int add_element(pumploss_line* h, const pumploss::line_element<double>& e, const char* what) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  try {
+    fp_guard guard;
+    const auto r = pumploss::detail::element_dp(e, 1e-6, 870.0, 0.04, 0.0);
+    if (is_error(r.st)) return set_message(h, r.st, what);
+    h->line.elements.push_back(e);
+    h->message = "no error";
+    return PUMPLOSS_OK;
+  } catch (const std::bad_alloc&) {
+    return set_message(h, status::no_memory, what);
+  } catch (...) {
+    return set_message(h, status::internal, what);
+  }
+}
+
+template <std::size_t N, class Body>
+int line_call(pumploss_line* h, double* const (&outs)[N], const char* what, Body&& body) {
+  if (h == nullptr) {
+    for (double* p : outs) if (p != nullptr) *p = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  const int code = call(outs, body);
+  if (code != PUMPLOSS_OK) set_message(h, static_cast<status>(code), what);
+  else h->message = "no error";
+  return code;
+}
+
+}  // namespace
+
+extern "C" {
+
+PUMPLOSS_API pumploss_line* PUMPLOSS_CALL pumploss_line_create(void) {
+  try {
+    return new pumploss_line();
+  } catch (...) {
+    return nullptr;
+  }
+}
+
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_line_destroy(pumploss_line* h) { delete h; }
+
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_line_last_message(const pumploss_line* h) {
+  return h == nullptr ? "null line handle" : h->message.c_str();
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_pipe(pumploss_line* h, double diameter_m, double length_m,
+                                                      double roughness_m) {
+  return add_element(h, pumploss::line_pipe(diameter_m, length_m, roughness_m), "add_pipe");
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_k(pumploss_line* h, double diameter_m, double k) {
+  return add_element(h, pumploss::line_fitting_k(diameter_m, k), "add_fitting_k");
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_crane(pumploss_line* h, double diameter_m, double l_over_d) {
+  return add_element(h, pumploss::line_fitting_crane(diameter_m, l_over_d), "add_fitting_crane");
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_hooper(pumploss_line* h, double diameter_m, double k1,
+                                                                double k_inf) {
+  return add_element(h, pumploss::line_fitting_hooper(diameter_m, k1, k_inf), "add_fitting_hooper");
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_darby(pumploss_line* h, double diameter_m, double k1,
+                                                               double k_i, double k_d) {
+  return add_element(h, pumploss::line_fitting_darby(diameter_m, k1, k_i, k_d), "add_fitting_darby");
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_power(pumploss_line* h, double q_ref_m3_s,
+                                                                 double dp_ref_pa, double exponent,
+                                                                 double nu_ref_m2_s, double nu_exponent) {
+  return add_element(h, pumploss::line_component_power(q_ref_m3_s, dp_ref_pa, exponent, nu_ref_m2_s, nu_exponent),
+                     "add_component_power");
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_points(pumploss_line* h, int n, const double* q_m3_s,
+                                                                  const double* dp_pa, double nu_ref_m2_s,
+                                                                  double nu_exponent) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  if (q_m3_s == nullptr || dp_pa == nullptr) return set_message(h, status::misuse, "add_component_points");
+  const auto e = pumploss::line_component_points(n, q_m3_s, dp_pa, nu_ref_m2_s, nu_exponent);
+  if (is_error(e.st)) return set_message(h, e.st, "add_component_points");
+  return add_element(h, e.value, "add_component_points");
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_height(pumploss_line* h, double height_m) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  if (!pumploss::detail::finite(height_m)) return set_message(h, status::nonfinite, "set_height");
+  h->line.height_m = height_m;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_oil(pumploss_line* h, double t1_k, double nu1_m2_s, double t2_k,
+                                                     double nu2_m2_s, double rho_ref_kg_m3, double t_ref_k) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  fp_guard guard;
+  const auto fit = pumploss::d341_fit(t1_k, nu1_m2_s, t2_k, nu2_m2_s);
+  if (is_error(fit.st)) return set_message(h, fit.st, "set_oil");
+  if (!pumploss::detail::all_finite(rho_ref_kg_m3, t_ref_k)) return set_message(h, status::nonfinite, "set_oil");
+  if (!(rho_ref_kg_m3 > 0) || !(t_ref_k > 0)) return set_message(h, status::domain, "set_oil");
+  h->oil = pumploss::typical_mineral_oil(fit.value);
+  h->oil.rho_ref_kg_m3 = rho_ref_kg_m3;
+  h->oil.t_ref_k = t_ref_k;
+  h->has_oil = true;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_count(const pumploss_line* h, int* count) {
+  if (count == nullptr) return PUMPLOSS_EMISUSE;
+  if (h == nullptr) {
+    *count = 0;
+    return PUMPLOSS_EMISUSE;
+  }
+  *count = static_cast<int>(h->line.elements.size());
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_height(const pumploss_line* h, double* height_m) {
+  if (height_m == nullptr) return PUMPLOSS_EMISUSE;
+  if (h == nullptr) {
+    *height_m = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  *height_m = h->line.height_m;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop(pumploss_line* h, double q_m3_s, double rho_kg_m3,
+                                                           double mu_pa_s, double* dp_pa) {
+  return line_call(h, {dp_pa}, "pressure_drop", [&] {
+    const auto r = pumploss::line_pressure_drop(h->line, q_m3_s, rho_kg_m3, mu_pa_s);
+    *dp_pa = r.dp_pa;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_pressure_drop(pumploss_line* h, int index, double q_m3_s,
+                                                                   double rho_kg_m3, double mu_pa_s, double* dp_pa,
+                                                                   double* share) {
+  return line_call(h, {dp_pa, share}, "element_pressure_drop", [&] {
+    if (index < 0 || static_cast<std::size_t>(index) >= h->line.elements.size()) return status::domain;
+    std::vector<double> parts(h->line.elements.size());
+    const auto r = pumploss::line_pressure_drop(h->line, q_m3_s, rho_kg_m3, mu_pa_s, parts.data());
+    *dp_pa = parts[static_cast<std::size_t>(index)];
+    *share = r.dp_pa != 0.0 ? *dp_pa / r.dp_pa : 0.0;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop_at(pumploss_line* h, double q_m3_s, double t_k,
+                                                              double* dp_pa) {
+  return line_call(h, {dp_pa}, "pressure_drop_at", [&] {
+    if (!h->has_oil) return status::misuse;
+    const auto r = pumploss::line_pressure_drop_at(h->line, q_m3_s, h->oil, t_k);
+    *dp_pa = r.dp_pa;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(pumploss_line* h, double dp_pa, double rho_kg_m3,
+                                                               double mu_pa_s, double* q_m3_s) {
+  return line_call(h, {q_m3_s}, "flow_for_pressure", [&] {
+    const auto r = pumploss::line_flow_for_pressure(h->line.elements.data(), h->line.elements.size(),
+                                                    h->line.height_m, dp_pa, rho_kg_m3, mu_pa_s);
+    *q_m3_s = r.value;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(pumploss_line* h, double q_drain_m3_s, double t_cold_k,
+                                                         double t_max_k, int n_temps, double p_tank_pa,
+                                                         double p_allowed_pa, double* t_k, double* case_pressure_pa,
+                                                         double* margin_pa, int* pass, double* worst_margin_pa) {
+  const bool arrays = t_k != nullptr && case_pressure_pa != nullptr && margin_pa != nullptr && pass != nullptr;
+  const int n_fill = arrays && n_temps > 0 && n_temps <= 1000 ? n_temps : 0;
+  for (int i = 0; i < n_fill; ++i) {
+    t_k[i] = case_pressure_pa[i] = margin_pa[i] = kNaN;
+    pass[i] = 0;
+  }
+  return line_call(h, {worst_margin_pa}, "drain_check", [&] {
+    if (!arrays) return status::misuse;
+    if (!h->has_oil) return status::misuse;
+    if (n_temps < 1 || n_temps > 1000) return status::domain;
+    std::vector<pumploss::drain_point<double>> pts(static_cast<std::size_t>(n_temps));
+    const auto s = pumploss::drain_check(h->line, h->oil, q_drain_m3_s, t_cold_k, t_max_k, n_temps, p_tank_pa,
+                                         p_allowed_pa, pts.data());
+    if (is_error(s.st)) {
+      for (int i = 0; i < n_temps; ++i) t_k[i] = case_pressure_pa[i] = margin_pa[i] = kNaN;
+      return s.st;
+    }
+    for (int i = 0; i < n_temps; ++i) {
+      const auto& p = pts[static_cast<std::size_t>(i)];
+      t_k[i] = p.t_k;
+      case_pressure_pa[i] = p.case_pressure_pa;
+      margin_pa[i] = p.margin_pa;
+      pass[i] = p.pass ? 1 : 0;
+    }
+    *worst_margin_pa = s.worst_margin_pa;
+    return s.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(pumploss_line* h, double q_drain_m3_s, double t_cold_k,
+                                                        double t_max_k, int n_temps, double p_tank_pa,
+                                                        double p_allowed_pa, double v_max_m_s, int kinds_mask,
+                                                        double* diameter_m, double* velocity_m_s,
+                                                        double* worst_margin_pa) {
+  return line_call(h, {diameter_m, velocity_m_s, worst_margin_pa}, "size_drain", [&] {
+    if (!h->has_oil) return status::misuse;
+    const auto s = pumploss::size_drain_line(h->line, h->oil, q_drain_m3_s, t_cold_k, t_max_k, n_temps, p_tank_pa,
+                                             p_allowed_pa, v_max_m_s, kinds_mask);
+    *diameter_m = s.diameter_m;
+    *velocity_m_s = s.velocity_m_s;
+    *worst_margin_pa = s.worst_margin_pa;
+    return s.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(void) { return pumploss::standard_bore_count; }
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(int index, double* inside_diameter_m, int* kind) {
+  if (inside_diameter_m == nullptr || kind == nullptr) {
+    if (inside_diameter_m != nullptr) *inside_diameter_m = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  if (index < 0 || index >= pumploss::standard_bore_count) {
+    *inside_diameter_m = kNaN;
+    *kind = 0;
+    return PUMPLOSS_EDOMAIN;
+  }
+  *inside_diameter_m = pumploss::standard_bores[index].inside_diameter_m;
+  *kind = static_cast<int>(pumploss::standard_bores[index].kind);
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_crane_ft(double diameter_m, double* f_t) {
+  return call({f_t}, [&] {
+    const auto r = pumploss::crane_ft(diameter_m);
+    *f_t = r.value;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_hooper(double k1, double k_inf, double diameter_m, double reynolds,
+                                                 double* k) {
+  return call({k}, [&] {
+    const auto r = pumploss::k_hooper(k1, k_inf, diameter_m, reynolds);
+    *k = r.value;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_darby(double k1, double k_i, double k_d, double nominal_size_in,
+                                                double reynolds, double* k) {
+  return call({k}, [&] {
+    const auto r = pumploss::k_darby(k1, k_i, k_d, nominal_size_in, reynolds);
+    *k = r.value;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_equivalent_length(double k, double diameter_m, double f_darcy,
+                                                          double* length_m) {
+  return call({length_m}, [&] {
+    const auto r = pumploss::equivalent_length(k, diameter_m, f_darcy);
+    *length_m = r.value;
+    return r.st;
+  });
+}
+
+}  // extern "C"
