@@ -96,7 +96,7 @@ int run_oil(const oil_options& o) {
                                                show_quantity(f.oil.t1_k, D::temperature, du) + ", " +
                                                show_quantity(f.oil.nu2_m2_s, D::kinematic_viscosity, du) + " at " +
                                                show_quantity(f.oil.t2_k, D::temperature, du));
-  r.facts.emplace_back("ASTM D341 line", fmt::format("log10 log10 Z = {:.5f} - {:.5f} log10 T", oil.viscosity.a,
+  r.facts.emplace_back("ASTM D341 line", fmt::format("log10 log10 Z = {:.5f} - {:.5f} log10 T, T in K", oil.viscosity.a,
                                                      oil.viscosity.b));
   if (f.oil.grade) {
     const auto g = pumploss::iso_vg(*f.oil.grade).value;
@@ -104,8 +104,8 @@ int run_oil(const oil_options& o) {
     const bool inside = nu40 >= g.min_m2_s && nu40 <= g.max_m2_s;
     r.facts.emplace_back(
         "ISO 3448 grade",
-        fmt::format("VG {}: {} at 40 degC, band {} to {}: {}", g.grade,
-                    show_quantity(nu40, D::kinematic_viscosity, du),
+        fmt::format("VG {}: {} at {}, band {} to {}: {}", g.grade,
+                    show_quantity(nu40, D::kinematic_viscosity, du), show_quantity(313.15, D::temperature, du, 3),
                     show_quantity(g.min_m2_s, D::kinematic_viscosity, du),
                     show_quantity(g.max_m2_s, D::kinematic_viscosity, du), inside ? "inside" : "OUTSIDE"));
   }
@@ -124,7 +124,7 @@ int run_oil(const oil_options& o) {
     if (f.max_nu_m2_s) l += (l.empty() ? "" : ", ") + ("max running " + show_quantity(*f.max_nu_m2_s, D::kinematic_viscosity, du));
     if (f.max_start_nu_m2_s)
       l += (l.empty() ? "" : ", ") + ("max at start " + show_quantity(*f.max_start_nu_m2_s, D::kinematic_viscosity, du));
-    if (!f.limits_source.empty()) l += " (" + f.limits_source + ")";
+    if (!f.limits_source.empty()) l += "; source: " + f.limits_source;
     r.facts.emplace_back("Viscosity limits", l);
   }
 
