@@ -53,6 +53,12 @@ void finish_range(range& r, const axis& a) {
     r.lo -= d;
     r.hi += d;
   }
+  if (a.dates && !a.lo && !a.hi) {  // dates: a small margin, ticks at month starts
+    const double pad = std::max(1.0, 0.02 * (r.hi - r.lo));
+    r.lo -= pad;
+    r.hi += pad;
+    return;
+  }
   if (!a.log && !a.lo && !a.hi) {  // widen to nice tick positions
     const auto t = nice_ticks(r.lo, r.hi);
     const double step = t.size() > 1 ? t[1] - t[0] : 1.0;

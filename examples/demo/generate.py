@@ -76,10 +76,6 @@ def test_stand(rng):
             f.write("{:.1f},{:.2f},{:.1f},{:.2f},{:.1f},{:.3f},{:.1f},{:.1f},{:.1f}\n".format(*r))
 
 # --- field readings: monthly, three and a half years of gradual wear ----------------------
-def days_from_civil(y, m, d):
-    import datetime
-    return (datetime.date(y, m, d) - datetime.date(1970, 1, 1)).days
-
 def field_readings(rng):
     import datetime
     start = datetime.date(2022, 1, 12)
