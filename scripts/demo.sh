@@ -1,9 +1,44 @@
 #!/usr/bin/env bash
-# Build pumploss and run the demo scenario of examples/demo/ (invented data).
+# Build the pumploss command-line program and run every subcommand on the demo scenario of
+# examples/demo/ (invented data). Reports (text, CSV) and plots (SVG) go into one folder.
+# Usage: scripts/demo.sh [OUTPUT_FOLDER]        (default: out/demo)
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$here"
+out="${1:-out/demo}"
+demo=examples/demo
+
 cmake -S . -B build-demo -DCMAKE_BUILD_TYPE=Release -DPUMPLOSS_BUILD_TESTS=OFF \
   -DPUMPLOSS_BUILD_BENCH=OFF -DPUMPLOSS_BUILD_DOCS=OFF >/dev/null
-cmake --build build-demo -j "$(nproc 2>/dev/null || echo 2)" --target pumploss_demo >/dev/null
-./build-demo/examples/pumploss_demo examples/demo/oil.ini
+cmake --build build-demo -j "$(nproc 2>/dev/null || echo 2)" --target pumploss_cli >/dev/null
+pl=./build-demo/examples/cli/pumploss
+mkdir -p "$out"
+
+pending=()
+run() {  # run one subcommand; exit code 3 means its calculation module is not in this build yet
+  local name="$1"
+  shift
+  printf '\n==== pumploss %s ====\n' "$*"
+  local rc=0
+  "$pl" "$@" || rc=$?
+  if [ "$rc" -eq 3 ]; then
+    pending+=("$name")
+  elif [ "$rc" -ne 0 ]; then
+    echo "demo: 'pumploss $*' failed (exit code $rc)" >&2
+    exit "$rc"
+  fi
+}
+
+run units units 250 bar psi
+run oil oil "$demo/oil.toml" --out "$out"
+run test-stand test-stand "$demo/test_stand.csv" --setup "$demo/test_stand.toml" --out "$out"
+run drain-line drain-line "$demo/drain_line.toml" --size --out "$out"
+run health health "$demo/field_readings.csv" --pump "$demo/pump_p31.toml" --out "$out"
+run budget budget "$demo/pump_p31.toml" --out "$out"
+
+printf '\n==== demo done ====\n'
+echo "Reports and plots: $here/$out/"
+ls -1 "$out" | sed 's/^/  /'
+if [ ${#pending[@]} -gt 0 ]; then
+  echo "Not in this build yet (inputs read and checked, no results): ${pending[*]}"
+fi

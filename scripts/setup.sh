@@ -17,6 +17,8 @@ PACKAGES=(
   # pumploss:setup-efficiency
   # pumploss:setup-pump
   # pumploss:setup-capi
+  libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (examples/cli)
+  # pumploss:setup-cli
 )
 
 missing=()

@@ -1,0 +1,52 @@
+#include <CLI/CLI.hpp>
+
+#include <cstdio>
+
+#include "commands.hpp"
+#include "common.hpp"
+
+namespace plcli {
+
+void add_output_options(CLI::App& sub, output_options& o) {
+  sub.add_option("--out", o.out_dir, "Folder for the report files (text, CSV, SVG); created when missing")
+      ->option_text("DIR");
+  sub.add_option("--unit", o.units,
+                 "Show a quantity in this unit, e.g. --unit psi --unit gpm --unit degF (repeatable; "
+                 "'pumploss units --list' lists them)")
+      ->option_text("UNIT");
+  sub.footer(cautions);
+}
+
+display_units make_units(const output_options& o) {
+  display_units u;
+  for (const auto& s : o.units) u.choose(s);
+  return u;
+}
+
+void emit(const report& r, const output_set& files, const output_options& o, const display_units& u,
+          const std::string& stem) {
+  const std::string text = render_text(r, u);
+  if (o.out_dir.empty()) {
+    std::fputs(text.c_str(), stdout);
+    return;
+  }
+  output_set all;
+  all.add(stem + ".txt", text);
+  for (const auto& t : r.tables) all.add(stem + "_" + t.name + ".csv", render_csv(t, u));
+  for (const auto& [name, content] : files.items()) all.add(name, content);
+  const auto written = all.write_all(o.out_dir);
+  std::fputs(text.c_str(), stdout);
+  std::printf("\nWritten:\n");
+  for (const auto& w : written) std::printf("  %s\n", w.c_str());
+}
+
+int pending(const std::string& command, const std::string& module, const std::vector<std::string>& needs) {
+  std::fprintf(stderr,
+               "pumploss %s: the inputs were read and checked, but the %s module is not in this build yet.\n"
+               "No results were computed and no files were written. This command will use:\n",
+               command.c_str(), module.c_str());
+  for (const auto& n : needs) std::fprintf(stderr, "  - %s\n", n.c_str());
+  return exit_pending;
+}
+
+}  // namespace plcli

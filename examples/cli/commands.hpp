@@ -1,0 +1,42 @@
+// The subcommands of the pumploss program. Each add_* registers one subcommand, its options
+// and its --help; the job runs in the callback and leaves its exit code in `rc`.
+#ifndef PUMPLOSS_CLI_COMMANDS_HPP
+#define PUMPLOSS_CLI_COMMANDS_HPP
+
+#include <string>
+#include <vector>
+
+#include "report.hpp"
+
+namespace CLI {
+class App;
+}
+
+namespace plcli {
+
+void add_units(CLI::App& app, int& rc);
+void add_oil(CLI::App& app, int& rc);
+void add_test_stand(CLI::App& app, int& rc);
+void add_drain_line(CLI::App& app, int& rc);
+void add_health(CLI::App& app, int& rc);
+void add_budget(CLI::App& app, int& rc);
+
+/// Options every reporting subcommand has.
+struct output_options {
+  std::string out_dir;             ///< --out: folder for the report files (none: screen only)
+  std::vector<std::string> units;  ///< --unit: display units
+};
+/// Add --out and --unit to a subcommand.
+void add_output_options(CLI::App& sub, output_options& o);
+/// Display units from --unit (throws std::invalid_argument).
+display_units make_units(const output_options& o);
+/// Print the report, write the files when --out is given, print where they are.
+void emit(const report& r, const output_set& files, const output_options& o, const display_units& u,
+          const std::string& stem);
+
+/// Say that a calculation module is missing; return exit_pending.
+int pending(const std::string& command, const std::string& module, const std::vector<std::string>& needs);
+
+}  // namespace plcli
+
+#endif

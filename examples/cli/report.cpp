@@ -1,0 +1,196 @@
+#include "report.hpp"
+
+#include <fmt/format.h>
+
+#include <algorithm>
+#include <cmath>
+#include <filesystem>
+#include <fstream>
+#include <stdexcept>
+
+#include "common.hpp"
+
+namespace plcli {
+
+display_units::display_units() {
+  const char* defaults[16] = {"bar", "L/min", "cm3", "cm3/rev", "mPa.s", "cSt", "degC", "kW",
+                              "N.m", "rpm", "mm", "kg/m3", "m/s", "kg/h", "kJ/(kg.K)", "N"};
+  for (std::size_t i = 0; i < 16; ++i) unit_[i] = pumploss::find_unit(defaults[i]);
+}
+
+void display_units::choose(const std::string& symbol) {
+  const auto* u = pumploss::find_unit(symbol);
+  if (u == nullptr) throw std::invalid_argument("unknown unit '" + symbol + "' (see 'pumploss units --list')");
+  unit_[static_cast<std::size_t>(u->dim)] = u;
+}
+
+const pumploss::unit_info& display_units::of(pumploss::dimension d) const {
+  return *unit_[static_cast<std::size_t>(d)];
+}
+
+double display_units::show(double si, pumploss::dimension d) const {
+  if (!std::isfinite(si)) return si;
+  return pumploss::convert(si, *pumploss::find_unit(pumploss::si_symbol(d)), of(d)).value;
+}
+
+double display_units::si(double shown, pumploss::dimension d) const {
+  if (!std::isfinite(shown)) return shown;
+  return pumploss::convert(shown, of(d), *pumploss::find_unit(pumploss::si_symbol(d))).value;
+}
+
+std::string format_sig(double v, int digits) {
+  if (std::isnan(v)) return "-";
+  if (std::isinf(v)) return v > 0 ? "inf" : "-inf";
+  if (v == 0.0) return fmt::format("{:.{}f}", 0.0, std::max(0, digits - 1));
+  const int mag = static_cast<int>(std::floor(std::log10(std::fabs(v))));
+  if (mag >= 7 || mag < -4) return fmt::format("{:.{}e}", v, std::max(0, digits - 1));
+  const int decimals = std::max(0, digits - 1 - mag);
+  return fmt::format("{:.{}f}", v, decimals);
+}
+
+std::string heading(const column& c, const display_units& u) {
+  switch (c.kind) {
+    case cell_kind::quantity: return c.title + " [" + u.of(c.dim).symbol + "]";
+    case cell_kind::percent: return c.title + " [%]";
+    default: return c.title;
+  }
+}
+
+std::string show_quantity(double si, pumploss::dimension d, const display_units& u, int digits) {
+  return format_sig(u.show(si, d), digits) + " " + u.of(d).symbol;
+}
+
+namespace {
+
+double shown_value(const column& c, double v, const display_units& u) {
+  if (c.kind == cell_kind::quantity) return u.show(v, c.dim);
+  if (c.kind == cell_kind::percent) return v * 100.0;
+  return v;
+}
+
+// Decimals for a column so that its largest value shows `digits` significant digits.
+int column_decimals(const table& t, std::size_t j, const display_units& u) {
+  double maxabs = 0.0;
+  for (const auto& row : t.rows)
+    if (const auto* d = std::get_if<double>(&row[j]))
+      if (std::isfinite(*d)) maxabs = std::max(maxabs, std::fabs(shown_value(t.cols[j], *d, u)));
+  if (maxabs == 0.0) return std::max(0, t.cols[j].digits - 1);
+  const int mag = static_cast<int>(std::floor(std::log10(maxabs)));
+  return std::clamp(t.cols[j].digits - 1 - mag, 0, 9);
+}
+
+}  // namespace
+
+std::string render_text(const report& r, const display_units& u) {
+  std::string out = r.title + "\n" + std::string(r.title.size(), '=') + "\n\n";
+  std::size_t w = 0;
+  for (const auto& f : r.facts) w = std::max(w, f.first.size());
+  for (const auto& f : r.facts) out += fmt::format("{:<{}}  {}\n", f.first + ":", w + 1, f.second);
+  if (!r.facts.empty()) out += "\n";
+  for (const auto& t : r.tables) {
+    if (!t.title.empty()) out += t.title + "\n\n";
+    const std::size_t nc = t.cols.size();
+    std::vector<std::vector<std::string>> cells(t.rows.size(), std::vector<std::string>(nc));
+    std::vector<std::size_t> width(nc);
+    std::vector<bool> right(nc, true);
+    for (std::size_t j = 0; j < nc; ++j) {
+      const int dec = column_decimals(t, j, u);
+      width[j] = heading(t.cols[j], u).size();
+      right[j] = t.cols[j].kind != cell_kind::text;
+      for (std::size_t i = 0; i < t.rows.size(); ++i) {
+        const auto& c = t.rows[i][j];
+        if (const auto* s = std::get_if<std::string>(&c)) {
+          cells[i][j] = *s;
+        } else {
+          const double v = shown_value(t.cols[j], std::get<double>(c), u);
+          cells[i][j] = std::isfinite(v) ? fmt::format("{:.{}f}", v, dec) : "-";
+        }
+        width[j] = std::max(width[j], cells[i][j].size());
+      }
+    }
+    auto line = [&](const std::vector<std::string>& row) {
+      std::string s;
+      for (std::size_t j = 0; j < nc; ++j) {
+        if (j > 0) s += "  ";
+        s += right[j] ? fmt::format("{:>{}}", row[j], width[j]) : fmt::format("{:<{}}", row[j], width[j]);
+      }
+      while (!s.empty() && s.back() == ' ') s.pop_back();
+      return s + "\n";
+    };
+    std::vector<std::string> head;
+    for (const auto& c : t.cols) head.push_back(heading(c, u));
+    out += line(head);
+    std::vector<std::string> rule;
+    for (std::size_t j = 0; j < nc; ++j) rule.push_back(std::string(width[j], '-'));
+    out += line(rule);
+    for (const auto& row : cells) out += line(row);
+    out += "\n";
+  }
+  for (const auto& n : r.notes) out += "Note: " + n + "\n";
+  if (!r.notes.empty()) out += "\n";
+  out += cautions;
+  return out;
+}
+
+std::string render_csv(const table& t, const display_units& u) {
+  auto quote = [](const std::string& s) {
+    if (s.find_first_of(",\"\n") == std::string::npos) return s;
+    std::string q = "\"";
+    for (const char c : s) q += c == '"' ? std::string("\"\"") : std::string(1, c);
+    return q + "\"";
+  };
+  std::string out;
+  for (std::size_t j = 0; j < t.cols.size(); ++j) {
+    if (j > 0) out += ",";
+    // percent columns go out as plain numbers with their own name so the file reads back
+    const auto& c = t.cols[j];
+    out += quote(c.kind == cell_kind::percent ? c.title + " percent" : heading(c, u));
+  }
+  out += "\n";
+  for (const auto& row : t.rows) {
+    for (std::size_t j = 0; j < row.size(); ++j) {
+      if (j > 0) out += ",";
+      if (const auto* s = std::get_if<std::string>(&row[j])) {
+        out += quote(*s);
+      } else {
+        const double v = shown_value(t.cols[j], std::get<double>(row[j]), u);
+        out += std::isfinite(v) ? fmt::format("{:.10g}", v) : "";
+      }
+    }
+    out += "\n";
+  }
+  std::string c = cautions;
+  std::size_t pos = 0;
+  while (pos < c.size()) {
+    const auto nl = c.find('\n', pos);
+    out += "# " + c.substr(pos, nl - pos) + "\n";
+    pos = nl == std::string::npos ? c.size() : nl + 1;
+  }
+  return out;
+}
+
+void output_set::add(std::string name, std::string content) { files_.emplace_back(std::move(name), std::move(content)); }
+
+std::vector<std::string> output_set::write_all(const std::string& dir) const {
+  namespace fs = std::filesystem;
+  std::error_code ec;
+  fs::create_directories(dir, ec);
+  if (ec) throw std::runtime_error(dir + ": cannot create the output folder: " + ec.message());
+  std::vector<std::string> written;
+  for (const auto& [name, content] : files_) {
+    const fs::path final_path = fs::path(dir) / name;
+    const fs::path tmp = fs::path(dir) / ("." + name + ".tmp");
+    {
+      std::ofstream out(tmp, std::ios::binary | std::ios::trunc);
+      out << content;
+      out.flush();
+      if (!out) throw std::runtime_error(tmp.string() + ": cannot write");
+    }
+    fs::rename(tmp, final_path, ec);
+    if (ec) throw std::runtime_error(final_path.string() + ": cannot write: " + ec.message());
+    written.push_back(final_path.string());
+  }
+  return written;
+}
+
+}  // namespace plcli

@@ -1,0 +1,96 @@
+// Reports: an aligned text table for people and CSV for spreadsheets, both in the display units
+// the user chose, with the cautions at the foot. Values are held in SI; units apply on output.
+#ifndef PUMPLOSS_CLI_REPORT_HPP
+#define PUMPLOSS_CLI_REPORT_HPP
+
+#include <array>
+#include <string>
+#include <utility>
+#include <variant>
+#include <vector>
+
+#include "pumploss/units.hpp"
+
+namespace plcli {
+
+/// The unit shown for each dimension.
+class display_units {
+ public:
+  /// bar, L/min, cm3, cm3/rev, mPa.s, cSt, degC, kW, N.m, rpm, mm, kg/m3, m/s, kg/h, kJ/(kg.K), N.
+  display_units();
+  /// Show this unit for its dimension (throws std::invalid_argument for an unknown symbol).
+  void choose(const std::string& symbol);
+  const pumploss::unit_info& of(pumploss::dimension d) const;
+  /// SI value in the display unit.
+  double show(double si, pumploss::dimension d) const;
+  /// Display value back to SI.
+  double si(double shown, pumploss::dimension d) const;
+
+ private:
+  std::array<const pumploss::unit_info*, 16> unit_{};
+};
+
+/// How a column is shown.
+enum class cell_kind {
+  quantity,  ///< SI value shown in the display unit of `dim`
+  number,    ///< plain number
+  percent,   ///< a fraction shown in per cent
+  text       ///< text
+};
+
+/// One column of a table.
+struct column {
+  std::string title;
+  cell_kind kind = cell_kind::quantity;
+  pumploss::dimension dim = pumploss::dimension::pressure;
+  int digits = 4;  ///< significant digits (text table); CSV keeps 10
+};
+
+using cell = std::variant<double, std::string>;
+
+/// A table of a report; `name` gives the CSV file name.
+struct table {
+  std::string name;
+  std::string title;
+  std::vector<column> cols;
+  std::vector<std::vector<cell>> rows;
+};
+
+/// A report: title, facts (label: value), tables and notes, with the cautions at the foot.
+struct report {
+  std::string title;
+  std::vector<std::pair<std::string, std::string>> facts;
+  std::vector<table> tables;
+  std::vector<std::string> notes;
+};
+
+/// Column heading with its unit: "pressure [bar]", "overall efficiency [%]".
+std::string heading(const column& c, const display_units& u);
+/// A quantity as text with its unit: "250.0 bar".
+std::string show_quantity(double si, pumploss::dimension d, const display_units& u, int digits = 4);
+/// Format a number with `digits` significant digits (fixed notation where sensible).
+std::string format_sig(double v, int digits);
+
+/// The report as aligned text, cautions at the foot.
+std::string render_text(const report& r, const display_units& u);
+/// One table as CSV (header 'name [unit]', full precision), cautions as '#' lines at the foot.
+/// The CSV reads back with read_csv().
+std::string render_csv(const table& t, const display_units& u);
+
+/// Files to write at the end, so that nothing is written when a step fails.
+class output_set {
+ public:
+  void add(std::string name, std::string content);
+  /// Write every file into `dir` (created when missing); each file is written to a temporary
+  /// name and renamed. Returns the paths written. Throws std::runtime_error on failure.
+  std::vector<std::string> write_all(const std::string& dir) const;
+  bool empty() const { return files_.empty(); }
+  const std::vector<std::pair<std::string, std::string>>& items() const { return files_; }
+
+ private:
+  std::vector<std::pair<std::string, std::string>> files_;
+};
+
+}  // namespace plcli
+
+#endif
