@@ -105,7 +105,7 @@ inline result<T> orifice_diameter(T q_m3_s, T dp_pa, T rho_kg_m3, T cd) {
   using std::sqrt;
   if (!detail::all_finite(q_m3_s, dp_pa, rho_kg_m3, cd)) return detail::fail<T>(status::nonfinite);
   if (!(rho_kg_m3 > T(0)) || !(cd > T(0)) || !(cd <= T(1))) return detail::fail<T>(status::domain);
-  if (!(q_m3_s / dp_pa > T(0))) return detail::fail<T>(status::domain);
+  if (!(q_m3_s / dp_pa > T(0)) || !detail::finite(q_m3_s / dp_pa)) return detail::fail<T>(status::domain);
   const T area = fabs(q_m3_s) / (cd * sqrt(T(2) * fabs(dp_pa) / rho_kg_m3));
   return {sqrt(T(4) * area / detail::pi<T>()), status::ok};
 }
