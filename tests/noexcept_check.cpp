@@ -13,6 +13,10 @@ T touch_all() {
   sum += pumploss::viscosity_barus(T(0.04), T(2e-8), T(2.5e7)).value;
   sum += pumploss::dynamic_viscosity(T(46e-6), T(870)).value;
   sum += pumploss::kinematic_viscosity(T(0.04), T(870)).value;
+  sum += pumploss::gap_annulus_flow(T(1e6), T(0.04), T(0.02002), T(0.02), T(0.03), T(0.9)).value;
+  sum += pumploss::gap_plates_height_couette(T(1e-7), T(1e6), T(0.04), T(0.02), T(0.01), T(2)).value;
+  sum += pumploss::gap_pad_orifice(T(2.5e7), T(870), T(0.04), T(4e-4), T(0.7), T(0.005), T(0.008), T(1.5e-5), T(0.02)).force_n;
+  sum += pumploss::orifice_flow_viscous(T(1e7), T(870), T(0.04), T(1e-3), T(0.61), T(0.163)).value;
   return sum;
 }
 }  // namespace
