@@ -8,11 +8,14 @@ here="$(cd "$(dirname "$0")" && pwd)"
 pc="$(find "$prefix" -name pumploss.pc | head -n 1)"
 [ -n "$pc" ] || { echo "no pumploss.pc under $prefix"; exit 1; }
 export PKG_CONFIG_PATH="$(dirname "$pc")"
-version="$(pkg-config --modversion pumploss)"
-libdir="$(pkg-config --variable=libdir pumploss)"
+# The package was installed with `cmake --install --prefix`, not at the configured prefix:
+# --define-prefix takes the prefix from where pumploss.pc lies.
+pc() { pkg-config --define-prefix "$@"; }
+version="$(pc --modversion pumploss)"
+libdir="$(pc --variable=libdir pumploss)"
 mkdir -p "$work"
 # shellcheck disable=SC2046
 "$cc" -std=c99 -Wall -Wextra -Werror -DEXPECTED_VERSION="\"$version\"" \
-  $(pkg-config --cflags pumploss) "$here/../find-package/consumer.c" \
-  $(pkg-config --libs pumploss) -lm -Wl,-rpath,"$libdir" -o "$work/consumer"
+  $(pc --cflags pumploss) "$here/../find-package/consumer.c" \
+  $(pc --libs pumploss) -lm -Wl,-rpath,"$libdir" -o "$work/consumer"
 "$work/consumer"
