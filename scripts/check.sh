@@ -71,11 +71,14 @@ cmake --build "$out/win64" -j "$jobs"
 "$python" tests/capi/check_exports.py --header=capi/include/pumploss.h --def=capi/pumploss.def \
   --exports=tests/capi/exports.txt --dll="$out/win64/pumploss.dll" --objdump=x86_64-w64-mingw32-objdump
 x86_64-w64-mingw32-gcc -std=c89 -pedantic-errors -Wall -Wextra -Werror -DPUMPLOSS_SHARED \
-  -Icapi/include tests/capi/c_caller.c -L"$out/win64" -lpumploss -static -o "$out/win64/c_caller.exe"
+  -Icapi/include tests/capi/c_caller.c "$out/win64/libpumploss.dll.a" -static -o "$out/win64/c_caller.exe"
 if command -v wine64 >/dev/null 2>&1 || [ -x /usr/lib/wine/wine64 ]; then
   wine="$(command -v wine64 || echo /usr/lib/wine/wine64)"
   export WINEPREFIX="$here/$out/wineprefix" WINEDEBUG=-all WINEDLLOVERRIDES="mscoree,mshtml="
   (cd "$out/win64" && timeout 300 "$wine" c_caller.exe </dev/null)
+  # wait for this prefix's wineserver to exit, so nothing of ours keeps running
+  ws="$(dirname "$(readlink -f "$wine")")/wineserver"
+  if [ -x "$ws" ]; then timeout 60 "$ws" -w || true; fi
 else
   echo "wine64 not installed: the DLL's export table was checked, the C caller was not run on it"
 fi
