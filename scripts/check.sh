@@ -42,7 +42,7 @@ cmake -S . -B "$out/shared" -DCMAKE_BUILD_TYPE=Release -DBUILD_SHARED_LIBS=ON -D
   -DPUMPLOSS_BUILD_BENCH=OFF -DPUMPLOSS_BUILD_DOCS=OFF -DPUMPLOSS_BUILD_EXAMPLES=OFF \
   -DCMAKE_INSTALL_PREFIX="$here/$out/shared-install" >/dev/null
 # Only what the C API tests need (the C++ unit tests ran in the static build).
-shared_targets=(pumploss pumploss_ctypes capi_c_caller_c90 capi_c_caller_c11 capi_badinput capi_threads
+shared_targets=(pumploss capi_c_caller_c90 capi_c_caller_c11 capi_badinput capi_threads
   capi_noalloc pumploss_header_c90 pumploss_header_c99 pumploss_header_c11)
 if [ -d "$out/shared/tests/capi/CMakeFiles/capi_fortran_caller.dir" ]; then  # gfortran found
   shared_targets+=(capi_fortran_caller)
