@@ -16,6 +16,9 @@ PACKAGES=(
   # pumploss:setup-friction
   # pumploss:setup-efficiency
   # pumploss:setup-pump
+  clang valgrind                                   # sanitizer builds (ASan, UBSan, TSan), memcheck
+  g++-mingw-w64-x86-64                             # Windows x64 DLL cross-build
+  wine64                                           # runs a C test against the DLL
   # pumploss:setup-capi
   libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (examples/cli)
   # pumploss:setup-cli

@@ -9,10 +9,18 @@ Every C function ``pumploss_NAME(double..., double *out...)`` is reachable as ``
 it returns the output (a tuple when there are several), raises PumplossError on an error
 status (1-99) and warns with PumplossWarning on a report (100 and up). ``lib.raw(...)`` returns
 the status with the outputs and never raises. Units are SI, as in pumploss.h.
+
+Signatures come from the tables below and, when pumploss.h can be found (``load(path,
+header=...)``, the PUMPLOSS_HEADER environment variable, or ``include/pumploss.h`` beside the
+library's ``lib`` folder), from the header itself, so functions newer than these tables work too:
+batch functions take sequences for their arrays (``n`` is their length) and return lists, a
+handle-creating function returns the handle (an int) and ``char *buf, size_t len`` outputs
+return a str.
 """
 import ctypes
 import ctypes.util
 import os
+import re
 import warnings
 
 __all__ = ["load", "Library", "PumplossError", "PumplossWarning", "OK"]
@@ -119,6 +127,61 @@ _SCALAR = {
 }
 
 
+def parse_header(text):
+    """Prototypes of pumploss.h: {name: (return type, [(kind, ctype, param name), ...])}.
+
+    Kinds (as tests/capi/gen_capi.py): DIN double, IIN int, SIZE size_t length, BUFLEN size_t
+    after a char* buffer, DARR const double*, DOUT double*, IOUT int*, IARR const int*,
+    STR const char*, CBUF char*, HIN handle*, HOUT handle**."""
+    text = re.sub(r"/\*.*?\*/", " ", text, flags=re.S)
+    handles = set(re.findall(r"typedef\s+struct\s+\w+\s+(\w+)\s*;", text))
+    simple = {"double": "DIN", "int": "IIN", "size_t": "SIZE", "const double*": "DARR",
+              "double*": "DOUT", "int*": "IOUT", "const int*": "IARR", "const char*": "STR",
+              "char*": "CBUF"}
+    protos = {}
+    for m in re.finditer(r"PUMPLOSS_API\s+([^;{}()]*?)\s*PUMPLOSS_CALL\s+(pumploss_\w+)\s*\(([^)]*)\)\s*;", text):
+        def norm(t):
+            return re.sub(r"\s+", " ", re.sub(r"\s*\*\s*", "*", t.strip()))
+        ret, name, args = norm(m.group(1)), m.group(2), m.group(3).strip()
+        params = []
+        if args and args != "void":
+            for a in args.split(","):
+                pm = re.match(r"^(.*?)([A-Za-z_]\w*)$", a.strip())
+                ctype, pname = norm(pm.group(1)), pm.group(2)
+                kind = simple.get(ctype)
+                if kind is None:
+                    hm = re.match(r"^(?:const )?(\w+)(\*+)$", ctype)
+                    if hm and hm.group(1) in handles:
+                        kind = "HIN" if hm.group(2) == "*" else "HOUT"
+                    else:
+                        kind = "UNKNOWN"
+                params.append((kind, ctype, pname))
+        for i, (kind, ctype, pname) in enumerate(params):
+            if kind == "SIZE" and i > 0 and params[i - 1][0] == "CBUF":
+                params[i] = ("BUFLEN", ctype, pname)
+        protos[name] = (ret, params)
+    return protos
+
+
+_KIND_CTYPES = {
+    "DIN": _D, "IIN": ctypes.c_int, "SIZE": ctypes.c_size_t, "BUFLEN": ctypes.c_size_t,
+    "DARR": _PD, "DOUT": _PD, "IOUT": ctypes.POINTER(ctypes.c_int),
+    "IARR": ctypes.POINTER(ctypes.c_int), "STR": ctypes.c_char_p, "CBUF": ctypes.c_char_p,
+    "HIN": ctypes.c_void_p, "HOUT": ctypes.POINTER(ctypes.c_void_p),
+}
+
+
+def _find_header(lib_path):
+    env = os.environ.get("PUMPLOSS_HEADER")
+    if env:
+        return env
+    if lib_path and os.path.sep in lib_path:
+        cand = os.path.join(os.path.dirname(os.path.abspath(lib_path)), os.pardir, "include", "pumploss.h")
+        if os.path.exists(cand):
+            return cand
+    return None
+
+
 class PumplossError(RuntimeError):
     """An error status (1-99) from the C API; .status holds the code."""
 
@@ -144,9 +207,16 @@ def _default_path():
 class Library:
     """A loaded pumploss shared library."""
 
-    def __init__(self, path=None):
+    def __init__(self, path=None, header=None):
         self.path = path or _default_path()
         self._dll = ctypes.CDLL(self.path)
+        self.header = header or _find_header(self.path)
+        self._all_protos = {}
+        if self.header:
+            with open(self.header, encoding="utf-8") as f:
+                self._all_protos = parse_header(f.read())
+        self._protos = {n: p for n, p in self._all_protos.items()
+                        if p[0] == "int" and p[1] and all(k != "UNKNOWN" for k, _, _ in p[1])}
         self._dll.pumploss_version.restype = ctypes.c_char_p
         self._dll.pumploss_version.argtypes = []
         self._dll.pumploss_version_number.restype = ctypes.c_int
@@ -159,6 +229,26 @@ class Library:
             fn = getattr(self._dll, name)
             fn.argtypes = argtypes
             fn.restype = ctypes.c_int
+        for name, (_, params) in self._protos.items():
+            if name not in self._sigs:  # newer than the tables: typed from the header
+                fn = getattr(self._dll, name)
+                fn.argtypes = [_KIND_CTYPES[k] for k, _, _ in params]
+                fn.restype = ctypes.c_int
+        self._destroy = {}
+        for name, (ret, params) in self._all_protos.items():
+            if ret == "void" and [k for k, _, _ in params] == ["HIN"]:
+                fn = getattr(self._dll, name)
+                fn.argtypes = [ctypes.c_void_p]
+                fn.restype = None
+                self._destroy[name] = fn
+
+    def functions(self):
+        """Names of the status-returning functions callable through raw()."""
+        return sorted(set(self._sigs) | set(self._protos))
+
+    def destroy(self, name, handle):
+        """Call a destroy function (pumploss_X_destroy) on a handle from raw()."""
+        self._destroy[name](handle)
 
     def version(self):
         return self._dll.pumploss_version().decode()
@@ -175,6 +265,8 @@ class Library:
 
     def raw(self, name, *args):
         """Call pumploss_NAME with the inputs; returns (status, outputs...) and never raises."""
+        if name not in self._sigs:
+            return self._raw_generic(name, *args)
         argtypes, n_out = self._sigs[name]
         outs = [ctypes.c_double(0.0) for _ in range(n_out)]
         conv = []
@@ -183,9 +275,62 @@ class Library:
         status = getattr(self._dll, name)(*conv, *[ctypes.byref(o) for o in outs])
         return (status, *[o.value for o in outs])
 
+    def _raw_generic(self, name, *args):
+        """raw() for a function known only from the header: inputs in declaration order (a
+        sequence for each array; size_t lengths are taken from the arrays), outputs returned in
+        declaration order (lists for arrays, an int for a handle, a str for a char buffer)."""
+        _, params = self._protos[name]
+        batch = any(k == "SIZE" for k, _, _ in params)
+        n = next((len(a) for a in args if not isinstance(a, (str, bytes)) and hasattr(a, "__len__")), 0)
+        it = iter(args)
+        conv, outs = [], []
+        for kind, _, _ in params:
+            if kind == "DIN":
+                conv.append(float(next(it)))
+            elif kind in ("IIN", "HIN"):
+                conv.append(next(it))
+            elif kind == "STR":
+                v = next(it)
+                conv.append(v.encode() if isinstance(v, str) else v)
+            elif kind == "SIZE":
+                conv.append(n)
+            elif kind == "BUFLEN":
+                conv.append(len(outs[-1][1]))
+            elif kind == "DARR":
+                conv.append((_D * max(n, 1))(*next(it)))
+            elif kind == "IARR":
+                conv.append((ctypes.c_int * max(n, 1))(*next(it)))
+            elif kind == "DOUT":
+                o = (_D * max(n, 1))() if batch else _D(0.0)
+                outs.append(("DA" if batch else "D", o))
+                conv.append(o if batch else ctypes.byref(o))
+            elif kind == "IOUT":
+                o = (ctypes.c_int * max(n, 1))() if batch else ctypes.c_int(0)
+                outs.append(("IA" if batch else "I", o))
+                conv.append(o if batch else ctypes.byref(o))
+            elif kind == "CBUF":
+                o = ctypes.create_string_buffer(1024)
+                outs.append(("S", o))
+                conv.append(o)
+            elif kind == "HOUT":
+                o = ctypes.c_void_p(None)
+                outs.append(("H", o))
+                conv.append(ctypes.byref(o))
+        status = getattr(self._dll, name)(*conv)
+        vals = []
+        for tag, o in outs:
+            if tag in ("D", "I", "H"):
+                vals.append(o.value)
+            elif tag in ("DA", "IA"):
+                vals.append(list(o[:n]))
+            else:
+                vals.append(o.value.decode(errors="replace"))
+        return (status, *vals)
+
     def __getattr__(self, short):
         name = "pumploss_" + short
-        if short.startswith("_") or name not in self.__dict__.get("_sigs", {}):
+        if short.startswith("_") or (name not in self.__dict__.get("_sigs", {})
+                                     and name not in self.__dict__.get("_protos", {})):
             raise AttributeError(short)
 
         def call(*args):
@@ -199,6 +344,7 @@ class Library:
         return call
 
 
-def load(path=None):
-    """Load the shared library (PUMPLOSS_LIBRARY, the linker's search path, or `path`)."""
-    return Library(path)
+def load(path=None, header=None):
+    """Load the shared library (PUMPLOSS_LIBRARY, the linker's search path, or `path`);
+    `header` (or PUMPLOSS_HEADER) names pumploss.h for functions newer than the tables."""
+    return Library(path, header)

@@ -101,7 +101,9 @@ inline int call_batch(std::size_t n, double* const (&outs)[N], int* status_out, 
         summary = code;
       }
     }
-  } catch (...) {
+  } catch (...) {  // keep the promise: on an error every output is NaN
+    for (double* p : outs) for (std::size_t i = 0; i < n; ++i) p[i] = kNaN;
+    for (std::size_t i = 0; i < n; ++i) status_out[i] = PUMPLOSS_EINTERNAL;
     return PUMPLOSS_EINTERNAL;
   }
   return failed ? PUMPLOSS_WPARTIAL : summary;

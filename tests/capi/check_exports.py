@@ -35,6 +35,8 @@ def main():
     ap.add_argument("--exports", required=True)
     ap.add_argument("--callers", action="append", default=[])
     ap.add_argument("--library")
+    ap.add_argument("--dll", help="a Windows DLL: its export table (objdump -p) must equal the .def")
+    ap.add_argument("--objdump", default="objdump")
     a = ap.parse_args()
     sets = {
         "pumploss.h": header_functions(a.header),
@@ -51,6 +53,35 @@ def main():
             print("libpumploss.so exports non-pumploss_ symbols:", foreign[:20])
             return 1
         sets["libpumploss.so"] = syms
+    if a.dll:
+        out = subprocess.run([a.objdump, "-p", a.dll], check=True, capture_output=True, text=True).stdout
+        names, in_table, imports = set(), False, []
+        for line in out.splitlines():
+            if "[Ordinal/Name Pointer] Table" in line:
+                in_table = True
+                continue
+            m = re.match(r"\s*\[\s*\d+\]\s+(\S+)", line)
+            if in_table and m:
+                names.add(m.group(1))
+            elif in_table and line.strip() == "":
+                in_table = False
+            m = re.match(r"\s*DLL Name:\s*(\S+)", line)
+            if m:
+                imports.append(m.group(1))
+        if not names:
+            print(f"no export table found in {a.dll}")
+            return 1
+        foreign = sorted(s for s in names if not s.startswith("pumploss_"))
+        if foreign:
+            print(f"{a.dll} exports non-pumploss_ symbols:", foreign[:20])
+            return 1
+        system = re.compile(r"^(kernel32|msvcrt|ucrtbase|api-ms-win-.*|user32|advapi32|ntdll)\.dll$", re.I)
+        private = [d for d in imports if not system.match(d)]
+        if private:
+            print(f"{a.dll} needs DLLs a Windows machine lacks: {private} (link the runtime statically)")
+            return 1
+        print(f"{a.dll}: {len(names)} exports; imports only {sorted(set(imports))}")
+        sets[a.dll] = names
     ref = sets["pumploss.h"]
     ok = True
     for name, s in sets.items():
