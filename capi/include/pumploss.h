@@ -257,6 +257,125 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_typical_mineral_oil(double *rho_kg_m3, d
 /* pumploss:capi-efficiency (declarations of this subject go above this line) */
 
 /* ==== pump ==== */
+/** @name Pump health from field readings
+ *  Drain fraction and a verdict with reasons (see pumploss::assess_health). Default bands are
+ *  common practice of the trade (no source): about 5 % of maximum displacement flow for a
+ *  high-quality pump at maximum pressure, up to about 10 % for very large pumps, 15 % or more for
+ *  small, poorly made or worn pumps. @{ */
+/**
+ * Drain fraction: case drain flow over maximum displacement flow, q_V3 / (V_max n).
+ * @param drain_flow_m3_s case drain flow, m^3/s (>= 0)
+ * @param max_displacement_m3_rev maximum displacement, m^3/rev (> 0)
+ * @param speed_rev_s shaft speed, rev/s (> 0)
+ * @param fraction receives the fraction (0.05 = 5 %)
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE above 1; PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE,
+ *         PUMPLOSS_EMISUSE. @sa pumploss::drain_fraction
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_drain_fraction(double drain_flow_m3_s, double max_displacement_m3_rev,
+                                                       double speed_rev_s, double *fraction);
+
+#define PUMPLOSS_HEALTH_SOUND 0      /**< Verdict level: sound. */
+#define PUMPLOSS_HEALTH_ACCEPTABLE 1 /**< Verdict level: acceptable. */
+#define PUMPLOSS_HEALTH_ELEVATED 2   /**< Verdict level: elevated, plan an inspection. */
+#define PUMPLOSS_HEALTH_WORN 3       /**< Verdict level: worn. */
+#define PUMPLOSS_REASON_FRACTION_SOUND 0x001      /**< Normalised fraction within the sound band. */
+#define PUMPLOSS_REASON_FRACTION_ACCEPTABLE 0x002 /**< Normalised fraction within the acceptable band. */
+#define PUMPLOSS_REASON_FRACTION_ELEVATED 0x004   /**< Normalised fraction between acceptable and worn. */
+#define PUMPLOSS_REASON_FRACTION_WORN 0x008       /**< Normalised fraction at or beyond the worn band. */
+#define PUMPLOSS_REASON_GROWTH_MODERATE 0x010     /**< Growth over the baseline beyond the watch limit. */
+#define PUMPLOSS_REASON_GROWTH_LARGE 0x020        /**< Growth over the baseline beyond the worn limit. */
+#define PUMPLOSS_REASON_DRAIN_HOT 0x040           /**< Drain hotter than throttling alone explains. */
+#define PUMPLOSS_REASON_LOW_PRESSURE 0x080        /**< Reading below half the reference pressure. */
+#define PUMPLOSS_REASON_NO_BASELINE 0x100         /**< No baseline: growth not assessed. */
+#define PUMPLOSS_REASON_NO_TEMPERATURES 0x200     /**< No drain/inlet temperature: heat not assessed. */
+
+/** Opaque health assessor: one pump, one oil, a reference state, bands and an optional baseline. */
+typedef struct pumploss_health pumploss_health;
+
+/**
+ * Create a health assessor.
+ * @param max_displacement_m3_rev maximum displacement, m^3/rev (> 0)
+ * @param reference_dp_pa reference pressure difference outlet to case, Pa (> 0; usually the maximum)
+ * @param reference_t_k reference oil temperature, K (> 0)
+ * @param t1_k first oil viscosity point: temperature, K
+ * @param nu1_m2_s first oil viscosity point: kinematic viscosity, m^2/s
+ * @param t2_k second oil viscosity point: temperature, K
+ * @param nu2_m2_s second oil viscosity point: kinematic viscosity, m^2/s
+ * @param rho_kg_m3 oil density, kg/m^3 (> 0)
+ * @param cp_j_kg_k oil specific heat, J/(kg K) (> 0)
+ * @param out receives the new handle (NULL on error); free it with pumploss_health_destroy()
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE, PUMPLOSS_ENOMEM.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_create(double max_displacement_m3_rev, double reference_dp_pa,
+                                                      double reference_t_k, double t1_k, double nu1_m2_s,
+                                                      double t2_k, double nu2_m2_s, double rho_kg_m3,
+                                                      double cp_j_kg_k, pumploss_health **out);
+/** Destroy a health assessor; NULL is a no-op.
+ *  @param h the handle */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_health_destroy(pumploss_health *h);
+/**
+ * Set the bands (defaults: 0.05, 0.10, 0.15, 0.25, 0.50, 1.0).
+ * @param h the handle
+ * @param sound_max drain fraction up to which a pump is sound (> 0)
+ * @param acceptable_max upper end of the acceptable band (>= sound_max)
+ * @param worn_min fraction from which a pump is worn (>= acceptable_max)
+ * @param growth_moderate growth over baseline flagged moderate (> 0; 0.25 = +25 %)
+ * @param growth_large growth over baseline flagged large (>= growth_moderate)
+ * @param hot_margin drain rise flagged above hot_margin x dp/(rho cp) (> 0)
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE (NULL handle).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_bands(pumploss_health *h, double sound_max, double acceptable_max,
+                                                         double worn_min, double growth_moderate,
+                                                         double growth_large, double hot_margin);
+/**
+ * Set the pump's baseline: its drain flow at the reference state when new (or after overhaul).
+ * @param h the handle
+ * @param baseline_m3_s baseline drain flow at the reference state, m^3/s (> 0)
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_baseline(pumploss_health *h, double baseline_m3_s);
+/**
+ * Set the exponents of the normalisation q ~ dp^a mu^-b (defaults 1, 1: laminar clearances).
+ * @param h the handle
+ * @param pressure_exponent a (>= 0)
+ * @param viscosity_exponent b (>= 0)
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_exponents(pumploss_health *h, double pressure_exponent,
+                                                             double viscosity_exponent);
+/**
+ * Assess one field reading.
+ * @param h the handle
+ * @param drain_flow_m3_s case drain flow, m^3/s (>= 0)
+ * @param outlet_pa outlet pressure (gauge), Pa
+ * @param case_pa case pressure (gauge), Pa (0 if not measured; outlet - case > 0)
+ * @param oil_t_k oil temperature governing the clearances, K
+ * @param speed_rev_s shaft speed, rev/s (> 0)
+ * @param drain_t_k drain oil temperature, K; NaN when not measured
+ * @param inlet_t_k inlet oil temperature, K; NaN when not measured
+ * @param level receives the level (PUMPLOSS_HEALTH_*; -1 on error)
+ * @param reasons receives the reason bits (PUMPLOSS_REASON_*; 0 on error)
+ * @param fraction receives the drain fraction as read
+ * @param fraction_at_reference receives the drain fraction normalised to the reference state
+ * @param growth receives the growth over the baseline (0.3 = +30 %); NaN when no baseline is set
+ *        (reason PUMPLOSS_REASON_NO_BASELINE)
+ * @return PUMPLOSS_OK, PUMPLOSS_WIMPLAUSIBLE (fraction above 1), PUMPLOSS_EDOMAIN,
+ *         PUMPLOSS_ENONFINITE (NaN/inf in a required input, inf in a temperature), PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess(const pumploss_health *h, double drain_flow_m3_s,
+                                                      double outlet_pa, double case_pa, double oil_t_k,
+                                                      double speed_rev_s, double drain_t_k, double inlet_t_k,
+                                                      int *level, int *reasons, double *fraction,
+                                                      double *fraction_at_reference, double *growth);
+/** A sentence for one reason bit.
+ *  @param reason one PUMPLOSS_REASON_* bit
+ *  @return the sentence (static storage, never NULL); a sentence saying so for an unknown bit */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_reason_text(int reason);
+/** The name of a level.
+ *  @param level a PUMPLOSS_HEALTH_* value
+ *  @return "sound", "acceptable", "elevated", "worn", or "unknown" (static storage) */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_level_name(int level);
+/** @} */
 /* pumploss:capi-pump (declarations of this subject go above this line) */
 
 /* ==== capi ==== */

@@ -46,6 +46,7 @@ _SCALAR = {
     # pumploss:py-scalar-gap
     # pumploss:py-scalar-friction
     # pumploss:py-scalar-efficiency
+    "pumploss_drain_fraction": (3, 1),
     # pumploss:py-scalar-pump
     # pumploss:py-scalar-capi
 }

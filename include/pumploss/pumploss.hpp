@@ -11,6 +11,7 @@
 // pumploss:umbrella-gap
 // pumploss:umbrella-friction
 // pumploss:umbrella-efficiency
+#include "health.hpp"
 // pumploss:umbrella-pump
 // pumploss:umbrella-includes (new subject headers are added above this line)
 

@@ -88,6 +88,29 @@ static void test_fluid(void) {
 
 /* pumploss:c-caller-efficiency */
 
+static void test_pump_health(void) {
+  pumploss_health *h = NULL;
+  double f = 0.0, fref = 0.0, g = 0.0;
+  int level = 0, reasons = 0;
+  /* 71 cm3/rev at 1500 rpm = 106.5 L/min; 5.325 L/min drain = 5 % (hand calculation) */
+  CHECK(pumploss_drain_fraction(5.325e-3 / 60.0, 71e-6, 25.0, &f) == PUMPLOSS_OK && fabs(f - 0.05) < 1e-15);
+  CHECK(pumploss_drain_fraction(1e-4, 71e-6, 0.0, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  CHECK(pumploss_health_create(71e-6, 250e5, 323.15, 313.15, 46e-6, 373.15, 6.8e-6, 870.0, 1900.0, &h) == PUMPLOSS_OK);
+  CHECK(pumploss_health_set_bands(h, 0.05, 0.10, 0.15, 0.25, 0.5, 1.0) == PUMPLOSS_OK);
+  CHECK(pumploss_health_set_exponents(h, 1.0, 1.0) == PUMPLOSS_OK);
+  CHECK(pumploss_health_set_baseline(h, 0.04 * 71e-6 * 25.0) == PUMPLOSS_OK);
+  /* common practice bands: 16 % of displacement flow at the reference state is worn */
+  CHECK(pumploss_health_assess(h, 0.16 * 71e-6 * 25.0, 250e5, 0.0, 323.15, 25.0, 330.0, 318.15,
+                               &level, &reasons, &f, &fref, &g) == PUMPLOSS_OK &&
+        level == PUMPLOSS_HEALTH_WORN && (reasons & PUMPLOSS_REASON_FRACTION_WORN) && fabs(g - 3.0) < 1e-12);
+  CHECK(strcmp(pumploss_health_level_name(level), "worn") == 0);
+  CHECK(strlen(pumploss_health_reason_text(PUMPLOSS_REASON_FRACTION_WORN)) > 10);
+  CHECK(pumploss_health_assess(NULL, 1e-4, 250e5, 0.0, 323.15, 25.0, 330.0, 318.15,
+                               &level, &reasons, &f, &fref, &g) == PUMPLOSS_EMISUSE && is_nan(f) && level == -1);
+  pumploss_health_destroy(h);
+  pumploss_health_destroy(NULL);
+}
+
 /* pumploss:c-caller-pump */
 
 /* pumploss:c-caller-capi */
@@ -101,6 +124,7 @@ int main(void) {
   /* pumploss:c-caller-calls-gap */
   /* pumploss:c-caller-calls-friction */
   /* pumploss:c-caller-calls-efficiency */
+  test_pump_health();
   /* pumploss:c-caller-calls-pump */
   /* pumploss:c-caller-calls-capi */
   printf("%d passed, %d failed\n", checks - failures, failures);
