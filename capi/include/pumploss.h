@@ -248,6 +248,461 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_typical_mineral_oil(double *rho_kg_m3, d
 /** @} */
 
 /* ==== gap ==== */
+/** @name Clearance (gap) flows and orifices
+ *  Laminar gap flows (plates, annulus, radial), hydrostatic pads, orifices and capillaries.
+ *  Units SI as in the parameter names. @{ */
+/**
+ * Parallel-plate gap leakage with a moving wall: q = b h^3 dp/(12 mu L) + b h U/2.
+ * @param dp_pa pressure drop along the gap, Pa
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param width_m gap width across the flow, m (> 0)
+ * @param height_m gap height, m (> 0)
+ * @param length_m gap length in the flow direction, m (> 0)
+ * @param wall_speed_m_s speed of the moving wall along the flow, m/s
+ * @param q_m3_s receives the leakage flow, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (mu, width, height or length <= 0); PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE (NULL output).
+ * @sa pumploss::gap_plates_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_plates_flow(double dp_pa, double mu_pa_s, double width_m, double height_m, double length_m, double wall_speed_m_s, double *q_m3_s);
+/**
+ * Gap height that explains a measured parallel-plate leakage (pressure flow only): h = (12 mu L q/(b dp))^(1/3).
+ * @param q_m3_s measured leakage, m^3/s (same sign as dp_pa, nonzero)
+ * @param dp_pa pressure drop, Pa (nonzero)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param width_m gap width, m (> 0)
+ * @param length_m gap length, m (> 0)
+ * @param height_m receives the gap height, m
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (q and dp of different sign or zero, bad geometry); PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_plates_height
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_plates_height(double q_m3_s, double dp_pa, double mu_pa_s, double width_m, double length_m, double *height_m);
+/**
+ * Gap height from leakage with the Couette term: the unique positive root of b dp h^3/(12 mu L) + b U h/2 = q, in closed form.
+ * @param q_m3_s measured leakage, m^3/s (> 0)
+ * @param dp_pa pressure drop, Pa (>= 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param width_m gap width, m (> 0)
+ * @param length_m gap length, m (> 0)
+ * @param wall_speed_m_s wall speed along the flow, m/s
+ * @param height_m receives the gap height, m
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (no positive gap gives q); PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_plates_height_couette
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_plates_height_couette(double q_m3_s, double dp_pa, double mu_pa_s, double width_m, double length_m, double wall_speed_m_s, double *height_m);
+/**
+ * Velocity profile of the parallel-plate gap: u(y) = dp/(2 mu L) y (h - y) + U y/h.
+ * @param dp_pa pressure drop along the gap, Pa
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param height_m gap height, m (> 0)
+ * @param length_m gap length, m (> 0)
+ * @param wall_speed_m_s speed of the wall at y = h, m/s
+ * @param y_m distance from the fixed wall, m (0..height_m)
+ * @param u_m_s receives the velocity, m/s
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (y outside the gap, bad geometry); PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_plates_velocity
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_plates_velocity(double dp_pa, double mu_pa_s, double height_m, double length_m, double wall_speed_m_s, double y_m, double *u_m_s);
+/**
+ * Viscous friction force of a parallel-plate gap: F = mu U b L/h - b h dp/2.
+ * @param dp_pa pressure drop along the gap in the direction of the wall motion, Pa
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param width_m gap width, m (> 0)
+ * @param height_m gap height, m (> 0)
+ * @param length_m gap length, m (> 0)
+ * @param wall_speed_m_s wall speed, m/s
+ * @param force_n receives the force needed to move the wall (positive when it opposes the motion), N
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_plates_shear_force
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_plates_shear_force(double dp_pa, double mu_pa_s, double width_m, double height_m, double length_m, double wall_speed_m_s, double *force_n);
+/**
+ * Power lost in a parallel-plate gap: P = b h^3 dp^2/(12 mu L) + mu U^2 b L/h.
+ * @param dp_pa pressure drop along the gap, Pa
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param width_m gap width, m (> 0)
+ * @param height_m gap height, m (> 0)
+ * @param length_m gap length, m (> 0)
+ * @param wall_speed_m_s wall speed, m/s
+ * @param power_w receives the dissipated power (leakage plus friction), W
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_plates_power_loss
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_plates_power_loss(double dp_pa, double mu_pa_s, double width_m, double height_m, double length_m, double wall_speed_m_s, double *power_w);
+/**
+ * Exact laminar leakage through an eccentric annulus (piston in bore), any clearance, eccentricity 0..1 inclusive; relative error below 1e-12.
+ * @param dp_pa pressure drop along the piston, Pa
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param bore_diameter_m bore diameter, m (> piston diameter)
+ * @param piston_diameter_m piston diameter, m (> 0)
+ * @param length_m sealing length, m (> 0)
+ * @param eccentricity_ratio centre offset / radial clearance, 0 (concentric) to 1 (touching)
+ * @param q_m3_s receives the leakage flow, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (piston >= bore, eccentricity outside [0, 1], mu or length <= 0); PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_annulus_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_annulus_flow(double dp_pa, double mu_pa_s, double bore_diameter_m, double piston_diameter_m, double length_m, double eccentricity_ratio, double *q_m3_s);
+/**
+ * Narrow-gap annulus leakage q = pi D_m h^3 dp (1 + 1.5 eps^2)/(12 mu L), D_m the mean diameter (for comparison with the exact form).
+ * @param dp_pa pressure drop, Pa
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param bore_diameter_m bore diameter, m (> piston diameter)
+ * @param piston_diameter_m piston diameter, m (> 0)
+ * @param length_m sealing length, m (> 0)
+ * @param eccentricity_ratio eccentricity ratio, 0..1
+ * @param q_m3_s receives the leakage flow, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME (clearance/radius > 0.05); errors as pumploss_gap_annulus_flow().
+ * @sa pumploss::gap_annulus_narrow_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_annulus_narrow_flow(double dp_pa, double mu_pa_s, double bore_diameter_m, double piston_diameter_m, double length_m, double eccentricity_ratio, double *q_m3_s);
+/**
+ * Exact axial drag flow of a piston sliding in an eccentric annulus (no pressure difference).
+ * @param bore_diameter_m bore diameter, m (> piston diameter)
+ * @param piston_diameter_m piston diameter, m (> 0)
+ * @param eccentricity_ratio eccentricity ratio, 0..1
+ * @param piston_speed_m_s piston speed relative to the bore, m/s
+ * @param q_m3_s receives the drag flow, m^3/s (sign of the speed)
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_annulus_drag_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_annulus_drag_flow(double bore_diameter_m, double piston_diameter_m, double eccentricity_ratio, double piston_speed_m_s, double *q_m3_s);
+/**
+ * Leakage past a piston: exact eccentric pressure flow plus the drag flow of the sliding piston.
+ * @param dp_pa pressure drop from displacement chamber to case, Pa
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param bore_diameter_m bore diameter, m
+ * @param piston_diameter_m piston diameter, m
+ * @param length_m sealing length, m (> 0)
+ * @param eccentricity_ratio eccentricity ratio, 0..1
+ * @param piston_speed_m_s piston speed, m/s, positive towards the case
+ * @param q_m3_s receives pressure plus drag leakage, m^3/s
+ * @return As pumploss_gap_annulus_flow().
+ * @sa pumploss::gap_piston_leakage
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_piston_leakage(double dp_pa, double mu_pa_s, double bore_diameter_m, double piston_diameter_m, double length_m, double eccentricity_ratio, double piston_speed_m_s, double *q_m3_s);
+/**
+ * Radial clearance of an annulus that explains a measured leakage (inverse of pumploss_gap_annulus_flow()).
+ * @param q_m3_s measured leakage, m^3/s (same sign as dp_pa)
+ * @param dp_pa pressure drop, Pa (nonzero)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param bore_diameter_m bore diameter, m (> 0)
+ * @param length_m sealing length, m (> 0)
+ * @param eccentricity_ratio assumed eccentricity ratio, 0..1
+ * @param clearance_m receives the radial clearance (bore - piston)/2, m
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (signs differ, or clearance would exceed 0.99 of the bore radius); PUMPLOSS_ENOCONVERGE; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_annulus_clearance
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_annulus_clearance(double q_m3_s, double dp_pa, double mu_pa_s, double bore_diameter_m, double length_m, double eccentricity_ratio, double *clearance_m);
+/**
+ * Laminar radial flow between parallel discs: q = pi h^3 dp/(6 mu ln(ro/ri)).
+ * @param dp_pa pressure at the inner radius minus pressure at the outer radius, Pa
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param inner_radius_m inner radius, m (> 0)
+ * @param outer_radius_m outer radius, m (> inner)
+ * @param height_m gap height, m (> 0)
+ * @param q_m3_s receives the radial flow, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_radial_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_radial_flow(double dp_pa, double mu_pa_s, double inner_radius_m, double outer_radius_m, double height_m, double *q_m3_s);
+/**
+ * Radial flow through an arc sector (valve plate sealing land): q = phi h^3 dp/(12 mu ln(ro/ri)).
+ * @param dp_pa inner minus outer pressure, Pa
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param inner_radius_m inner radius, m (> 0)
+ * @param outer_radius_m outer radius, m (> inner)
+ * @param height_m gap height, m (> 0)
+ * @param angle_rad sector angle, rad (0 < angle <= 2 pi)
+ * @param q_m3_s receives the flow, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_radial_sector_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_radial_sector_flow(double dp_pa, double mu_pa_s, double inner_radius_m, double outer_radius_m, double height_m, double angle_rad, double *q_m3_s);
+/**
+ * Gap height that explains a measured radial leakage: h = (6 mu q ln(ro/ri)/(pi dp))^(1/3).
+ * @param q_m3_s measured radial leakage, m^3/s (same sign as dp_pa)
+ * @param dp_pa pressure drop, Pa (nonzero)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param inner_radius_m inner radius, m (> 0)
+ * @param outer_radius_m outer radius, m (> inner)
+ * @param height_m receives the gap height, m
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_radial_height
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_radial_height(double q_m3_s, double dp_pa, double mu_pa_s, double inner_radius_m, double outer_radius_m, double *height_m);
+/**
+ * Pressure field of a radial land: p(r) = p_o + (p_i - p_o) ln(ro/r)/ln(ro/ri).
+ * @param inner_pressure_pa pressure at the inner radius, Pa
+ * @param outer_pressure_pa pressure at the outer radius, Pa
+ * @param inner_radius_m inner radius, m (> 0)
+ * @param outer_radius_m outer radius, m (> inner)
+ * @param radius_m radius, m (inner..outer)
+ * @param p_pa receives the pressure at radius_m, Pa
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (radius outside the land); PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_radial_pressure
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_radial_pressure(double inner_pressure_pa, double outer_pressure_pa, double inner_radius_m, double outer_radius_m, double radius_m, double *p_pa);
+/**
+ * Separating force of the pressure field on a radial land sector (integral of p(r) over the land).
+ * @param inner_pressure_pa pressure at the inner radius, Pa
+ * @param outer_pressure_pa pressure at the outer radius, Pa
+ * @param inner_radius_m inner radius, m (> 0)
+ * @param outer_radius_m outer radius, m (> inner)
+ * @param angle_rad sector angle, rad (0 < angle <= 2 pi)
+ * @param force_n receives the separating force of the pressure field on the land, N
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_radial_land_force
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_radial_land_force(double inner_pressure_pa, double outer_pressure_pa, double inner_radius_m, double outer_radius_m, double angle_rad, double *force_n);
+/**
+ * Land gap at which a capillary-fed hydrostatic pad carries a given load.
+ * @param supply_pressure_pa supply pressure, Pa (> 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param capillary_diameter_m capillary bore, m (> 0)
+ * @param capillary_length_m capillary length, m (> 0)
+ * @param inner_radius_m recess radius, m (> 0)
+ * @param outer_radius_m outer land radius, m (> inner)
+ * @param load_n load to carry, N (0 < load < supply pressure times effective area)
+ * @param height_m receives the land gap, m
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (load cannot be carried); PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_pad_capillary_height
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_pad_capillary_height(double supply_pressure_pa, double mu_pa_s, double capillary_diameter_m, double capillary_length_m, double inner_radius_m, double outer_radius_m, double load_n, double *height_m);
+/**
+ * Land gap at which an orifice-fed hydrostatic pad carries a given load.
+ * @param supply_pressure_pa supply pressure, Pa (> 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param orifice_diameter_m feed orifice diameter, m (> 0)
+ * @param cd discharge coefficient of the feed orifice (0 < cd <= 1)
+ * @param inner_radius_m recess radius, m (> 0)
+ * @param outer_radius_m outer land radius, m (> inner)
+ * @param load_n load to carry, N
+ * @param height_m receives the land gap, m
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (load cannot be carried); PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_pad_orifice_height
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_pad_orifice_height(double supply_pressure_pa, double rho_kg_m3, double mu_pa_s, double orifice_diameter_m, double cd, double inner_radius_m, double outer_radius_m, double load_n, double *height_m);
+/**
+ * Gap Reynolds number on the hydraulic diameter 2h, with the laminar check.
+ * @param q_m3_s flow through the gap, m^3/s
+ * @param width_m wetted width across the flow, m (> 0; pi D_m for an annulus)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param re receives Re = 2 rho q/(mu b)
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME (Re > 2000: laminar gap formulas do not apply); PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::gap_reynolds
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_reynolds(double q_m3_s, double width_m, double rho_kg_m3, double mu_pa_s, double *re);
+/**
+ * Sharp-edged orifice: q = cd (pi d^2/4) sqrt(2 dp/rho).
+ * @param dp_pa pressure drop across the orifice, Pa (flow follows its sign)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param diameter_m orifice diameter, m (> 0)
+ * @param cd discharge coefficient (0 < cd <= 1; 0.611 for a sharp edge at high Re)
+ * @param q_m3_s receives the flow, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::orifice_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_flow(double dp_pa, double rho_kg_m3, double diameter_m, double cd, double *q_m3_s);
+/**
+ * Pressure drop of a sharp-edged orifice at a given flow (inverse of pumploss_orifice_flow()).
+ * @param q_m3_s flow, m^3/s
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param diameter_m orifice diameter, m (> 0)
+ * @param cd discharge coefficient (0 < cd <= 1)
+ * @param dp_pa receives the pressure drop, Pa
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::orifice_dp
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_dp(double q_m3_s, double rho_kg_m3, double diameter_m, double cd, double *dp_pa);
+/**
+ * Orifice diameter that passes a given flow at a given pressure drop.
+ * @param q_m3_s flow, m^3/s (same sign as dp_pa, nonzero)
+ * @param dp_pa pressure drop, Pa (nonzero)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cd discharge coefficient (0 < cd <= 1)
+ * @param diameter_m receives the orifice diameter, m
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::orifice_diameter
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_diameter(double q_m3_s, double dp_pa, double rho_kg_m3, double cd, double *diameter_m);
+/**
+ * Orifice Reynolds number, with the check for the constant-Cd (turbulent) assumption.
+ * @param q_m3_s flow, m^3/s
+ * @param diameter_m orifice diameter, m (> 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param re receives Re = 4 rho q/(pi d mu)
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME (Re < 1000: use pumploss_orifice_flow_viscous()); PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::orifice_reynolds
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_reynolds(double q_m3_s, double diameter_m, double rho_kg_m3, double mu_pa_s, double *re);
+/**
+ * Orifice flow at any Reynolds number with the blended coefficient 1/Cd^2 = 1/cd_inf^2 + 1/(delta^2 Re), solved exactly.
+ * @param dp_pa pressure drop, Pa
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param diameter_m orifice diameter, m (> 0)
+ * @param cd_inf turbulent discharge coefficient (0 < cd_inf <= 1)
+ * @param delta laminar coefficient of Cd = delta sqrt(Re) (> 0; 0.16287 = 1/sqrt(12 pi) after Sampson)
+ * @param q_m3_s receives the flow, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::orifice_flow_viscous
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_flow_viscous(double dp_pa, double rho_kg_m3, double mu_pa_s, double diameter_m, double cd_inf, double delta, double *q_m3_s);
+/**
+ * Capillary tube flow: root of 128 mu L q/(pi d^4) + K rho v^2/2 = dp, solved in cancellation-free form.
+ * @param dp_pa pressure drop, Pa
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param diameter_m tube bore, m (> 0)
+ * @param length_m tube length, m (> 0)
+ * @param loss_coefficient entrance plus exit loss coefficient K (>= 0)
+ * @param q_m3_s receives the flow, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME (tube Re > 2000); PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::capillary_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_capillary_flow(double dp_pa, double rho_kg_m3, double mu_pa_s, double diameter_m, double length_m, double loss_coefficient, double *q_m3_s);
+/**
+ * Capillary tube pressure drop: dp = 128 mu L q/(pi d^4) + K rho v^2/2.
+ * @param q_m3_s flow, m^3/s
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param diameter_m tube bore, m (> 0)
+ * @param length_m tube length, m (> 0)
+ * @param loss_coefficient entrance plus exit loss coefficient K (>= 0)
+ * @param dp_pa receives the pressure drop, Pa
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME (tube Re > 2000); PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::capillary_dp
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_capillary_dp(double q_m3_s, double rho_kg_m3, double mu_pa_s, double diameter_m, double length_m, double loss_coefficient, double *dp_pa);
+/**
+ * Equivalent Cd A of two square-law restrictions in series: 1/cda^2 = 1/cda1^2 + 1/cda2^2 (chain for more).
+ * @param cda1_m2 Cd A of the first restriction, m^2 (> 0)
+ * @param cda2_m2 Cd A of the second restriction, m^2 (> 0)
+ * @param cda_m2 receives the equivalent Cd A, m^2
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::orifice_series_cda
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_series_cda(double cda1_m2, double cda2_m2, double *cda_m2);
+/**
+ * Equivalent Cd A of two square-law restrictions in parallel: cda1 + cda2.
+ * @param cda1_m2 Cd A of the first restriction, m^2 (>= 0)
+ * @param cda2_m2 Cd A of the second restriction, m^2 (>= 0)
+ * @param cda_m2 receives the equivalent Cd A, m^2
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::orifice_parallel_cda
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_parallel_cda(double cda1_m2, double cda2_m2, double *cda_m2);
+/**
+ * Flow through a square-law restriction of effective area Cd A: q = cda sqrt(2 dp/rho).
+ * @param dp_pa pressure drop, Pa
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cda_m2 effective area Cd A, m^2 (>= 0)
+ * @param q_m3_s receives the flow, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::orifice_flow_cda
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_flow_cda(double dp_pa, double rho_kg_m3, double cda_m2, double *q_m3_s);
+/**
+ * Hydrostatic pad (slipper) fed through a capillary: pocket pressure, leakage, force, balance ratio.
+ * @param supply_pressure_pa supply pressure, Pa (> 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param capillary_diameter_m capillary bore, m (> 0)
+ * @param capillary_length_m capillary length, m (> 0)
+ * @param inner_radius_m recess radius, m (> 0)
+ * @param outer_radius_m outer land radius, m (> inner)
+ * @param height_m land gap, m (> 0)
+ * @param piston_diameter_m piston diameter for the balance ratio, m (> 0)
+ * @param pocket_pressure_pa receives the recess pressure, Pa
+ * @param q_m3_s receives the leakage, m^3/s
+ * @param force_n receives the hydrostatic force, N
+ * @param balance_ratio receives pad force / (supply pressure x piston area)
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE (NULL output).
+ * @sa pumploss::gap_pad_capillary
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_pad_capillary(double supply_pressure_pa, double mu_pa_s, double capillary_diameter_m, double capillary_length_m, double inner_radius_m, double outer_radius_m, double height_m, double piston_diameter_m, double *pocket_pressure_pa, double *q_m3_s, double *force_n, double *balance_ratio);
+/**
+ * Hydrostatic pad (slipper) fed through a sharp-edged orifice: pocket pressure, leakage, force, balance ratio.
+ * @param supply_pressure_pa supply pressure, Pa (> 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param mu_pa_s dynamic viscosity, Pa s (> 0)
+ * @param orifice_diameter_m feed orifice diameter, m (> 0)
+ * @param cd discharge coefficient of the feed orifice (0 < cd <= 1)
+ * @param inner_radius_m recess radius, m (> 0)
+ * @param outer_radius_m outer land radius, m (> inner)
+ * @param height_m land gap, m (> 0)
+ * @param piston_diameter_m piston diameter for the balance ratio, m (> 0)
+ * @param pocket_pressure_pa receives the recess pressure, Pa
+ * @param q_m3_s receives the leakage, m^3/s
+ * @param force_n receives the hydrostatic force, N
+ * @param balance_ratio receives pad force / (supply pressure x piston area)
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE (NULL output).
+ * @sa pumploss::gap_pad_orifice
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_pad_orifice(double supply_pressure_pa, double rho_kg_m3, double mu_pa_s, double orifice_diameter_m, double cd, double inner_radius_m, double outer_radius_m, double height_m, double piston_diameter_m, double *pocket_pressure_pa, double *q_m3_s, double *force_n, double *balance_ratio);
+/**
+ * Batch form of pumploss_gap_plates_flow(): element i uses the i-th entry of every input array.
+ * @param n number of elements
+ * @param dp_pa array of n values: pressure drop along the gap, Pa
+ * @param mu_pa_s array of n values: dynamic viscosity, Pa s (> 0)
+ * @param width_m array of n values: gap width across the flow, m (> 0)
+ * @param height_m array of n values: gap height, m (> 0)
+ * @param length_m array of n values: gap length in the flow direction, m (> 0)
+ * @param wall_speed_m_s array of n values: speed of the moving wall along the flow, m/s
+ * @param q_m3_s array of n outputs (the leakage flow, m^3/s)
+ * @param status array of n per-element status codes
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
+ * @sa pumploss_gap_plates_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_plates_flow_batch(size_t n, const double *dp_pa, const double *mu_pa_s, const double *width_m, const double *height_m, const double *length_m, const double *wall_speed_m_s, double *q_m3_s, int *status);
+/**
+ * Batch form of pumploss_gap_annulus_flow(): element i uses the i-th entry of every input array.
+ * @param n number of elements
+ * @param dp_pa array of n values: pressure drop along the piston, Pa
+ * @param mu_pa_s array of n values: dynamic viscosity, Pa s (> 0)
+ * @param bore_diameter_m array of n values: bore diameter, m (> piston diameter)
+ * @param piston_diameter_m array of n values: piston diameter, m (> 0)
+ * @param length_m array of n values: sealing length, m (> 0)
+ * @param eccentricity_ratio array of n values: centre offset / radial clearance, 0 (concentric) to 1 (touching)
+ * @param q_m3_s array of n outputs (the leakage flow, m^3/s)
+ * @param status array of n per-element status codes
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
+ * @sa pumploss_gap_annulus_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_annulus_flow_batch(size_t n, const double *dp_pa, const double *mu_pa_s, const double *bore_diameter_m, const double *piston_diameter_m, const double *length_m, const double *eccentricity_ratio, double *q_m3_s, int *status);
+/**
+ * Batch form of pumploss_gap_radial_flow(): element i uses the i-th entry of every input array.
+ * @param n number of elements
+ * @param dp_pa array of n values: pressure at the inner radius minus pressure at the outer radius, Pa
+ * @param mu_pa_s array of n values: dynamic viscosity, Pa s (> 0)
+ * @param inner_radius_m array of n values: inner radius, m (> 0)
+ * @param outer_radius_m array of n values: outer radius, m (> inner)
+ * @param height_m array of n values: gap height, m (> 0)
+ * @param q_m3_s array of n outputs (the radial flow, m^3/s)
+ * @param status array of n per-element status codes
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
+ * @sa pumploss_gap_radial_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_radial_flow_batch(size_t n, const double *dp_pa, const double *mu_pa_s, const double *inner_radius_m, const double *outer_radius_m, const double *height_m, double *q_m3_s, int *status);
+/**
+ * Batch form of pumploss_orifice_flow(): element i uses the i-th entry of every input array.
+ * @param n number of elements
+ * @param dp_pa array of n values: pressure drop across the orifice, Pa (flow follows its sign)
+ * @param rho_kg_m3 array of n values: density, kg/m^3 (> 0)
+ * @param diameter_m array of n values: orifice diameter, m (> 0)
+ * @param cd array of n values: discharge coefficient (0 < cd <= 1; 0.611 for a sharp edge at high Re)
+ * @param q_m3_s array of n outputs (the flow, m^3/s)
+ * @param status array of n per-element status codes
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
+ * @sa pumploss_orifice_flow
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_flow_batch(size_t n, const double *dp_pa, const double *rho_kg_m3, const double *diameter_m, const double *cd, double *q_m3_s, int *status);
+/** @} */
 /* pumploss:capi-gap (declarations of this subject go above this line) */
 
 /* ==== friction ==== */

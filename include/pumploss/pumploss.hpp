@@ -8,6 +8,8 @@
 #include "scalar_traits.hpp"
 #include "units.hpp"
 #include "fluid.hpp"
+#include "gap.hpp"
+#include "orifice.hpp"
 // pumploss:umbrella-gap
 // pumploss:umbrella-friction
 // pumploss:umbrella-efficiency

@@ -82,6 +82,130 @@ static void test_fluid(void) {
   CHECK(pumploss_typical_mineral_oil(&rho, NULL, &alpha, &kmod, &cp, &barus) == PUMPLOSS_EMISUSE && is_nan(rho));
 }
 
+static void test_gap(void) {
+  double q = 0.0, h = 0.0, u = 0.0, f = 0.0, p = 0.0, re = 0.0, w = 0.0, pr = 0.0, bal = 0.0, cda = 0.0;
+  double nan = 0.0;
+  double dpv[3], muv[3], bv[3], pv[3], lv[3], ev[3], outv[3];
+  int st[3];
+  int i;
+  nan = nan / nan;
+  /* self-calculated (methods.md 13 row 15): piston 20 mm, h 10 um, L 30 mm, 250 bar, 0.040 Pa s */
+  CHECK(pumploss_gap_annulus_flow(250e5, 0.040, 0.02002, 0.02, 0.03, 0.0, &q) == PUMPLOSS_OK &&
+        near_rel(q * 60000.0, 6.548257296354804e-3, 1e-12));
+  CHECK(pumploss_gap_annulus_flow(250e5, 0.040, 0.02, 0.02002, 0.03, 0.0, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_gap_annulus_flow(250e5, 0.040, 0.02002, 0.02, 0.03, 1.5, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_gap_annulus_flow(250e5, nan, 0.02002, 0.02, 0.03, 0.5, &q) == PUMPLOSS_ENONFINITE && is_nan(q));
+  CHECK(pumploss_gap_annulus_flow(250e5, 0.040, 0.02002, 0.02, 0.03, 0.5, NULL) == PUMPLOSS_EMISUSE);
+  CHECK(pumploss_gap_annulus_narrow_flow(250e5, 0.040, 0.02002, 0.02, 0.03, 1.0, &q) == PUMPLOSS_OK &&
+        near_rel(q, 2.5 * 3.141592653589793 * 0.02001 * 1e-15 * 250e5 / (12.0 * 0.040 * 0.03), 1e-12));
+  CHECK(pumploss_gap_annulus_narrow_flow(250e5, 0.040, 0.03, 0.02, 0.03, 0.0, &q) == PUMPLOSS_WREGIME && q > 0.0);
+  CHECK(pumploss_gap_annulus_drag_flow(0.02002, 0.02, 0.0, 1.0, &q) == PUMPLOSS_OK &&
+        near_rel(q, 3.141592653589793 * 0.02001 * 1e-5 / 2.0, 1e-3));
+  CHECK(pumploss_gap_annulus_drag_flow(0.02002, 0.02, -0.1, 1.0, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_gap_piston_leakage(250e5, 0.040, 0.02002, 0.02, 0.03, 0.0, 0.0, &q) == PUMPLOSS_OK &&
+        near_rel(q * 60000.0, 6.548257296354804e-3, 1e-12));
+  CHECK(pumploss_gap_piston_leakage(250e5, 0.0, 0.02002, 0.02, 0.03, 0.0, 0.0, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_gap_annulus_clearance(6.548257296354804e-3 / 60000.0, 250e5, 0.040, 0.02002, 0.03, 0.0, &h) ==
+            PUMPLOSS_OK && near_rel(h, 10e-6, 1e-9));
+  CHECK(pumploss_gap_annulus_clearance(-1e-6, 250e5, 0.040, 0.02002, 0.03, 0.0, &h) == PUMPLOSS_EDOMAIN && is_nan(h));
+  /* plates: hand arithmetic b h^3 dp/(12 mu L) + b h U/2 */
+  CHECK(pumploss_gap_plates_flow(1e6, 0.04, 0.01, 1e-5, 0.02, 2.0, &q) == PUMPLOSS_OK &&
+        near_rel(q, 0.01 * 1e-15 * 1e6 / (12.0 * 0.04 * 0.02) + 0.01 * 1e-5, 1e-14));
+  CHECK(pumploss_gap_plates_flow(1e6, 0.04, 0.01, -1e-5, 0.02, 2.0, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_gap_plates_height(0.01 * 1e-15 * 1e6 / (12.0 * 0.04 * 0.02), 1e6, 0.04, 0.01, 0.02, &h) ==
+            PUMPLOSS_OK && near_rel(h, 1e-5, 1e-14));
+  CHECK(pumploss_gap_plates_height(0.0, 1e6, 0.04, 0.01, 0.02, &h) == PUMPLOSS_EDOMAIN && is_nan(h));
+  CHECK(pumploss_gap_plates_height_couette(0.01 * 1e-15 * 1e6 / (12.0 * 0.04 * 0.02) + 0.01 * 1e-5, 1e6, 0.04, 0.01,
+                                           0.02, 2.0, &h) == PUMPLOSS_OK && near_rel(h, 1e-5, 1e-14));
+  CHECK(pumploss_gap_plates_height_couette(1e-9, -1.0, 0.04, 0.01, 0.02, 2.0, &h) == PUMPLOSS_EDOMAIN && is_nan(h));
+  CHECK(pumploss_gap_plates_velocity(1e6, 0.04, 1e-5, 0.02, 2.0, 1e-5, &u) == PUMPLOSS_OK && near_rel(u, 2.0, 1e-15));
+  CHECK(pumploss_gap_plates_velocity(1e6, 0.04, 1e-5, 0.02, 2.0, 2e-5, &u) == PUMPLOSS_EDOMAIN && is_nan(u));
+  CHECK(pumploss_gap_plates_shear_force(0.0, 0.04, 0.01, 1e-5, 0.02, 2.0, &f) == PUMPLOSS_OK &&
+        near_rel(f, 0.04 * 2.0 * 0.01 * 0.02 / 1e-5, 1e-14));
+  CHECK(pumploss_gap_plates_shear_force(0.0, 0.04, 0.01, 0.0, 0.02, 2.0, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  CHECK(pumploss_gap_plates_power_loss(1e6, 0.04, 0.01, 1e-5, 0.02, 0.0, &p) == PUMPLOSS_OK &&
+        near_rel(p, 1e6 * 0.01 * 1e-15 * 1e6 / (12.0 * 0.04 * 0.02), 1e-14));
+  CHECK(pumploss_gap_plates_power_loss(1e6, 0.04, 0.01, 1e-5, nan, 0.0, &p) == PUMPLOSS_ENONFINITE && is_nan(p));
+  /* radial (methods.md 13 row 16, self-calculated): 0.16344 L/min, W = 48.43 kN */
+  CHECK(pumploss_gap_radial_flow(250e5, 0.040, 0.02, 0.03, 15e-6, &q) == PUMPLOSS_OK &&
+        near_rel(q * 60000.0, 0.16343692394607145, 1e-13));
+  CHECK(pumploss_gap_radial_flow(250e5, 0.040, 0.03, 0.02, 15e-6, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_gap_radial_sector_flow(250e5, 0.040, 0.02, 0.03, 15e-6, 3.141592653589793, &q) == PUMPLOSS_OK &&
+        near_rel(q * 60000.0, 0.5 * 0.16343692394607145, 1e-13));
+  CHECK(pumploss_gap_radial_sector_flow(250e5, 0.040, 0.02, 0.03, 15e-6, 7.0, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_gap_radial_height(0.16343692394607145 / 60000.0, 250e5, 0.040, 0.02, 0.03, &h) == PUMPLOSS_OK &&
+        near_rel(h, 15e-6, 1e-13));
+  CHECK(pumploss_gap_radial_height(1e-6, 0.0, 0.040, 0.02, 0.03, &h) == PUMPLOSS_EDOMAIN && is_nan(h));
+  CHECK(pumploss_gap_radial_pressure(250e5, 0.0, 0.02, 0.03, 0.02, &p) == PUMPLOSS_OK && near_rel(p, 250e5, 1e-15));
+  CHECK(pumploss_gap_radial_pressure(250e5, 0.0, 0.02, 0.03, 0.04, &p) == PUMPLOSS_EDOMAIN && is_nan(p));
+  CHECK(pumploss_gap_radial_land_force(250e5, 0.0, 0.02, 0.03, 6.283185307179586, &f) == PUMPLOSS_OK &&
+        near_rel(f + 250e5 * 3.141592653589793 * 0.0004, 48425.75524328043, 1e-13));
+  CHECK(pumploss_gap_radial_land_force(250e5, 0.0, 0.02, 0.03, 0.0, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  /* pads: the force at the inverse gap equals the load */
+  CHECK(pumploss_gap_pad_capillary(250e5, 0.04, 0.8e-3, 0.02, 0.005, 0.008, 15e-6, 0.02, &pr, &q, &w, &bal) ==
+            PUMPLOSS_OK && pr > 0.0 && pr < 250e5 && q > 0.0 && bal > 0.0);
+  CHECK(pumploss_gap_pad_capillary_height(250e5, 0.04, 0.8e-3, 0.02, 0.005, 0.008, w, &h) == PUMPLOSS_OK &&
+        near_rel(h, 15e-6, 1e-13));
+  CHECK(pumploss_gap_pad_capillary(250e5, 0.04, 0.8e-3, 0.02, 0.005, 0.004, 15e-6, 0.02, &pr, &q, &w, &bal) ==
+            PUMPLOSS_EDOMAIN && is_nan(pr) && is_nan(q) && is_nan(w) && is_nan(bal));
+  CHECK(pumploss_gap_pad_capillary_height(250e5, 0.04, 0.8e-3, 0.02, 0.005, 0.008, 1e9, &h) == PUMPLOSS_EDOMAIN &&
+        is_nan(h));
+  CHECK(pumploss_gap_pad_orifice(250e5, 870.0, 0.04, 0.5e-3, 0.7, 0.005, 0.008, 15e-6, 0.02, &pr, &q, &w, &bal) ==
+            PUMPLOSS_OK && pr > 0.0 && pr < 250e5);
+  CHECK(pumploss_gap_pad_orifice_height(250e5, 870.0, 0.04, 0.5e-3, 0.7, 0.005, 0.008, w, &h) == PUMPLOSS_OK &&
+        near_rel(h, 15e-6, 1e-12));
+  CHECK(pumploss_gap_pad_orifice(250e5, 870.0, 0.04, 0.5e-3, 0.7, 0.005, 0.008, 15e-6, 0.02, &pr, NULL, &w, &bal) ==
+            PUMPLOSS_EMISUSE && is_nan(pr));
+  CHECK(pumploss_gap_pad_orifice_height(250e5, 870.0, 0.04, 0.5e-3, 1.5, 0.005, 0.008, 1.0, &h) == PUMPLOSS_EDOMAIN &&
+        is_nan(h));
+  CHECK(pumploss_gap_reynolds(1e-6, 0.0628, 870.0, 0.04, &re) == PUMPLOSS_OK && near_rel(re, 2.0 * 870.0 * 1e-6 / (0.04 * 0.0628), 1e-14));
+  CHECK(pumploss_gap_reynolds(1.0, 0.0628, 870.0, 0.04, &re) == PUMPLOSS_WREGIME && re > 2000.0);
+  CHECK(pumploss_gap_reynolds(1e-6, 0.0, 870.0, 0.04, &re) == PUMPLOSS_EDOMAIN && is_nan(re));
+  /* orifice (methods.md 13 row 17, self-calculated): d 1 mm, Cd 0.61, 100 bar, 870 kg/m3 -> 4.3584 L/min */
+  CHECK(pumploss_orifice_flow(100e5, 870.0, 1e-3, 0.61, &q) == PUMPLOSS_OK && near_rel(q * 60000.0, 4.358392497267148, 1e-14));
+  CHECK(pumploss_orifice_flow(100e5, 870.0, 1e-3, 1.2, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_orifice_dp(4.358392497267148 / 60000.0, 870.0, 1e-3, 0.61, &p) == PUMPLOSS_OK && near_rel(p, 100e5, 1e-14));
+  CHECK(pumploss_orifice_dp(1e-4, 0.0, 1e-3, 0.61, &p) == PUMPLOSS_EDOMAIN && is_nan(p));
+  CHECK(pumploss_orifice_diameter(4.358392497267148 / 60000.0, 100e5, 870.0, 0.61, &h) == PUMPLOSS_OK && near_rel(h, 1e-3, 1e-14));
+  CHECK(pumploss_orifice_diameter(-1e-4, 100e5, 870.0, 0.61, &h) == PUMPLOSS_EDOMAIN && is_nan(h));
+  CHECK(pumploss_orifice_reynolds(1e-4, 1e-3, 870.0, 0.04, &re) == PUMPLOSS_OK && near_rel(re, 4.0 * 870.0 * 1e-4 / (3.141592653589793 * 1e-3 * 0.04), 1e-14));
+  CHECK(pumploss_orifice_reynolds(1e-7, 1e-3, 870.0, 0.04, &re) == PUMPLOSS_WREGIME && re < 1000.0);
+  CHECK(pumploss_orifice_flow_viscous(100e5, 870.0, 1e-6, 1e-3, 0.61, 0.16287, &q) == PUMPLOSS_OK &&
+        near_rel(q * 60000.0, 4.358392497267148, 1e-3));
+  CHECK(pumploss_orifice_flow_viscous(100e5, 870.0, -1.0, 1e-3, 0.61, 0.16287, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_capillary_flow(1e5, 870.0, 0.04, 1e-3, 0.05, 0.0, &q) == PUMPLOSS_OK &&
+        near_rel(q, 1e5 * 3.141592653589793 * 1e-12 / (128.0 * 0.04 * 0.05), 1e-14));
+  CHECK(pumploss_capillary_flow(1e5, 870.0, 0.04, 1e-3, 0.05, -1.0, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_capillary_dp(1e-6, 870.0, 0.04, 1e-3, 0.05, 0.0, &p) == PUMPLOSS_OK &&
+        near_rel(p, 128.0 * 0.04 * 0.05 * 1e-6 / (3.141592653589793 * 1e-12), 1e-14));
+  CHECK(pumploss_capillary_dp(1e-6, 870.0, 0.04, 0.0, 0.05, 0.0, &p) == PUMPLOSS_EDOMAIN && is_nan(p));
+  CHECK(pumploss_orifice_series_cda(3e-6, 4e-6, &cda) == PUMPLOSS_OK && near_rel(cda, 12e-6 / 5.0, 1e-15));
+  CHECK(pumploss_orifice_series_cda(0.0, 4e-6, &cda) == PUMPLOSS_EDOMAIN && is_nan(cda));
+  CHECK(pumploss_orifice_parallel_cda(3e-6, 4e-6, &cda) == PUMPLOSS_OK && near_rel(cda, 7e-6, 1e-15));
+  CHECK(pumploss_orifice_parallel_cda(-3e-6, 4e-6, &cda) == PUMPLOSS_EDOMAIN && is_nan(cda));
+  CHECK(pumploss_orifice_flow_cda(100e5, 870.0, 0.61 * 3.141592653589793 * 0.25e-6, &q) == PUMPLOSS_OK &&
+        near_rel(q * 60000.0, 4.358392497267148, 1e-14));
+  CHECK(pumploss_orifice_flow_cda(100e5, 870.0, -1.0, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
+  /* batches: element 1 is bad (piston larger than bore, negative viscosity...) */
+  for (i = 0; i < 3; ++i) {
+    dpv[i] = 250e5; muv[i] = 0.04; bv[i] = 0.02002; pv[i] = 0.02; lv[i] = 0.03; ev[i] = 0.5 * i;
+  }
+  pv[1] = 0.03;
+  CHECK(pumploss_gap_annulus_flow_batch(3, dpv, muv, bv, pv, lv, ev, outv, st) == PUMPLOSS_WPARTIAL &&
+        st[0] == PUMPLOSS_OK && st[1] == PUMPLOSS_EDOMAIN && is_nan(outv[1]) && st[2] == PUMPLOSS_OK &&
+        near_rel(outv[0] * 60000.0, 6.548257296354804e-3, 1e-12));
+  CHECK(pumploss_gap_annulus_flow_batch(3, dpv, NULL, bv, pv, lv, ev, outv, st) == PUMPLOSS_EMISUSE && is_nan(outv[0]));
+  lv[1] = 1e-5;
+  CHECK(pumploss_gap_plates_flow_batch(3, dpv, muv, bv, lv, lv, ev, outv, st) == PUMPLOSS_OK && st[2] == PUMPLOSS_OK);
+  CHECK(pumploss_gap_plates_flow_batch(3, dpv, muv, bv, lv, lv, ev, outv, NULL) == PUMPLOSS_EMISUSE);
+  muv[2] = -1.0;
+  pv[1] = 0.02;
+  CHECK(pumploss_gap_radial_flow_batch(3, dpv, muv, pv, bv, lv, outv, st) == PUMPLOSS_WPARTIAL && st[2] == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_gap_radial_flow_batch(2, dpv, muv, pv, bv, lv, outv, st) == PUMPLOSS_OK && st[1] == PUMPLOSS_OK);
+  CHECK(pumploss_orifice_flow_batch(3, dpv, muv, pv, ev, outv, st) == PUMPLOSS_WPARTIAL && st[0] == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_orifice_flow_batch(3, dpv, NULL, pv, ev, outv, st) == PUMPLOSS_EMISUSE);
+}
+
 /* pumploss:c-caller-gap */
 
 /* pumploss:c-caller-friction */
@@ -121,6 +245,7 @@ int main(void) {
   test_core();
   test_units();
   test_fluid();
+  test_gap();
   /* pumploss:c-caller-calls-gap */
   /* pumploss:c-caller-calls-friction */
   /* pumploss:c-caller-calls-efficiency */
