@@ -9,7 +9,6 @@
 #include <cmath>
 #include <cstddef>
 
-#include "dual.hpp"
 #include "fluid.hpp"
 #include "gap.hpp"
 #include "orifice.hpp"
@@ -398,50 +397,6 @@ inline piston_pump<U> piston_pump_cast(const piston_pump<T>& p) {
   q.extra_orifice_cda_m2 = U(p.extra_orifice_cda_m2);
   q.stated_displacement_m3_rev = U(p.stated_displacement_m3_rev);
   return q;
-}
-
-/// Sensitivity of the predicted drain flow to each gap height.
-template <class T>
-struct budget_sensitivity {
-  T d_total_d_gap[pump_gap_count];  ///< dQ_total/dh for each pump_gap, m^3/s per m (0 when the path is absent)
-  T elasticity[pump_gap_count];     ///< (h / Q_total) dQ_total/dh: the share-weighted power of h (3 for a pure laminar path)
-  pumploss::status st;              ///< status of the budget
-};
-
-/// Sensitivity of the budget's total to the four gap heights, by forward-mode dual numbers
-/// through the same budget template (exact derivatives, no finite differences).
-/// @param p the pump
-/// @param o the oil
-/// @param op the operating point
-/// @return the sensitivities; statuses as piston_pump_budget().
-/// @par Source
-/// Differentiation of piston_pump_budget().
-template <class T>
-inline budget_sensitivity<T> piston_pump_sensitivity(const piston_pump<T>& p, const oil<T>& o,
-                                                     const pump_operating_point<T>& op) {
-  using D = dual<T, pump_gap_count>;
-  auto pd = piston_pump_cast<D>(p);
-  pd.bore_clearance_m = D::variable(p.bore_clearance_m, 0);
-  pd.slipper_gap_m = D::variable(p.slipper_gap_m, 1);
-  pd.ball_clearance_m = D::variable(p.ball_clearance_m, 2);
-  pd.valve_gap_m = D::variable(p.valve_gap_m, 3);
-  const oil<D> od{{D(o.viscosity.a), D(o.viscosity.b)}, D(o.rho_ref_kg_m3), D(o.t_ref_k), D(o.alpha_per_k),
-                  D(o.bulk_modulus_pa), D(o.cp_j_kg_k), D(o.barus_per_pa)};
-  const pump_operating_point<D> opd{D(op.outlet_pa), D(op.case_pa), D(op.speed_rev_s), D(op.displacement_fraction),
-                                    D(op.t_k)};
-  const auto b = piston_pump_budget(pd, od, opd);
-  budget_sensitivity<T> s{};
-  s.st = b.st;
-  const T gaps[pump_gap_count] = {p.bore_clearance_m, p.slipper_gap_m, p.ball_clearance_m, p.valve_gap_m};
-  for (int i = 0; i < pump_gap_count; ++i) {
-    if (is_error(b.st)) {
-      s.d_total_d_gap[i] = s.elasticity[i] = scalar_traits<T>::nan();
-      continue;
-    }
-    s.d_total_d_gap[i] = b.total_m3_s.d[i];
-    s.elasticity[i] = b.total_m3_s.val > T(0) ? gaps[i] * b.total_m3_s.d[i] / b.total_m3_s.val : T(0);
-  }
-  return s;
 }
 
 }  // namespace pumploss

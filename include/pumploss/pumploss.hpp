@@ -14,6 +14,7 @@
 // pumploss:umbrella-friction
 // pumploss:umbrella-efficiency
 #include "health.hpp"
+#include "piston_pump.hpp"
 // pumploss:umbrella-pump
 // pumploss:umbrella-includes (new subject headers are added above this line)
 
