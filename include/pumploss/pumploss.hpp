@@ -10,6 +10,10 @@
 #include "fluid.hpp"
 // pumploss:umbrella-gap
 // pumploss:umbrella-friction
+#include "dual.hpp"
+#include "efficiency.hpp"
+#include "leakage.hpp"
+#include "thermal.hpp"
 // pumploss:umbrella-efficiency
 // pumploss:umbrella-pump
 // pumploss:umbrella-includes (new subject headers are added above this line)
