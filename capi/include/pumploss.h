@@ -709,6 +709,364 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_flow_batch(size_t n, const doubl
 /* pumploss:capi-friction (declarations of this subject go above this line) */
 
 /* ==== efficiency ==== */
+/** @name Efficiency, leakage scaling, heat
+ *  Pumps and motors have different efficiency definitions (ISO 4409/ISO 4391): for a pump, flow
+ *  is the outlet flow it delivers and torque the torque it takes in; for a motor, flow is the
+ *  inlet flow it takes in and torque the torque it gives out. @{ */
+/**
+ * Volumetric, hydromechanical and overall efficiency of a pump:
+ * eta_v = q / (V n), eta_hm = V dp / (2 pi T), eta_t = eta_v eta_hm.
+ * @param displacement_m3_rev derived displacement V_i, m^3/rev (> 0)
+ * @param speed_rev_s rotational frequency n, rev/s (> 0)
+ * @param dp_pa pressure rise p_2 - p_1, Pa (> 0)
+ * @param flow_m3_s outlet flow at outlet conditions, m^3/s (>= 0)
+ * @param torque_n_m input torque, N m (> 0)
+ * @param eta_v receives the volumetric efficiency (fraction)
+ * @param eta_hm receives the hydromechanical efficiency (fraction)
+ * @param eta_t receives the overall efficiency (fraction)
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when an efficiency exceeds 1 (values kept);
+ *         PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EOVERFLOW, PUMPLOSS_EMISUSE.
+ * @sa pumploss::pump_efficiency
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_efficiency(double displacement_m3_rev, double speed_rev_s,
+                                                        double dp_pa, double flow_m3_s, double torque_n_m,
+                                                        double *eta_v, double *eta_hm, double *eta_t);
+/**
+ * Volumetric, hydromechanical and overall efficiency of a motor:
+ * eta_v = V n / q, eta_hm = 2 pi T / (V dp), eta_t = eta_v eta_hm.
+ * @param displacement_m3_rev derived displacement V_i, m^3/rev (> 0)
+ * @param speed_rev_s rotational frequency n, rev/s (> 0)
+ * @param dp_pa pressure drop p_1 - p_2, Pa (> 0)
+ * @param flow_m3_s inlet flow taken in, m^3/s (> 0)
+ * @param torque_n_m output torque, N m (>= 0)
+ * @param eta_v receives the volumetric efficiency (fraction)
+ * @param eta_hm receives the hydromechanical efficiency (fraction)
+ * @param eta_t receives the overall efficiency (fraction)
+ * @return as pumploss_pump_efficiency(). @sa pumploss::motor_efficiency
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency(double displacement_m3_rev, double speed_rev_s,
+                                                         double dp_pa, double flow_m3_s, double torque_n_m,
+                                                         double *eta_v, double *eta_hm, double *eta_t);
+/**
+ * pumploss_pump_efficiency() for n points (no allocation).
+ * @param n number of points
+ * @param displacement_m3_rev array of n displacements, m^3/rev
+ * @param speed_rev_s array of n speeds, rev/s
+ * @param dp_pa array of n pressure rises, Pa
+ * @param flow_m3_s array of n outlet flows, m^3/s
+ * @param torque_n_m array of n input torques, N m
+ * @param eta_v array of n, receives the volumetric efficiencies
+ * @param eta_hm array of n, receives the hydromechanical efficiencies
+ * @param eta_t array of n, receives the overall efficiencies
+ * @param status array of n, receives each point's status (NaN outputs on its error)
+ * @return PUMPLOSS_OK; the first report code seen (e.g. PUMPLOSS_WIMPLAUSIBLE); PUMPLOSS_WPARTIAL
+ *         when some points failed; PUMPLOSS_EMISUSE for a NULL array.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_efficiency_batch(size_t n, const double *displacement_m3_rev,
+                                                              const double *speed_rev_s, const double *dp_pa,
+                                                              const double *flow_m3_s, const double *torque_n_m,
+                                                              double *eta_v, double *eta_hm, double *eta_t,
+                                                              int *status);
+/**
+ * pumploss_motor_efficiency() for n points (no allocation).
+ * @param n number of points
+ * @param displacement_m3_rev array of n displacements, m^3/rev
+ * @param speed_rev_s array of n speeds, rev/s
+ * @param dp_pa array of n pressure drops, Pa
+ * @param flow_m3_s array of n inlet flows, m^3/s
+ * @param torque_n_m array of n output torques, N m
+ * @param eta_v array of n, receives the volumetric efficiencies
+ * @param eta_hm array of n, receives the hydromechanical efficiencies
+ * @param eta_t array of n, receives the overall efficiencies
+ * @param status array of n, receives each point's status
+ * @return as pumploss_pump_efficiency_batch().
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_batch(size_t n, const double *displacement_m3_rev,
+                                                               const double *speed_rev_s, const double *dp_pa,
+                                                               const double *flow_m3_s, const double *torque_n_m,
+                                                               double *eta_v, double *eta_hm, double *eta_t,
+                                                               int *status);
+/**
+ * Theoretical flow and torque and the hydraulic and shaft powers of a pump point.
+ * @param displacement_m3_rev V_i, m^3/rev (> 0)
+ * @param speed_rev_s n, rev/s (> 0)
+ * @param dp_pa pressure rise, Pa (> 0)
+ * @param flow_m3_s outlet flow, m^3/s (>= 0)
+ * @param torque_n_m input torque, N m (> 0)
+ * @param q_th_m3_s receives V_i n, m^3/s
+ * @param torque_th_n_m receives V_i dp / (2 pi), N m
+ * @param p_hyd_w receives q dp, W
+ * @param p_mech_w receives 2 pi n T, W
+ * @return as pumploss_pump_efficiency(). @sa pumploss::pump_efficiency
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_powers(double displacement_m3_rev, double speed_rev_s, double dp_pa,
+                                                    double flow_m3_s, double torque_n_m, double *q_th_m3_s,
+                                                    double *torque_th_n_m, double *p_hyd_w, double *p_mech_w);
+/**
+ * Theoretical flow and torque and the hydraulic and shaft powers of a motor point.
+ * @param displacement_m3_rev V_i, m^3/rev (> 0)
+ * @param speed_rev_s n, rev/s (> 0)
+ * @param dp_pa pressure drop, Pa (> 0)
+ * @param flow_m3_s inlet flow, m^3/s (> 0)
+ * @param torque_n_m output torque, N m (>= 0)
+ * @param q_th_m3_s receives V_i n, m^3/s
+ * @param torque_th_n_m receives V_i dp / (2 pi), N m
+ * @param p_hyd_w receives q dp (power taken in), W
+ * @param p_mech_w receives 2 pi n T (power given out), W
+ * @return as pumploss_motor_efficiency(). @sa pumploss::motor_efficiency
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_powers(double displacement_m3_rev, double speed_rev_s, double dp_pa,
+                                                     double flow_m3_s, double torque_n_m, double *q_th_m3_s,
+                                                     double *torque_th_n_m, double *p_hyd_w, double *p_mech_w);
+/**
+ * Flow at a port from a flow meter reading at another pressure and temperature (same mass flow,
+ * exact density ratio, density model of pumploss_oil_density()).
+ * @param q_meter_m3_s flow indicated by the meter, m^3/s (>= 0)
+ * @param p_meter_pa gauge pressure at the meter, Pa
+ * @param t_meter_k temperature at the meter, K (> 0)
+ * @param p_port_pa gauge pressure at the port, Pa
+ * @param t_port_k temperature at the port, K (> 0)
+ * @param rho_ref_kg_m3 oil density at t_ref_k and zero gauge pressure, kg/m^3 (> 0)
+ * @param t_ref_k reference temperature of the density, K (> 0)
+ * @param alpha_per_k cubic expansion coefficient, 1/K (>= 0)
+ * @param bulk_modulus_pa secant bulk modulus, Pa (> |p|)
+ * @param q_port_m3_s receives the flow at the port, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME (a state 150 K from the reference); errors.
+ * @sa pumploss::flow_at_port
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_flow_at_port(double q_meter_m3_s, double p_meter_pa, double t_meter_k,
+                                                     double p_port_pa, double t_port_k, double rho_ref_kg_m3,
+                                                     double t_ref_k, double alpha_per_k, double bulk_modulus_pa,
+                                                     double *q_port_m3_s);
+/**
+ * Linearised flow correction q_port = q_meter (1 - (p_port - p_meter)/K - alpha (t_meter - t_port)).
+ * @param q_meter_m3_s flow indicated by the meter, m^3/s (>= 0)
+ * @param p_meter_pa gauge pressure at the meter, Pa
+ * @param t_meter_k temperature at the meter, K
+ * @param p_port_pa gauge pressure at the port, Pa
+ * @param t_port_k temperature at the port, K
+ * @param alpha_per_k cubic expansion coefficient, 1/K (>= 0)
+ * @param bulk_modulus_pa bulk modulus, Pa (> 0)
+ * @param q_port_m3_s receives the flow at the port, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME when the correction exceeds 5 %; errors.
+ * @sa pumploss::flow_at_port_linear
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_flow_at_port_linear(double q_meter_m3_s, double p_meter_pa,
+                                                            double t_meter_k, double p_port_pa, double t_port_k,
+                                                            double alpha_per_k, double bulk_modulus_pa,
+                                                            double *q_port_m3_s);
+/**
+ * Laminar leakage law q = q_ref (dp / dp_ref) (mu_ref / mu).
+ * @param q_ref_m3_s known leakage, m^3/s (>= 0)
+ * @param dp_ref_pa its pressure difference, Pa (> 0)
+ * @param mu_ref_pa_s its dynamic viscosity, Pa s (> 0)
+ * @param dp_pa pressure difference wanted, Pa (>= 0)
+ * @param mu_pa_s dynamic viscosity wanted, Pa s (> 0)
+ * @param q_m3_s receives the leakage, m^3/s
+ * @return PUMPLOSS_OK or an error. @sa pumploss::leakage_scale
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale(double q_ref_m3_s, double dp_ref_pa, double mu_ref_pa_s,
+                                                      double dp_pa, double mu_pa_s, double *q_m3_s);
+/**
+ * pumploss_leakage_scale() for n points (no allocation).
+ * @param n number of points
+ * @param q_ref_m3_s array of n known leakages, m^3/s
+ * @param dp_ref_pa array of n reference pressure differences, Pa
+ * @param mu_ref_pa_s array of n reference viscosities, Pa s
+ * @param dp_pa array of n pressure differences wanted, Pa
+ * @param mu_pa_s array of n viscosities wanted, Pa s
+ * @param q_m3_s array of n, receives the leakages, m^3/s
+ * @param status array of n, receives each point's status
+ * @return PUMPLOSS_OK, PUMPLOSS_WPARTIAL or PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale_batch(size_t n, const double *q_ref_m3_s,
+                                                            const double *dp_ref_pa, const double *mu_ref_pa_s,
+                                                            const double *dp_pa, const double *mu_pa_s,
+                                                            double *q_m3_s, int *status);
+/**
+ * Power-law leakage scaling q = q_ref (dp/dp_ref)^a (mu_ref/mu)^b.
+ * @param q_ref_m3_s known leakage, m^3/s (>= 0)
+ * @param dp_ref_pa its pressure difference, Pa (> 0)
+ * @param mu_ref_pa_s its dynamic viscosity, Pa s (> 0)
+ * @param dp_pa pressure difference wanted, Pa (>= 0)
+ * @param mu_pa_s dynamic viscosity wanted, Pa s (> 0)
+ * @param a pressure exponent, [0, 2]
+ * @param b viscosity exponent, [0, 2]
+ * @param q_m3_s receives the leakage, m^3/s
+ * @return PUMPLOSS_OK or an error. @sa pumploss::leakage_scale_power_law
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale_power_law(double q_ref_m3_s, double dp_ref_pa,
+                                                                double mu_ref_pa_s, double dp_pa, double mu_pa_s,
+                                                                double a, double b, double *q_m3_s);
+/**
+ * Normalise a case drain reading to a reference pressure and temperature (viscosity from the
+ * ASTM D341 line through two points, density expanded about t_ref_k with alpha_per_k).
+ * @param q_m3_s drain reading, m^3/s (>= 0)
+ * @param dp_pa its pressure difference, Pa (> 0)
+ * @param t_k its oil temperature, K (> 0)
+ * @param dp_ref_pa reference pressure difference, Pa (> 0)
+ * @param t_ref_k reference temperature, K (> 0)
+ * @param t1_k first D341 point temperature, K
+ * @param nu1_m2_s kinematic viscosity at t1_k, m^2/s
+ * @param t2_k second D341 point temperature, K
+ * @param nu2_m2_s kinematic viscosity at t2_k, m^2/s
+ * @param alpha_per_k cubic expansion coefficient, 1/K (>= 0)
+ * @param a pressure exponent (1 laminar), [0, 2]
+ * @param b viscosity exponent (1 laminar), [0, 2]
+ * @param q_ref_m3_s receives the normalised drain flow, m^3/s
+ * @return PUMPLOSS_OK, PUMPLOSS_WREGIME or an error. @sa pumploss::leakage_normalise
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_normalise(double q_m3_s, double dp_pa, double t_k,
+                                                          double dp_ref_pa, double t_ref_k, double t1_k,
+                                                          double nu1_m2_s, double t2_k, double nu2_m2_s,
+                                                          double alpha_per_k, double a, double b,
+                                                          double *q_ref_m3_s);
+/**
+ * Leakage through laminar and square-law resistances in series, dp = R_lam q + R_t q^2.
+ * @param r_lam_pa_s_m3 laminar resistance, Pa s/m^3 (>= 0)
+ * @param r_t_pa_s2_m6 square-law resistance, Pa s^2/m^6 (>= 0; not both zero)
+ * @param dp_pa pressure difference, Pa (>= 0)
+ * @param q_m3_s receives the flow, m^3/s
+ * @return PUMPLOSS_OK or an error. @sa pumploss::leakage_series
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_series(double r_lam_pa_s_m3, double r_t_pa_s2_m6, double dp_pa,
+                                                       double *q_m3_s);
+/**
+ * Fit q = k dp^a mu^-b to drain readings (least squares in logarithms, Householder QR).
+ * @param count number of readings (>= 4)
+ * @param q_m3_s array of readings, m^3/s (> 0)
+ * @param dp_pa array of pressure differences, Pa (> 0)
+ * @param mu_pa_s array of dynamic viscosities, Pa s (> 0)
+ * @param k receives k (SI)
+ * @param a receives the pressure exponent
+ * @param b receives the viscosity exponent
+ * @param cond receives the condition number of the column-scaled design matrix
+ * @return PUMPLOSS_OK; PUMPLOSS_WILLCONDITIONED; PUMPLOSS_EDATA; PUMPLOSS_ENOMEM; errors.
+ * @sa pumploss::leakage_fit_power_law
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_fit_power_law(size_t count, const double *q_m3_s,
+                                                              const double *dp_pa, const double *mu_pa_s,
+                                                              double *k, double *a, double *b, double *cond);
+/**
+ * Split drain readings into viscous (dp/mu), orifice-like (sqrt(dp)) and constant parts by
+ * non-negative least squares (Lawson-Hanson).
+ * @param count number of readings (>= 4)
+ * @param q_m3_s array of readings, m^3/s (>= 0)
+ * @param dp_pa array of pressure differences, Pa (> 0)
+ * @param mu_pa_s array of dynamic viscosities, Pa s (> 0)
+ * @param c_viscous_m3 receives the coefficient of dp/mu, m^3
+ * @param c_orifice_m3_s_pa05 receives the coefficient of sqrt(dp), m^3/(s Pa^0.5)
+ * @param c_constant_m3_s receives the constant part, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_ENOCONVERGE; PUMPLOSS_EDATA; PUMPLOSS_ENOMEM; errors.
+ * @sa pumploss::leakage_split
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_split(size_t count, const double *q_m3_s, const double *dp_pa,
+                                                      const double *mu_pa_s, double *c_viscous_m3,
+                                                      double *c_orifice_m3_s_pa05, double *c_constant_m3_s);
+/**
+ * Temperature rise of throttled oil dT = dp / (rho cp) (all work stays in the oil).
+ * @param dp_pa pressure drop, Pa (>= 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cp_j_kg_k specific heat, J/(kg K) (> 0)
+ * @param dt_k receives the temperature rise, K
+ * @return PUMPLOSS_OK or an error. @sa pumploss::throttle_temperature_rise
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_throttle_temperature_rise(double dp_pa, double rho_kg_m3,
+                                                                  double cp_j_kg_k, double *dt_k);
+/**
+ * Isenthalpic throttle temperature rise dT = (1 - alpha T) dp / (rho cp).
+ * @param dp_pa pressure drop, Pa (>= 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cp_j_kg_k specific heat, J/(kg K) (> 0)
+ * @param alpha_per_k cubic expansion coefficient, 1/K (>= 0)
+ * @param t_k oil temperature, K (> 0)
+ * @param dt_k receives the temperature rise, K
+ * @return PUMPLOSS_OK or an error. @sa pumploss::throttle_temperature_rise_isenthalpic
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_throttle_temperature_rise_isenthalpic(double dp_pa, double rho_kg_m3,
+                                                                              double cp_j_kg_k,
+                                                                              double alpha_per_k, double t_k,
+                                                                              double *dt_k);
+/**
+ * Heat load P_in (1 - eta_t) of a pump (P_in shaft power) or motor (P_in hydraulic power).
+ * @param input_power_w power taken in, W (>= 0)
+ * @param eta_t overall efficiency, fraction (>= 0)
+ * @param heat_w receives the heat load, W
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE for eta_t above 1; errors. @sa pumploss::heat_load
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_heat_load(double input_power_w, double eta_t, double *heat_w);
+/**
+ * Case drain temperature when a power leaves with the drain flow: T3 = T1 + P / (rho cp q3).
+ * @param t_inlet_k inlet oil temperature, K (> 0)
+ * @param power_w power carried by the drain flow, W (>= 0)
+ * @param drain_flow_m3_s drain flow, m^3/s (> 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cp_j_kg_k specific heat, J/(kg K) (> 0)
+ * @param t_drain_k receives the drain temperature, K
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME for a rise above 100 K; errors.
+ * @sa pumploss::case_drain_temperature
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_case_drain_temperature(double t_inlet_k, double power_w,
+                                                               double drain_flow_m3_s, double rho_kg_m3,
+                                                               double cp_j_kg_k, double *t_drain_k);
+/**
+ * Case drain temperature from the leakage power dp q3 plus further losses carried by the drain.
+ * @param t_inlet_k inlet oil temperature, K (> 0)
+ * @param dp_pa pressure drop from the working port to the case, Pa (>= 0)
+ * @param drain_flow_m3_s drain flow, m^3/s (> 0)
+ * @param extra_power_w further losses carried by the drain, W (>= 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cp_j_kg_k specific heat, J/(kg K) (> 0)
+ * @param t_drain_k receives the drain temperature, K
+ * @return as pumploss_case_drain_temperature(). @sa pumploss::case_drain_temperature_from_leakage
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_case_drain_temperature_from_leakage(double t_inlet_k, double dp_pa,
+                                                                            double drain_flow_m3_s,
+                                                                            double extra_power_w,
+                                                                            double rho_kg_m3, double cp_j_kg_k,
+                                                                            double *t_drain_k);
+/**
+ * Derived displacement, estimator A: slope of flow over speed at one low pressure.
+ * @param count number of points (>= 3)
+ * @param speed_rev_s array of speeds, rev/s (> 0, not all equal)
+ * @param flow_m3_s array of flows, m^3/s (>= 0)
+ * @param v_m3_rev receives V_i, m^3/rev
+ * @param u_v_m3_rev receives its standard error, m^3/rev
+ * @return PUMPLOSS_OK; PUMPLOSS_EDATA; errors. @sa pumploss::displacement_slope
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_displacement_slope(size_t count, const double *speed_rev_s,
+                                                           const double *flow_m3_s, double *v_m3_rev,
+                                                           double *u_v_m3_rev);
+/**
+ * Derived displacement, estimator B: zero-pressure intercept at one speed (as ISO 8426-2:2025).
+ * @param count number of points (>= 3)
+ * @param speed_rev_s the shaft speed, rev/s (> 0)
+ * @param dp_pa array of pressure differences, Pa (>= 0, not all equal)
+ * @param flow_m3_s array of flows, m^3/s (>= 0)
+ * @param v_m3_rev receives V_i, m^3/rev
+ * @param u_v_m3_rev receives its standard error, m^3/rev
+ * @return PUMPLOSS_OK; PUMPLOSS_EDATA; errors. @sa pumploss::displacement_intercept
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_displacement_intercept(size_t count, double speed_rev_s,
+                                                               const double *dp_pa, const double *flow_m3_s,
+                                                               double *v_m3_rev, double *u_v_m3_rev);
+/**
+ * Derived displacement, estimator C: two-step method over speeds and pressures (as ISO 8426-1:2025).
+ * @param levels number of pressure levels (>= 3; ISO 8426-1 asks >= 5)
+ * @param per_level number of speeds per level (>= 3; ISO 8426-1 asks >= 5)
+ * @param speed_rev_s array of levels*per_level speeds, rev/s, level by level
+ * @param dp_pa array of the same layout, Pa
+ * @param flow_m3_s array of the same layout, m^3/s
+ * @param v_m3_rev receives V_i, m^3/rev
+ * @param u_v_m3_rev receives its standard error, m^3/rev
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME for fewer than 5 x 5 points; PUMPLOSS_EDATA; errors.
+ * @sa pumploss::displacement_two_step
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_displacement_two_step(size_t levels, size_t per_level,
+                                                              const double *speed_rev_s, const double *dp_pa,
+                                                              const double *flow_m3_s, double *v_m3_rev,
+                                                              double *u_v_m3_rev);
+/** @} */
 /* pumploss:capi-efficiency (declarations of this subject go above this line) */
 
 /* ==== pump ==== */

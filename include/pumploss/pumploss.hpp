@@ -12,6 +12,10 @@
 #include "orifice.hpp"
 // pumploss:umbrella-gap
 // pumploss:umbrella-friction
+#include "dual.hpp"
+#include "efficiency.hpp"
+#include "leakage.hpp"
+#include "thermal.hpp"
 // pumploss:umbrella-efficiency
 #include "health.hpp"
 #include "piston_pump.hpp"
