@@ -4,6 +4,7 @@
 #include <gtest/gtest.h>
 
 #include <cmath>
+#include <vector>
 
 #include "pumploss/piston_pump.hpp"
 #include "test_support.hpp"
@@ -196,4 +197,135 @@ TEST(PistonPumpBudget, BadOperatingPoints) {
   auto bad = p;
   bad.pistons = 15;
   EXPECT_EQ(pumploss::piston_pump_budget(bad, o, {250e5, 0.0, 25.0, 1.0, 323.15}).st, status::domain);
+}
+
+TEST(PistonPumpSensitivity, DualNumbersMatchTheLaminarPowerLaw) {
+  // A pump of pure laminar paths (no controller, no orifices). The valve lands are exactly cubic
+  // in h; the annuli nearly so; the slipper's capillary in series damps its power of h.
+  auto p = test_pump();
+  p.controller_flow_m3_s = 0.0;
+  p.bleed_orifice_diameter_m = 0.0;
+  p.extra_conductance_m3 = 0.0;
+  p.extra_orifice_cda_m2 = 0.0;
+  const auto o = test_oil();
+  const pumploss::pump_operating_point<double> op{250e5, 0.0, 25.0, 1.0, 323.15};
+  const auto b = pumploss::piston_pump_budget(p, o, op);
+  const auto s = pumploss::piston_pump_sensitivity(p, o, op);
+  ASSERT_EQ(s.st, status::ok);
+  // Annuli: q ~ h^3 (D + h) for a bore of D + 2h, so d ln q / d ln h = 3 + h / (D + h) (narrow gap).
+  EXPECT_NEAR(s.d_total_d_gap[0] / (b.flow_m3_s[0] / p.bore_clearance_m * (3 + 15e-6 / 20.015e-3)), 1.0, 1e-6);
+  EXPECT_NEAR(s.d_total_d_gap[2] / (b.flow_m3_s[2] / p.ball_clearance_m * (3 + 8e-6 / 14.008e-3)), 1.0, 1e-6);
+  EXPECT_NEAR(s.d_total_d_gap[3] / (3 * (b.flow_m3_s[3] + b.flow_m3_s[4]) / p.valve_gap_m), 1.0, 1e-12);
+  // slipper: q = dp / (R_c + R_L), R_L ~ h^-3: dq/dh = 3 q R_L / (h (R_c + R_L)) < 3 q / h
+  EXPECT_GT(s.d_total_d_gap[1], 0.0);
+  EXPECT_LT(s.d_total_d_gap[1], 3 * b.flow_m3_s[1] / p.slipper_gap_m);
+  // central differences agree with the dual numbers for every gap
+  for (unsigned g = 0; g < 4; ++g) {
+    const double gaps[] = {p.bore_clearance_m, p.slipper_gap_m, p.ball_clearance_m, p.valve_gap_m};
+    const double rel = 1e-5;
+    const double fd = (pumploss::piston_pump_budget(pumploss::scale_gaps(p, 1u << g, 1 + rel), o, op).total_m3_s -
+                       pumploss::piston_pump_budget(pumploss::scale_gaps(p, 1u << g, 1 - rel), o, op).total_m3_s) /
+                      (2 * rel * gaps[g]);
+    EXPECT_NEAR(s.d_total_d_gap[g] / fd, 1.0, 1e-7) << g;
+  }
+  double elasticity_sum = 0;
+  for (double e : s.elasticity) elasticity_sum += e;
+  EXPECT_LE(elasticity_sum, 3.0 + 1e-12);  // a laminar budget is at most cubic in a common gap scale
+}
+
+namespace {
+std::vector<pumploss::drain_measurement> synthetic_measurements(const pumploss::piston_pump<double>& truth,
+                                                               const pumploss::oil<double>& o) {
+  std::vector<pumploss::drain_measurement> m;
+  for (double dp : {80e5, 160e5, 250e5, 320e5})
+    for (double t : {308.15, 328.15, 348.15})
+      for (double x : {0.3, 0.65, 1.0}) {
+        const auto b = pumploss::piston_pump_budget(truth, o, {dp + 1e5, 1e5, 25.0, x, t});
+        m.push_back({b.total_m3_s, dp + 1e5, 1e5, 25.0, x, t});
+      }
+  return m;
+}
+}  // namespace
+
+TEST(PistonPumpCalibration, IdentifiesTheWornPistonBores) {
+  const auto p = test_pump();
+  const auto o = test_oil();
+  auto worn = p;
+  worn.bore_clearance_m *= 1.3;  // invented wear: bores 30 % larger clearance
+  const auto m = synthetic_measurements(worn, o);
+  const auto c = pumploss::calibrate_piston_pump(p, o, m.data(), m.size());
+  ASSERT_TRUE(c.st == status::ok || c.st == status::ill_conditioned) << static_cast<int>(c.st);
+  const int piston = static_cast<int>(pumploss::path_group::piston);
+  // expected factor: the worn bore path over the nominal one (the same at every point)
+  const pumploss::pump_operating_point<double> op{250e5, 0.0, 25.0, 1.0, 323.15};
+  const double ratio = pumploss::piston_pump_budget(worn, o, op).flow_m3_s[0] / pumploss::piston_pump_budget(p, o, op).flow_m3_s[0];
+  EXPECT_NEAR(ratio, 1.3 * 1.3 * 1.3, 0.002);  // nearly cubic
+  EXPECT_NEAR(c.scale[piston] / ratio, 1.0, 1e-9);
+  EXPECT_NEAR(c.gap_growth[piston], 0.3, 1e-9);
+  for (int g = 1; g < pumploss::path_group_count; ++g) EXPECT_NEAR(c.scale[g], 1.0, 1e-6) << g;
+  EXPECT_LT(c.rms_residual_m3_s, 1e-12);
+  // Slipper and valve plate are both laminar dp/mu paths: no drain data can tell them apart.
+  const int slipper = static_cast<int>(pumploss::path_group::slipper);
+  const int valve = static_cast<int>(pumploss::path_group::valve_plate);
+  EXPECT_TRUE(c.confused_with[slipper] & (1u << valve));
+  EXPECT_TRUE(c.confused_with[valve] & (1u << slipper));
+  EXPECT_EQ(c.confused_with[piston], 0u);  // separated by the displacement settings
+  EXPECT_EQ(c.scale[slipper], c.scale[valve]);
+}
+
+TEST(PistonPumpCalibration, WithoutDisplacementChangesThePistonsMergeWithTheOtherLaminarPaths) {
+  const auto p = test_pump();
+  const auto o = test_oil();
+  std::vector<pumploss::drain_measurement> m;
+  for (const auto& x : synthetic_measurements(p, o))
+    if (x.displacement_fraction == 1.0) m.push_back(x);
+  const auto c = pumploss::calibrate_piston_pump(p, o, m.data(), m.size());
+  ASSERT_TRUE(pumploss::is_usable(c.st));
+  const int piston = static_cast<int>(pumploss::path_group::piston);
+  EXPECT_TRUE(c.confused_with[piston] & (1u << static_cast<int>(pumploss::path_group::slipper)));
+  for (int g = 0; g < pumploss::path_group_count; ++g) EXPECT_NEAR(c.scale[g], 1.0, 1e-6) << g;
+}
+
+TEST(PistonPumpCalibration, BadInput) {
+  const auto p = test_pump();
+  const auto o = test_oil();
+  EXPECT_EQ(pumploss::calibrate_piston_pump(p, o, nullptr, 3).st, status::misuse);
+  const pumploss::drain_measurement one{1e-5, 250e5, 0.0, 25.0, 1.0, 323.15};
+  EXPECT_EQ(pumploss::calibrate_piston_pump(p, o, &one, 1).st, status::insufficient_data);
+  EXPECT_EQ(pumploss::calibrate_piston_pump(p, o, &one, 0).st, status::insufficient_data);  // empty set
+  auto m = synthetic_measurements(p, o);
+  m[3].drain_m3_s = kNaN;
+  const auto c = pumploss::calibrate_piston_pump(p, o, m.data(), m.size());
+  EXPECT_EQ(c.st, status::nonfinite);
+  EXPECT_TRUE(std::isnan(c.scale[0]));
+  m = synthetic_measurements(p, o);
+  m[2].displacement_fraction = 1.2;
+  EXPECT_EQ(pumploss::calibrate_piston_pump(p, o, m.data(), m.size()).st, status::domain);
+}
+
+TEST(PistonPumpDiagnosis, ExcessDrainAsGapGrowthPerPath) {
+  const auto p = test_pump();
+  const auto o = test_oil();
+  const pumploss::pump_operating_point<double> op{250e5, 1e5, 25.0, 1.0, 323.15};
+  auto worn = p;
+  worn.valve_gap_m *= 1.25;
+  const double measured = pumploss::piston_pump_budget(worn, o, op).total_m3_s;
+  const auto g = pumploss::gap_growth_for_drain(p, o, op, pumploss::pump_gap::valve, measured);
+  ASSERT_EQ(g.st, status::ok);
+  EXPECT_NEAR(g.value, 0.25, 1e-9);
+  // The same excess explained by the bores alone needs a larger relative change there.
+  const auto gb = pumploss::gap_growth_for_drain(p, o, op, pumploss::pump_gap::bore, measured);
+  ASSERT_EQ(gb.st, status::ok);
+  EXPECT_GT(gb.value, 0.0);
+  const auto back = pumploss::piston_pump_budget(pumploss::scale_gaps(p, 1u, 1.0 + gb.value), o, op);
+  EXPECT_NEAR(back.total_m3_s / measured, 1.0, 1e-9);
+  // A drain far above what one gap can explain, or below what the other paths already leak.
+  EXPECT_EQ(pumploss::gap_growth_for_drain(p, o, op, pumploss::pump_gap::slipper, measured * 1e4).st,
+            status::out_of_validity);
+  EXPECT_EQ(pumploss::gap_growth_for_drain(p, o, op, pumploss::pump_gap::valve, measured * 1e-6).st,
+            status::out_of_validity);
+  EXPECT_EQ(pumploss::gap_growth_for_drain(p, o, op, pumploss::pump_gap::valve, -1.0).st, status::domain);
+  auto no_ball = p;
+  no_ball.ball_clearance_m = 0.0;
+  EXPECT_EQ(pumploss::gap_growth_for_drain(no_ball, o, op, pumploss::pump_gap::ball, measured).st, status::domain);
 }

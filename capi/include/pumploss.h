@@ -1189,6 +1189,249 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_reason_text(int reason);
  *  @return "sound", "acceptable", "elevated", "worn", or "unknown" (static storage) */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_level_name(int level);
 /** @} */
+/** @name Piston pump leakage budget
+ *  A swashplate axial piston pump described by its geometry and clearances (an opaque handle):
+ *  leakage of every path to the case, sensitivities, calibration to measured drain flows and the
+ *  gap growth that explains a measured drain. See pumploss::piston_pump_budget. @{ */
+#define PUMPLOSS_PATH_PISTON_BORE 0   /**< Path: pistons in their bores. */
+#define PUMPLOSS_PATH_SLIPPER 1       /**< Path: slipper pads. */
+#define PUMPLOSS_PATH_BALL_SOCKET 2   /**< Path: piston balls in their sockets. */
+#define PUMPLOSS_PATH_VALVE_INNER 3   /**< Path: valve plate inner sealing land. */
+#define PUMPLOSS_PATH_VALVE_OUTER 4   /**< Path: valve plate outer sealing land. */
+#define PUMPLOSS_PATH_CONTROLLER 5    /**< Path: controller pilot consumption. */
+#define PUMPLOSS_PATH_BLEED 6         /**< Path: controller bleed orifice. */
+#define PUMPLOSS_PATH_EXTRA_LAMINAR 7 /**< Path: user laminar path. */
+#define PUMPLOSS_PATH_EXTRA_ORIFICE 8 /**< Path: user orifice path. */
+#define PUMPLOSS_PATH_COUNT 9         /**< Number of paths. */
+#define PUMPLOSS_GAP_BORE 0           /**< Gap: piston-bore clearance. */
+#define PUMPLOSS_GAP_SLIPPER 1        /**< Gap: slipper land gap. */
+#define PUMPLOSS_GAP_BALL 2           /**< Gap: ball-socket clearance. */
+#define PUMPLOSS_GAP_VALVE 3          /**< Gap: barrel-valve plate gap. */
+#define PUMPLOSS_GAP_COUNT 4          /**< Number of gaps. */
+#define PUMPLOSS_GROUP_PISTON 0       /**< Calibration group: pistons. */
+#define PUMPLOSS_GROUP_SLIPPER 1      /**< Calibration group: slippers and ball sockets. */
+#define PUMPLOSS_GROUP_VALVE_PLATE 2  /**< Calibration group: valve plate lands. */
+#define PUMPLOSS_GROUP_CONTROLLER 3   /**< Calibration group: controller consumption and bleed. */
+#define PUMPLOSS_GROUP_EXTRA 4        /**< Calibration group: user paths. */
+#define PUMPLOSS_GROUP_COUNT 5        /**< Number of calibration groups. */
+
+/** Opaque piston pump description (geometry, clearances, oil, last calibration). */
+typedef struct pumploss_pump pumploss_pump;
+
+/**
+ * Create a pump description with its pistons; other paths start absent, the oil unset.
+ * @param pistons number of pistons (3 or more; usually 7 or 9)
+ * @param piston_diameter_m piston diameter, m
+ * @param bore_clearance_m radial piston-bore clearance, m (> 0)
+ * @param engaged_length_min_m engaged piston-bore length at outer dead centre, m
+ * @param pitch_radius_m pitch radius of the bores, m
+ * @param max_swash_angle_rad maximum swash angle, rad (0 < angle < pi/4)
+ * @param out receives the handle (NULL on error); free with pumploss_pump_destroy()
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN (including more pistons than fit the pitch circle),
+ *         PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE, PUMPLOSS_ENOMEM.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_create(int pistons, double piston_diameter_m, double bore_clearance_m,
+                                                    double engaged_length_min_m, double pitch_radius_m,
+                                                    double max_swash_angle_rad, pumploss_pump **out);
+/** Destroy a pump description; NULL is a no-op.
+ *  @param h the handle */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_pump_destroy(pumploss_pump *h);
+/**
+ * Piston details.
+ * @param h the handle
+ * @param eccentricity_ratio piston eccentricity in its bore, 0..1
+ * @param high_pressure_share share of pistons on the high-pressure side, (0, 1] (0.5 typical)
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_piston(pumploss_pump *h, double eccentricity_ratio,
+                                                        double high_pressure_share);
+/**
+ * Slipper pad fed through a capillary in piston and slipper. A gap of 0 removes the path.
+ * @param h the handle
+ * @param pocket_radius_m pocket (recess) radius, m
+ * @param outer_radius_m land outer radius, m (> pocket radius)
+ * @param gap_m land gap, m (>= 0)
+ * @param feed_diameter_m feed bore diameter, m
+ * @param feed_length_m feed bore length, m
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_slipper(pumploss_pump *h, double pocket_radius_m,
+                                                         double outer_radius_m, double gap_m, double feed_diameter_m,
+                                                         double feed_length_m);
+/**
+ * Ball-and-socket clearance path. A clearance of 0 removes the path.
+ * @param h the handle
+ * @param ball_diameter_m ball diameter, m
+ * @param clearance_m radial clearance, m (>= 0)
+ * @param length_m sealing length, m
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_ball(pumploss_pump *h, double ball_diameter_m, double clearance_m,
+                                                      double length_m);
+/**
+ * Valve plate sealing lands of the high-pressure kidney. A gap of 0 removes the paths.
+ * @param h the handle
+ * @param inner_land_inner_radius_m inner land, inner radius, m
+ * @param inner_land_outer_radius_m inner land, outer radius (kidney edge), m
+ * @param outer_land_inner_radius_m outer land, inner radius (kidney edge), m
+ * @param outer_land_outer_radius_m outer land, outer radius, m
+ * @param kidney_arc_rad arc of the high-pressure kidney, rad
+ * @param gap_m barrel-valve plate gap, m (>= 0)
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_valve_plate(pumploss_pump *h, double inner_land_inner_radius_m,
+                                                             double inner_land_outer_radius_m,
+                                                             double outer_land_inner_radius_m,
+                                                             double outer_land_outer_radius_m, double kidney_arc_rad,
+                                                             double gap_m);
+/**
+ * Controller consumption and bleed orifice.
+ * @param h the handle
+ * @param consumption_m3_s constant pilot consumption to case, m^3/s (>= 0)
+ * @param bleed_diameter_m bleed orifice diameter, m (>= 0; 0: none)
+ * @param bleed_cd bleed orifice discharge coefficient, (0, 1]
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_controller(pumploss_pump *h, double consumption_m3_s,
+                                                            double bleed_diameter_m, double bleed_cd);
+/**
+ * User paths: a laminar conductance (q = k dp / mu) and an orifice (q = CdA sqrt(2 dp / rho)).
+ * @param h the handle
+ * @param conductance_m3 k, m^3 (>= 0)
+ * @param orifice_cda_m2 Cd A, m^2 (>= 0)
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_extra(pumploss_pump *h, double conductance_m3, double orifice_cda_m2);
+/**
+ * The oil: two viscosity points (ASTM D341) and the density at 15 degC; the other properties
+ * are those of a typical mineral oil (pumploss_typical_mineral_oil()).
+ * @param h the handle
+ * @param t1_k first point temperature, K
+ * @param nu1_m2_s first point kinematic viscosity, m^2/s
+ * @param t2_k second point temperature, K
+ * @param nu2_m2_s second point kinematic viscosity, m^2/s
+ * @param rho15_kg_m3 density at 15 degC, kg/m^3
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_oil(pumploss_pump *h, double t1_k, double nu1_m2_s, double t2_k,
+                                                     double nu2_m2_s, double rho15_kg_m3);
+/**
+ * Geometric maximum displacement, and its mismatch with a stated one.
+ * @param h the handle
+ * @param stated_m3_rev the maker's stated displacement, m^3/rev, or 0 when none is stated
+ * @param displacement_m3_rev receives z (pi d^2/4) 2 R tan(beta_max), m^3/rev
+ * @param mismatch receives geometric / stated - 1 (0 when none is stated)
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when they differ by more than 5 %; errors.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_displacement(const pumploss_pump *h, double stated_m3_rev,
+                                                          double *displacement_m3_rev, double *mismatch);
+/**
+ * Predicted case drain flow at an operating point.
+ * @param h the handle (oil set)
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa (<= outlet)
+ * @param speed_rev_s shaft speed, rev/s (> 0)
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param total_m3_s receives the predicted drain flow, m^3/s
+ * @param drain_fraction receives total / (V_max n)
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME when a path is not laminar; errors; PUMPLOSS_EMISUSE
+ *         when the oil is not set.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget(const pumploss_pump *h, double outlet_pa, double case_pa,
+                                                    double speed_rev_s, double displacement_fraction, double t_k,
+                                                    double *total_m3_s, double *drain_fraction);
+/**
+ * One path of the budget.
+ * @param h the handle (oil set)
+ * @param path PUMPLOSS_PATH_*
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa
+ * @param speed_rev_s shaft speed, rev/s
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param q_m3_s receives the path's flow, m^3/s
+ * @param share receives its share of the total
+ * @return as pumploss_pump_budget(); PUMPLOSS_EDOMAIN for an unknown path.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_path_flow(const pumploss_pump *h, int path, double outlet_pa,
+                                                       double case_pa, double speed_rev_s,
+                                                       double displacement_fraction, double t_k, double *q_m3_s,
+                                                       double *share);
+/**
+ * Sensitivity of the predicted drain to one gap (exact, by dual numbers).
+ * @param h the handle (oil set)
+ * @param gap PUMPLOSS_GAP_*
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa
+ * @param speed_rev_s shaft speed, rev/s
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param d_total_d_gap_m2_s receives dQ/dh, (m^3/s)/m
+ * @param elasticity receives (h/Q) dQ/dh
+ * @return as pumploss_pump_budget(); PUMPLOSS_EDOMAIN for an unknown gap.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_sensitivity(const pumploss_pump *h, int gap, double outlet_pa,
+                                                             double case_pa, double speed_rev_s,
+                                                             double displacement_fraction, double t_k,
+                                                             double *d_total_d_gap_m2_s, double *elasticity);
+/**
+ * The change of one gap alone that explains a measured drain flow.
+ * @param h the handle (oil set)
+ * @param gap PUMPLOSS_GAP_*
+ * @param measured_drain_m3_s measured drain flow, m^3/s (> 0)
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa
+ * @param speed_rev_s shaft speed, rev/s
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param growth receives k - 1 (0.2: the gap must be 20 % larger)
+ * @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY when that gap alone cannot explain it; errors.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_growth(const pumploss_pump *h, int gap, double measured_drain_m3_s,
+                                                        double outlet_pa, double case_pa, double speed_rev_s,
+                                                        double displacement_fraction, double t_k, double *growth);
+/**
+ * Calibrate one scale factor per path group to measured drain flows (non-negative least
+ * squares); results are kept in the handle (pumploss_pump_calibration_group()).
+ * @param h the handle (oil set)
+ * @param n number of measurements
+ * @param drain_m3_s measured drain flows, m^3/s (n values)
+ * @param outlet_pa outlet gauge pressures, Pa (n values)
+ * @param case_pa case gauge pressures, Pa (n values)
+ * @param speed_rev_s shaft speeds, rev/s (n values)
+ * @param displacement_fraction displacement settings, 0..1 (n values)
+ * @param t_k oil temperatures, K (n values)
+ * @param rms_residual_m3_s receives the root-mean-square residual, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WILLCONDITIONED; PUMPLOSS_EDATA for too few points; errors.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump *h, size_t n, const double *drain_m3_s,
+                                                       const double *outlet_pa, const double *case_pa,
+                                                       const double *speed_rev_s, const double *displacement_fraction,
+                                                       const double *t_k, double *rms_residual_m3_s);
+/**
+ * Result of the last calibration for one group.
+ * @param h the handle
+ * @param group PUMPLOSS_GROUP_*
+ * @param scale receives the fitted factor on the group's flow (NaN: group absent)
+ * @param std_error receives its standard error
+ * @param gap_growth receives the equivalent gap change (NaN: no gap or not reachable)
+ * @param confused_with receives a bit set of the groups the data cannot tell from this one
+ * @return PUMPLOSS_OK; PUMPLOSS_EDATA when no calibration has been made; PUMPLOSS_EDOMAIN for
+ *         an unknown group; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pump *h, int group, double *scale,
+                                                               double *std_error, double *gap_growth,
+                                                               int *confused_with);
+/** Name of a path.
+ *  @param path PUMPLOSS_PATH_*
+ *  @return "piston-bore", "slipper", ... or "unknown" (static storage) */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_path_name(int path);
+/** Name of a calibration group.
+ *  @param group PUMPLOSS_GROUP_*
+ *  @return "piston", "slipper", ... or "unknown" (static storage) */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_group_name(int group);
+/** @} */
 /* pumploss:capi-pump (declarations of this subject go above this line) */
 
 /* ==== capi ==== */

@@ -259,6 +259,70 @@ inline dual<T, N> cos(const dual<T, N>& a) {
   for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * s;
   return r;
 }
+/// Tangent. @param a operand (rad) @return tan(a)
+template <class T, std::size_t N>
+inline dual<T, N> tan(const dual<T, N>& a) {
+  using std::tan;
+  dual<T, N> r;
+  r.val = tan(a.val);
+  const T dv = T(1) + r.val * r.val;
+  for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * dv;
+  return r;
+}
+/// Hyperbolic sine. @param a operand @return sinh(a)
+template <class T, std::size_t N>
+inline dual<T, N> sinh(const dual<T, N>& a) {
+  using std::cosh;
+  using std::sinh;
+  dual<T, N> r;
+  r.val = sinh(a.val);
+  const T c = cosh(a.val);
+  for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * c;
+  return r;
+}
+/// Hyperbolic cosine. @param a operand @return cosh(a)
+template <class T, std::size_t N>
+inline dual<T, N> cosh(const dual<T, N>& a) {
+  using std::cosh;
+  using std::sinh;
+  dual<T, N> r;
+  r.val = cosh(a.val);
+  const T s = sinh(a.val);
+  for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * s;
+  return r;
+}
+/// Inverse hyperbolic sine. @param a operand @return asinh(a)
+template <class T, std::size_t N>
+inline dual<T, N> asinh(const dual<T, N>& a) {
+  using std::asinh;
+  using std::sqrt;
+  dual<T, N> r;
+  r.val = asinh(a.val);
+  const T dv = T(1) / sqrt(T(1) + a.val * a.val);
+  for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * dv;
+  return r;
+}
+/// Inverse cosine. @param a operand in [-1, 1] @return acos(a)
+template <class T, std::size_t N>
+inline dual<T, N> acos(const dual<T, N>& a) {
+  using std::acos;
+  using std::sqrt;
+  dual<T, N> r;
+  r.val = acos(a.val);
+  const T dv = -T(1) / sqrt(T(1) - a.val * a.val);
+  for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * dv;
+  return r;
+}
+/// Cube root. @param a operand @return cbrt(a)
+template <class T, std::size_t N>
+inline dual<T, N> cbrt(const dual<T, N>& a) {
+  using std::cbrt;
+  dual<T, N> r;
+  r.val = cbrt(a.val);
+  const T dv = T(1) / (T(3) * r.val * r.val);
+  for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * dv;
+  return r;
+}
 /// Finiteness of the value and every derivative. @param a operand @return true when all are finite
 template <class T, std::size_t N>
 inline bool isfinite(const dual<T, N>& a) {

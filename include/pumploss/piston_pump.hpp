@@ -9,6 +9,7 @@
 #include <cmath>
 #include <cstddef>
 
+#include "dual.hpp"
 #include "fluid.hpp"
 #include "gap.hpp"
 #include "orifice.hpp"
@@ -397,6 +398,191 @@ inline piston_pump<U> piston_pump_cast(const piston_pump<T>& p) {
   q.extra_orifice_cda_m2 = U(p.extra_orifice_cda_m2);
   q.stated_displacement_m3_rev = U(p.stated_displacement_m3_rev);
   return q;
+}
+
+/// Sensitivity of the predicted drain flow to each gap height.
+template <class T>
+struct budget_sensitivity {
+  T d_total_d_gap[pump_gap_count];  ///< dQ_total/dh for each pump_gap, m^3/s per m (0 when the path is absent)
+  T elasticity[pump_gap_count];     ///< (h / Q_total) dQ_total/dh: the share-weighted power of h (3 for a pure laminar path)
+  pumploss::status st;              ///< status of the budget
+};
+
+/// Sensitivity of the budget's total to the four gap heights, by forward-mode dual numbers
+/// through the same budget template (exact derivatives, no finite differences).
+/// @param p the pump
+/// @param o the oil
+/// @param op the operating point
+/// @return the sensitivities; statuses as piston_pump_budget().
+/// @par Source
+/// Differentiation of piston_pump_budget().
+template <class T>
+inline budget_sensitivity<T> piston_pump_sensitivity(const piston_pump<T>& p, const oil<T>& o,
+                                                     const pump_operating_point<T>& op) {
+  using D = dual<T, pump_gap_count>;
+  auto pd = piston_pump_cast<D>(p);
+  pd.bore_clearance_m = D::variable(p.bore_clearance_m, 0);
+  pd.slipper_gap_m = D::variable(p.slipper_gap_m, 1);
+  pd.ball_clearance_m = D::variable(p.ball_clearance_m, 2);
+  pd.valve_gap_m = D::variable(p.valve_gap_m, 3);
+  const oil<D> od{{D(o.viscosity.a), D(o.viscosity.b)}, D(o.rho_ref_kg_m3), D(o.t_ref_k), D(o.alpha_per_k),
+                  D(o.bulk_modulus_pa), D(o.cp_j_kg_k), D(o.barus_per_pa)};
+  const pump_operating_point<D> opd{D(op.outlet_pa), D(op.case_pa), D(op.speed_rev_s), D(op.displacement_fraction),
+                                    D(op.t_k)};
+  const auto b = piston_pump_budget(pd, od, opd);
+  budget_sensitivity<T> s{};
+  s.st = b.st;
+  const T gaps[pump_gap_count] = {p.bore_clearance_m, p.slipper_gap_m, p.ball_clearance_m, p.valve_gap_m};
+  for (int i = 0; i < pump_gap_count; ++i) {
+    if (is_error(b.st)) {
+      s.d_total_d_gap[i] = s.elasticity[i] = scalar_traits<T>::nan();
+      continue;
+    }
+    s.d_total_d_gap[i] = b.total_m3_s.d[i];
+    s.elasticity[i] = b.total_m3_s.val > T(0) ? gaps[i] * b.total_m3_s.d[i] / b.total_m3_s.val : T(0);
+  }
+  return s;
+}
+
+
+/// Path groups: the unit of calibration (one scale factor each).
+enum class path_group : int {
+  piston = 0,       ///< pistons in their bores
+  slipper = 1,      ///< slipper pads and ball sockets (the slipper assembly)
+  valve_plate = 2,  ///< valve plate sealing lands
+  controller = 3,   ///< controller consumption and bleed orifice
+  extra = 4         ///< user paths
+};
+/// Number of path groups.
+inline constexpr int path_group_count = 5;
+
+/// The group a path belongs to.
+/// @param path the path
+/// @return its group
+constexpr path_group group_of(leakage_path path) noexcept {
+  switch (path) {
+    case leakage_path::piston_bore: return path_group::piston;
+    case leakage_path::slipper:
+    case leakage_path::ball_socket: return path_group::slipper;
+    case leakage_path::valve_inner:
+    case leakage_path::valve_outer: return path_group::valve_plate;
+    case leakage_path::controller:
+    case leakage_path::bleed: return path_group::controller;
+    case leakage_path::extra_laminar:
+    case leakage_path::extra_orifice: return path_group::extra;
+  }
+  return path_group::extra;
+}
+
+/// Short name of a group ("piston", "slipper", "valve-plate", "controller", "extra").
+/// @param group the group
+/// @return the name (static storage), "unknown" for another number
+const char* path_group_name(path_group group) noexcept;
+
+/// The pump with the gaps selected by `mask` (bit i for pump_gap i) multiplied by `factor`.
+/// @param p the pump
+/// @param mask bit set of pump_gap values
+/// @param factor the factor (> 0)
+/// @return the modified description
+template <class T>
+inline piston_pump<T> scale_gaps(piston_pump<T> p, unsigned mask, T factor) {
+  if (mask & 1u) p.bore_clearance_m *= factor;
+  if (mask & 2u) p.slipper_gap_m *= factor;
+  if (mask & 4u) p.ball_clearance_m *= factor;
+  if (mask & 8u) p.valve_gap_m *= factor;
+  return p;
+}
+
+/// One measured case drain flow with its operating point (calibration input).
+struct drain_measurement {
+  double drain_m3_s;             ///< measured case drain flow, m^3/s
+  double outlet_pa;              ///< outlet gauge pressure, Pa
+  double case_pa;                ///< case gauge pressure, Pa
+  double speed_rev_s;            ///< shaft speed, rev/s
+  double displacement_fraction;  ///< displacement setting, 0..1
+  double t_k;                    ///< oil temperature, K
+};
+
+/// Result of calibrate_piston_pump().
+struct pump_calibration {
+  double scale[path_group_count];        ///< fitted factor on each group's flow (1: as described; NaN: group absent)
+  double std_error[path_group_count];    ///< standard error of each factor (unconstrained fit of the same columns)
+  double gap_growth[path_group_count];   ///< equivalent gap change h_fit/h - 1 of the group (NaN: no gap or not reachable)
+  unsigned confused_with[path_group_count];  ///< bit j set: the data cannot tell group i from group j
+  double rms_residual_m3_s;              ///< root-mean-square residual of the fit, m^3/s
+  double condition_number;               ///< condition number of the scaled design (distinct groups)
+  std::size_t points;                    ///< measurements used
+  pumploss::status st;                   ///< status of the calibration
+};
+
+/// Calibrate the budget to measured drain flows: one non-negative scale factor per path group
+/// by constrained least squares, \f$ \min_{s \ge 0} \sum_i (\sum_g s_g q_g(x_i) - q_i)^2 \f$.
+///
+/// Groups whose predicted flows are proportional over the measurements (for example the slipper
+/// and the valve plate: both laminar, both \f$\propto \Delta p/\mu\f$) cannot be told apart by
+/// any such data; they are merged, given one common factor, and reported in confused_with.
+/// Measurements at several displacement settings separate the pistons (whose engaged length
+/// changes with stroke) from the other laminar paths; the controller's constant and the
+/// orifice paths separate by their pressure dependence. Each factor is then translated into the
+/// gap change of its group that would produce it (at the highest-pressure measurement).
+///
+/// @param p the pump
+/// @param o the oil
+/// @param m the measurements
+/// @param n number of measurements (more than the number of distinct groups)
+/// @return the calibration; status::insufficient_data for too few points, status::misuse for a
+///         null array, errors of the budget for a bad measurement, status::ill_conditioned
+///         when the distinct groups are nearly collinear.
+/// @par Source
+/// Lawson and Hanson, Solving Least Squares Problems (1974), ch. 23 (NNLS); the grouping rule
+/// is ours.
+pump_calibration calibrate_piston_pump(const piston_pump<double>& p, const oil<double>& o,
+                                       const drain_measurement* m, std::size_t n) noexcept;
+
+/// The change of one gap alone that would explain a measured drain flow: the factor k on that
+/// gap for which the budget's total equals the measurement (other gaps as described).
+/// @param p the pump
+/// @param o the oil
+/// @param op the operating point of the measurement
+/// @param gap the gap to change
+/// @param measured_drain_m3_s measured case drain flow, m^3/s (> 0)
+/// @return k - 1 (0.2: the gap must be 20 % larger); status::out_of_validity (NaN) when no
+///         change of that gap alone can explain the measurement (the other paths already
+///         exceed it, or the gap's path cannot carry enough), status::domain when the pump has
+///         no such path.
+/// @par Source
+/// Monotone one-dimensional root of the budget in log k, bisection with a fixed step count (80).
+template <class T>
+inline result<T> gap_growth_for_drain(const piston_pump<T>& p, const oil<T>& o, const pump_operating_point<T>& op,
+                                      pump_gap gap, T measured_drain_m3_s) {
+  using std::exp;
+  using std::log;
+  if (!detail::finite(measured_drain_m3_s)) return detail::fail<T>(status::nonfinite);
+  if (!(measured_drain_m3_s > T(0))) return detail::fail<T>(status::domain);
+  const int g = static_cast<int>(gap);
+  if (g < 0 || g >= pump_gap_count) return detail::fail<T>(status::domain);
+  const T gaps[pump_gap_count] = {p.bore_clearance_m, p.slipper_gap_m, p.ball_clearance_m, p.valve_gap_m};
+  if (!(gaps[g] > T(0))) return detail::fail<T>(status::domain);
+  const unsigned mask = 1u << g;
+  auto total = [&](T k) { return piston_pump_budget(scale_gaps(p, mask, k), o, op); };
+  const auto nominal = total(T(1));
+  if (is_error(nominal.st)) return detail::fail<T>(nominal.st);
+  // bracket in log k: the total rises monotonically with any gap
+  T lo = -log(T(20)), hi = log(T(20));
+  const auto blo = total(exp(lo));
+  const auto bhi = total(exp(hi));
+  if (is_error(blo.st) || is_error(bhi.st) || !(blo.total_m3_s <= measured_drain_m3_s) ||
+      !(bhi.total_m3_s >= measured_drain_m3_s))
+    return detail::fail<T>(status::out_of_validity);
+  status st = nominal.st;
+  for (int i = 0; i < 80; ++i) {
+    const T mid = (lo + hi) / 2;
+    const auto b = total(exp(mid));
+    if (is_error(b.st)) return detail::fail<T>(b.st);
+    st = worst(st, b.st);
+    if (b.total_m3_s < measured_drain_m3_s) lo = mid; else hi = mid;
+  }
+  return {exp((lo + hi) / 2) - T(1), st};
 }
 
 }  // namespace pumploss

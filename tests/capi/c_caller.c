@@ -339,6 +339,58 @@ static void test_pump_health(void) {
   pumploss_health_destroy(NULL);
 }
 
+static void test_pump_budget(void) {
+  pumploss_pump *h = NULL;
+  double v = 0.0, mis = 0.0, total = 0.0, frac = 0.0, q = 0.0, share = 0.0, dq = 0.0, el = 0.0, gr = 0.0, rms = 0.0;
+  double sc = 0.0, se = 0.0, gg = 0.0, sum = 0.0;
+  double drain[6], outlet[6], case_p[6], speed[6], disp[6], temp[6];
+  int i = 0, confused = 0;
+  const double pi = 3.14159265358979323846;
+  /* invented pump: 9 pistons of 20 mm on a 34 mm pitch radius, 20 degrees: 69.97 cm3/rev (hand) */
+  CHECK(pumploss_pump_create(9, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, &h) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_create(13, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, NULL) == PUMPLOSS_EMISUSE);
+  CHECK(pumploss_pump_set_piston(h, 0.0, 0.5) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_slipper(h, 6e-3, 11e-3, 12e-6, 0.8e-3, 60e-3) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_ball(h, 14e-3, 8e-6, 4e-3) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_valve_plate(h, 36e-3, 39e-3, 45e-3, 48e-3, 150.0 * pi / 180.0, 10e-6) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_controller(h, 0.5e-3 / 60.0, 0.6e-3, 0.611) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_extra(h, 0.0, 0.0) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_valve_plate(h, 36e-3, 39e-3, 38e-3, 48e-3, 2.6, 10e-6) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_pump_budget(h, 250e5, 1e5, 25.0, 1.0, 323.15, &total, &frac) == PUMPLOSS_EMISUSE && is_nan(total));
+  CHECK(pumploss_pump_set_oil(h, 313.15, 46e-6, 373.15, 6.8e-6, 870.0) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_displacement(h, 71e-6, &v, &mis) == PUMPLOSS_OK && fabs(v * 1e6 - 69.97) < 0.01);
+  CHECK(pumploss_pump_budget(h, 250e5, 1e5, 25.0, 1.0, 323.15, &total, &frac) == PUMPLOSS_OK && total > 0.0 &&
+        frac > 0.001 && frac < 0.15);
+  for (i = 0; i < PUMPLOSS_PATH_COUNT; ++i) {
+    CHECK(pumploss_pump_path_flow(h, i, 250e5, 1e5, 25.0, 1.0, 323.15, &q, &share) == PUMPLOSS_OK);
+    sum += q;
+  }
+  CHECK(fabs(sum / total - 1.0) < 1e-14);
+  CHECK(pumploss_pump_path_flow(h, 99, 250e5, 1e5, 25.0, 1.0, 323.15, &q, &share) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_pump_gap_sensitivity(h, PUMPLOSS_GAP_VALVE, 250e5, 1e5, 25.0, 1.0, 323.15, &dq, &el) == PUMPLOSS_OK &&
+        dq > 0.0 && el > 0.0 && el < 3.0);
+  CHECK(pumploss_pump_gap_growth(h, PUMPLOSS_GAP_BORE, total * 1.2, 250e5, 1e5, 25.0, 1.0, 323.15, &gr) == PUMPLOSS_OK &&
+        gr > 0.0);
+  for (i = 0; i < 6; ++i) {
+    outlet[i] = 50e5 + 50e5 * i;
+    case_p[i] = 1e5;
+    speed[i] = 25.0;
+    disp[i] = i % 2 ? 1.0 : 0.5;
+    temp[i] = 313.15 + 5.0 * i;
+    CHECK(pumploss_pump_budget(h, outlet[i], case_p[i], speed[i], disp[i], temp[i], &drain[i], &frac) == PUMPLOSS_OK);
+  }
+  CHECK(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_EDATA);
+  CHECK(pumploss_pump_calibrate(h, 6, drain, outlet, case_p, speed, disp, temp, &rms) == PUMPLOSS_OK ||
+        pumploss_pump_calibrate(h, 6, drain, outlet, case_p, speed, disp, temp, &rms) == PUMPLOSS_WILLCONDITIONED);
+  CHECK(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_OK &&
+        fabs(sc - 1.0) < 1e-6);
+  CHECK(pumploss_pump_calibrate(h, 6, drain, NULL, case_p, speed, disp, temp, &rms) == PUMPLOSS_EMISUSE && is_nan(rms));
+  CHECK(strcmp(pumploss_pump_path_name(PUMPLOSS_PATH_SLIPPER), "slipper") == 0);
+  CHECK(strcmp(pumploss_pump_group_name(PUMPLOSS_GROUP_VALVE_PLATE), "valve-plate") == 0);
+  pumploss_pump_destroy(h);
+  pumploss_pump_destroy(NULL);
+}
+
 /* pumploss:c-caller-pump */
 
 /* pumploss:c-caller-capi */
@@ -355,6 +407,7 @@ int main(void) {
   test_efficiency();
   /* pumploss:c-caller-calls-efficiency */
   test_pump_health();
+  test_pump_budget();
   /* pumploss:c-caller-calls-pump */
   /* pumploss:c-caller-calls-capi */
   printf("%d passed, %d failed\n", checks - failures, failures);
