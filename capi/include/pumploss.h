@@ -1115,9 +1115,729 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_equivalent_length(double k, double diame
 /* pumploss:capi-friction (declarations of this subject go above this line) */
 
 /* ==== efficiency ==== */
+/** @name Efficiency, leakage scaling, heat
+ *  Pumps and motors have different efficiency definitions (ISO 4409/ISO 4391): for a pump, flow
+ *  is the outlet flow it delivers and torque the torque it takes in; for a motor, flow is the
+ *  inlet flow it takes in and torque the torque it gives out. @{ */
+/**
+ * Volumetric, hydromechanical and overall efficiency of a pump:
+ * eta_v = q / (V n), eta_hm = V dp / (2 pi T), eta_t = eta_v eta_hm.
+ * @param displacement_m3_rev derived displacement V_i, m^3/rev (> 0)
+ * @param speed_rev_s rotational frequency n, rev/s (> 0)
+ * @param dp_pa pressure rise p_2 - p_1, Pa (> 0)
+ * @param flow_m3_s outlet flow at outlet conditions, m^3/s (>= 0)
+ * @param torque_n_m input torque, N m (> 0)
+ * @param eta_v receives the volumetric efficiency (fraction)
+ * @param eta_hm receives the hydromechanical efficiency (fraction)
+ * @param eta_t receives the overall efficiency (fraction)
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when an efficiency exceeds 1 (values kept);
+ *         PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EOVERFLOW, PUMPLOSS_EMISUSE.
+ * @sa pumploss::pump_efficiency
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_efficiency(double displacement_m3_rev, double speed_rev_s,
+                                                        double dp_pa, double flow_m3_s, double torque_n_m,
+                                                        double *eta_v, double *eta_hm, double *eta_t);
+/**
+ * Volumetric, hydromechanical and overall efficiency of a motor:
+ * eta_v = V n / q, eta_hm = 2 pi T / (V dp), eta_t = eta_v eta_hm.
+ * @param displacement_m3_rev derived displacement V_i, m^3/rev (> 0)
+ * @param speed_rev_s rotational frequency n, rev/s (> 0)
+ * @param dp_pa pressure drop p_1 - p_2, Pa (> 0)
+ * @param flow_m3_s inlet flow taken in, m^3/s (> 0)
+ * @param torque_n_m output torque, N m (>= 0)
+ * @param eta_v receives the volumetric efficiency (fraction)
+ * @param eta_hm receives the hydromechanical efficiency (fraction)
+ * @param eta_t receives the overall efficiency (fraction)
+ * @return as pumploss_pump_efficiency(). @sa pumploss::motor_efficiency
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency(double displacement_m3_rev, double speed_rev_s,
+                                                         double dp_pa, double flow_m3_s, double torque_n_m,
+                                                         double *eta_v, double *eta_hm, double *eta_t);
+/**
+ * pumploss_pump_efficiency() for n points (no allocation).
+ * @param n number of points
+ * @param displacement_m3_rev array of n displacements, m^3/rev
+ * @param speed_rev_s array of n speeds, rev/s
+ * @param dp_pa array of n pressure rises, Pa
+ * @param flow_m3_s array of n outlet flows, m^3/s
+ * @param torque_n_m array of n input torques, N m
+ * @param eta_v array of n, receives the volumetric efficiencies
+ * @param eta_hm array of n, receives the hydromechanical efficiencies
+ * @param eta_t array of n, receives the overall efficiencies
+ * @param status array of n, receives each point's status (NaN outputs on its error)
+ * @return PUMPLOSS_OK; the first report code seen (e.g. PUMPLOSS_WIMPLAUSIBLE); PUMPLOSS_WPARTIAL
+ *         when some points failed; PUMPLOSS_EMISUSE for a NULL array.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_efficiency_batch(size_t n, const double *displacement_m3_rev,
+                                                              const double *speed_rev_s, const double *dp_pa,
+                                                              const double *flow_m3_s, const double *torque_n_m,
+                                                              double *eta_v, double *eta_hm, double *eta_t,
+                                                              int *status);
+/**
+ * pumploss_motor_efficiency() for n points (no allocation).
+ * @param n number of points
+ * @param displacement_m3_rev array of n displacements, m^3/rev
+ * @param speed_rev_s array of n speeds, rev/s
+ * @param dp_pa array of n pressure drops, Pa
+ * @param flow_m3_s array of n inlet flows, m^3/s
+ * @param torque_n_m array of n output torques, N m
+ * @param eta_v array of n, receives the volumetric efficiencies
+ * @param eta_hm array of n, receives the hydromechanical efficiencies
+ * @param eta_t array of n, receives the overall efficiencies
+ * @param status array of n, receives each point's status
+ * @return as pumploss_pump_efficiency_batch().
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_batch(size_t n, const double *displacement_m3_rev,
+                                                               const double *speed_rev_s, const double *dp_pa,
+                                                               const double *flow_m3_s, const double *torque_n_m,
+                                                               double *eta_v, double *eta_hm, double *eta_t,
+                                                               int *status);
+/**
+ * Theoretical flow and torque and the hydraulic and shaft powers of a pump point.
+ * @param displacement_m3_rev V_i, m^3/rev (> 0)
+ * @param speed_rev_s n, rev/s (> 0)
+ * @param dp_pa pressure rise, Pa (> 0)
+ * @param flow_m3_s outlet flow, m^3/s (>= 0)
+ * @param torque_n_m input torque, N m (> 0)
+ * @param q_th_m3_s receives V_i n, m^3/s
+ * @param torque_th_n_m receives V_i dp / (2 pi), N m
+ * @param p_hyd_w receives q dp, W
+ * @param p_mech_w receives 2 pi n T, W
+ * @return as pumploss_pump_efficiency(). @sa pumploss::pump_efficiency
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_powers(double displacement_m3_rev, double speed_rev_s, double dp_pa,
+                                                    double flow_m3_s, double torque_n_m, double *q_th_m3_s,
+                                                    double *torque_th_n_m, double *p_hyd_w, double *p_mech_w);
+/**
+ * Theoretical flow and torque and the hydraulic and shaft powers of a motor point.
+ * @param displacement_m3_rev V_i, m^3/rev (> 0)
+ * @param speed_rev_s n, rev/s (> 0)
+ * @param dp_pa pressure drop, Pa (> 0)
+ * @param flow_m3_s inlet flow, m^3/s (> 0)
+ * @param torque_n_m output torque, N m (>= 0)
+ * @param q_th_m3_s receives V_i n, m^3/s
+ * @param torque_th_n_m receives V_i dp / (2 pi), N m
+ * @param p_hyd_w receives q dp (power taken in), W
+ * @param p_mech_w receives 2 pi n T (power given out), W
+ * @return as pumploss_motor_efficiency(). @sa pumploss::motor_efficiency
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_powers(double displacement_m3_rev, double speed_rev_s, double dp_pa,
+                                                     double flow_m3_s, double torque_n_m, double *q_th_m3_s,
+                                                     double *torque_th_n_m, double *p_hyd_w, double *p_mech_w);
+/**
+ * Flow at a port from a flow meter reading at another pressure and temperature (same mass flow,
+ * exact density ratio, density model of pumploss_oil_density()).
+ * @param q_meter_m3_s flow indicated by the meter, m^3/s (>= 0)
+ * @param p_meter_pa gauge pressure at the meter, Pa
+ * @param t_meter_k temperature at the meter, K (> 0)
+ * @param p_port_pa gauge pressure at the port, Pa
+ * @param t_port_k temperature at the port, K (> 0)
+ * @param rho_ref_kg_m3 oil density at t_ref_k and zero gauge pressure, kg/m^3 (> 0)
+ * @param t_ref_k reference temperature of the density, K (> 0)
+ * @param alpha_per_k cubic expansion coefficient, 1/K (>= 0)
+ * @param bulk_modulus_pa secant bulk modulus, Pa (> |p|)
+ * @param q_port_m3_s receives the flow at the port, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME (a state 150 K from the reference); errors.
+ * @sa pumploss::flow_at_port
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_flow_at_port(double q_meter_m3_s, double p_meter_pa, double t_meter_k,
+                                                     double p_port_pa, double t_port_k, double rho_ref_kg_m3,
+                                                     double t_ref_k, double alpha_per_k, double bulk_modulus_pa,
+                                                     double *q_port_m3_s);
+/**
+ * Linearised flow correction q_port = q_meter (1 - (p_port - p_meter)/K - alpha (t_meter - t_port)).
+ * @param q_meter_m3_s flow indicated by the meter, m^3/s (>= 0)
+ * @param p_meter_pa gauge pressure at the meter, Pa
+ * @param t_meter_k temperature at the meter, K
+ * @param p_port_pa gauge pressure at the port, Pa
+ * @param t_port_k temperature at the port, K
+ * @param alpha_per_k cubic expansion coefficient, 1/K (>= 0)
+ * @param bulk_modulus_pa bulk modulus, Pa (> 0)
+ * @param q_port_m3_s receives the flow at the port, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME when the correction exceeds 5 %; errors.
+ * @sa pumploss::flow_at_port_linear
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_flow_at_port_linear(double q_meter_m3_s, double p_meter_pa,
+                                                            double t_meter_k, double p_port_pa, double t_port_k,
+                                                            double alpha_per_k, double bulk_modulus_pa,
+                                                            double *q_port_m3_s);
+/**
+ * Laminar leakage law q = q_ref (dp / dp_ref) (mu_ref / mu).
+ * @param q_ref_m3_s known leakage, m^3/s (>= 0)
+ * @param dp_ref_pa its pressure difference, Pa (> 0)
+ * @param mu_ref_pa_s its dynamic viscosity, Pa s (> 0)
+ * @param dp_pa pressure difference wanted, Pa (>= 0)
+ * @param mu_pa_s dynamic viscosity wanted, Pa s (> 0)
+ * @param q_m3_s receives the leakage, m^3/s
+ * @return PUMPLOSS_OK or an error. @sa pumploss::leakage_scale
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale(double q_ref_m3_s, double dp_ref_pa, double mu_ref_pa_s,
+                                                      double dp_pa, double mu_pa_s, double *q_m3_s);
+/**
+ * pumploss_leakage_scale() for n points (no allocation).
+ * @param n number of points
+ * @param q_ref_m3_s array of n known leakages, m^3/s
+ * @param dp_ref_pa array of n reference pressure differences, Pa
+ * @param mu_ref_pa_s array of n reference viscosities, Pa s
+ * @param dp_pa array of n pressure differences wanted, Pa
+ * @param mu_pa_s array of n viscosities wanted, Pa s
+ * @param q_m3_s array of n, receives the leakages, m^3/s
+ * @param status array of n, receives each point's status
+ * @return PUMPLOSS_OK, PUMPLOSS_WPARTIAL or PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale_batch(size_t n, const double *q_ref_m3_s,
+                                                            const double *dp_ref_pa, const double *mu_ref_pa_s,
+                                                            const double *dp_pa, const double *mu_pa_s,
+                                                            double *q_m3_s, int *status);
+/**
+ * Power-law leakage scaling q = q_ref (dp/dp_ref)^a (mu_ref/mu)^b.
+ * @param q_ref_m3_s known leakage, m^3/s (>= 0)
+ * @param dp_ref_pa its pressure difference, Pa (> 0)
+ * @param mu_ref_pa_s its dynamic viscosity, Pa s (> 0)
+ * @param dp_pa pressure difference wanted, Pa (>= 0)
+ * @param mu_pa_s dynamic viscosity wanted, Pa s (> 0)
+ * @param a pressure exponent, [0, 2]
+ * @param b viscosity exponent, [0, 2]
+ * @param q_m3_s receives the leakage, m^3/s
+ * @return PUMPLOSS_OK or an error. @sa pumploss::leakage_scale_power_law
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale_power_law(double q_ref_m3_s, double dp_ref_pa,
+                                                                double mu_ref_pa_s, double dp_pa, double mu_pa_s,
+                                                                double a, double b, double *q_m3_s);
+/**
+ * Normalise a case drain reading to a reference pressure and temperature (viscosity from the
+ * ASTM D341 line through two points, density expanded about t_ref_k with alpha_per_k).
+ * @param q_m3_s drain reading, m^3/s (>= 0)
+ * @param dp_pa its pressure difference, Pa (> 0)
+ * @param t_k its oil temperature, K (> 0)
+ * @param dp_ref_pa reference pressure difference, Pa (> 0)
+ * @param t_ref_k reference temperature, K (> 0)
+ * @param t1_k first D341 point temperature, K
+ * @param nu1_m2_s kinematic viscosity at t1_k, m^2/s
+ * @param t2_k second D341 point temperature, K
+ * @param nu2_m2_s kinematic viscosity at t2_k, m^2/s
+ * @param alpha_per_k cubic expansion coefficient, 1/K (>= 0)
+ * @param a pressure exponent (1 laminar), [0, 2]
+ * @param b viscosity exponent (1 laminar), [0, 2]
+ * @param q_ref_m3_s receives the normalised drain flow, m^3/s
+ * @return PUMPLOSS_OK, PUMPLOSS_WREGIME or an error. @sa pumploss::leakage_normalise
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_normalise(double q_m3_s, double dp_pa, double t_k,
+                                                          double dp_ref_pa, double t_ref_k, double t1_k,
+                                                          double nu1_m2_s, double t2_k, double nu2_m2_s,
+                                                          double alpha_per_k, double a, double b,
+                                                          double *q_ref_m3_s);
+/**
+ * Leakage through laminar and square-law resistances in series, dp = R_lam q + R_t q^2.
+ * @param r_lam_pa_s_m3 laminar resistance, Pa s/m^3 (>= 0)
+ * @param r_t_pa_s2_m6 square-law resistance, Pa s^2/m^6 (>= 0; not both zero)
+ * @param dp_pa pressure difference, Pa (>= 0)
+ * @param q_m3_s receives the flow, m^3/s
+ * @return PUMPLOSS_OK or an error. @sa pumploss::leakage_series
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_series(double r_lam_pa_s_m3, double r_t_pa_s2_m6, double dp_pa,
+                                                       double *q_m3_s);
+/**
+ * Fit q = k dp^a mu^-b to drain readings (least squares in logarithms, Householder QR).
+ * @param count number of readings (>= 4)
+ * @param q_m3_s array of readings, m^3/s (> 0)
+ * @param dp_pa array of pressure differences, Pa (> 0)
+ * @param mu_pa_s array of dynamic viscosities, Pa s (> 0)
+ * @param k receives k (SI)
+ * @param a receives the pressure exponent
+ * @param b receives the viscosity exponent
+ * @param cond receives the condition number of the column-scaled design matrix
+ * @return PUMPLOSS_OK; PUMPLOSS_WILLCONDITIONED; PUMPLOSS_EDATA; PUMPLOSS_ENOMEM; errors.
+ * @sa pumploss::leakage_fit_power_law
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_fit_power_law(size_t count, const double *q_m3_s,
+                                                              const double *dp_pa, const double *mu_pa_s,
+                                                              double *k, double *a, double *b, double *cond);
+/**
+ * Split drain readings into viscous (dp/mu), orifice-like (sqrt(dp)) and constant parts by
+ * non-negative least squares (Lawson-Hanson).
+ * @param count number of readings (>= 4)
+ * @param q_m3_s array of readings, m^3/s (>= 0)
+ * @param dp_pa array of pressure differences, Pa (> 0)
+ * @param mu_pa_s array of dynamic viscosities, Pa s (> 0)
+ * @param c_viscous_m3 receives the coefficient of dp/mu, m^3
+ * @param c_orifice_m3_s_pa05 receives the coefficient of sqrt(dp), m^3/(s Pa^0.5)
+ * @param c_constant_m3_s receives the constant part, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_ENOCONVERGE; PUMPLOSS_EDATA; PUMPLOSS_ENOMEM; errors.
+ * @sa pumploss::leakage_split
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_split(size_t count, const double *q_m3_s, const double *dp_pa,
+                                                      const double *mu_pa_s, double *c_viscous_m3,
+                                                      double *c_orifice_m3_s_pa05, double *c_constant_m3_s);
+/**
+ * Temperature rise of throttled oil dT = dp / (rho cp) (all work stays in the oil).
+ * @param dp_pa pressure drop, Pa (>= 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cp_j_kg_k specific heat, J/(kg K) (> 0)
+ * @param dt_k receives the temperature rise, K
+ * @return PUMPLOSS_OK or an error. @sa pumploss::throttle_temperature_rise
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_throttle_temperature_rise(double dp_pa, double rho_kg_m3,
+                                                                  double cp_j_kg_k, double *dt_k);
+/**
+ * Isenthalpic throttle temperature rise dT = (1 - alpha T) dp / (rho cp).
+ * @param dp_pa pressure drop, Pa (>= 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cp_j_kg_k specific heat, J/(kg K) (> 0)
+ * @param alpha_per_k cubic expansion coefficient, 1/K (>= 0)
+ * @param t_k oil temperature, K (> 0)
+ * @param dt_k receives the temperature rise, K
+ * @return PUMPLOSS_OK or an error. @sa pumploss::throttle_temperature_rise_isenthalpic
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_throttle_temperature_rise_isenthalpic(double dp_pa, double rho_kg_m3,
+                                                                              double cp_j_kg_k,
+                                                                              double alpha_per_k, double t_k,
+                                                                              double *dt_k);
+/**
+ * Heat load P_in (1 - eta_t) of a pump (P_in shaft power) or motor (P_in hydraulic power).
+ * @param input_power_w power taken in, W (>= 0)
+ * @param eta_t overall efficiency, fraction (>= 0)
+ * @param heat_w receives the heat load, W
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE for eta_t above 1; errors. @sa pumploss::heat_load
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_heat_load(double input_power_w, double eta_t, double *heat_w);
+/**
+ * Case drain temperature when a power leaves with the drain flow: T3 = T1 + P / (rho cp q3).
+ * @param t_inlet_k inlet oil temperature, K (> 0)
+ * @param power_w power carried by the drain flow, W (>= 0)
+ * @param drain_flow_m3_s drain flow, m^3/s (> 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cp_j_kg_k specific heat, J/(kg K) (> 0)
+ * @param t_drain_k receives the drain temperature, K
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME for a rise above 100 K; errors.
+ * @sa pumploss::case_drain_temperature
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_case_drain_temperature(double t_inlet_k, double power_w,
+                                                               double drain_flow_m3_s, double rho_kg_m3,
+                                                               double cp_j_kg_k, double *t_drain_k);
+/**
+ * Case drain temperature from the leakage power dp q3 plus further losses carried by the drain.
+ * @param t_inlet_k inlet oil temperature, K (> 0)
+ * @param dp_pa pressure drop from the working port to the case, Pa (>= 0)
+ * @param drain_flow_m3_s drain flow, m^3/s (> 0)
+ * @param extra_power_w further losses carried by the drain, W (>= 0)
+ * @param rho_kg_m3 density, kg/m^3 (> 0)
+ * @param cp_j_kg_k specific heat, J/(kg K) (> 0)
+ * @param t_drain_k receives the drain temperature, K
+ * @return as pumploss_case_drain_temperature(). @sa pumploss::case_drain_temperature_from_leakage
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_case_drain_temperature_from_leakage(double t_inlet_k, double dp_pa,
+                                                                            double drain_flow_m3_s,
+                                                                            double extra_power_w,
+                                                                            double rho_kg_m3, double cp_j_kg_k,
+                                                                            double *t_drain_k);
+/**
+ * Derived displacement, estimator A: slope of flow over speed at one low pressure.
+ * @param count number of points (>= 3)
+ * @param speed_rev_s array of speeds, rev/s (> 0, not all equal)
+ * @param flow_m3_s array of flows, m^3/s (>= 0)
+ * @param v_m3_rev receives V_i, m^3/rev
+ * @param u_v_m3_rev receives its standard error, m^3/rev
+ * @return PUMPLOSS_OK; PUMPLOSS_EDATA; errors. @sa pumploss::displacement_slope
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_displacement_slope(size_t count, const double *speed_rev_s,
+                                                           const double *flow_m3_s, double *v_m3_rev,
+                                                           double *u_v_m3_rev);
+/**
+ * Derived displacement, estimator B: zero-pressure intercept at one speed (as ISO 8426-2:2025).
+ * @param count number of points (>= 3)
+ * @param speed_rev_s the shaft speed, rev/s (> 0)
+ * @param dp_pa array of pressure differences, Pa (>= 0, not all equal)
+ * @param flow_m3_s array of flows, m^3/s (>= 0)
+ * @param v_m3_rev receives V_i, m^3/rev
+ * @param u_v_m3_rev receives its standard error, m^3/rev
+ * @return PUMPLOSS_OK; PUMPLOSS_EDATA; errors. @sa pumploss::displacement_intercept
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_displacement_intercept(size_t count, double speed_rev_s,
+                                                               const double *dp_pa, const double *flow_m3_s,
+                                                               double *v_m3_rev, double *u_v_m3_rev);
+/**
+ * Derived displacement, estimator C: two-step method over speeds and pressures (as ISO 8426-1:2025).
+ * @param levels number of pressure levels (>= 3; ISO 8426-1 asks >= 5)
+ * @param per_level number of speeds per level (>= 3; ISO 8426-1 asks >= 5)
+ * @param speed_rev_s array of levels*per_level speeds, rev/s, level by level
+ * @param dp_pa array of the same layout, Pa
+ * @param flow_m3_s array of the same layout, m^3/s
+ * @param v_m3_rev receives V_i, m^3/rev
+ * @param u_v_m3_rev receives its standard error, m^3/rev
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME for fewer than 5 x 5 points; PUMPLOSS_EDATA; errors.
+ * @sa pumploss::displacement_two_step
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_displacement_two_step(size_t levels, size_t per_level,
+                                                              const double *speed_rev_s, const double *dp_pa,
+                                                              const double *flow_m3_s, double *v_m3_rev,
+                                                              double *u_v_m3_rev);
+/** @} */
 /* pumploss:capi-efficiency (declarations of this subject go above this line) */
 
 /* ==== pump ==== */
+/** @name Pump health from field readings
+ *  Drain fraction and a verdict with reasons (see pumploss::assess_health). Default bands are
+ *  common practice of the trade (no source): about 5 % of maximum displacement flow for a
+ *  high-quality pump at maximum pressure, up to about 10 % for very large pumps, 15 % or more for
+ *  small, poorly made or worn pumps. @{ */
+/**
+ * Drain fraction: case drain flow over maximum displacement flow, q_V3 / (V_max n).
+ * @param drain_flow_m3_s case drain flow, m^3/s (>= 0)
+ * @param max_displacement_m3_rev maximum displacement, m^3/rev (> 0)
+ * @param speed_rev_s shaft speed, rev/s (> 0)
+ * @param fraction receives the fraction (0.05 = 5 %)
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE above 1; PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE,
+ *         PUMPLOSS_EMISUSE. @sa pumploss::drain_fraction
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_drain_fraction(double drain_flow_m3_s, double max_displacement_m3_rev,
+                                                       double speed_rev_s, double *fraction);
+
+#define PUMPLOSS_HEALTH_SOUND 0      /**< Verdict level: sound. */
+#define PUMPLOSS_HEALTH_ACCEPTABLE 1 /**< Verdict level: acceptable. */
+#define PUMPLOSS_HEALTH_ELEVATED 2   /**< Verdict level: elevated, plan an inspection. */
+#define PUMPLOSS_HEALTH_WORN 3       /**< Verdict level: worn. */
+#define PUMPLOSS_REASON_FRACTION_SOUND 0x001      /**< Normalised fraction within the sound band. */
+#define PUMPLOSS_REASON_FRACTION_ACCEPTABLE 0x002 /**< Normalised fraction within the acceptable band. */
+#define PUMPLOSS_REASON_FRACTION_ELEVATED 0x004   /**< Normalised fraction between acceptable and worn. */
+#define PUMPLOSS_REASON_FRACTION_WORN 0x008       /**< Normalised fraction at or beyond the worn band. */
+#define PUMPLOSS_REASON_GROWTH_MODERATE 0x010     /**< Growth over the baseline beyond the watch limit. */
+#define PUMPLOSS_REASON_GROWTH_LARGE 0x020        /**< Growth over the baseline beyond the worn limit. */
+#define PUMPLOSS_REASON_DRAIN_HOT 0x040           /**< Drain hotter than throttling alone explains. */
+#define PUMPLOSS_REASON_LOW_PRESSURE 0x080        /**< Reading below half the reference pressure. */
+#define PUMPLOSS_REASON_NO_BASELINE 0x100         /**< No baseline: growth not assessed. */
+#define PUMPLOSS_REASON_NO_TEMPERATURES 0x200     /**< No drain/inlet temperature: heat not assessed. */
+
+/** Opaque health assessor: one pump, one oil, a reference state, bands and an optional baseline. */
+typedef struct pumploss_health pumploss_health;
+
+/**
+ * Create a health assessor.
+ * @param max_displacement_m3_rev maximum displacement, m^3/rev (> 0)
+ * @param reference_dp_pa reference pressure difference outlet to case, Pa (> 0; usually the maximum)
+ * @param reference_t_k reference oil temperature, K (> 0)
+ * @param t1_k first oil viscosity point: temperature, K
+ * @param nu1_m2_s first oil viscosity point: kinematic viscosity, m^2/s
+ * @param t2_k second oil viscosity point: temperature, K
+ * @param nu2_m2_s second oil viscosity point: kinematic viscosity, m^2/s
+ * @param rho_kg_m3 oil density, kg/m^3 (> 0)
+ * @param cp_j_kg_k oil specific heat, J/(kg K) (> 0)
+ * @param out receives the new handle (NULL on error); free it with pumploss_health_destroy()
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE, PUMPLOSS_ENOMEM.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_create(double max_displacement_m3_rev, double reference_dp_pa,
+                                                      double reference_t_k, double t1_k, double nu1_m2_s,
+                                                      double t2_k, double nu2_m2_s, double rho_kg_m3,
+                                                      double cp_j_kg_k, pumploss_health **out);
+/** Destroy a health assessor; NULL is a no-op.
+ *  @param h the handle */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_health_destroy(pumploss_health *h);
+/**
+ * Set the bands (defaults: 0.05, 0.10, 0.15, 0.25, 0.50, 1.0).
+ * @param h the handle
+ * @param sound_max drain fraction up to which a pump is sound (> 0)
+ * @param acceptable_max upper end of the acceptable band (>= sound_max)
+ * @param worn_min fraction from which a pump is worn (>= acceptable_max)
+ * @param growth_moderate growth over baseline flagged moderate (> 0; 0.25 = +25 %)
+ * @param growth_large growth over baseline flagged large (>= growth_moderate)
+ * @param hot_margin drain rise flagged above hot_margin x dp/(rho cp) (> 0)
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE (NULL handle).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_bands(pumploss_health *h, double sound_max, double acceptable_max,
+                                                         double worn_min, double growth_moderate,
+                                                         double growth_large, double hot_margin);
+/**
+ * Set the pump's baseline: its drain flow at the reference state when new (or after overhaul).
+ * @param h the handle
+ * @param baseline_m3_s baseline drain flow at the reference state, m^3/s (> 0)
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_baseline(pumploss_health *h, double baseline_m3_s);
+/**
+ * Set the exponents of the normalisation q ~ dp^a mu^-b (defaults 1, 1: laminar clearances).
+ * @param h the handle
+ * @param pressure_exponent a (>= 0)
+ * @param viscosity_exponent b (>= 0)
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_exponents(pumploss_health *h, double pressure_exponent,
+                                                             double viscosity_exponent);
+/**
+ * Assess one field reading.
+ * @param h the handle
+ * @param drain_flow_m3_s case drain flow, m^3/s (>= 0)
+ * @param outlet_pa outlet pressure (gauge), Pa
+ * @param case_pa case pressure (gauge), Pa (0 if not measured; outlet - case > 0)
+ * @param oil_t_k oil temperature governing the clearances, K
+ * @param speed_rev_s shaft speed, rev/s (> 0)
+ * @param drain_t_k drain oil temperature, K; NaN when not measured
+ * @param inlet_t_k inlet oil temperature, K; NaN when not measured
+ * @param level receives the level (PUMPLOSS_HEALTH_*; -1 on error)
+ * @param reasons receives the reason bits (PUMPLOSS_REASON_*; 0 on error)
+ * @param fraction receives the drain fraction as read
+ * @param fraction_at_reference receives the drain fraction normalised to the reference state
+ * @param growth receives the growth over the baseline (0.3 = +30 %); NaN when no baseline is set
+ *        (reason PUMPLOSS_REASON_NO_BASELINE)
+ * @return PUMPLOSS_OK, PUMPLOSS_WIMPLAUSIBLE (fraction above 1), PUMPLOSS_EDOMAIN,
+ *         PUMPLOSS_ENONFINITE (NaN/inf in a required input, inf in a temperature), PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess(const pumploss_health *h, double drain_flow_m3_s,
+                                                      double outlet_pa, double case_pa, double oil_t_k,
+                                                      double speed_rev_s, double drain_t_k, double inlet_t_k,
+                                                      int *level, int *reasons, double *fraction,
+                                                      double *fraction_at_reference, double *growth);
+/** A sentence for one reason bit.
+ *  @param reason one PUMPLOSS_REASON_* bit
+ *  @return the sentence (static storage, never NULL); a sentence saying so for an unknown bit */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_reason_text(int reason);
+/** The name of a level.
+ *  @param level a PUMPLOSS_HEALTH_* value
+ *  @return "sound", "acceptable", "elevated", "worn", or "unknown" (static storage) */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_level_name(int level);
+/** @} */
+/** @name Piston pump leakage budget
+ *  A swashplate axial piston pump described by its geometry and clearances (an opaque handle):
+ *  leakage of every path to the case, sensitivities, calibration to measured drain flows and the
+ *  gap growth that explains a measured drain. See pumploss::piston_pump_budget. @{ */
+#define PUMPLOSS_PATH_PISTON_BORE 0   /**< Path: pistons in their bores. */
+#define PUMPLOSS_PATH_SLIPPER 1       /**< Path: slipper pads. */
+#define PUMPLOSS_PATH_BALL_SOCKET 2   /**< Path: piston balls in their sockets. */
+#define PUMPLOSS_PATH_VALVE_INNER 3   /**< Path: valve plate inner sealing land. */
+#define PUMPLOSS_PATH_VALVE_OUTER 4   /**< Path: valve plate outer sealing land. */
+#define PUMPLOSS_PATH_CONTROLLER 5    /**< Path: controller pilot consumption. */
+#define PUMPLOSS_PATH_BLEED 6         /**< Path: controller bleed orifice. */
+#define PUMPLOSS_PATH_EXTRA_LAMINAR 7 /**< Path: user laminar path. */
+#define PUMPLOSS_PATH_EXTRA_ORIFICE 8 /**< Path: user orifice path. */
+#define PUMPLOSS_PATH_COUNT 9         /**< Number of paths. */
+#define PUMPLOSS_GAP_BORE 0           /**< Gap: piston-bore clearance. */
+#define PUMPLOSS_GAP_SLIPPER 1        /**< Gap: slipper land gap. */
+#define PUMPLOSS_GAP_BALL 2           /**< Gap: ball-socket clearance. */
+#define PUMPLOSS_GAP_VALVE 3          /**< Gap: barrel-valve plate gap. */
+#define PUMPLOSS_GAP_COUNT 4          /**< Number of gaps. */
+#define PUMPLOSS_GROUP_PISTON 0       /**< Calibration group: pistons. */
+#define PUMPLOSS_GROUP_SLIPPER 1      /**< Calibration group: slippers and ball sockets. */
+#define PUMPLOSS_GROUP_VALVE_PLATE 2  /**< Calibration group: valve plate lands. */
+#define PUMPLOSS_GROUP_CONTROLLER 3   /**< Calibration group: controller consumption and bleed. */
+#define PUMPLOSS_GROUP_EXTRA 4        /**< Calibration group: user paths. */
+#define PUMPLOSS_GROUP_COUNT 5        /**< Number of calibration groups. */
+
+/** Opaque piston pump description (geometry, clearances, oil, last calibration). */
+typedef struct pumploss_pump pumploss_pump;
+
+/**
+ * Create a pump description with its pistons; other paths start absent, the oil unset.
+ * @param pistons number of pistons (3 or more; usually 7 or 9)
+ * @param piston_diameter_m piston diameter, m
+ * @param bore_clearance_m radial piston-bore clearance, m (> 0)
+ * @param engaged_length_min_m engaged piston-bore length at outer dead centre, m
+ * @param pitch_radius_m pitch radius of the bores, m
+ * @param max_swash_angle_rad maximum swash angle, rad (0 < angle < pi/4)
+ * @param out receives the handle (NULL on error); free with pumploss_pump_destroy()
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN (including more pistons than fit the pitch circle),
+ *         PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE, PUMPLOSS_ENOMEM.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_create(int pistons, double piston_diameter_m, double bore_clearance_m,
+                                                    double engaged_length_min_m, double pitch_radius_m,
+                                                    double max_swash_angle_rad, pumploss_pump **out);
+/** Destroy a pump description; NULL is a no-op.
+ *  @param h the handle */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_pump_destroy(pumploss_pump *h);
+/**
+ * Piston details.
+ * @param h the handle
+ * @param eccentricity_ratio piston eccentricity in its bore, 0..1
+ * @param high_pressure_share share of pistons on the high-pressure side, (0, 1] (0.5 typical)
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_piston(pumploss_pump *h, double eccentricity_ratio,
+                                                        double high_pressure_share);
+/**
+ * Slipper pad fed through a capillary in piston and slipper. A gap of 0 removes the path.
+ * @param h the handle
+ * @param pocket_radius_m pocket (recess) radius, m
+ * @param outer_radius_m land outer radius, m (> pocket radius)
+ * @param gap_m land gap, m (>= 0)
+ * @param feed_diameter_m feed bore diameter, m
+ * @param feed_length_m feed bore length, m
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_slipper(pumploss_pump *h, double pocket_radius_m,
+                                                         double outer_radius_m, double gap_m, double feed_diameter_m,
+                                                         double feed_length_m);
+/**
+ * Ball-and-socket clearance path. A clearance of 0 removes the path.
+ * @param h the handle
+ * @param ball_diameter_m ball diameter, m
+ * @param clearance_m radial clearance, m (>= 0)
+ * @param length_m sealing length, m
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_ball(pumploss_pump *h, double ball_diameter_m, double clearance_m,
+                                                      double length_m);
+/**
+ * Valve plate sealing lands of the high-pressure kidney. A gap of 0 removes the paths.
+ * @param h the handle
+ * @param inner_land_inner_radius_m inner land, inner radius, m
+ * @param inner_land_outer_radius_m inner land, outer radius (kidney edge), m
+ * @param outer_land_inner_radius_m outer land, inner radius (kidney edge), m
+ * @param outer_land_outer_radius_m outer land, outer radius, m
+ * @param kidney_arc_rad arc of the high-pressure kidney, rad
+ * @param gap_m barrel-valve plate gap, m (>= 0)
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_valve_plate(pumploss_pump *h, double inner_land_inner_radius_m,
+                                                             double inner_land_outer_radius_m,
+                                                             double outer_land_inner_radius_m,
+                                                             double outer_land_outer_radius_m, double kidney_arc_rad,
+                                                             double gap_m);
+/**
+ * Controller consumption and bleed orifice.
+ * @param h the handle
+ * @param consumption_m3_s constant pilot consumption to case, m^3/s (>= 0)
+ * @param bleed_diameter_m bleed orifice diameter, m (>= 0; 0: none)
+ * @param bleed_cd bleed orifice discharge coefficient, (0, 1]
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_controller(pumploss_pump *h, double consumption_m3_s,
+                                                            double bleed_diameter_m, double bleed_cd);
+/**
+ * User paths: a laminar conductance (q = k dp / mu) and an orifice (q = CdA sqrt(2 dp / rho)).
+ * @param h the handle
+ * @param conductance_m3 k, m^3 (>= 0)
+ * @param orifice_cda_m2 Cd A, m^2 (>= 0)
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_extra(pumploss_pump *h, double conductance_m3, double orifice_cda_m2);
+/**
+ * The oil: two viscosity points (ASTM D341) and the density at 15 degC; the other properties
+ * are those of a typical mineral oil (pumploss_typical_mineral_oil()).
+ * @param h the handle
+ * @param t1_k first point temperature, K
+ * @param nu1_m2_s first point kinematic viscosity, m^2/s
+ * @param t2_k second point temperature, K
+ * @param nu2_m2_s second point kinematic viscosity, m^2/s
+ * @param rho15_kg_m3 density at 15 degC, kg/m^3
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_oil(pumploss_pump *h, double t1_k, double nu1_m2_s, double t2_k,
+                                                     double nu2_m2_s, double rho15_kg_m3);
+/**
+ * Geometric maximum displacement, and its mismatch with a stated one.
+ * @param h the handle
+ * @param stated_m3_rev the maker's stated displacement, m^3/rev, or 0 when none is stated
+ * @param displacement_m3_rev receives z (pi d^2/4) 2 R tan(beta_max), m^3/rev
+ * @param mismatch receives geometric / stated - 1 (0 when none is stated)
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when they differ by more than 5 %; errors.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_displacement(const pumploss_pump *h, double stated_m3_rev,
+                                                          double *displacement_m3_rev, double *mismatch);
+/**
+ * Predicted case drain flow at an operating point.
+ * @param h the handle (oil set)
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa (<= outlet)
+ * @param speed_rev_s shaft speed, rev/s (> 0)
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param total_m3_s receives the predicted drain flow, m^3/s
+ * @param drain_fraction receives total / (V_max n)
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME when a path is not laminar; errors; PUMPLOSS_EMISUSE
+ *         when the oil is not set.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget(const pumploss_pump *h, double outlet_pa, double case_pa,
+                                                    double speed_rev_s, double displacement_fraction, double t_k,
+                                                    double *total_m3_s, double *drain_fraction);
+/**
+ * One path of the budget.
+ * @param h the handle (oil set)
+ * @param path PUMPLOSS_PATH_*
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa
+ * @param speed_rev_s shaft speed, rev/s
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param q_m3_s receives the path's flow, m^3/s
+ * @param share receives its share of the total
+ * @return as pumploss_pump_budget(); PUMPLOSS_EDOMAIN for an unknown path.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_path_flow(const pumploss_pump *h, int path, double outlet_pa,
+                                                       double case_pa, double speed_rev_s,
+                                                       double displacement_fraction, double t_k, double *q_m3_s,
+                                                       double *share);
+/**
+ * Sensitivity of the predicted drain to one gap (exact, by dual numbers).
+ * @param h the handle (oil set)
+ * @param gap PUMPLOSS_GAP_*
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa
+ * @param speed_rev_s shaft speed, rev/s
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param d_total_d_gap_m2_s receives dQ/dh, (m^3/s)/m
+ * @param elasticity receives (h/Q) dQ/dh
+ * @return as pumploss_pump_budget(); PUMPLOSS_EDOMAIN for an unknown gap.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_sensitivity(const pumploss_pump *h, int gap, double outlet_pa,
+                                                             double case_pa, double speed_rev_s,
+                                                             double displacement_fraction, double t_k,
+                                                             double *d_total_d_gap_m2_s, double *elasticity);
+/**
+ * The change of one gap alone that explains a measured drain flow.
+ * @param h the handle (oil set)
+ * @param gap PUMPLOSS_GAP_*
+ * @param measured_drain_m3_s measured drain flow, m^3/s (> 0)
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa
+ * @param speed_rev_s shaft speed, rev/s
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param growth receives k - 1 (0.2: the gap must be 20 % larger)
+ * @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY when that gap alone cannot explain it; errors.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_growth(const pumploss_pump *h, int gap, double measured_drain_m3_s,
+                                                        double outlet_pa, double case_pa, double speed_rev_s,
+                                                        double displacement_fraction, double t_k, double *growth);
+/**
+ * Calibrate one scale factor per path group to measured drain flows (non-negative least
+ * squares); results are kept in the handle (pumploss_pump_calibration_group()).
+ * @param h the handle (oil set)
+ * @param n number of measurements
+ * @param drain_m3_s measured drain flows, m^3/s (n values)
+ * @param outlet_pa outlet gauge pressures, Pa (n values)
+ * @param case_pa case gauge pressures, Pa (n values)
+ * @param speed_rev_s shaft speeds, rev/s (n values)
+ * @param displacement_fraction displacement settings, 0..1 (n values)
+ * @param t_k oil temperatures, K (n values)
+ * @param rms_residual_m3_s receives the root-mean-square residual, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WILLCONDITIONED; PUMPLOSS_EDATA for too few points; errors.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump *h, size_t n, const double *drain_m3_s,
+                                                       const double *outlet_pa, const double *case_pa,
+                                                       const double *speed_rev_s, const double *displacement_fraction,
+                                                       const double *t_k, double *rms_residual_m3_s);
+/**
+ * Result of the last calibration for one group.
+ * @param h the handle
+ * @param group PUMPLOSS_GROUP_*
+ * @param scale receives the fitted factor on the group's flow (NaN: group absent)
+ * @param std_error receives its standard error
+ * @param gap_growth receives the equivalent gap change (NaN: no gap or not reachable)
+ * @param confused_with receives a bit set of the groups the data cannot tell from this one
+ * @return PUMPLOSS_OK; PUMPLOSS_EDATA when no calibration has been made; PUMPLOSS_EDOMAIN for
+ *         an unknown group; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pump *h, int group, double *scale,
+                                                               double *std_error, double *gap_growth,
+                                                               int *confused_with);
+/** Name of a path.
+ *  @param path PUMPLOSS_PATH_*
+ *  @return "piston-bore", "slipper", ... or "unknown" (static storage) */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_path_name(int path);
+/** Name of a calibration group.
+ *  @param group PUMPLOSS_GROUP_*
+ *  @return "piston", "slipper", ... or "unknown" (static storage) */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_group_name(int group);
+/** @} */
 /* pumploss:capi-pump (declarations of this subject go above this line) */
 
 /* ==== capi ==== */

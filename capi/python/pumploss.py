@@ -59,6 +59,14 @@ _SIGNATURES = {
                                   _PD, _PD, _PD], 3),
     "pumploss_standard_bore": ([ctypes.c_int, _PD, ctypes.POINTER(ctypes.c_int)], 0),
     # pumploss:py-signatures-friction
+    "pumploss_pump_efficiency_batch": ([ctypes.c_size_t] + [_PD] * 8 + [ctypes.POINTER(ctypes.c_int)], 0),
+    "pumploss_motor_efficiency_batch": ([ctypes.c_size_t] + [_PD] * 8 + [ctypes.POINTER(ctypes.c_int)], 0),
+    "pumploss_leakage_scale_batch": ([ctypes.c_size_t] + [_PD] * 6 + [ctypes.POINTER(ctypes.c_int)], 0),
+    "pumploss_leakage_fit_power_law": ([ctypes.c_size_t] + [_PD] * 7, 4),
+    "pumploss_leakage_split": ([ctypes.c_size_t] + [_PD] * 6, 3),
+    "pumploss_displacement_slope": ([ctypes.c_size_t] + [_PD] * 4, 2),
+    "pumploss_displacement_intercept": ([ctypes.c_size_t, _D] + [_PD] * 4, 2),
+    "pumploss_displacement_two_step": ([ctypes.c_size_t, ctypes.c_size_t] + [_PD] * 5, 2),
     # pumploss:py-signatures-efficiency
     # pumploss:py-signatures-pump
     # pumploss:py-signatures-capi
@@ -121,7 +129,23 @@ _SCALAR = {
     "pumploss_k_darby": (5, 1),
     "pumploss_equivalent_length": (3, 1),
     # pumploss:py-scalar-friction
+    "pumploss_pump_efficiency": (5, 3),
+    "pumploss_motor_efficiency": (5, 3),
+    "pumploss_pump_powers": (5, 4),
+    "pumploss_motor_powers": (5, 4),
+    "pumploss_flow_at_port": (9, 1),
+    "pumploss_flow_at_port_linear": (7, 1),
+    "pumploss_leakage_scale": (5, 1),
+    "pumploss_leakage_scale_power_law": (7, 1),
+    "pumploss_leakage_normalise": (12, 1),
+    "pumploss_leakage_series": (3, 1),
+    "pumploss_throttle_temperature_rise": (3, 1),
+    "pumploss_throttle_temperature_rise_isenthalpic": (5, 1),
+    "pumploss_heat_load": (2, 1),
+    "pumploss_case_drain_temperature": (5, 1),
+    "pumploss_case_drain_temperature_from_leakage": (6, 1),
     # pumploss:py-scalar-efficiency
+    "pumploss_drain_fraction": (3, 1),
     # pumploss:py-scalar-pump
     # pumploss:py-scalar-capi
 }

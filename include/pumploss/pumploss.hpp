@@ -14,7 +14,13 @@
 #include "friction.hpp"
 #include "line.hpp"
 // pumploss:umbrella-friction
+#include "dual.hpp"
+#include "efficiency.hpp"
+#include "leakage.hpp"
+#include "thermal.hpp"
 // pumploss:umbrella-efficiency
+#include "health.hpp"
+#include "piston_pump.hpp"
 // pumploss:umbrella-pump
 // pumploss:umbrella-includes (new subject headers are added above this line)
 

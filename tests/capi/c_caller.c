@@ -315,7 +315,186 @@ static void test_line(void) {
 }
 /* pumploss:c-caller-friction */
 
+static void test_efficiency(void) {
+  double ev = 0.0, eh = 0.0, et = 0.0, a = 0.0, b = 0.0, c = 0.0, d = 0.0, out = 0.0;
+  double vv[3], nn[3], pp[3], qq[3], tt[3], o1[3], o2[3], o3[3];
+  double gn[9], gp[9], gq[9];
+  double lq[8], ldp[8], lmu[8];
+  int st[3];
+  int i, j;
+  /* methods.md 13 row 19 (self-calculated): eta_v 0.94704, eta_hm 0.94609, eta_t 0.89598 */
+  CHECK(pumploss_pump_efficiency(107e-6, 25.0, 2.5e7, 152.0 / 60000.0, 450.0, &ev, &eh, &et) == PUMPLOSS_OK &&
+        fabs(ev - 0.94704) < 5e-6 && fabs(eh - 0.94609) < 5e-6 && fabs(et - 0.89598) < 5e-6);
+  CHECK(pumploss_pump_efficiency(0.0, 25.0, 2.5e7, 2.5e-3, 450.0, &ev, &eh, &et) == PUMPLOSS_EDOMAIN && is_nan(ev));
+  CHECK(pumploss_pump_efficiency(107e-6, 25.0, 2.5e7, 2.5e-3, 300.0, &ev, &eh, &et) == PUMPLOSS_WIMPLAUSIBLE && eh > 1.0);
+  /* hand: motor 1e-4 m3/rev, 20 rev/s, 200 bar, 2.1e-3 m3/s, 300 N m: eta_hm = 0.3 pi */
+  CHECK(pumploss_motor_efficiency(1e-4, 20.0, 2e7, 2.1e-3, 300.0, &ev, &eh, &et) == PUMPLOSS_OK &&
+        near_rel(eh, 0.3 * 3.14159265358979324, 1e-14) && near_rel(ev, 2.0 / 2.1, 1e-14));
+  CHECK(pumploss_motor_efficiency(1e-4, -20.0, 2e7, 2.1e-3, 300.0, &ev, &eh, &et) == PUMPLOSS_EDOMAIN && is_nan(et));
+  CHECK(pumploss_motor_efficiency(1e-4, 20.0, 2e7, 2.1e-3, 300.0, &ev, NULL, &et) == PUMPLOSS_EMISUSE);
+  for (i = 0; i < 3; ++i) {
+    vv[i] = 1e-4; nn[i] = 25.0; pp[i] = 2e7; qq[i] = 2.4e-3; tt[i] = 350.0;
+  }
+  nn[1] = -1.0;
+  CHECK(pumploss_pump_efficiency_batch(3, vv, nn, pp, qq, tt, o1, o2, o3, st) == PUMPLOSS_WPARTIAL &&
+        st[0] == PUMPLOSS_OK && st[1] == PUMPLOSS_EDOMAIN && is_nan(o1[1]) && fabs(o1[0] - 0.96) < 1e-15);
+  CHECK(pumploss_pump_efficiency_batch(3, vv, NULL, pp, qq, tt, o1, o2, o3, st) == PUMPLOSS_EMISUSE);
+  nn[1] = 25.0;
+  qq[0] = qq[1] = qq[2] = 2.6e-3;
+  CHECK(pumploss_motor_efficiency_batch(3, vv, nn, pp, qq, tt, o1, o2, o3, st) == PUMPLOSS_WIMPLAUSIBLE &&
+        st[2] == PUMPLOSS_WIMPLAUSIBLE && near_rel(o1[0], 2.5 / 2.6, 1e-14));
+  CHECK(pumploss_motor_efficiency_batch(3, vv, nn, pp, qq, tt, o1, o2, o3, NULL) == PUMPLOSS_EMISUSE && is_nan(o1[0]));
+  CHECK(pumploss_pump_powers(1e-4, 25.0, 2e7, 2.4e-3, 350.0, &a, &b, &c, &d) == PUMPLOSS_OK &&
+        near_rel(c, 48000.0, 1e-14) && near_rel(a, 2.5e-3, 1e-15));
+  CHECK(pumploss_pump_powers(1e-4, 25.0, 2e7, 2.4e-3, 0.0, &a, &b, &c, &d) == PUMPLOSS_EDOMAIN && is_nan(d));
+  CHECK(pumploss_motor_powers(1e-4, 20.0, 2e7, 2.1e-3, 300.0, &a, &b, &c, &d) == PUMPLOSS_OK && near_rel(c, 42000.0, 1e-14));
+  CHECK(pumploss_motor_powers(1e-4, 20.0, 2e7, 0.0, 300.0, &a, &b, &c, &d) == PUMPLOSS_EDOMAIN && is_nan(a));
+  /* methods.md 2.3 example (self-calculated): 250 bar, 13 K, K = 1.6 GPa, alpha 6.5e-4: factor 0.975925 */
+  CHECK(pumploss_flow_at_port_linear(1.0, 0.0, 333.15, 2.5e7, 320.15, 6.5e-4, 1.6e9, &out) == PUMPLOSS_OK &&
+        fabs(out - 0.975925) < 1e-14);
+  CHECK(pumploss_flow_at_port_linear(1.0, 0.0, 333.15, 2.5e7, 320.15, 6.5e-4, 0.0, &out) == PUMPLOSS_EDOMAIN && is_nan(out));
+  CHECK(pumploss_flow_at_port(1.0, 0.0, 320.15, 0.0, 320.15, 870.0, 288.15, 6.5e-4, 1.6e9, &out) == PUMPLOSS_OK && out == 1.0);
+  CHECK(pumploss_flow_at_port(1.0, 0.0, 320.15, 2e9, 320.15, 870.0, 288.15, 6.5e-4, 1.6e9, &out) == PUMPLOSS_EDOMAIN);
+  /* laminar law: half the pressure and half the viscosity give the same leakage */
+  CHECK(pumploss_leakage_scale(2e-5, 2.5e7, 0.04, 1.25e7, 0.02, &out) == PUMPLOSS_OK && near_rel(out, 2e-5, 1e-15));
+  CHECK(pumploss_leakage_scale(2e-5, 2.5e7, 0.0, 1.25e7, 0.02, &out) == PUMPLOSS_EDOMAIN && is_nan(out));
+  for (i = 0; i < 3; ++i) {
+    vv[i] = 2e-5; nn[i] = 2.5e7; pp[i] = 0.04; qq[i] = 1.25e7; tt[i] = 0.02;
+  }
+  CHECK(pumploss_leakage_scale_batch(3, vv, nn, pp, qq, tt, o1, st) == PUMPLOSS_OK && near_rel(o1[2], 2e-5, 1e-15));
+  CHECK(pumploss_leakage_scale_batch(3, vv, nn, pp, qq, tt, NULL, st) == PUMPLOSS_EMISUSE);
+  CHECK(pumploss_leakage_scale_power_law(2e-5, 2e7, 0.04, 5e6, 0.01, 0.5, 0.0, &out) == PUMPLOSS_OK && near_rel(out, 1e-5, 1e-15));
+  CHECK(pumploss_leakage_scale_power_law(2e-5, 2e7, 0.04, 5e6, 0.01, -0.5, 0.0, &out) == PUMPLOSS_EDOMAIN);
+  /* same state: normalisation changes nothing */
+  CHECK(pumploss_leakage_normalise(2e-5, 2e7, 323.15, 2e7, 323.15, 313.15, 46e-6, 373.15, 6.8e-6, 6.5e-4, 1.0, 1.0, &out) ==
+        PUMPLOSS_OK && near_rel(out, 2e-5, 1e-14));
+  CHECK(pumploss_leakage_normalise(2e-5, 0.0, 323.15, 2e7, 323.15, 313.15, 46e-6, 373.15, 6.8e-6, 6.5e-4, 1.0, 1.0, &out) ==
+        PUMPLOSS_EDOMAIN && is_nan(out));
+  CHECK(pumploss_leakage_series(1e12, 0.0, 2e7, &out) == PUMPLOSS_OK && near_rel(out, 2e-5, 1e-15));
+  CHECK(pumploss_leakage_series(0.0, 0.0, 2e7, &out) == PUMPLOSS_EDOMAIN);
+  /* methods.md 13 row 18 (self-calculated): 10 bar, 880 kg/m3, 2030 J/(kg K) -> 0.560 K */
+  CHECK(pumploss_throttle_temperature_rise(1e6, 880.0, 2030.0, &out) == PUMPLOSS_OK && fabs(out - 0.560) < 5e-4);
+  CHECK(pumploss_throttle_temperature_rise(1e6, 880.0, -1.0, &out) == PUMPLOSS_EDOMAIN && is_nan(out));
+  CHECK(pumploss_throttle_temperature_rise_isenthalpic(1e6, 880.0, 2030.0, 6.5e-4, 323.15, &out) == PUMPLOSS_OK &&
+        out < 0.45 && out > 0.43);
+  CHECK(pumploss_throttle_temperature_rise_isenthalpic(1e6, 880.0, 2030.0, 6.5e-4, 0.0, &out) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_heat_load(1000.0, 0.9, &out) == PUMPLOSS_OK && fabs(out - 100.0) < 1e-12);
+  CHECK(pumploss_heat_load(1000.0, 1.2, &out) == PUMPLOSS_WIMPLAUSIBLE && out < 0.0);
+  CHECK(pumploss_case_drain_temperature(300.0, 870.0 * 1900.0 * 1e-4, 1e-4, 870.0, 1900.0, &out) == PUMPLOSS_OK &&
+        fabs(out - 301.0) < 1e-12);
+  CHECK(pumploss_case_drain_temperature(300.0, 100.0, 0.0, 870.0, 1900.0, &out) == PUMPLOSS_EDOMAIN && is_nan(out));
+  CHECK(pumploss_case_drain_temperature_from_leakage(300.0, 870.0 * 1900.0, 1e-4, 0.0, 870.0, 1900.0, &out) == PUMPLOSS_OK &&
+        fabs(out - 301.0) < 1e-12);
+  CHECK(pumploss_case_drain_temperature_from_leakage(300.0, -1.0, 1e-4, 0.0, 870.0, 1900.0, &out) == PUMPLOSS_EDOMAIN);
+  /* exact synthetic grid: q = V (1 - 2e-10 dp) n - 3e-12 dp, V = 107 cm3 */
+  for (j = 0; j < 3; ++j) {
+    for (i = 0; i < 3; ++i) {
+      gn[j * 3 + i] = 10.0 + 5.0 * i;
+      gp[j * 3 + i] = 2e6 + 1e7 * j;
+      gq[j * 3 + i] = 107e-6 * (1.0 - 2e-10 * gp[j * 3 + i]) * gn[j * 3 + i] - 3e-12 * gp[j * 3 + i];
+    }
+  }
+  CHECK(pumploss_displacement_two_step(3, 3, gn, gp, gq, &a, &b) == PUMPLOSS_WREGIME && near_rel(a, 107e-6, 1e-12));
+  CHECK(pumploss_displacement_two_step(2, 3, gn, gp, gq, &a, &b) == PUMPLOSS_EDATA && is_nan(a) && is_nan(b));
+  CHECK(pumploss_displacement_slope(3, gn, gq, &a, &b) == PUMPLOSS_OK && near_rel(a, 107e-6 * (1.0 - 4e-4), 1e-12));
+  CHECK(pumploss_displacement_slope(3, NULL, gq, &a, &b) == PUMPLOSS_EMISUSE);
+  for (j = 0; j < 3; ++j) {
+    o1[j] = gp[j * 3];
+    o2[j] = gq[j * 3];
+  }
+  CHECK(pumploss_displacement_intercept(3, 10.0, o1, o2, &a, &b) == PUMPLOSS_OK && near_rel(a, 107e-6, 1e-12));
+  CHECK(pumploss_displacement_intercept(3, 0.0, o1, o2, &a, &b) == PUMPLOSS_EDOMAIN);
+  /* exact power law q = 1e-15 dp^0.9 mu^-0.8 over two pressures x four viscosities */
+  for (i = 0; i < 8; ++i) {
+    ldp[i] = (i < 4) ? 1e7 : 3e7;
+    lmu[i] = 0.01 * (1 + i % 4);
+    lq[i] = 1e-15 * pow(ldp[i], 0.9) * pow(lmu[i], -0.8);
+  }
+  CHECK(pumploss_leakage_fit_power_law(8, lq, ldp, lmu, &a, &b, &c, &d) == PUMPLOSS_OK && fabs(b - 0.9) < 1e-12 &&
+        fabs(c - 0.8) < 1e-12 && near_rel(a, 1e-15, 1e-10));
+  CHECK(pumploss_leakage_fit_power_law(3, lq, ldp, lmu, &a, &b, &c, &d) == PUMPLOSS_EDATA && is_nan(a));
+  for (i = 0; i < 8; ++i) lq[i] = 1e-15 * ldp[i] / lmu[i] + 2e-9 * sqrt(ldp[i]) + 1e-6;
+  CHECK(pumploss_leakage_split(8, lq, ldp, lmu, &a, &b, &c) == PUMPLOSS_OK && near_rel(a, 1e-15, 1e-8) &&
+        near_rel(b, 2e-9, 1e-8) && near_rel(c, 1e-6, 1e-6));
+  CHECK(pumploss_leakage_split(8, lq, NULL, lmu, &a, &b, &c) == PUMPLOSS_EMISUSE && is_nan(a));
+}
+
 /* pumploss:c-caller-efficiency */
+
+static void test_pump_health(void) {
+  pumploss_health *h = NULL;
+  double f = 0.0, fref = 0.0, g = 0.0;
+  int level = 0, reasons = 0;
+  /* 71 cm3/rev at 1500 rpm = 106.5 L/min; 5.325 L/min drain = 5 % (hand calculation) */
+  CHECK(pumploss_drain_fraction(5.325e-3 / 60.0, 71e-6, 25.0, &f) == PUMPLOSS_OK && fabs(f - 0.05) < 1e-15);
+  CHECK(pumploss_drain_fraction(1e-4, 71e-6, 0.0, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
+  CHECK(pumploss_health_create(71e-6, 250e5, 323.15, 313.15, 46e-6, 373.15, 6.8e-6, 870.0, 1900.0, &h) == PUMPLOSS_OK);
+  CHECK(pumploss_health_set_bands(h, 0.05, 0.10, 0.15, 0.25, 0.5, 1.0) == PUMPLOSS_OK);
+  CHECK(pumploss_health_set_exponents(h, 1.0, 1.0) == PUMPLOSS_OK);
+  CHECK(pumploss_health_set_baseline(h, 0.04 * 71e-6 * 25.0) == PUMPLOSS_OK);
+  /* common practice bands: 16 % of displacement flow at the reference state is worn */
+  CHECK(pumploss_health_assess(h, 0.16 * 71e-6 * 25.0, 250e5, 0.0, 323.15, 25.0, 330.0, 318.15,
+                               &level, &reasons, &f, &fref, &g) == PUMPLOSS_OK &&
+        level == PUMPLOSS_HEALTH_WORN && (reasons & PUMPLOSS_REASON_FRACTION_WORN) && fabs(g - 3.0) < 1e-12);
+  CHECK(strcmp(pumploss_health_level_name(level), "worn") == 0);
+  CHECK(strlen(pumploss_health_reason_text(PUMPLOSS_REASON_FRACTION_WORN)) > 10);
+  CHECK(pumploss_health_assess(NULL, 1e-4, 250e5, 0.0, 323.15, 25.0, 330.0, 318.15,
+                               &level, &reasons, &f, &fref, &g) == PUMPLOSS_EMISUSE && is_nan(f) && level == -1);
+  pumploss_health_destroy(h);
+  pumploss_health_destroy(NULL);
+}
+
+static void test_pump_budget(void) {
+  pumploss_pump *h = NULL;
+  double v = 0.0, mis = 0.0, total = 0.0, frac = 0.0, q = 0.0, share = 0.0, dq = 0.0, el = 0.0, gr = 0.0, rms = 0.0;
+  double sc = 0.0, se = 0.0, gg = 0.0, sum = 0.0;
+  double drain[6], outlet[6], case_p[6], speed[6], disp[6], temp[6];
+  int i = 0, confused = 0;
+  const double pi = 3.14159265358979323846;
+  /* invented pump: 9 pistons of 20 mm on a 34 mm pitch radius, 20 degrees: 69.97 cm3/rev (hand) */
+  CHECK(pumploss_pump_create(9, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, &h) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_create(13, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, NULL) == PUMPLOSS_EMISUSE);
+  CHECK(pumploss_pump_set_piston(h, 0.0, 0.5) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_slipper(h, 6e-3, 11e-3, 12e-6, 0.8e-3, 60e-3) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_ball(h, 14e-3, 8e-6, 4e-3) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_valve_plate(h, 36e-3, 39e-3, 45e-3, 48e-3, 150.0 * pi / 180.0, 10e-6) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_controller(h, 0.5e-3 / 60.0, 0.6e-3, 0.611) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_extra(h, 0.0, 0.0) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_valve_plate(h, 36e-3, 39e-3, 38e-3, 48e-3, 2.6, 10e-6) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_pump_budget(h, 250e5, 1e5, 25.0, 1.0, 323.15, &total, &frac) == PUMPLOSS_EMISUSE && is_nan(total));
+  CHECK(pumploss_pump_set_oil(h, 313.15, 46e-6, 373.15, 6.8e-6, 870.0) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_displacement(h, 71e-6, &v, &mis) == PUMPLOSS_OK && fabs(v * 1e6 - 69.97) < 0.01);
+  CHECK(pumploss_pump_budget(h, 250e5, 1e5, 25.0, 1.0, 323.15, &total, &frac) == PUMPLOSS_OK && total > 0.0 &&
+        frac > 0.001 && frac < 0.15);
+  for (i = 0; i < PUMPLOSS_PATH_COUNT; ++i) {
+    CHECK(pumploss_pump_path_flow(h, i, 250e5, 1e5, 25.0, 1.0, 323.15, &q, &share) == PUMPLOSS_OK);
+    sum += q;
+  }
+  CHECK(fabs(sum / total - 1.0) < 1e-14);
+  CHECK(pumploss_pump_path_flow(h, 99, 250e5, 1e5, 25.0, 1.0, 323.15, &q, &share) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_pump_gap_sensitivity(h, PUMPLOSS_GAP_VALVE, 250e5, 1e5, 25.0, 1.0, 323.15, &dq, &el) == PUMPLOSS_OK &&
+        dq > 0.0 && el > 0.0 && el < 3.0);
+  CHECK(pumploss_pump_gap_growth(h, PUMPLOSS_GAP_BORE, total * 1.2, 250e5, 1e5, 25.0, 1.0, 323.15, &gr) == PUMPLOSS_OK &&
+        gr > 0.0);
+  for (i = 0; i < 6; ++i) {
+    outlet[i] = 50e5 + 50e5 * i;
+    case_p[i] = 1e5;
+    speed[i] = 25.0;
+    disp[i] = i % 2 ? 1.0 : 0.5;
+    temp[i] = 313.15 + 5.0 * i;
+    CHECK(pumploss_pump_budget(h, outlet[i], case_p[i], speed[i], disp[i], temp[i], &drain[i], &frac) == PUMPLOSS_OK);
+  }
+  CHECK(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_EDATA);
+  CHECK(pumploss_pump_calibrate(h, 6, drain, outlet, case_p, speed, disp, temp, &rms) == PUMPLOSS_OK ||
+        pumploss_pump_calibrate(h, 6, drain, outlet, case_p, speed, disp, temp, &rms) == PUMPLOSS_WILLCONDITIONED);
+  CHECK(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_OK &&
+        fabs(sc - 1.0) < 1e-6);
+  CHECK(pumploss_pump_calibrate(h, 6, drain, NULL, case_p, speed, disp, temp, &rms) == PUMPLOSS_EMISUSE && is_nan(rms));
+  CHECK(strcmp(pumploss_pump_path_name(PUMPLOSS_PATH_SLIPPER), "slipper") == 0);
+  CHECK(strcmp(pumploss_pump_group_name(PUMPLOSS_GROUP_VALVE_PLATE), "valve-plate") == 0);
+  pumploss_pump_destroy(h);
+  pumploss_pump_destroy(NULL);
+}
 
 /* pumploss:c-caller-pump */
 
@@ -332,7 +511,10 @@ int main(void) {
   test_friction();
   test_line();
   /* pumploss:c-caller-calls-friction */
+  test_efficiency();
   /* pumploss:c-caller-calls-efficiency */
+  test_pump_health();
+  test_pump_budget();
   /* pumploss:c-caller-calls-pump */
   /* pumploss:c-caller-calls-capi */
   printf("%d passed, %d failed\n", checks - failures, failures);

@@ -1,0 +1,86 @@
+// Benchmarks of the efficiency module: one point, the C batch against the same formula in a
+// plain C++ loop (the baseline a user would write), and a Wilson loss-model fit.
+#include <benchmark/benchmark.h>
+
+#include <cstddef>
+#include <random>
+#include <vector>
+
+#include "pumploss.h"
+#include "pumploss/efficiency.hpp"
+
+namespace {
+
+struct points {
+  std::vector<double> v, n, dp, q, t, ev, eh, et;
+  std::vector<int> st;
+  explicit points(std::size_t count) : v(count), n(count), dp(count), q(count), t(count), ev(count), eh(count),
+                                       et(count), st(count) {
+    std::mt19937_64 rng(1);
+    std::uniform_real_distribution<double> u(0.0, 1.0);
+    for (std::size_t i = 0; i < count; ++i) {
+      v[i] = 107e-6;
+      n[i] = 10.0 + 30.0 * u(rng);
+      dp[i] = 2e6 + 3e7 * u(rng);
+      q[i] = v[i] * n[i] * (0.9 + 0.09 * u(rng));
+      t[i] = v[i] * dp[i] / 6.283185307179586 / (0.85 + 0.14 * u(rng));
+    }
+  }
+};
+
+// Payload per point: five inputs and three outputs (the per-element status is extra for the batch).
+constexpr std::int64_t kBytesPerPoint = 8 * sizeof(double);
+
+void BM_PumpEfficiency(benchmark::State& state) {
+  double v = 107e-6, n = 25.0, dp = 2.5e7, q = 2.5333e-3, t = 450.0;
+  for (auto _ : state) {
+    benchmark::DoNotOptimize(n);
+    auto r = pumploss::pump_efficiency(v, n, dp, q, t);
+    benchmark::DoNotOptimize(r);
+  }
+}
+BENCHMARK(BM_PumpEfficiency);
+
+void BM_CapiPumpEfficiency(benchmark::State& state) {
+  double n = 25.0, ev = 0, eh = 0, et = 0;
+  for (auto _ : state) {
+    benchmark::DoNotOptimize(n);
+    benchmark::DoNotOptimize(pumploss_pump_efficiency(107e-6, n, 2.5e7, 2.5333e-3, 450.0, &ev, &eh, &et));
+  }
+}
+BENCHMARK(BM_CapiPumpEfficiency);
+
+void BM_PumpEfficiencyBatchCapi(benchmark::State& state) {
+  const auto count = static_cast<std::size_t>(state.range(0));
+  points p(count);
+  for (auto _ : state) {
+    const int s = pumploss_pump_efficiency_batch(count, p.v.data(), p.n.data(), p.dp.data(), p.q.data(), p.t.data(),
+                                                 p.ev.data(), p.eh.data(), p.et.data(), p.st.data());
+    benchmark::DoNotOptimize(s);
+    benchmark::ClobberMemory();
+  }
+  state.SetBytesProcessed(state.iterations() * state.range(0) * kBytesPerPoint);
+  state.SetItemsProcessed(state.iterations() * state.range(0));
+}
+BENCHMARK(BM_PumpEfficiencyBatchCapi)->Arg(1000000)->Unit(benchmark::kMillisecond);
+
+void BM_PumpEfficiencyInlineLoop(benchmark::State& state) {
+  const auto count = static_cast<std::size_t>(state.range(0));
+  points p(count);
+  const double two_pi = 6.283185307179586;
+  for (auto _ : state) {
+    for (std::size_t i = 0; i < count; ++i) {
+      const double ev = p.q[i] / (p.v[i] * p.n[i]);
+      const double eh = p.v[i] * p.dp[i] / (two_pi * p.t[i]);
+      p.ev[i] = ev;
+      p.eh[i] = eh;
+      p.et[i] = ev * eh;
+    }
+    benchmark::ClobberMemory();
+  }
+  state.SetBytesProcessed(state.iterations() * state.range(0) * kBytesPerPoint);
+  state.SetItemsProcessed(state.iterations() * state.range(0));
+}
+BENCHMARK(BM_PumpEfficiencyInlineLoop)->Arg(1000000)->Unit(benchmark::kMillisecond);
+
+}  // namespace

@@ -1,0 +1,417 @@
+// C API wrappers for health.hpp and piston_pump.hpp.
+#include <cmath>
+#include <new>
+#include <vector>
+
+#include "capi_common.hpp"
+#include "pumploss/health.hpp"
+#include "pumploss/piston_pump.hpp"
+
+using pumploss::capi::call;
+using pumploss::capi::kNaN;
+using pumploss::status;
+
+static_assert(PUMPLOSS_HEALTH_SOUND == static_cast<int>(pumploss::health_level::sound), "level");
+static_assert(PUMPLOSS_HEALTH_ACCEPTABLE == static_cast<int>(pumploss::health_level::acceptable), "level");
+static_assert(PUMPLOSS_HEALTH_ELEVATED == static_cast<int>(pumploss::health_level::elevated), "level");
+static_assert(PUMPLOSS_HEALTH_WORN == static_cast<int>(pumploss::health_level::worn), "level");
+static_assert(PUMPLOSS_REASON_FRACTION_SOUND == pumploss::reason_fraction_sound, "reason");
+static_assert(PUMPLOSS_REASON_FRACTION_ACCEPTABLE == pumploss::reason_fraction_acceptable, "reason");
+static_assert(PUMPLOSS_REASON_FRACTION_ELEVATED == pumploss::reason_fraction_elevated, "reason");
+static_assert(PUMPLOSS_REASON_FRACTION_WORN == pumploss::reason_fraction_worn, "reason");
+static_assert(PUMPLOSS_REASON_GROWTH_MODERATE == pumploss::reason_growth_moderate, "reason");
+static_assert(PUMPLOSS_REASON_GROWTH_LARGE == pumploss::reason_growth_large, "reason");
+static_assert(PUMPLOSS_REASON_DRAIN_HOT == pumploss::reason_drain_hot, "reason");
+static_assert(PUMPLOSS_REASON_LOW_PRESSURE == pumploss::reason_low_pressure_reading, "reason");
+static_assert(PUMPLOSS_REASON_NO_BASELINE == pumploss::reason_no_baseline, "reason");
+static_assert(PUMPLOSS_REASON_NO_TEMPERATURES == pumploss::reason_no_temperatures, "reason");
+
+static_assert(PUMPLOSS_PATH_COUNT == pumploss::leakage_path_count, "paths");
+static_assert(PUMPLOSS_PATH_BLEED == static_cast<int>(pumploss::leakage_path::bleed), "paths");
+static_assert(PUMPLOSS_PATH_EXTRA_ORIFICE == static_cast<int>(pumploss::leakage_path::extra_orifice), "paths");
+static_assert(PUMPLOSS_GAP_COUNT == pumploss::pump_gap_count, "gaps");
+static_assert(PUMPLOSS_GAP_VALVE == static_cast<int>(pumploss::pump_gap::valve), "gaps");
+static_assert(PUMPLOSS_GROUP_COUNT == pumploss::path_group_count, "groups");
+static_assert(PUMPLOSS_GROUP_EXTRA == static_cast<int>(pumploss::path_group::extra), "groups");
+
+struct pumploss_pump {
+  pumploss::piston_pump<double> pump;
+  pumploss::oil<double> oil;
+  bool has_oil = false;
+  pumploss::pump_calibration calibration{};
+  bool calibrated = false;
+};
+
+struct pumploss_health {
+  pumploss::health_reference<double> ref;
+  pumploss::health_bands<double> bands;
+};
+
+extern "C" {
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_drain_fraction(double drain_flow_m3_s, double max_displacement_m3_rev,
+                                                       double speed_rev_s, double* fraction) {
+  return call({fraction}, [&] {
+    const auto r = pumploss::drain_fraction(drain_flow_m3_s, max_displacement_m3_rev, speed_rev_s);
+    *fraction = r.value;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_create(double max_displacement_m3_rev, double reference_dp_pa,
+                                                      double reference_t_k, double t1_k, double nu1_m2_s,
+                                                      double t2_k, double nu2_m2_s, double rho_kg_m3,
+                                                      double cp_j_kg_k, pumploss_health** out) {
+  if (out == nullptr) return PUMPLOSS_EMISUSE;
+  *out = nullptr;
+  pumploss::capi::fp_guard guard;
+  if (!pumploss::detail::all_finite(max_displacement_m3_rev, reference_dp_pa, reference_t_k, rho_kg_m3, cp_j_kg_k))
+    return PUMPLOSS_ENONFINITE;
+  if (!(max_displacement_m3_rev > 0) || !(reference_dp_pa > 0) || !(reference_t_k > 0) || !(rho_kg_m3 > 0) ||
+      !(cp_j_kg_k > 0))
+    return PUMPLOSS_EDOMAIN;
+  const auto line = pumploss::d341_fit(t1_k, nu1_m2_s, t2_k, nu2_m2_s);
+  if (pumploss::is_error(line.st)) return static_cast<int>(line.st);
+  if (pumploss::is_error(pumploss::d341_viscosity(line.value, reference_t_k).st)) return PUMPLOSS_EDOMAIN;
+  auto* h = new (std::nothrow) pumploss_health{};
+  if (h == nullptr) return PUMPLOSS_ENOMEM;
+  h->ref.max_displacement_m3_rev = max_displacement_m3_rev;
+  h->ref.reference_dp_pa = reference_dp_pa;
+  h->ref.reference_t_k = reference_t_k;
+  h->ref.viscosity = line.value;
+  h->ref.rho_kg_m3 = rho_kg_m3;
+  h->ref.cp_j_kg_k = cp_j_kg_k;
+  *out = h;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_health_destroy(pumploss_health* h) { delete h; }
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_bands(pumploss_health* h, double sound_max, double acceptable_max,
+                                                         double worn_min, double growth_moderate,
+                                                         double growth_large, double hot_margin) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  if (!pumploss::detail::all_finite(sound_max, acceptable_max, worn_min, growth_moderate, growth_large, hot_margin))
+    return PUMPLOSS_ENONFINITE;
+  if (!(sound_max > 0) || !(acceptable_max >= sound_max) || !(worn_min >= acceptable_max) ||
+      !(growth_moderate > 0) || !(growth_large >= growth_moderate) || !(hot_margin > 0))
+    return PUMPLOSS_EDOMAIN;
+  h->bands = {sound_max, acceptable_max, worn_min, growth_moderate, growth_large, hot_margin};
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_baseline(pumploss_health* h, double baseline_m3_s) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  if (!pumploss::detail::finite(baseline_m3_s)) return PUMPLOSS_ENONFINITE;
+  if (!(baseline_m3_s > 0)) return PUMPLOSS_EDOMAIN;
+  h->ref.baseline_m3_s = baseline_m3_s;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_exponents(pumploss_health* h, double pressure_exponent,
+                                                             double viscosity_exponent) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  if (!pumploss::detail::all_finite(pressure_exponent, viscosity_exponent)) return PUMPLOSS_ENONFINITE;
+  if (!(pressure_exponent >= 0) || !(viscosity_exponent >= 0)) return PUMPLOSS_EDOMAIN;
+  h->ref.pressure_exponent = pressure_exponent;
+  h->ref.viscosity_exponent = viscosity_exponent;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess(const pumploss_health* h, double drain_flow_m3_s,
+                                                      double outlet_pa, double case_pa, double oil_t_k,
+                                                      double speed_rev_s, double drain_t_k, double inlet_t_k,
+                                                      int* level, int* reasons, double* fraction,
+                                                      double* fraction_at_reference, double* growth) {
+  if (level != nullptr) *level = -1;
+  if (reasons != nullptr) *reasons = 0;
+  const int st = call({fraction, fraction_at_reference, growth}, [&] {
+    if (h == nullptr || level == nullptr || reasons == nullptr) return status::misuse;
+    // NaN means "not measured" for the two temperatures; infinity is an error.
+    if (std::isinf(drain_t_k) || std::isinf(inlet_t_k)) return status::nonfinite;
+    pumploss::health_reading<double> r{drain_flow_m3_s, outlet_pa, case_pa, oil_t_k, speed_rev_s, drain_t_k, inlet_t_k};
+    const auto a = pumploss::assess_health(h->ref, h->bands, r);
+    if (pumploss::is_error(a.st)) return a.st;
+    *level = static_cast<int>(a.level);
+    *reasons = static_cast<int>(a.reasons);
+    *fraction = a.fraction;
+    *fraction_at_reference = a.fraction_at_reference;
+    *growth = a.growth;
+    return a.st;
+  });
+  if (st > 0 && st < 100) {
+    if (level != nullptr) *level = -1;
+    if (reasons != nullptr) *reasons = 0;
+  }
+  return st;
+}
+
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_health_reason_text(int reason) {
+  return pumploss::health_reason_text(static_cast<unsigned>(reason));
+}
+
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_health_level_name(int level) {
+  return pumploss::health_level_name(static_cast<pumploss::health_level>(level));
+}
+
+
+}  // extern "C"
+
+namespace {
+// Apply a change to a copy of the description and keep it only when it validates.
+template <class F>
+int update_pump(pumploss_pump* h, F&& change) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  pumploss::capi::fp_guard guard;
+  pumploss::piston_pump<double> p = h->pump;
+  change(p);
+  const auto check = pumploss::validate_piston_pump(p);
+  if (pumploss::is_error(check.st)) return static_cast<int>(check.st);
+  h->pump = p;
+  h->calibrated = false;
+  return PUMPLOSS_OK;
+}
+// Finite-input check shared by the setters (NaN/inf is reported as such, not as a domain error).
+template <class... Ts>
+bool finite_inputs(Ts... xs) {
+  return pumploss::detail::all_finite(xs...);
+}
+status operating_checks(const pumploss_pump* h) {
+  if (h == nullptr || !h->has_oil) return status::misuse;
+  return status::ok;
+}
+}  // namespace
+
+extern "C" {
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_create(int pistons, double piston_diameter_m, double bore_clearance_m,
+                                                    double engaged_length_min_m, double pitch_radius_m,
+                                                    double max_swash_angle_rad, pumploss_pump** out) {
+  if (out == nullptr) return PUMPLOSS_EMISUSE;
+  *out = nullptr;
+  pumploss::capi::fp_guard guard;
+  pumploss::piston_pump<double> p;
+  p.pistons = pistons;
+  p.piston_diameter_m = piston_diameter_m;
+  p.bore_clearance_m = bore_clearance_m;
+  p.engaged_length_min_m = engaged_length_min_m;
+  p.pitch_radius_m = pitch_radius_m;
+  p.max_swash_angle_rad = max_swash_angle_rad;
+  const auto check = pumploss::validate_piston_pump(p);
+  if (pumploss::is_error(check.st)) return static_cast<int>(check.st);
+  auto* h = new (std::nothrow) pumploss_pump{};
+  if (h == nullptr) return PUMPLOSS_ENOMEM;
+  h->pump = p;
+  *out = h;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_pump_destroy(pumploss_pump* h) { delete h; }
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_piston(pumploss_pump* h, double eccentricity_ratio,
+                                                        double high_pressure_share) {
+  if (h != nullptr && !finite_inputs(eccentricity_ratio, high_pressure_share)) return PUMPLOSS_ENONFINITE;
+  return update_pump(h, [&](pumploss::piston_pump<double>& p) {
+    p.piston_eccentricity = eccentricity_ratio;
+    p.high_pressure_share = high_pressure_share;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_slipper(pumploss_pump* h, double pocket_radius_m,
+                                                         double outer_radius_m, double gap_m, double feed_diameter_m,
+                                                         double feed_length_m) {
+  if (h != nullptr && !finite_inputs(pocket_radius_m, outer_radius_m, gap_m, feed_diameter_m, feed_length_m))
+    return PUMPLOSS_ENONFINITE;
+  return update_pump(h, [&](pumploss::piston_pump<double>& p) {
+    p.slipper_pocket_radius_m = pocket_radius_m;
+    p.slipper_outer_radius_m = outer_radius_m;
+    p.slipper_gap_m = gap_m;
+    p.slipper_feed_diameter_m = feed_diameter_m;
+    p.slipper_feed_length_m = feed_length_m;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_ball(pumploss_pump* h, double ball_diameter_m, double clearance_m,
+                                                      double length_m) {
+  if (h != nullptr && !finite_inputs(ball_diameter_m, clearance_m, length_m)) return PUMPLOSS_ENONFINITE;
+  return update_pump(h, [&](pumploss::piston_pump<double>& p) {
+    p.ball_diameter_m = ball_diameter_m;
+    p.ball_clearance_m = clearance_m;
+    p.ball_length_m = length_m;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_valve_plate(pumploss_pump* h, double inner_land_inner_radius_m,
+                                                             double inner_land_outer_radius_m,
+                                                             double outer_land_inner_radius_m,
+                                                             double outer_land_outer_radius_m, double kidney_arc_rad,
+                                                             double gap_m) {
+  if (h != nullptr && !finite_inputs(inner_land_inner_radius_m, inner_land_outer_radius_m, outer_land_inner_radius_m,
+                                     outer_land_outer_radius_m, kidney_arc_rad, gap_m))
+    return PUMPLOSS_ENONFINITE;
+  return update_pump(h, [&](pumploss::piston_pump<double>& p) {
+    p.valve_inner_land_inner_radius_m = inner_land_inner_radius_m;
+    p.valve_inner_land_outer_radius_m = inner_land_outer_radius_m;
+    p.valve_outer_land_inner_radius_m = outer_land_inner_radius_m;
+    p.valve_outer_land_outer_radius_m = outer_land_outer_radius_m;
+    p.valve_kidney_arc_rad = kidney_arc_rad;
+    p.valve_gap_m = gap_m;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_controller(pumploss_pump* h, double consumption_m3_s,
+                                                            double bleed_diameter_m, double bleed_cd) {
+  if (h != nullptr && !finite_inputs(consumption_m3_s, bleed_diameter_m, bleed_cd)) return PUMPLOSS_ENONFINITE;
+  return update_pump(h, [&](pumploss::piston_pump<double>& p) {
+    p.controller_flow_m3_s = consumption_m3_s;
+    p.bleed_orifice_diameter_m = bleed_diameter_m;
+    p.bleed_cd = bleed_cd;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_extra(pumploss_pump* h, double conductance_m3, double orifice_cda_m2) {
+  if (h != nullptr && !finite_inputs(conductance_m3, orifice_cda_m2)) return PUMPLOSS_ENONFINITE;
+  return update_pump(h, [&](pumploss::piston_pump<double>& p) {
+    p.extra_conductance_m3 = conductance_m3;
+    p.extra_orifice_cda_m2 = orifice_cda_m2;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_oil(pumploss_pump* h, double t1_k, double nu1_m2_s, double t2_k,
+                                                     double nu2_m2_s, double rho15_kg_m3) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  pumploss::capi::fp_guard guard;
+  const auto line = pumploss::d341_fit(t1_k, nu1_m2_s, t2_k, nu2_m2_s);
+  if (pumploss::is_error(line.st)) return static_cast<int>(line.st);
+  if (!pumploss::detail::finite(rho15_kg_m3)) return PUMPLOSS_ENONFINITE;
+  if (!(rho15_kg_m3 > 0)) return PUMPLOSS_EDOMAIN;
+  h->oil = pumploss::typical_mineral_oil(line.value);
+  h->oil.rho_ref_kg_m3 = rho15_kg_m3;
+  h->has_oil = true;
+  h->calibrated = false;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_displacement(const pumploss_pump* h, double stated_m3_rev,
+                                                          double* displacement_m3_rev, double* mismatch) {
+  return call({displacement_m3_rev, mismatch}, [&] {
+    if (h == nullptr) return status::misuse;
+    if (!pumploss::detail::finite(stated_m3_rev)) return status::nonfinite;
+    if (stated_m3_rev < 0) return status::domain;
+    auto p = h->pump;
+    p.stated_displacement_m3_rev = stated_m3_rev > 0 ? stated_m3_rev : pumploss::capi::kNaN;
+    const auto c = pumploss::validate_piston_pump(p);
+    *displacement_m3_rev = c.displacement_m3_rev;
+    *mismatch = stated_m3_rev > 0 ? c.displacement_mismatch : 0.0;
+    return c.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget(const pumploss_pump* h, double outlet_pa, double case_pa,
+                                                    double speed_rev_s, double displacement_fraction, double t_k,
+                                                    double* total_m3_s, double* drain_fraction) {
+  return call({total_m3_s, drain_fraction}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s)) return s;
+    const auto b = pumploss::piston_pump_budget(h->pump, h->oil, {outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k});
+    *total_m3_s = b.total_m3_s;
+    *drain_fraction = b.drain_fraction;
+    return b.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_path_flow(const pumploss_pump* h, int path, double outlet_pa,
+                                                       double case_pa, double speed_rev_s,
+                                                       double displacement_fraction, double t_k, double* q_m3_s,
+                                                       double* share) {
+  return call({q_m3_s, share}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s)) return s;
+    if (path < 0 || path >= pumploss::leakage_path_count) return status::domain;
+    const auto b = pumploss::piston_pump_budget(h->pump, h->oil, {outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k});
+    *q_m3_s = b.flow_m3_s[path];
+    *share = b.share[path];
+    if (!is_error(b.st) && b.total_m3_s == 0.0) *share = 0.0;  // no flow at all: no share
+    return b.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_sensitivity(const pumploss_pump* h, int gap, double outlet_pa,
+                                                             double case_pa, double speed_rev_s,
+                                                             double displacement_fraction, double t_k,
+                                                             double* d_total_d_gap_m2_s, double* elasticity) {
+  return call({d_total_d_gap_m2_s, elasticity}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s)) return s;
+    if (gap < 0 || gap >= pumploss::pump_gap_count) return status::domain;
+    const auto r = pumploss::piston_pump_sensitivity(h->pump, h->oil,
+                                                     {outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k});
+    *d_total_d_gap_m2_s = r.d_total_d_gap[gap];
+    *elasticity = r.elasticity[gap];
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_growth(const pumploss_pump* h, int gap, double measured_drain_m3_s,
+                                                        double outlet_pa, double case_pa, double speed_rev_s,
+                                                        double displacement_fraction, double t_k, double* growth) {
+  return call({growth}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s)) return s;
+    if (gap < 0 || gap >= pumploss::pump_gap_count) return status::domain;
+    const auto r = pumploss::gap_growth_for_drain(h->pump, h->oil,
+                                                  {outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k},
+                                                  static_cast<pumploss::pump_gap>(gap), measured_drain_m3_s);
+    *growth = r.value;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump* h, size_t n, const double* drain_m3_s,
+                                                       const double* outlet_pa, const double* case_pa,
+                                                       const double* speed_rev_s, const double* displacement_fraction,
+                                                       const double* t_k, double* rms_residual_m3_s) {
+  return call({rms_residual_m3_s}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s)) return s;
+    if (n > 0 && (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
+                  displacement_fraction == nullptr || t_k == nullptr))
+      return status::misuse;
+    std::vector<pumploss::drain_measurement> m(n);
+    for (size_t i = 0; i < n; ++i)
+      m[i] = {drain_m3_s[i], outlet_pa[i], case_pa[i], speed_rev_s[i], displacement_fraction[i], t_k[i]};
+    h->calibrated = false;
+    const auto c = pumploss::calibrate_piston_pump(h->pump, h->oil, m.data(), n);
+    if (is_error(c.st)) return c.st;
+    h->calibration = c;
+    h->calibrated = true;
+    *rms_residual_m3_s = c.rms_residual_m3_s;
+    return c.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pump* h, int group, double* scale,
+                                                               double* std_error, double* gap_growth,
+                                                               int* confused_with) {
+  if (confused_with != nullptr) *confused_with = 0;
+  return call({scale, std_error, gap_growth}, [&] {
+    if (h == nullptr || confused_with == nullptr) return status::misuse;
+    if (group < 0 || group >= pumploss::path_group_count) return status::domain;
+    if (!h->calibrated) return status::insufficient_data;
+    *scale = h->calibration.scale[group];
+    *std_error = h->calibration.std_error[group];
+    *gap_growth = h->calibration.gap_growth[group];
+    *confused_with = static_cast<int>(h->calibration.confused_with[group]);
+    return status::ok;
+  });
+}
+
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_pump_path_name(int path) {
+  return pumploss::leakage_path_name(static_cast<pumploss::leakage_path>(path));
+}
+
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_pump_group_name(int group) {
+  return pumploss::path_group_name(static_cast<pumploss::path_group>(group));
+}
+
+}  // extern "C"
