@@ -115,6 +115,9 @@ TEST(FluidD341, BadInput) {
   EXPECT_EQ(pumploss::viscosity_d341(313.15, 46e-6, 313.15, 6.8e-6, 300.0).st, status::domain);
   EXPECT_EQ(pumploss::viscosity_d341(313.15, 6.8e-6, 373.15, 46e-6, 300.0).st, status::domain);
   EXPECT_EQ(pumploss::viscosity_d341(313.15, 0.1e-6, 373.15, 0.05e-6, 300.0).st, status::domain);
+  // viscosities too large for Z: an overflow, never an infinite coefficient
+  EXPECT_EQ(pumploss::d341_fit(313.15, 46e-6, 373.15, std::numeric_limits<double>::max()).st, status::overflow);
+  EXPECT_EQ(pumploss::d341_fit(313.15, std::numeric_limits<double>::max(), 373.15, 6.8e-6).st, status::overflow);
   // extreme cold overflows Z rather than returning garbage
   EXPECT_EQ(pumploss::viscosity_d341(313.15, 1500e-6, 373.15, 20e-6, 1.0).st, status::overflow);
 }
@@ -203,6 +206,9 @@ TEST(FluidDensity, HandValuesAndOracle) {
   EXPECT_EQ(pumploss::oil_density(870.0, 288.15, -1.0, 1.4e9, 288.15, 0.0).st, status::domain);
   EXPECT_EQ(pumploss::oil_density(870.0, 288.15, 6.5e-4, kNaN, 288.15, 0.0).st, status::nonfinite);
   EXPECT_EQ(pumploss::oil_density(870.0, 288.15, 0.01, 1.4e9, 400.0, 0.0).st, status::domain);
+  // extreme but finite inputs must not give an infinite density with a usable status
+  const double big = std::numeric_limits<double>::max();
+  EXPECT_EQ(pumploss::oil_density(big, 288.15, 6.5e-4, 1.4e9, 288.15, 1e9).st, status::overflow);
 }
 
 TEST(FluidViscosity, DynamicKinematicAndBarus) {

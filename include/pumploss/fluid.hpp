@@ -114,6 +114,7 @@ inline result<d341_line<T>> d341_fit(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
   const T mm2 = detail::constant<T>(1e6L, "1000000");
   const T z1 = d341_z(nu1_m2_s * mm2);
   const T z2 = d341_z(nu2_m2_s * mm2);
+  if (!detail::all_finite(z1, z2)) return {{nan, nan}, status::overflow};
   if (!(z1 > T(1)) || !(z2 > T(1))) return {{nan, nan}, status::domain};
   const T l1 = detail::log10_log10(z1);
   const T l2 = detail::log10_log10(z2);
@@ -121,7 +122,9 @@ inline result<d341_line<T>> d341_fit(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
   const T lt2 = log(t2_k) / detail::ln10<T>();
   const T b = (l1 - l2) / (lt2 - lt1);
   if (!(b > T(0))) return {{nan, nan}, status::domain};
-  return {{l1 + b * lt1, b}, status::ok};
+  const T a = l1 + b * lt1;
+  if (!detail::all_finite(a, b)) return {{nan, nan}, status::overflow};
+  return {{a, b}, status::ok};
 }
 
 /// Kinematic viscosity at temperature t from a D341 line.
@@ -338,6 +341,7 @@ inline result<T> kinematic_viscosity(T mu_pa_s, T rho_kg_m3) {
 /// @param t_k temperature, K, > 0
 /// @param p_pa gauge pressure, Pa, in (-K, K)
 /// @return rho in kg/m^3; status::domain if p >= K or the thermal factor is not positive;
+///         status::overflow when the result is not representable;
 ///         status::regime when the linearised thermal expansion is stretched beyond 150 K from
 ///         the reference (a limit of our own choosing, no source).
 /// @par Source
@@ -355,6 +359,7 @@ inline result<T> oil_density(T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_m
   const T thermal = T(1) - alpha_per_k * (t_k - t_ref_k);
   if (!(thermal > T(0))) return detail::fail<T>(status::domain);
   const T rho = rho_ref_kg_m3 * thermal / (T(1) - p_pa / bulk_modulus_pa);
+  if (!detail::finite(rho) || !(rho > T(0))) return detail::fail<T>(status::overflow);
   if (fabs(t_k - t_ref_k) > T(150)) return {rho, status::regime};
   return {rho, status::ok};
 }
