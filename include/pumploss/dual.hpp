@@ -163,6 +163,16 @@ inline dual<T, N> sqrt(const dual<T, N>& a) {
   for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * k;
   return r;
 }
+/// Cube root. @param a operand @return cbrt(a) with derivative d/(3 cbrt(a)^2)
+template <class T, std::size_t N>
+inline dual<T, N> cbrt(const dual<T, N>& a) {
+  using std::cbrt;
+  dual<T, N> r;
+  r.val = cbrt(a.val);
+  const T k = T(1) / (3 * r.val * r.val);
+  for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * k;
+  return r;
+}
 /// Exponential. @param a operand @return exp(a)
 template <class T, std::size_t N>
 inline dual<T, N> exp(const dual<T, N>& a) {

@@ -14,6 +14,8 @@
 #include "efficiency.hpp"
 #include "leakage.hpp"
 #include "thermal.hpp"
+#include "loss_model.hpp"
+#include "uncertainty.hpp"
 // pumploss:umbrella-efficiency
 // pumploss:umbrella-pump
 // pumploss:umbrella-includes (new subject headers are added above this line)
