@@ -75,6 +75,7 @@ struct dual {
 
 /// @name Arithmetic on dual numbers (value and derivatives by the chain rule)
 /// @{
+
 /// Unary plus. @param a operand @return a
 template <class T, std::size_t N>
 inline dual<T, N> operator+(const dual<T, N>& a) { return a; }
@@ -131,6 +132,7 @@ inline dual<T, N> operator/(U a, const dual<T, N>& b) { return dual<T, N>(a) / b
 
 /// @name Comparisons (on the value only)
 /// @{
+
 /// @param a left @param b right @return a.val < b.val
 template <class T, std::size_t N>
 inline bool operator<(const dual<T, N>& a, const dual<T, N>& b) { return a.val < b.val; }
@@ -153,6 +155,7 @@ inline bool operator!=(const dual<T, N>& a, const dual<T, N>& b) { return a.val 
 
 /// @name Math functions for dual numbers (found by argument-dependent lookup)
 /// @{
+
 /// Square root. @param a operand @return sqrt(a) with derivative d/(2 sqrt(a))
 template <class T, std::size_t N>
 inline dual<T, N> sqrt(const dual<T, N>& a) {

@@ -235,6 +235,7 @@ inline result<T> shaft_power(T speed_rev_s, T torque_n_m) {
 /// @name Correcting a flow reading to port conditions
 /// @{
 
+
 /// Flow at the port from a meter reading at another pressure and temperature, by the exact
 /// density ratio (same mass flow):
 /// \f[ q_{V2} = q_{Ve}\,\frac{\rho(p_e, \theta_e)}{\rho(p_2, \theta_2)} \f]
@@ -305,6 +306,7 @@ inline result<T> flow_at_port_linear(T q_meter_m3_s, T p_meter_pa, T t_meter_k, 
 
 /// @name Derived displacement V_i from test data (methods.md section 3)
 /// @{
+
 
 /// The estimator that produced a derived displacement.
 enum class displacement_estimator : int {

@@ -49,9 +49,12 @@ struct loss_model {
   T rms_torque_n_m;             ///< RMS torque residual, N m
   T cond_flow;                  ///< condition number of the column-scaled flow design matrix
   T cond_torque;                ///< condition number of the column-scaled torque design matrix
-  T dp_min, dp_max;             ///< pressure range of the data, Pa
-  T n_min, n_max;               ///< speed range of the data, rev/s
-  T mu_min, mu_max;             ///< viscosity range of the data, Pa s
+  T dp_min;                     ///< lowest pressure of the data, Pa
+  T dp_max;                     ///< highest pressure of the data, Pa
+  T n_min;                      ///< lowest speed of the data, rev/s
+  T n_max;                      ///< highest speed of the data, rev/s
+  T mu_min;                     ///< lowest viscosity of the data, Pa s
+  T mu_max;                     ///< highest viscosity of the data, Pa s
   std::size_t points;           ///< number of test points
   status st;                    ///< ok, ill_conditioned (report), or an error
 };
