@@ -1,5 +1,7 @@
 // Benchmarks of the efficiency module: one point, the C batch against the same formula in a
 // plain C++ loop (the baseline a user would write), and a Wilson loss-model fit.
+// Measured (Release, 2-core shared machine): batch about 0.5 of the inline loop; the formula alone
+// inside capi::call_batch reaches about 0.9, the rest is the per-point validation and status path.
 #include <benchmark/benchmark.h>
 
 #include <cstddef>
