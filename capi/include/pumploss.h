@@ -1473,6 +1473,219 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_displacement_two_step(size_t levels, siz
                                                               const double *flow_m3_s, double *v_m3_rev,
                                                               double *u_v_m3_rev);
 /** @} */
+/** @name Fitted loss models (opaque handle)
+ *  A pumploss_model holds a Wilson or Schloesser loss model fitted to test points, its
+ *  diagnostics and its per-point residuals. Create with pumploss_model_create(), release with
+ *  pumploss_model_destroy(). Reading a handle from several threads is safe; there is no global
+ *  state. @{ */
+/** Opaque fitted loss model. */
+typedef struct pumploss_model pumploss_model;
+/** Machine kind for pumploss_model_create(): a pump. */
+#define PUMPLOSS_PUMP 0
+/** Machine kind for pumploss_model_create(): a motor. */
+#define PUMPLOSS_MOTOR 1
+/** Model kind: Wilson (slip, viscous, Coulomb, constant torque). */
+#define PUMPLOSS_MODEL_WILSON 0
+/** Model kind: Wilson plus turbulent slip (sqrt(dp)) and hydrodynamic torque (speed^2). */
+#define PUMPLOSS_MODEL_SCHLOESSER 1
+/**
+ * Fit a loss model to test points (linear least squares, Householder QR with column scaling).
+ * @param machine_kind PUMPLOSS_PUMP or PUMPLOSS_MOTOR
+ * @param model_kind PUMPLOSS_MODEL_WILSON or PUMPLOSS_MODEL_SCHLOESSER
+ * @param displacement_m3_rev derived displacement V_i, m^3/rev (> 0)
+ * @param rho_kg_m3 oil density for the Schloesser terms, kg/m^3 (> 0)
+ * @param count number of points (more than 3 Wilson, 4 Schloesser)
+ * @param dp_pa array of pressure differences, Pa (> 0)
+ * @param speed_rev_s array of speeds, rev/s (> 0)
+ * @param mu_pa_s array of dynamic viscosities at the gaps, Pa s (> 0)
+ * @param flow_m3_s array of flows (pump outlet, motor inlet), m^3/s (>= 0)
+ * @param torque_n_m array of torques (pump input, motor output), N m (>= 0)
+ * @param model receives the handle. It is set (non-NULL) whenever memory allows, also when the
+ *        fit failed: pumploss_model_last_message() then says why and the getters return the
+ *        fit's error. NULL on PUMPLOSS_ENOMEM or PUMPLOSS_EMISUSE.
+ * @return PUMPLOSS_OK; PUMPLOSS_WILLCONDITIONED (coefficients uncertain); PUMPLOSS_EDATA;
+ *         PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE (NULL array or bad kind);
+ *         PUMPLOSS_ENOMEM. @sa pumploss::fit_loss_model
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model_kind, double displacement_m3_rev,
+                                                     double rho_kg_m3, size_t count, const double *dp_pa,
+                                                     const double *speed_rev_s, const double *mu_pa_s,
+                                                     const double *flow_m3_s, const double *torque_n_m,
+                                                     pumploss_model **model);
+/**
+ * Release a model. NULL is a no-op.
+ * @param model the handle (or NULL)
+ */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_model_destroy(pumploss_model *model);
+/**
+ * A sentence on the fit: kind, points, R^2, RMS residuals, condition numbers, or why it failed.
+ * @param model the handle (NULL gives a sentence saying so)
+ * @return a string owned by the handle, valid until pumploss_model_destroy(); never NULL.
+ */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_model_last_message(const pumploss_model *model);
+/**
+ * Fitted coefficients (terms absent from the model are 0).
+ * @param model the handle
+ * @param c_s receives the laminar slip coefficient
+ * @param c_st receives the turbulent slip coefficient
+ * @param c_v receives the viscous drag coefficient
+ * @param c_f receives the Coulomb friction coefficient
+ * @param t_c_n_m receives the constant torque loss, N m
+ * @param c_h receives the hydrodynamic torque coefficient
+ * @return the fit's status (PUMPLOSS_OK, PUMPLOSS_WILLCONDITIONED or its error);
+ *         PUMPLOSS_EMISUSE for NULL.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_coefficients(const pumploss_model *model, double *c_s, double *c_st,
+                                                           double *c_v, double *c_f, double *t_c_n_m,
+                                                           double *c_h);
+/**
+ * Standard errors of the fitted coefficients (0 for absent terms).
+ * @param model the handle
+ * @param u_c_s receives u(C_s)
+ * @param u_c_st receives u(C_st)
+ * @param u_c_v receives u(C_v)
+ * @param u_c_f receives u(C_f)
+ * @param u_t_c_n_m receives u(T_c), N m
+ * @param u_c_h receives u(C_h)
+ * @return as pumploss_model_coefficients().
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_standard_errors(const pumploss_model *model, double *u_c_s,
+                                                              double *u_c_st, double *u_c_v, double *u_c_f,
+                                                              double *u_t_c_n_m, double *u_c_h);
+/**
+ * Fit diagnostics.
+ * @param model the handle
+ * @param r2_flow receives R^2 of the flow-loss regression
+ * @param r2_torque receives R^2 of the torque-loss regression
+ * @param rms_flow_m3_s receives the RMS flow residual, m^3/s
+ * @param rms_torque_n_m receives the RMS torque residual, N m
+ * @param cond_flow receives the condition number of the column-scaled flow design matrix
+ * @param cond_torque receives the condition number of the column-scaled torque design matrix
+ * @return as pumploss_model_coefficients().
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_diagnostics(const pumploss_model *model, double *r2_flow,
+                                                          double *r2_torque, double *rms_flow_m3_s,
+                                                          double *rms_torque_n_m, double *cond_flow,
+                                                          double *cond_torque);
+/**
+ * Residuals per point (measured minus fitted), in the order the points were given.
+ * @param model the handle
+ * @param count length of the two arrays (at least the number of points)
+ * @param flow_residual_m3_s array of count, receives the flow residuals, m^3/s
+ * @param torque_residual_n_m array of count, receives the torque residuals, N m
+ * @return as pumploss_model_coefficients(); PUMPLOSS_EBUFFER when count is too small.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_residuals(const pumploss_model *model, size_t count,
+                                                        double *flow_residual_m3_s, double *torque_residual_n_m);
+/**
+ * Flow, torque and efficiencies predicted at one operating point.
+ * @param model the handle
+ * @param dp_pa pressure difference, Pa (> 0)
+ * @param speed_rev_s speed, rev/s (> 0)
+ * @param mu_pa_s dynamic viscosity at the gaps, Pa s (> 0)
+ * @param flow_m3_s receives the flow, m^3/s
+ * @param torque_n_m receives the torque, N m
+ * @param eta_v receives the volumetric efficiency
+ * @param eta_hm receives the hydromechanical efficiency
+ * @param eta_t receives the overall efficiency
+ * @return PUMPLOSS_OK; PUMPLOSS_WEXTRAPOLATED outside the data's ranges; the fit's status; errors.
+ * @sa pumploss::loss_model_predict
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_predict(const pumploss_model *model, double dp_pa,
+                                                      double speed_rev_s, double mu_pa_s, double *flow_m3_s,
+                                                      double *torque_n_m, double *eta_v, double *eta_hm,
+                                                      double *eta_t);
+/**
+ * Overall-efficiency map over a grid of pressures and speeds at one viscosity:
+ * eta_t[i * n_speed + j] for dp_pa[i] and speed_rev_s[j].
+ * @param model the handle
+ * @param mu_pa_s dynamic viscosity at the gaps, Pa s (> 0)
+ * @param n_dp number of pressures
+ * @param dp_pa array of n_dp pressures, Pa
+ * @param n_speed number of speeds
+ * @param speed_rev_s array of n_speed speeds, rev/s
+ * @param eta_t array of n_dp * n_speed, receives the overall efficiencies
+ * @param status array of n_dp * n_speed, receives each point's status
+ * @return PUMPLOSS_OK; the first report seen; PUMPLOSS_WPARTIAL; PUMPLOSS_EMISUSE.
+ * @sa pumploss::loss_model_map
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_map(const pumploss_model *model, double mu_pa_s, size_t n_dp,
+                                                  const double *dp_pa, size_t n_speed, const double *speed_rev_s,
+                                                  double *eta_t, int *status);
+/** @} */
+
+/** @name Measurement uncertainty (GUM, JCGM 100:2008)
+ *  State each instrument's uncertainty yourself: no accuracy-class presets are provided. @{ */
+/**
+ * Standard uncertainty of a reading from an instrument's stated figure.
+ * @param figure the figure: absolute (SI) or per cent of reading (>= 0)
+ * @param percent_of_reading 0: figure is absolute; 1: per cent of reading
+ * @param distribution 0: figure is a standard uncertainty; 1: rectangular limits (u = a/sqrt(3));
+ *        2: expanded with k = 2 (u = U/2)
+ * @param reading the reading, SI (for per cent of reading)
+ * @param u receives the standard uncertainty, SI
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_EMISUSE for a bad option. @sa pumploss::standard_uncertainty
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_uncertainty(double figure, int percent_of_reading,
+                                                             int distribution, double reading, double *u);
+/**
+ * Standard uncertainty of p_2 - p_1: u^2 = u_1^2 + u_2^2 - 2 r u_1 u_2.
+ * @param u_p1_pa standard uncertainty of p_1, Pa (>= 0)
+ * @param u_p2_pa standard uncertainty of p_2, Pa (>= 0)
+ * @param r12 correlation coefficient, [-1, 1]
+ * @param u_dp_pa receives u(dp), Pa
+ * @return PUMPLOSS_OK or an error. @sa pumploss::pressure_difference_uncertainty
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pressure_difference_uncertainty(double u_p1_pa, double u_p2_pa,
+                                                                        double r12, double *u_dp_pa);
+/**
+ * Combined standard uncertainties of a pump's efficiencies (GUM first order, exact sensitivities;
+ * multiply by 2 for the expanded uncertainty, k = 2).
+ * @param displacement_m3_rev V_i, m^3/rev (> 0)
+ * @param speed_rev_s n, rev/s (> 0)
+ * @param dp_pa pressure rise, Pa (> 0)
+ * @param flow_m3_s outlet flow, m^3/s (>= 0)
+ * @param torque_n_m input torque, N m (> 0)
+ * @param u_displacement_m3_rev standard uncertainty of V_i, m^3/rev (>= 0)
+ * @param u_speed_rev_s standard uncertainty of n, rev/s (>= 0)
+ * @param u_dp_pa standard uncertainty of dp, Pa (>= 0)
+ * @param u_flow_m3_s standard uncertainty of the flow, m^3/s (>= 0)
+ * @param u_torque_n_m standard uncertainty of the torque, N m (>= 0)
+ * @param r_flow_displacement correlation of flow and V_i, [-1, 1] (near 1 when V_i was derived
+ *        with the same flow meter)
+ * @param u_eta_v receives u(eta_v)
+ * @param u_eta_hm receives u(eta_hm)
+ * @param u_eta_t receives u(eta_t)
+ * @return the efficiency status (PUMPLOSS_OK, PUMPLOSS_WIMPLAUSIBLE) or an error.
+ * @sa pumploss::efficiency_gum
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_efficiency_uncertainty(
+    double displacement_m3_rev, double speed_rev_s, double dp_pa, double flow_m3_s, double torque_n_m,
+    double u_displacement_m3_rev, double u_speed_rev_s, double u_dp_pa, double u_flow_m3_s, double u_torque_n_m,
+    double r_flow_displacement, double *u_eta_v, double *u_eta_hm, double *u_eta_t);
+/**
+ * Combined standard uncertainties of a motor's efficiencies (as the pump version).
+ * @param displacement_m3_rev V_i, m^3/rev (> 0)
+ * @param speed_rev_s n, rev/s (> 0)
+ * @param dp_pa pressure drop, Pa (> 0)
+ * @param flow_m3_s inlet flow, m^3/s (> 0)
+ * @param torque_n_m output torque, N m (>= 0)
+ * @param u_displacement_m3_rev standard uncertainty of V_i, m^3/rev (>= 0)
+ * @param u_speed_rev_s standard uncertainty of n, rev/s (>= 0)
+ * @param u_dp_pa standard uncertainty of dp, Pa (>= 0)
+ * @param u_flow_m3_s standard uncertainty of the flow, m^3/s (>= 0)
+ * @param u_torque_n_m standard uncertainty of the torque, N m (>= 0)
+ * @param r_flow_displacement correlation of flow and V_i, [-1, 1]
+ * @param u_eta_v receives u(eta_v)
+ * @param u_eta_hm receives u(eta_hm)
+ * @param u_eta_t receives u(eta_t)
+ * @return as pumploss_pump_efficiency_uncertainty().
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_uncertainty(
+    double displacement_m3_rev, double speed_rev_s, double dp_pa, double flow_m3_s, double torque_n_m,
+    double u_displacement_m3_rev, double u_speed_rev_s, double u_dp_pa, double u_flow_m3_s, double u_torque_n_m,
+    double r_flow_displacement, double *u_eta_v, double *u_eta_hm, double *u_eta_t);
+/** @} */
 /* pumploss:capi-efficiency (declarations of this subject go above this line) */
 
 /* ==== pump ==== */

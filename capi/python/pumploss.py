@@ -67,6 +67,16 @@ _SIGNATURES = {
     "pumploss_displacement_slope": ([ctypes.c_size_t] + [_PD] * 4, 2),
     "pumploss_displacement_intercept": ([ctypes.c_size_t, _D] + [_PD] * 4, 2),
     "pumploss_displacement_two_step": ([ctypes.c_size_t, ctypes.c_size_t] + [_PD] * 5, 2),
+    "pumploss_standard_uncertainty": ([_D, ctypes.c_int, ctypes.c_int, _D, _PD], 1),
+    "pumploss_model_create": ([ctypes.c_int, ctypes.c_int, _D, _D, ctypes.c_size_t] + [_PD] * 5
+                              + [ctypes.POINTER(ctypes.c_void_p)], 0),
+    "pumploss_model_coefficients": ([ctypes.c_void_p] + [_PD] * 6, 6),
+    "pumploss_model_standard_errors": ([ctypes.c_void_p] + [_PD] * 6, 6),
+    "pumploss_model_diagnostics": ([ctypes.c_void_p] + [_PD] * 6, 6),
+    "pumploss_model_residuals": ([ctypes.c_void_p, ctypes.c_size_t, _PD, _PD], 0),
+    "pumploss_model_predict": ([ctypes.c_void_p, _D, _D, _D] + [_PD] * 5, 5),
+    "pumploss_model_map": ([ctypes.c_void_p, _D, ctypes.c_size_t, _PD, ctypes.c_size_t, _PD, _PD,
+                            ctypes.POINTER(ctypes.c_int)], 0),
     # pumploss:py-signatures-efficiency
     # pumploss:py-signatures-pump
     # pumploss:py-signatures-capi
@@ -144,6 +154,9 @@ _SCALAR = {
     "pumploss_heat_load": (2, 1),
     "pumploss_case_drain_temperature": (5, 1),
     "pumploss_case_drain_temperature_from_leakage": (6, 1),
+    "pumploss_pressure_difference_uncertainty": (3, 1),
+    "pumploss_pump_efficiency_uncertainty": (11, 3),
+    "pumploss_motor_efficiency_uncertainty": (11, 3),
     # pumploss:py-scalar-efficiency
     "pumploss_drain_fraction": (3, 1),
     # pumploss:py-scalar-pump

@@ -75,6 +75,7 @@ struct dual {
 
 /// @name Arithmetic on dual numbers (value and derivatives by the chain rule)
 /// @{
+
 /// Unary plus. @param a operand @return a
 template <class T, std::size_t N>
 inline dual<T, N> operator+(const dual<T, N>& a) { return a; }
@@ -131,6 +132,7 @@ inline dual<T, N> operator/(U a, const dual<T, N>& b) { return dual<T, N>(a) / b
 
 /// @name Comparisons (on the value only)
 /// @{
+
 /// @param a left @param b right @return a.val < b.val
 template <class T, std::size_t N>
 inline bool operator<(const dual<T, N>& a, const dual<T, N>& b) { return a.val < b.val; }
@@ -153,6 +155,7 @@ inline bool operator!=(const dual<T, N>& a, const dual<T, N>& b) { return a.val 
 
 /// @name Math functions for dual numbers (found by argument-dependent lookup)
 /// @{
+
 /// Square root. @param a operand @return sqrt(a) with derivative d/(2 sqrt(a))
 template <class T, std::size_t N>
 inline dual<T, N> sqrt(const dual<T, N>& a) {
@@ -160,6 +163,16 @@ inline dual<T, N> sqrt(const dual<T, N>& a) {
   dual<T, N> r;
   r.val = sqrt(a.val);
   const T k = T(1) / (2 * r.val);
+  for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * k;
+  return r;
+}
+/// Cube root. @param a operand @return cbrt(a) with derivative d/(3 cbrt(a)^2)
+template <class T, std::size_t N>
+inline dual<T, N> cbrt(const dual<T, N>& a) {
+  using std::cbrt;
+  dual<T, N> r;
+  r.val = cbrt(a.val);
+  const T k = T(1) / (3 * r.val * r.val);
   for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * k;
   return r;
 }

@@ -18,6 +18,8 @@
 #include "efficiency.hpp"
 #include "leakage.hpp"
 #include "thermal.hpp"
+#include "loss_model.hpp"
+#include "uncertainty.hpp"
 // pumploss:umbrella-efficiency
 #include "health.hpp"
 #include "piston_pump.hpp"

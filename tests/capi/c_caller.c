@@ -419,6 +419,72 @@ static void test_efficiency(void) {
   CHECK(pumploss_leakage_split(8, lq, NULL, lmu, &a, &b, &c) == PUMPLOSS_EMISUSE && is_nan(a));
 }
 
+static void test_loss_model(void) {
+  double dp[24], sp[24], mu[24], q[24], tq[24], rq[24], rt[24];
+  double c[6], u[6], g[6], out[5], map[4], dps[2], ns[2];
+  double d = 107e-6 / (2.0 * 3.14159265358979324), w;
+  int st[4];
+  int i, j, k, n = 0;
+  pumploss_model *h = NULL;
+  /* synthetic Wilson pump data from C_s 3.5e-9, C_v 6.5e4, C_f 0.03, T_c 3 N m (exact) */
+  for (i = 0; i < 4; ++i) {
+    for (j = 0; j < 3; ++j) {
+      for (k = 0; k < 2; ++k) {
+        dp[n] = 5e6 + 1e7 * i;
+        sp[n] = 10.0 + 10.0 * j;
+        mu[n] = 0.02 + 0.03 * k;
+        w = 2.0 * 3.14159265358979324 * sp[n];
+        q[n] = d * w - 3.5e-9 * d * dp[n] / mu[n];
+        tq[n] = d * dp[n] + 6.5e4 * d * mu[n] * w + 0.03 * d * dp[n] + 3.0;
+        ++n;
+      }
+    }
+  }
+  CHECK(pumploss_model_create(PUMPLOSS_PUMP, PUMPLOSS_MODEL_WILSON, 107e-6, 870.0, 24, dp, sp, mu, q, tq, &h) ==
+        PUMPLOSS_OK && h != NULL);
+  CHECK(pumploss_model_coefficients(h, &c[0], &c[1], &c[2], &c[3], &c[4], &c[5]) == PUMPLOSS_OK &&
+        near_rel(c[0], 3.5e-9, 1e-10) && near_rel(c[2], 6.5e4, 1e-10) && near_rel(c[3], 0.03, 1e-10) &&
+        near_rel(c[4], 3.0, 1e-10) && c[1] == 0.0 && c[5] == 0.0);
+  CHECK(pumploss_model_standard_errors(h, &u[0], &u[1], &u[2], &u[3], &u[4], &u[5]) == PUMPLOSS_OK && u[2] < 1e-6);
+  CHECK(pumploss_model_diagnostics(h, &g[0], &g[1], &g[2], &g[3], &g[4], &g[5]) == PUMPLOSS_OK &&
+        fabs(g[1] - 1.0) < 1e-12 && g[5] >= 1.0);
+  CHECK(pumploss_model_residuals(h, 24, rq, rt) == PUMPLOSS_OK && fabs(rt[3]) < 1e-10);
+  CHECK(pumploss_model_residuals(h, 2, rq, rt) == PUMPLOSS_EBUFFER);
+  CHECK(pumploss_model_predict(h, dp[5], sp[5], mu[5], &out[0], &out[1], &out[2], &out[3], &out[4]) == PUMPLOSS_OK &&
+        near_rel(out[0], q[5], 1e-12) && near_rel(out[1], tq[5], 1e-12));
+  CHECK(pumploss_model_predict(h, 9e7, 20.0, 0.03, &out[0], &out[1], &out[2], &out[3], &out[4]) == PUMPLOSS_WEXTRAPOLATED);
+  CHECK(pumploss_model_predict(NULL, 2e7, 20.0, 0.03, &out[0], &out[1], &out[2], &out[3], &out[4]) == PUMPLOSS_EMISUSE &&
+        is_nan(out[0]));
+  dps[0] = 1e7; dps[1] = 2e7; ns[0] = 15.0; ns[1] = 25.0;
+  CHECK(pumploss_model_map(h, 0.03, 2, dps, 2, ns, map, st) == PUMPLOSS_OK && map[3] > 0.5 && map[3] < 1.0);
+  CHECK(pumploss_model_map(h, 0.03, 2, NULL, 2, ns, map, st) == PUMPLOSS_EMISUSE && is_nan(map[0]));
+  CHECK(strlen(pumploss_model_last_message(h)) > 20);
+  pumploss_model_destroy(h);
+  pumploss_model_destroy(NULL);
+  h = NULL;
+  CHECK(pumploss_model_create(PUMPLOSS_PUMP, PUMPLOSS_MODEL_SCHLOESSER, 107e-6, 870.0, 4, dp, sp, mu, q, tq, &h) ==
+        PUMPLOSS_EDATA && h != NULL);
+  CHECK(pumploss_model_coefficients(h, &c[0], &c[1], &c[2], &c[3], &c[4], &c[5]) == PUMPLOSS_EDATA && is_nan(c[0]));
+  pumploss_model_destroy(h);
+  CHECK(pumploss_model_create(PUMPLOSS_PUMP, PUMPLOSS_MODEL_WILSON, 107e-6, 870.0, 24, dp, sp, mu, q, tq, NULL) ==
+        PUMPLOSS_EMISUSE);
+  /* uncertainty: methods.md 13 row 19 (self-calculated), u_rel(eta_t) = 1.472 % */
+  CHECK(pumploss_standard_uncertainty(1.5, 1, 1, 2.5e7, &u[0]) == PUMPLOSS_OK && near_rel(u[0], 3.75e5 / sqrt(3.0), 1e-14));
+  CHECK(pumploss_standard_uncertainty(-1.5, 1, 1, 2.5e7, &u[0]) == PUMPLOSS_EDOMAIN && is_nan(u[0]));
+  CHECK(pumploss_pressure_difference_uncertainty(3e4, 4e4, 0.0, &u[0]) == PUMPLOSS_OK && fabs(u[0] - 5e4) < 1e-9);
+  CHECK(pumploss_pressure_difference_uncertainty(3e4, 4e4, 2.0, &u[0]) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_pump_efficiency_uncertainty(107e-6, 25.0, 2.5e7, 152.0 / 60000.0, 450.0, 0.0, 0.25 / sqrt(3.0),
+                                             3.75e5 / sqrt(3.0), 0.015 * 152.0 / 60000.0 / sqrt(3.0),
+                                             4.5 / sqrt(3.0), 0.0, &u[0], &u[1], &u[2]) == PUMPLOSS_OK &&
+        fabs(u[2] / 0.895983383 - 0.01472) < 5e-6);
+  CHECK(pumploss_pump_efficiency_uncertainty(107e-6, 25.0, 2.5e7, 2.5e-3, 450.0, -1.0, 0, 0, 0, 0, 0, &u[0], &u[1],
+                                             &u[2]) == PUMPLOSS_EDOMAIN && is_nan(u[2]));
+  CHECK(pumploss_motor_efficiency_uncertainty(107e-6, 20.0, 2e7, 2.3e-3, 300.0, 0, 0.1, 2e5, 2e-5, 2.0, 0.0, &u[0], &u[1],
+                                              &u[2]) == PUMPLOSS_OK && u[2] > 0.0);
+  CHECK(pumploss_motor_efficiency_uncertainty(107e-6, 20.0, 2e7, 2.3e-3, 300.0, 0, 0.1, 2e5, 2e-5, 2.0, 0.0, NULL, &u[1],
+                                              &u[2]) == PUMPLOSS_EMISUSE);
+}
+
 /* pumploss:c-caller-efficiency */
 
 static void test_pump_health(void) {
@@ -512,6 +578,7 @@ int main(void) {
   test_line();
   /* pumploss:c-caller-calls-friction */
   test_efficiency();
+  test_loss_model();
   /* pumploss:c-caller-calls-efficiency */
   test_pump_health();
   test_pump_budget();
