@@ -199,16 +199,18 @@ TEST(HealthCapi, HandleLifecycleAndAssessment) {
   ASSERT_NE(h, nullptr);
   int level = 7, reasons = 7;
   double f, fref, g;
-  ASSERT_EQ(pumploss_health_assess(h, 0.12 * kV * kN, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, &level, &reasons, &f, &fref, &g),
+  ASSERT_EQ(pumploss_health_assess(h, 0.12 * kV * kN, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, &level, &reasons, &f, &fref),
             PUMPLOSS_OK);
   EXPECT_EQ(level, PUMPLOSS_HEALTH_ELEVATED);
   EXPECT_TRUE(reasons & PUMPLOSS_REASON_FRACTION_ELEVATED);
   EXPECT_TRUE(reasons & PUMPLOSS_REASON_NO_BASELINE);
   EXPECT_NEAR(fref, 0.12, 1e-14);
+  EXPECT_EQ(pumploss_health_growth(h, 0.12 * kV * kN, kDpRef, 0.0, kTRef, &g), PUMPLOSS_EDATA);  // no baseline
   EXPECT_TRUE(std::isnan(g));
   ASSERT_EQ(pumploss_health_set_baseline(h, 0.06 * kV * kN), PUMPLOSS_OK);
-  ASSERT_EQ(pumploss_health_assess(h, 0.12 * kV * kN, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, &level, &reasons, &f, &fref, &g),
+  ASSERT_EQ(pumploss_health_assess(h, 0.12 * kV * kN, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, &level, &reasons, &f, &fref),
             PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_health_growth(h, 0.12 * kV * kN, kDpRef, 0.0, kTRef, &g), PUMPLOSS_OK);
   EXPECT_NEAR(g, 1.0, 1e-12);
   EXPECT_EQ(level, PUMPLOSS_HEALTH_WORN);
   EXPECT_STREQ(pumploss_health_level_name(level), "worn");
@@ -219,15 +221,15 @@ TEST(HealthCapi, HandleLifecycleAndAssessment) {
   EXPECT_EQ(pumploss_health_set_exponents(h, 1.0, -1.0), PUMPLOSS_EDOMAIN);
   EXPECT_EQ(pumploss_health_set_baseline(h, kNaN), PUMPLOSS_ENONFINITE);
   // errors: outputs NaN, level -1
-  EXPECT_EQ(pumploss_health_assess(h, -1.0, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, &level, &reasons, &f, &fref, &g),
+  EXPECT_EQ(pumploss_health_assess(h, -1.0, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, &level, &reasons, &f, &fref),
             PUMPLOSS_EDOMAIN);
   EXPECT_EQ(level, -1);
-  EXPECT_TRUE(std::isnan(f) && std::isnan(fref) && std::isnan(g));
-  EXPECT_EQ(pumploss_health_assess(h, 1e-4, kDpRef, 0.0, kTRef, kN, kInf, 300.0, &level, &reasons, &f, &fref, &g),
+  EXPECT_TRUE(std::isnan(f) && std::isnan(fref));
+  EXPECT_EQ(pumploss_health_assess(h, 1e-4, kDpRef, 0.0, kTRef, kN, kInf, 300.0, &level, &reasons, &f, &fref),
             PUMPLOSS_ENONFINITE);
-  EXPECT_EQ(pumploss_health_assess(nullptr, 1e-4, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, &level, &reasons, &f, &fref, &g),
+  EXPECT_EQ(pumploss_health_assess(nullptr, 1e-4, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, &level, &reasons, &f, &fref),
             PUMPLOSS_EMISUSE);
-  EXPECT_EQ(pumploss_health_assess(h, 1e-4, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, nullptr, &reasons, &f, &fref, &g),
+  EXPECT_EQ(pumploss_health_assess(h, 1e-4, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, nullptr, &reasons, &f, &fref),
             PUMPLOSS_EMISUSE);
   EXPECT_TRUE(std::isnan(f));
   pumploss_health_destroy(h);

@@ -263,7 +263,9 @@ TEST(DrainSizing, SmallestPassingBoreOverTheRange) {
 
 TEST(LineCapi, HandleLifecycleAndCalls) {
   pumploss_line_destroy(nullptr);  // no-op
-  pumploss_line* h = pumploss_line_create();
+  EXPECT_EQ(pumploss_line_create(nullptr), PUMPLOSS_EMISUSE);
+  pumploss_line* h = nullptr;
+  ASSERT_EQ(pumploss_line_create(&h), PUMPLOSS_OK);
   ASSERT_NE(h, nullptr);
   EXPECT_EQ(pumploss_line_add_pipe(h, 0.0127, -5.0, 0.0), PUMPLOSS_EDOMAIN);
   EXPECT_NE(std::string(pumploss_line_last_message(h)).find("add_pipe"), std::string::npos);

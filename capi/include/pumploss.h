@@ -889,8 +889,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_pressure_drop_batch(size_t n, const
 /** Opaque line handle. */
 typedef struct pumploss_line pumploss_line;
 /** Create an empty line (no elements, height 0, no oil).
- *  @return the handle, or NULL when out of memory. Free with pumploss_line_destroy(). */
-PUMPLOSS_API pumploss_line *PUMPLOSS_CALL pumploss_line_create(void);
+ *  @param out receives the handle (NULL on error); free it with pumploss_line_destroy()
+ *  @return PUMPLOSS_OK, PUMPLOSS_EMISUSE (out is NULL), PUMPLOSS_ENOMEM. */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_create(pumploss_line **out);
 /** Destroy a line. Destroying NULL is a no-op.
  *  @param line the handle (or NULL) */
 PUMPLOSS_API void PUMPLOSS_CALL pumploss_line_destroy(pumploss_line *line);
@@ -1035,7 +1036,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(pumploss_line *li
  *  @param q_drain_m3_s drain flow, m^3/s, >= 0
  *  @param t_cold_k cold-start temperature, K
  *  @param t_max_k maximum temperature, K, >= t_cold_k
- *  @param n_temps number of temperatures, 1 to 1000
+ *  @param n_temps number of temperatures, 1 to 1000 (the length of the four output arrays)
  *  @param p_tank_pa tank pressure at the outlet, Pa
  *  @param p_allowed_pa allowed case pressure, Pa (same reference)
  *  @param t_k receives n_temps temperatures, K
@@ -1045,9 +1046,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(pumploss_line *li
  *  @param worst_margin_pa receives the smallest margin, Pa (negative: fails)
  *  @return PUMPLOSS_OK or a report; errors with NaN outputs. @sa pumploss::drain_check */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(pumploss_line *line, double q_drain_m3_s, double t_cold_k,
-                                                         double t_max_k, int n_temps, double p_tank_pa,
-                                                         double p_allowed_pa, double *t_k, double *case_pressure_pa,
-                                                         double *margin_pa, int *pass, double *worst_margin_pa);
+                                                         double t_max_k, size_t n_temps, double p_tank_pa,
+                                                         double p_allowed_pa, double t_k[], double case_pressure_pa[],
+                                                         double margin_pa[], int pass[], double *worst_margin_pa);
 /** Smallest standard bore (pumploss_standard_bore()) for which the line, with every pipe and
  *  fitting at that bore, passes the drain check over the temperature range and keeps the
  *  velocity at or below v_max.
@@ -1500,12 +1501,11 @@ typedef struct pumploss_model pumploss_model;
  * @param mu_pa_s array of dynamic viscosities at the gaps, Pa s (> 0)
  * @param flow_m3_s array of flows (pump outlet, motor inlet), m^3/s (>= 0)
  * @param torque_n_m array of torques (pump input, motor output), N m (>= 0)
- * @param model receives the handle. It is set (non-NULL) whenever memory allows, also when the
- *        fit failed: pumploss_model_last_message() then says why and the getters return the
- *        fit's error. NULL on PUMPLOSS_ENOMEM or PUMPLOSS_EMISUSE.
+ * @param model receives the handle on success and on reports (PUMPLOSS_WILLCONDITIONED...);
+ *        NULL on every error, like every create function of the API.
  * @return PUMPLOSS_OK; PUMPLOSS_WILLCONDITIONED (coefficients uncertain); PUMPLOSS_EDATA;
- *         PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE (NULL array or bad kind);
- *         PUMPLOSS_ENOMEM. @sa pumploss::fit_loss_model
+ *         PUMPLOSS_EDOMAIN (also for an unknown machine or model kind); PUMPLOSS_ENONFINITE;
+ *         PUMPLOSS_EMISUSE (NULL array); PUMPLOSS_ENOMEM. @sa pumploss::fit_loss_model
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model_kind, double displacement_m3_rev,
                                                      double rho_kg_m3, size_t count, const double *dp_pa,
@@ -1576,7 +1576,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_diagnostics(const pumploss_model *
  * @return as pumploss_model_coefficients(); PUMPLOSS_EBUFFER when count is too small.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_residuals(const pumploss_model *model, size_t count,
-                                                        double *flow_residual_m3_s, double *torque_residual_n_m);
+                                                        double flow_residual_m3_s[], double torque_residual_n_m[]);
 /**
  * Flow, torque and efficiencies predicted at one operating point.
  * @param model the handle
@@ -1611,7 +1611,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_predict(const pumploss_model *mode
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_map(const pumploss_model *model, double mu_pa_s, size_t n_dp,
                                                   const double *dp_pa, size_t n_speed, const double *speed_rev_s,
-                                                  double *eta_t, int *status);
+                                                  double eta_t[], int status[]);
 /** @} */
 
 /** @name Measurement uncertainty (GUM, JCGM 100:2008)
@@ -1789,16 +1789,29 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_exponents(pumploss_health *h,
  * @param reasons receives the reason bits (PUMPLOSS_REASON_*; 0 on error)
  * @param fraction receives the drain fraction as read
  * @param fraction_at_reference receives the drain fraction normalised to the reference state
- * @param growth receives the growth over the baseline (0.3 = +30 %); NaN when no baseline is set
- *        (reason PUMPLOSS_REASON_NO_BASELINE)
  * @return PUMPLOSS_OK, PUMPLOSS_WIMPLAUSIBLE (fraction above 1), PUMPLOSS_EDOMAIN,
  *         PUMPLOSS_ENONFINITE (NaN/inf in a required input, inf in a temperature), PUMPLOSS_EMISUSE.
+ *         The growth over the baseline is given by pumploss_health_growth().
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess(const pumploss_health *h, double drain_flow_m3_s,
                                                       double outlet_pa, double case_pa, double oil_t_k,
                                                       double speed_rev_s, double drain_t_k, double inlet_t_k,
                                                       int *level, int *reasons, double *fraction,
-                                                      double *fraction_at_reference, double *growth);
+                                                      double *fraction_at_reference);
+/**
+ * Growth of a reading's normalised drain flow over the pump's baseline.
+ * @param h the handle (baseline set with pumploss_health_set_baseline())
+ * @param drain_flow_m3_s case drain flow, m^3/s (>= 0)
+ * @param outlet_pa outlet pressure (gauge), Pa
+ * @param case_pa case pressure (gauge), Pa
+ * @param oil_t_k oil temperature governing the clearances, K
+ * @param growth receives q_ref / q_baseline - 1 (0.3 = +30 %)
+ * @return PUMPLOSS_OK; PUMPLOSS_EDATA when no baseline is set; PUMPLOSS_EDOMAIN,
+ *         PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_growth(const pumploss_health *h, double drain_flow_m3_s,
+                                                      double outlet_pa, double case_pa, double oil_t_k,
+                                                      double *growth);
 /** A sentence for one reason bit.
  *  @param reason one PUMPLOSS_REASON_* bit
  *  @return the sentence (static storage, never NULL); a sentence saying so for an unknown bit */

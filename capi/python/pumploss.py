@@ -28,7 +28,8 @@ __all__ = ["load", "Library", "PumplossError", "PumplossWarning", "OK"]
 OK = 0
 
 # Functions whose arguments are not all "double in, double* out": name -> (argtypes, n_out).
-# Outputs are always the trailing double* parameters.
+# Outputs are always the trailing double* parameters. Functions with arrays or handles are not
+# listed: they are typed from pumploss.h (see parse_header() and Library.raw()).
 _D = ctypes.c_double
 _PD = ctypes.POINTER(ctypes.c_double)
 _SIGNATURES = {
@@ -36,47 +37,8 @@ _SIGNATURES = {
     "pumploss_iso_vg": ([ctypes.c_int, _PD, _PD, _PD], 3),
     "pumploss_typical_mineral_oil": ([_PD] * 6, 6),
     # pumploss:py-signatures-gap
-    "pumploss_friction_factor_batch": ([ctypes.c_size_t, _PD, _PD, _PD, ctypes.POINTER(ctypes.c_int)], 0),
-    "pumploss_pipe_pressure_drop_batch": ([ctypes.c_size_t] + [_PD] * 7 + [ctypes.POINTER(ctypes.c_int)], 0),
-    "pumploss_line_add_pipe": ([ctypes.c_void_p, _D, _D, _D], 0),
-    "pumploss_line_add_fitting_k": ([ctypes.c_void_p, _D, _D], 0),
-    "pumploss_line_add_fitting_crane": ([ctypes.c_void_p, _D, _D], 0),
-    "pumploss_line_add_fitting_hooper": ([ctypes.c_void_p, _D, _D, _D], 0),
-    "pumploss_line_add_fitting_darby": ([ctypes.c_void_p, _D, _D, _D, _D], 0),
-    "pumploss_line_add_component_power": ([ctypes.c_void_p, _D, _D, _D, _D, _D], 0),
-    "pumploss_line_add_component_points": ([ctypes.c_void_p, ctypes.c_int, _PD, _PD, _D, _D], 0),
-    "pumploss_line_set_height": ([ctypes.c_void_p, _D], 0),
-    "pumploss_line_set_oil": ([ctypes.c_void_p, _D, _D, _D, _D, _D, _D], 0),
-    "pumploss_line_height": ([ctypes.c_void_p, _PD], 1),
-    "pumploss_line_element_count": ([ctypes.c_void_p, ctypes.POINTER(ctypes.c_int)], 0),
-    "pumploss_line_pressure_drop": ([ctypes.c_void_p, _D, _D, _D, _PD], 1),
-    "pumploss_line_element_pressure_drop": ([ctypes.c_void_p, ctypes.c_int, _D, _D, _D, _PD, _PD], 2),
-    "pumploss_line_pressure_drop_at": ([ctypes.c_void_p, _D, _D, _PD], 1),
-    "pumploss_line_flow_for_pressure": ([ctypes.c_void_p, _D, _D, _D, _PD], 1),
-    "pumploss_line_drain_check": ([ctypes.c_void_p, _D, _D, _D, ctypes.c_int, _D, _D, _PD, _PD, _PD,
-                                   ctypes.POINTER(ctypes.c_int), _PD], 0),
-    "pumploss_line_size_drain": ([ctypes.c_void_p, _D, _D, _D, ctypes.c_int, _D, _D, _D, ctypes.c_int,
-                                  _PD, _PD, _PD], 3),
-    "pumploss_standard_bore": ([ctypes.c_int, _PD, ctypes.POINTER(ctypes.c_int)], 0),
     # pumploss:py-signatures-friction
-    "pumploss_pump_efficiency_batch": ([ctypes.c_size_t] + [_PD] * 8 + [ctypes.POINTER(ctypes.c_int)], 0),
-    "pumploss_motor_efficiency_batch": ([ctypes.c_size_t] + [_PD] * 8 + [ctypes.POINTER(ctypes.c_int)], 0),
-    "pumploss_leakage_scale_batch": ([ctypes.c_size_t] + [_PD] * 6 + [ctypes.POINTER(ctypes.c_int)], 0),
-    "pumploss_leakage_fit_power_law": ([ctypes.c_size_t] + [_PD] * 7, 4),
-    "pumploss_leakage_split": ([ctypes.c_size_t] + [_PD] * 6, 3),
-    "pumploss_displacement_slope": ([ctypes.c_size_t] + [_PD] * 4, 2),
-    "pumploss_displacement_intercept": ([ctypes.c_size_t, _D] + [_PD] * 4, 2),
-    "pumploss_displacement_two_step": ([ctypes.c_size_t, ctypes.c_size_t] + [_PD] * 5, 2),
     "pumploss_standard_uncertainty": ([_D, ctypes.c_int, ctypes.c_int, _D, _PD], 1),
-    "pumploss_model_create": ([ctypes.c_int, ctypes.c_int, _D, _D, ctypes.c_size_t] + [_PD] * 5
-                              + [ctypes.POINTER(ctypes.c_void_p)], 0),
-    "pumploss_model_coefficients": ([ctypes.c_void_p] + [_PD] * 6, 6),
-    "pumploss_model_standard_errors": ([ctypes.c_void_p] + [_PD] * 6, 6),
-    "pumploss_model_diagnostics": ([ctypes.c_void_p] + [_PD] * 6, 6),
-    "pumploss_model_residuals": ([ctypes.c_void_p, ctypes.c_size_t, _PD, _PD], 0),
-    "pumploss_model_predict": ([ctypes.c_void_p, _D, _D, _D] + [_PD] * 5, 5),
-    "pumploss_model_map": ([ctypes.c_void_p, _D, ctypes.c_size_t, _PD, ctypes.c_size_t, _PD, _PD,
-                            ctypes.POINTER(ctypes.c_int)], 0),
     # pumploss:py-signatures-efficiency
     # pumploss:py-signatures-pump
     # pumploss:py-signatures-capi
@@ -180,11 +142,15 @@ def parse_header(text):
         def norm(t):
             return re.sub(r"\s+", " ", re.sub(r"\s*\*\s*", "*", t.strip()))
         ret, name, args = norm(m.group(1)), m.group(2), m.group(3).strip()
-        params = []
+        params, declared = [], []
         if args and args != "void":
             for a in args.split(","):
-                pm = re.match(r"^(.*?)([A-Za-z_]\w*)$", a.strip())
-                ctype, pname = norm(pm.group(1)), pm.group(2)
+                a = a.strip()
+                is_array = re.search(r"\[\s*\]", a) is not None  # double x[] is double *x
+                declared.append(is_array)
+                a = re.sub(r"\[\s*\]", "", a).strip()
+                pm = re.match(r"^(.*?)([A-Za-z_]\w*)$", a)
+                ctype, pname = norm(pm.group(1) + ("*" if is_array else "")), pm.group(2)
                 kind = simple.get(ctype)
                 if kind is None:
                     hm = re.match(r"^(?:const )?(\w+)(\*+)$", ctype)
@@ -196,7 +162,11 @@ def parse_header(text):
         for i, (kind, ctype, pname) in enumerate(params):
             if kind == "SIZE" and i > 0 and params[i - 1][0] == "CBUF":
                 params[i] = ("BUFLEN", ctype, pname)
-        protos[name] = (ret, params)
+        # Array outputs: every output of a *_batch function, and outputs declared with [];
+        # their length (like that of input arrays) is the product of the size_t parameters.
+        arrays = {pname for (kind, ctype, pname), decl in zip(params, declared)
+                  if kind in ("DOUT", "IOUT") and (name.endswith("_batch") or decl)}
+        protos[name] = (ret, params, arrays)
     return protos
 
 
@@ -266,13 +236,13 @@ class Library:
             fn = getattr(self._dll, name)
             fn.argtypes = argtypes
             fn.restype = ctypes.c_int
-        for name, (_, params) in self._protos.items():
+        for name, (_, params, _arrays) in self._protos.items():
             if name not in self._sigs:  # newer than the tables: typed from the header
                 fn = getattr(self._dll, name)
                 fn.argtypes = [_KIND_CTYPES[k] for k, _, _ in params]
                 fn.restype = ctypes.c_int
         self._destroy = {}
-        for name, (ret, params) in self._all_protos.items():
+        for name, (ret, params, _arrays) in self._all_protos.items():
             if ret == "void" and [k for k, _, _ in params] == ["HIN"]:
                 fn = getattr(self._dll, name)
                 fn.argtypes = [ctypes.c_void_p]
@@ -316,12 +286,14 @@ class Library:
         """raw() for a function known only from the header: inputs in declaration order (a
         sequence for each array; size_t lengths are taken from the arrays), outputs returned in
         declaration order (lists for arrays, an int for a handle, a str for a char buffer)."""
-        _, params = self._protos[name]
-        batch = any(k == "SIZE" for k, _, _ in params)
+        _, params, arrays = self._protos[name]
         n = next((len(a) for a in args if not isinstance(a, (str, bytes)) and hasattr(a, "__len__")), 0)
+        # Every size_t is set to n; arrays hold n^k elements for k size_t parameters (a map
+        # over n_dp x n_speed points); input sequences shorter than that repeat.
+        alen = n ** sum(1 for k, _, _ in params if k == "SIZE")
         it = iter(args)
         conv, outs = [], []
-        for kind, _, _ in params:
+        for kind, _, pname in params:
             if kind == "DIN":
                 conv.append(float(next(it)))
             elif kind in ("IIN", "HIN"):
@@ -333,18 +305,17 @@ class Library:
                 conv.append(n)
             elif kind == "BUFLEN":
                 conv.append(len(outs[-1][1]))
-            elif kind == "DARR":
-                conv.append((_D * max(n, 1))(*next(it)))
-            elif kind == "IARR":
-                conv.append((ctypes.c_int * max(n, 1))(*next(it)))
-            elif kind == "DOUT":
-                o = (_D * max(n, 1))() if batch else _D(0.0)
-                outs.append(("DA" if batch else "D", o))
-                conv.append(o if batch else ctypes.byref(o))
-            elif kind == "IOUT":
-                o = (ctypes.c_int * max(n, 1))() if batch else ctypes.c_int(0)
-                outs.append(("IA" if batch else "I", o))
-                conv.append(o if batch else ctypes.byref(o))
+            elif kind in ("DARR", "IARR"):
+                seq = list(next(it))
+                full = [seq[i % len(seq)] for i in range(alen)] if seq else []
+                typ = _D if kind == "DARR" else ctypes.c_int
+                conv.append((typ * max(alen, 1))(*full))
+            elif kind in ("DOUT", "IOUT"):
+                array = pname in arrays
+                typ = _D if kind == "DOUT" else ctypes.c_int
+                o = (typ * max(alen, 1))() if array else typ(0)
+                outs.append(((kind[0] + "A") if array else kind[0], o))
+                conv.append(o if array else ctypes.byref(o))
             elif kind == "CBUF":
                 o = ctypes.create_string_buffer(1024)
                 outs.append(("S", o))
@@ -359,7 +330,7 @@ class Library:
             if tag in ("D", "I", "H"):
                 vals.append(o.value)
             elif tag in ("DA", "IA"):
-                vals.append(list(o[:n]))
+                vals.append(list(o[:alen]))
             else:
                 vals.append(o.value.decode(errors="replace"))
         return (status, *vals)

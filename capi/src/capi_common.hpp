@@ -4,6 +4,7 @@
 #define PUMPLOSS_CAPI_COMMON_HPP
 
 #include <cfenv>
+#include <cmath>
 #include <limits>
 #include <new>
 
@@ -62,6 +63,13 @@ inline int call(double* const (&outs)[N], Body&& body) noexcept {
       st = status::no_memory;
     } catch (...) {
       st = status::internal;
+    }
+  }
+  // A usable status never comes with a NaN or infinite output: such a value means an
+  // intermediate overflowed or underflowed (e.g. 0 * inf), so report it as not representable.
+  if (!is_error(st)) {
+    for (double* p : outs) {
+      if (!std::isfinite(*p)) st = status::overflow;
     }
   }
   if (is_error(st)) {

@@ -60,11 +60,14 @@ int line_call(pumploss_line* h, double* const (&outs)[N], const char* what, Body
 
 extern "C" {
 
-PUMPLOSS_API pumploss_line* PUMPLOSS_CALL pumploss_line_create(void) {
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_create(pumploss_line** out) {
+  if (out == nullptr) return PUMPLOSS_EMISUSE;
+  *out = nullptr;
   try {
-    return new pumploss_line();
+    *out = new pumploss_line();
+    return PUMPLOSS_OK;
   } catch (...) {
-    return nullptr;
+    return PUMPLOSS_ENOMEM;
   }
 }
 
@@ -199,28 +202,30 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(pumploss_line* h,
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(pumploss_line* h, double q_drain_m3_s, double t_cold_k,
-                                                         double t_max_k, int n_temps, double p_tank_pa,
+                                                         double t_max_k, size_t n_temps, double p_tank_pa,
                                                          double p_allowed_pa, double* t_k, double* case_pressure_pa,
                                                          double* margin_pa, int* pass, double* worst_margin_pa) {
   const bool arrays = t_k != nullptr && case_pressure_pa != nullptr && margin_pa != nullptr && pass != nullptr;
-  const int n_fill = arrays && n_temps > 0 && n_temps <= 1000 ? n_temps : 0;
-  for (int i = 0; i < n_fill; ++i) {
-    t_k[i] = case_pressure_pa[i] = margin_pa[i] = kNaN;
-    pass[i] = 0;
+  const size_t n_fill = n_temps <= 1000 ? n_temps : 0;
+  for (size_t i = 0; i < n_fill; ++i) {  // every array given is NaN (pass 0) until filled
+    if (t_k != nullptr) t_k[i] = kNaN;
+    if (case_pressure_pa != nullptr) case_pressure_pa[i] = kNaN;
+    if (margin_pa != nullptr) margin_pa[i] = kNaN;
+    if (pass != nullptr) pass[i] = 0;
   }
   return line_call(h, {worst_margin_pa}, "drain_check", [&] {
     if (!arrays) return status::misuse;
     if (!h->has_oil) return status::misuse;
     if (n_temps < 1 || n_temps > 1000) return status::domain;
     std::vector<pumploss::drain_point<double>> pts(static_cast<std::size_t>(n_temps));
-    const auto s = pumploss::drain_check(h->line, h->oil, q_drain_m3_s, t_cold_k, t_max_k, n_temps, p_tank_pa,
+    const auto s = pumploss::drain_check(h->line, h->oil, q_drain_m3_s, t_cold_k, t_max_k, static_cast<int>(n_temps), p_tank_pa,
                                          p_allowed_pa, pts.data());
     if (is_error(s.st)) {
-      for (int i = 0; i < n_temps; ++i) t_k[i] = case_pressure_pa[i] = margin_pa[i] = kNaN;
+      for (size_t i = 0; i < n_temps; ++i) t_k[i] = case_pressure_pa[i] = margin_pa[i] = kNaN;
       return s.st;
     }
-    for (int i = 0; i < n_temps; ++i) {
-      const auto& p = pts[static_cast<std::size_t>(i)];
+    for (size_t i = 0; i < n_temps; ++i) {
+      const auto& p = pts[i];
       t_k[i] = p.t_k;
       case_pressure_pa[i] = p.case_pressure_pa;
       margin_pa[i] = p.margin_pa;

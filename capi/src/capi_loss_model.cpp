@@ -68,7 +68,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model
                                                      pumploss_model** model) {
   if (model == nullptr) return PUMPLOSS_EMISUSE;
   *model = nullptr;
-  if ((machine_kind != 0 && machine_kind != 1) || (model_kind != 0 && model_kind != 1)) return PUMPLOSS_EMISUSE;
+  if ((machine_kind != 0 && machine_kind != 1) || (model_kind != 0 && model_kind != 1)) return PUMPLOSS_EDOMAIN;
   pumploss::status st = pumploss::status::ok;
   pumploss_model* h = nullptr;
   {
@@ -91,6 +91,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model
       delete h;
       return PUMPLOSS_EINTERNAL;
     }
+  }
+  if (pumploss::is_error(st)) {  // every create function: NULL on error
+    delete h;
+    return static_cast<int>(st);
   }
   *model = h;
   return static_cast<int>(st);

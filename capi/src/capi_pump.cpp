@@ -122,10 +122,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess(const pumploss_health* h, 
                                                       double outlet_pa, double case_pa, double oil_t_k,
                                                       double speed_rev_s, double drain_t_k, double inlet_t_k,
                                                       int* level, int* reasons, double* fraction,
-                                                      double* fraction_at_reference, double* growth) {
+                                                      double* fraction_at_reference) {
   if (level != nullptr) *level = -1;
   if (reasons != nullptr) *reasons = 0;
-  const int st = call({fraction, fraction_at_reference, growth}, [&] {
+  const int st = call({fraction, fraction_at_reference}, [&] {
     if (h == nullptr || level == nullptr || reasons == nullptr) return status::misuse;
     // NaN means "not measured" for the two temperatures; infinity is an error.
     if (std::isinf(drain_t_k) || std::isinf(inlet_t_k)) return status::nonfinite;
@@ -136,7 +136,6 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess(const pumploss_health* h, 
     *reasons = static_cast<int>(a.reasons);
     *fraction = a.fraction;
     *fraction_at_reference = a.fraction_at_reference;
-    *growth = a.growth;
     return a.st;
   });
   if (st > 0 && st < 100) {
@@ -144,6 +143,20 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess(const pumploss_health* h, 
     if (reasons != nullptr) *reasons = 0;
   }
   return st;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_growth(const pumploss_health* h, double drain_flow_m3_s,
+                                                      double outlet_pa, double case_pa, double oil_t_k,
+                                                      double* growth) {
+  return call({growth}, [&] {
+    if (h == nullptr) return status::misuse;
+    if (!pumploss::detail::finite(h->ref.baseline_m3_s)) return status::insufficient_data;
+    const pumploss::health_reading<double> r{drain_flow_m3_s, outlet_pa, case_pa, oil_t_k, 1.0};
+    const auto q = pumploss::health_normalise(h->ref, r);
+    if (is_error(q.st)) return q.st;
+    *growth = q.value / h->ref.baseline_m3_s - 1.0;
+    return q.st;
+  });
 }
 
 PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_health_reason_text(int reason) {

@@ -326,16 +326,6 @@ inline dual<T, N> acos(const dual<T, N>& a) {
   for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * dv;
   return r;
 }
-/// Cube root. @param a operand @return cbrt(a)
-template <class T, std::size_t N>
-inline dual<T, N> cbrt(const dual<T, N>& a) {
-  using std::cbrt;
-  dual<T, N> r;
-  r.val = cbrt(a.val);
-  const T dv = T(1) / (T(3) * r.val * r.val);
-  for (std::size_t i = 0; i < N; ++i) r.d[i] = a.d[i] * dv;
-  return r;
-}
 /// Finiteness of the value and every derivative. @param a operand @return true when all are finite
 template <class T, std::size_t N>
 inline bool isfinite(const dual<T, N>& a) {

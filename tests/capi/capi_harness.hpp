@@ -13,6 +13,7 @@
 #include <cstddef>
 #include <cstdint>
 #include <cstdio>
+#include <algorithm>
 #include <cstring>
 #include <limits>
 #include <random>
@@ -50,7 +51,12 @@ struct Param {
   const char* name;
   int handle;    ///< handle type index for K_HIN / K_HOUT, else -1
   double guess;  ///< first guess of a valid value (from the unit suffix of the name)
+  bool array;    ///< an array of n^k elements (k size_t parameters); else one value
+  bool readonly; ///< K_HIN declared const: the function only reads the handle
 };
+/// True when the function changes a handle (a non-const handle parameter): such calls must not
+/// run concurrently on one handle (documented), so the thread test leaves them out.
+inline bool mutates_handle(const struct Fn& f);
 struct Fn {
   const char* name;
   RetKind ret;
@@ -82,10 +88,29 @@ inline bool is_pointer(Kind k) {
          k == K_HIN || k == K_HOUT;
 }
 inline bool is_output(Kind k) { return k == K_DOUT || k == K_IOUT || k == K_CBUF || k == K_HOUT; }
+inline bool mutates_handle(const Fn& f) {
+  for (int p = 0; p < f.nparams; ++p)
+    if (f.params[p].kind == K_HIN && !f.params[p].readonly) return true;
+  return false;
+}
 inline bool has_size(const Fn& f) {
   for (int p = 0; p < f.nparams; ++p)
     if (f.params[p].kind == K_SIZE) return true;
   return false;
+}
+/// Length of the array parameters of a call with length n: n to the power of the number of
+/// size_t parameters (each is set to n), so a map of n_dp x n_speed points gets n^2.
+inline std::size_t array_length(const Fn& f, std::size_t n) {
+  std::size_t len = 1;
+  for (int p = 0; p < f.nparams; ++p)
+    if (f.params[p].kind == K_SIZE) len *= n;
+  return len;
+}
+/// The per-element status array of a batch function (an int array named "status"), or -1.
+inline int status_param_of(const Fn& f) {
+  for (int p = 0; p < f.nparams; ++p)
+    if (f.params[p].kind == K_IOUT && f.params[p].array && std::strcmp(f.params[p].name, "status") == 0) return p;
+  return -1;
 }
 /// Calls the tests check for statuses (int return with parameters).
 inline bool returns_status(const Fn& f) { return f.ret == R_INT; }
@@ -149,11 +174,12 @@ struct Exec {
     ibuf.resize(np);
     cbuf.resize(np);
     hbuf.assign(np, nullptr);
-    const std::size_t len = has_size(f) ? c.n : 1;
+    const std::size_t alen = array_length(f, c.n);
     for (std::size_t p = 0; p < np; ++p) {
       const Param& pr = f.params[p];
       const Arg& a = c.args[p];
       Slot& s = slots[p];
+      const std::size_t len = pr.array ? alen : 1;
       switch (pr.kind) {
         case K_DIN: s.d = a.d; break;
         case K_IIN: s.i = a.i; break;
@@ -248,10 +274,10 @@ inline void expand(Case& c) {
   for (int p = 0; p < f.nparams; ++p) {
     Arg& a = c.args[static_cast<std::size_t>(p)];
     if (f.params[p].kind == K_DARR && !a.null) {
-      a.darr.assign(c.n == 0 ? 1 : c.n, 0.0);
+      a.darr.assign(std::max<std::size_t>(1, array_length(f, c.n)), 0.0);
       for (std::size_t j = 0; j < a.darr.size(); ++j) a.darr[j] = a.d * (1.0 + 0.05 * static_cast<double>(j));
     } else if (f.params[p].kind == K_IARR && !a.null) {
-      a.iarr.assign(c.n == 0 ? 1 : c.n, a.i);
+      a.iarr.assign(std::max<std::size_t>(1, array_length(f, c.n)), a.i);
     }
   }
 }
@@ -471,14 +497,13 @@ inline std::string check(const Case& c, const Exec& e, int* inf_with_usable) {
     std::snprintf(msg, sizeof msg, "status %d is not a documented PUMPLOSS_ code", code);
     return msg;
   }
-  const bool batch = has_size(f);
-  const std::size_t len = batch ? c.n : 1;
+  const std::size_t alen = array_length(f, c.n);
   // NULL where a pointer is required -> EMISUSE (NULL arrays with n = 0 may also give OK).
   bool null_required = false, null_n0 = false;
   for (int p = 0; p < f.nparams; ++p) {
     const Kind k = f.params[p].kind;
     if (!c.args[static_cast<std::size_t>(p)].null || !is_pointer(k)) continue;
-    const bool array = k == K_DARR || k == K_IARR || (batch && (k == K_DOUT || k == K_IOUT));
+    const bool array = f.params[p].array;
     if (array && c.n == 0) null_n0 = true; else null_required = true;
   }
   if (null_required && code != PUMPLOSS_EMISUSE) {
@@ -489,12 +514,11 @@ inline std::string check(const Case& c, const Exec& e, int* inf_with_usable) {
     std::snprintf(msg, sizeof msg, "n = 0 with NULL arrays gave status %d (OK or EMISUSE expected)", code);
     return msg;
   }
-  int status_param = -1;
-  for (int p = 0; p < f.nparams; ++p)
-    if (batch && f.params[p].kind == K_IOUT) status_param = p;
+  const int status_param = status_param_of(f);
   for (int p = 0; p < f.nparams; ++p) {
     const std::size_t q = static_cast<std::size_t>(p);
     const Kind k = f.params[p].kind;
+    const std::size_t len = f.params[p].array ? alen : 1;
     if (c.args[q].null) continue;
     if (len == 0 && (k == K_DOUT || k == K_IOUT)) {  // n = 0 writes nothing
       const bool touched = k == K_DOUT ? e.dbuf[q][0] != kSentinel : e.ibuf[q][0] != -777;
@@ -525,7 +549,8 @@ inline std::string check(const Case& c, const Exec& e, int* inf_with_usable) {
     for (std::size_t i = 0; i < len; ++i) {
       const double v = e.dbuf[q][i];
       bool elem_error = is_error(code);
-      if (!elem_error && status_param >= 0) elem_error = is_error(e.ibuf[static_cast<std::size_t>(status_param)][i]);
+      if (!elem_error && status_param >= 0 && f.params[p].array)
+        elem_error = is_error(e.ibuf[static_cast<std::size_t>(status_param)][i]);
       if (elem_error && !std::isnan(v)) {
         std::snprintf(msg, sizeof msg, "error status but %s[%zu] = %.17g, not NaN", f.params[p].name, i, v);
         return msg;
@@ -537,9 +562,9 @@ inline std::string check(const Case& c, const Exec& e, int* inf_with_usable) {
       if (!elem_error && std::isinf(v) && inf_with_usable) ++*inf_with_usable;
     }
   }
-  if (status_param >= 0 && !is_error(code) && len > 0) {  // the summary follows the elements
+  if (status_param >= 0 && !is_error(code) && alen > 0) {  // the summary follows the elements
     bool any_error = false, all_ok = true;
-    for (std::size_t i = 0; i < len; ++i) {
+    for (std::size_t i = 0; i < alen; ++i) {
       const int s = e.ibuf[static_cast<std::size_t>(status_param)][i];
       any_error = any_error || is_error(s);
       all_ok = all_ok && s == PUMPLOSS_OK;

@@ -26,6 +26,7 @@ KINDS = ("DIN", "IIN", "SIZE", "BUFLEN", "DARR", "DOUT", "IOUT", "IARR", "STR", 
 class Param:
     def __init__(self, ctype, name, kind, handle=None, const=False):
         self.ctype, self.name, self.kind, self.handle, self.const = ctype, name, kind, handle, const
+        self.array = kind in ("DARR", "IARR")  # outputs: set after parsing (see parse())
 
 
 class Function:
@@ -38,10 +39,10 @@ class Function:
             self.cls = "DESTROY"
         elif "HIN" in kinds:
             self.cls = "METHOD"
-        elif "SIZE" in kinds:
-            self.cls = "BATCH"
+        elif "SIZE" in kinds and name.endswith("_batch"):
+            self.cls = "BATCH"  # per-point function over arrays
         else:
-            self.cls = "SCALAR"
+            self.cls = "SCALAR"  # one calculation (possibly a fit over arrays of a size_t count)
 
 
 def strip_comments(text):
@@ -75,13 +76,20 @@ def parse(path):
         params = []
         if args and args != "void":
             for a in args.split(","):
+                declared_array = re.search(r"\[\s*\]", a) is not None
                 a = re.sub(r"\[\s*\]", "", a.strip())  # double x[] -> double *x
                 pm = re.match(r"^(.*?)([A-Za-z_]\w*)$", a)
                 if not pm:
                     sys.exit(f"gen_capi.py: {name}: cannot read parameter '{a}'")
-                ctype = norm_type(pm.group(1) + ("*" if "[" in a else ""))
+                ctype = norm_type(pm.group(1) + ("*" if declared_array else ""))
                 pname = pm.group(2)
-                params.append(classify(name, ctype, pname, handles))
+                prm = classify(name, ctype, pname, handles)
+                # An output is an array in a *_batch function, or when the header declares it
+                # with [] (e.g. `double t_k[]`); its length is the product of the size_t
+                # parameters. Any other double* / int* is one value.
+                if prm.kind in ("DOUT", "IOUT"):
+                    prm.array = name.endswith("_batch") or declared_array
+                params.append(prm)
         # a size_t right after a char* buffer is its capacity; other size_t make a batch function
         for i, p in enumerate(params):
             if p.kind == "SIZE" and i > 0 and params[i - 1].kind == "CBUF":
@@ -200,7 +208,7 @@ def write_table(funcs, handles, codes, out):
             w(f"inline const Param params{i}[] = {{\n")
             for p in f.params:
                 hidx = handles.index(p.handle) if p.handle else -1
-                w(f"  {{K_{p.kind}, {c_string(p.name)}, {hidx}, {guess(p)!r}}},\n")
+                w(f"  {{K_{p.kind}, {c_string(p.name)}, {hidx}, {guess(p)!r}, {'true' if p.array else 'false'}, {'true' if p.const else 'false'}}},\n")
             w("};\n")
     w("}  // namespace gen\n\n")
     w("inline const Fn kFunctions[] = {\n")
@@ -272,10 +280,10 @@ def write_fortran(funcs, handles, codes, out):
                 nm += "(*)"
             elif p.kind == "DOUT":
                 d = "real(c_double), intent(out)"
-                nm += "(*)" if batch else ""
+                nm += "(*)" if p.array else ""
             elif p.kind == "IOUT":
                 d = "integer(c_int), intent(out)"
-                nm += "(*)" if batch else ""
+                nm += "(*)" if p.array else ""
             elif p.kind == "IARR":
                 d = "integer(c_int), intent(in)"
                 nm += "(*)"

@@ -14,13 +14,13 @@ HEADER = os.environ.get("PUMPLOSS_HEADER")
 PROTOS = pumploss.parse_header(open(HEADER, encoding="utf-8").read()) if HEADER else {}
 CODES = {int(v) for v in re.findall(r"#define\s+PUMPLOSS_(?:OK|E\w+|W\w+)\s+(\d+)\b",
                                      open(HEADER, encoding="utf-8").read())} if HEADER else set()
-STATUS_FUNCS = sorted(n for n, (ret, params) in PROTOS.items() if ret == "int" and params)
+STATUS_FUNCS = sorted(n for n, (ret, params, _arrays) in PROTOS.items() if ret == "int" and params)
 
 
 def test_header_found_and_parsed(lib):
     assert HEADER, "PUMPLOSS_HEADER is not set; run these tests through ctest"
     assert len(PROTOS) >= 14 and 0 in CODES and 5 in CODES
-    assert all(k != "UNKNOWN" for _, params in PROTOS.values() for k, _, _ in params), \
+    assert all(k != "UNKNOWN" for _, params, _arrays in PROTOS.values() for k, _, _ in params), \
         "a parameter type the ctypes module cannot map"
 
 
@@ -42,9 +42,10 @@ def test_every_header_function_is_reachable(lib):
         assert hasattr(lib._dll, name), f"{name} is declared but not exported"
 
 
-def _args(params, value):
-    """Inputs for raw(): `value` in every double, 0 in ints, 'bar' for strings, arrays of 3."""
-    batch = any(k == "SIZE" for k, _, _ in params)
+def _args(params, value, arrays):
+    """Inputs for raw(): `value` in every double, 0 in ints, 'bar' for strings, arrays of 3.
+    `batch` is true when the outputs are per-element arrays (each element has its own status)."""
+    batch = bool(arrays)
     args = []
     for kind, _, _ in params:
         if kind == "DIN":
@@ -66,7 +67,7 @@ def _args(params, value):
 @pytest.mark.parametrize("value", [math.nan, math.inf, -math.inf, 0.0, -1.0, 1e300])
 def test_conventions_hold_for_every_function(lib, name, value):
     params = PROTOS[name][1]
-    args, batch = _args(params, value)
+    args, batch = _args(params, value, PROTOS[name][2])
     status, *outs = lib.raw(name, *args)
     assert status in CODES, f"{name}: undocumented status {status}"
     if any(k == "HIN" for k, _, _ in params):

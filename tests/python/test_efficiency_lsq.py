@@ -78,7 +78,7 @@ def test_power_law_fit_matches_numpy(lib):
     dp = rng.uniform(5e6, 3e7, 30)
     mu = rng.uniform(0.01, 0.07, 30)
     q = 3e-15 * dp ** 0.9 * mu ** -0.8 * np.exp(0.03 * rng.standard_normal(30))
-    k, a, b, cond = lib.leakage_fit_power_law(30, _arr(q), _arr(dp), _arr(mu))
+    k, a, b, cond = lib.leakage_fit_power_law([float(v) for v in q], [float(v) for v in dp], [float(v) for v in mu])
     x, *_ = np.linalg.lstsq(np.column_stack([np.ones(30), np.log(dp), -np.log(mu)]), np.log(q), rcond=None)
     assert a == pytest.approx(x[1], rel=1e-10)
     assert b == pytest.approx(x[2], rel=1e-10)
@@ -98,7 +98,7 @@ def test_leakage_split_matches_scipy_nnls(lib, seed):
     scale = np.linalg.norm(a, axis=0)
     xs, _ = nnls(a / scale, q)
     ref = xs / scale
-    got = lib.leakage_split(25, _arr(q), _arr(dp), _arr(mu))
+    got = lib.leakage_split([float(v) for v in q], [float(v) for v in dp], [float(v) for v in mu])
     for g, r in zip(got, ref):
         if r == 0.0:
             assert g == 0.0

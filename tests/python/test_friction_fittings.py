@@ -39,12 +39,14 @@ def test_crane_ft_and_valves_match_fluids(lib, d):
 
 def test_entrance_exit_line_through_handle(lib):
     create = lib.function("pumploss_line_create")
-    create.restype = ctypes.c_void_p
-    create.argtypes = []
+    create.restype = ctypes.c_int
+    create.argtypes = [ctypes.POINTER(ctypes.c_void_p)]
     destroy = lib.function("pumploss_line_destroy")
     destroy.restype = None
     destroy.argtypes = [ctypes.c_void_p]
-    h = create()
+    handle = ctypes.c_void_p()
+    assert create(ctypes.byref(handle)) == 0
+    h = handle.value
     try:
         d, q, rho, mu = 0.02, 1e-3, 870.0, 0.01
         assert lib.raw("pumploss_line_add_fitting_k", h, d, ft.entrance_sharp())[0] == 0
