@@ -219,6 +219,7 @@ TEST(HealthCapi, HandleLifecycleAndAssessment) {
   EXPECT_EQ(pumploss_health_set_bands(h, 0.05, 0.04, 0.15, 0.25, 0.5, 1.0), PUMPLOSS_EDOMAIN);
   EXPECT_EQ(pumploss_health_set_bands(h, 0.03, 0.04, 0.06, 0.25, 0.5, 1.0), PUMPLOSS_OK);
   EXPECT_EQ(pumploss_health_set_exponents(h, 1.0, -1.0), PUMPLOSS_EDOMAIN);
+  EXPECT_EQ(pumploss_health_set_exponents(h, 2.5, 1.0), PUMPLOSS_EDOMAIN);
   EXPECT_EQ(pumploss_health_set_baseline(h, kNaN), PUMPLOSS_ENONFINITE);
   // errors: outputs NaN, level -1
   EXPECT_EQ(pumploss_health_assess(h, -1.0, kDpRef, 0.0, kTRef, kN, kNaN, kNaN, &level, &reasons, &f, &fref),

@@ -1769,8 +1769,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_baseline(pumploss_health *h, 
 /**
  * Set the exponents of the normalisation q ~ dp^a mu^-b (defaults 1, 1: laminar clearances).
  * @param h the handle
- * @param pressure_exponent a (>= 0)
- * @param viscosity_exponent b (>= 0)
+ * @param pressure_exponent a (0 to 2)
+ * @param viscosity_exponent b (0 to 2)
  * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_exponents(pumploss_health *h, double pressure_exponent,

@@ -112,7 +112,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_exponents(pumploss_health* h,
                                                              double viscosity_exponent) {
   if (h == nullptr) return PUMPLOSS_EMISUSE;
   if (!pumploss::detail::all_finite(pressure_exponent, viscosity_exponent)) return PUMPLOSS_ENONFINITE;
-  if (!(pressure_exponent >= 0) || !(viscosity_exponent >= 0)) return PUMPLOSS_EDOMAIN;
+  if (!(pressure_exponent >= 0) || !(viscosity_exponent >= 0) || !(pressure_exponent <= 2) ||
+      !(viscosity_exponent <= 2))
+    return PUMPLOSS_EDOMAIN;
   h->ref.pressure_exponent = pressure_exponent;
   h->ref.viscosity_exponent = viscosity_exponent;
   return PUMPLOSS_OK;

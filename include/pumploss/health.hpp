@@ -19,6 +19,7 @@
 #include <cstddef>
 
 #include "fluid.hpp"
+#include "leakage.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 
@@ -100,8 +101,8 @@ struct health_reference {
   d341_line<T> viscosity;     ///< the oil's ASTM D341 line
   T rho_kg_m3;                ///< oil density, kg/m^3 (for the throttling rise)
   T cp_j_kg_k;                ///< oil specific heat, J/(kg K)
-  T pressure_exponent = T(1);  ///< a in q ~ dp^a (1: laminar clearance flow)
-  T viscosity_exponent = T(1); ///< b in q ~ mu^-b (1: laminar clearance flow)
+  T pressure_exponent = T(1);  ///< a in q ~ dp^a, 0..2 (1: laminar clearance flow, 0.5: orifice)
+  T viscosity_exponent = T(1); ///< b in q ~ mu^-b, 0..2 (1: laminar clearance flow)
   T baseline_m3_s = scalar_traits<T>::nan();  ///< baseline drain flow at the reference state (NaN: none)
 };
 
@@ -138,10 +139,10 @@ struct health_assessment {
 /// @param r the reading
 /// @return the drain flow at the reference state, m^3/s
 /// @par Source
-/// Laminar leakage scaling q ~ dp/mu (methods.md 5); exponents configurable.
+/// Laminar leakage scaling q ~ dp/mu (methods.md 5); exponents configurable; computed by
+/// leakage_scale_power_law().
 template <class T>
 inline result<T> health_normalise(const health_reference<T>& ref, const health_reading<T>& r) {
-  using std::pow;
   if (!detail::all_finite(r.drain_flow_m3_s, r.outlet_pa, r.case_pa, r.oil_t_k, ref.reference_dp_pa,
                           ref.reference_t_k, ref.pressure_exponent, ref.viscosity_exponent))
     return detail::fail<T>(status::nonfinite);
@@ -153,10 +154,11 @@ inline result<T> health_normalise(const health_reference<T>& ref, const health_r
   if (is_error(nu.st)) return detail::fail<T>(nu.st);
   const auto nu_ref = d341_viscosity(ref.viscosity, ref.reference_t_k);
   if (is_error(nu_ref.st)) return detail::fail<T>(nu_ref.st);
-  const T q = r.drain_flow_m3_s * pow(ref.reference_dp_pa / dp, ref.pressure_exponent) *
-              pow(nu.value / nu_ref.value, ref.viscosity_exponent);
-  if (!detail::finite(q)) return detail::fail<T>(status::overflow);
-  return {q, worst(nu.st, nu_ref.st)};
+  // the reading plays the known state of the power law, the reference state the wanted one
+  const auto q = leakage_scale_power_law(r.drain_flow_m3_s, dp, nu.value, ref.reference_dp_pa, nu_ref.value,
+                                         ref.pressure_exponent, ref.viscosity_exponent);
+  if (is_error(q.st)) return q;
+  return {q.value, worst(q.st, worst(nu.st, nu_ref.st))};
 }
 
 namespace detail {
