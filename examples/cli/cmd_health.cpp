@@ -169,7 +169,8 @@ int run_health(const health_options& o) {
                     "recent trend with the whole");
   r.notes.push_back("the verdict bands are common practice, no source, unless the pump file names the maker's figures");
 
-  // the plot: normalised drain flow over time, the baseline and the bands as flows at the reference speed
+  // the plot: normalised drain flow over time, the baseline and the fraction bands as flows at the
+  // reference speed (the growth bands are in the table)
   const double q_ref_speed = p.max_displacement_m3_rev * p.reference_speed_rev_s;
   svg::plot pl;
   pl.title = "Case drain flow of " + p.name;
@@ -185,14 +186,11 @@ int run_health(const health_options& o) {
     for (const double x : tl.x) tl.y.push_back(du.show((all.intercept + all.slope_per_day * x) * q_ref_speed, D::volume_flow));
     pl.lines.push_back(tl);
   }
-  auto flow_line = [&](double q, const std::string& label) {
-    pl.limits.push_back({du.show(q, D::volume_flow), label + " " + show_quantity(q, D::volume_flow, du, 3)});
-  };
-  flow_line(p.baseline_drain_m3_s, "baseline");
-  flow_line(p.baseline_drain_m3_s * (1 + bands.growth_large), fmt::format("growth +{:.0f} %", 100 * bands.growth_large));
-  flow_line(bands.sound_max * q_ref_speed, fmt::format("sound edge {:.3g} %", 100 * bands.sound_max));
-  flow_line(bands.acceptable_max * q_ref_speed, fmt::format("acceptable edge {:.3g} %", 100 * bands.acceptable_max));
-  flow_line(bands.worn_min * q_ref_speed, fmt::format("worn {:.3g} %", 100 * bands.worn_min));
+  auto flow_line = [&](double q, const std::string& label) { pl.limits.push_back({du.show(q, D::volume_flow), label}); };
+  flow_line(p.baseline_drain_m3_s, "baseline " + show_quantity(p.baseline_drain_m3_s, D::volume_flow, du, 3));
+  flow_line(bands.sound_max * q_ref_speed, fmt::format("sound up to {:.3g} %", 100 * bands.sound_max));
+  flow_line(bands.acceptable_max * q_ref_speed, fmt::format("acceptable up to {:.3g} %", 100 * bands.acceptable_max));
+  flow_line(bands.worn_min * q_ref_speed, fmt::format("worn from {:.3g} %", 100 * bands.worn_min));
 
   output_set files;
   files.add("health.svg", pl.render());
