@@ -14,31 +14,18 @@ cmake --build build-demo -j "$(nproc 2>/dev/null || echo 2)" --target pumploss_c
 pl=./build-demo/examples/cli/pumploss
 mkdir -p "$out"
 
-pending=()
-run() {  # run one subcommand; exit code 3 means its calculation module is not in this build yet
-  local name="$1"
-  shift
+run() {  # run one subcommand; stop at the first failure
   printf '\n==== pumploss %s ====\n' "$*"
-  local rc=0
-  "$pl" "$@" || rc=$?
-  if [ "$rc" -eq 3 ]; then
-    pending+=("$name")
-  elif [ "$rc" -ne 0 ]; then
-    echo "demo: 'pumploss $*' failed (exit code $rc)" >&2
-    exit "$rc"
-  fi
+  "$pl" "$@" || { rc=$?; echo "demo: 'pumploss $*' failed (exit code $rc)" >&2; exit "$rc"; }
 }
 
-run units units 250 bar psi
-run oil oil "$demo/oil.toml" --out "$out"
-run test-stand test-stand "$demo/test_stand.csv" --setup "$demo/test_stand.toml" --out "$out"
-run drain-line drain-line "$demo/drain_line.toml" --size --out "$out"
-run health health "$demo/field_readings.csv" --pump "$demo/pump_p31.toml" --out "$out"
-run budget budget "$demo/pump_p31.toml" --out "$out"
+run units 250 bar psi
+run oil "$demo/oil.toml" --out "$out"
+run test-stand "$demo/test_stand.csv" --setup "$demo/test_stand.toml" --out "$out"
+run drain-line "$demo/drain_line.toml" --size --out "$out"
+run health "$demo/field_readings.csv" --pump "$demo/pump_p31.toml" --out "$out"
+run budget "$demo/pump_p31.toml" --out "$out"
 
 printf '\n==== demo done ====\n'
 echo "Reports and plots: $here/$out/"
 ls -1 "$out" | sed 's/^/  /'
-if [ ${#pending[@]} -gt 0 ]; then
-  echo "Not in this build yet (inputs read and checked, no results): ${pending[*]}"
-fi

@@ -112,7 +112,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_points(pumploss_line*
                                                                   double nu_exponent) {
   if (h == nullptr) return PUMPLOSS_EMISUSE;
   if (q_m3_s == nullptr || dp_pa == nullptr) return set_message(h, status::misuse, "add_component_points");
-  if (n < 1 || n > 16) return set_message(h, status::domain, "add_component_points");
+  // an array length is a size_t (C API conventions); more points than a component holds is a domain error
+  if (n < 1 || n > static_cast<size_t>(pumploss::component_max_points))
+    return set_message(h, status::domain, "add_component_points");
   const auto e = pumploss::line_component_points(static_cast<int>(n), q_m3_s, dp_pa, nu_ref_m2_s, nu_exponent);
   if (is_error(e.st)) return set_message(h, e.st, "add_component_points");
   return add_element(h, e.value, "add_component_points");

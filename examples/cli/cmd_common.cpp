@@ -40,13 +40,8 @@ void emit(const report& r, const output_set& files, const output_options& o, con
   for (const auto& w : written) std::printf("  %s\n", w.c_str());
 }
 
-int pending(const std::string& command, const std::string& module, const std::vector<std::string>& needs) {
-  std::fprintf(stderr,
-               "pumploss %s: the inputs were read and checked, but the %s module is not in this build yet.\n"
-               "No results were computed and no files were written. This command will use:\n",
-               command.c_str(), module.c_str());
-  for (const auto& n : needs) std::fprintf(stderr, "  - %s\n", n.c_str());
-  return exit_pending;
+std::string status_text(pumploss::status st) {
+  return st == pumploss::status::ok ? std::string("ok") : std::string(pumploss::status_message(static_cast<int>(st)));
 }
 
 }  // namespace plcli

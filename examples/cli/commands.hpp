@@ -6,6 +6,7 @@
 #include <string>
 #include <vector>
 
+#include "pumploss/status.hpp"
 #include "report.hpp"
 
 namespace CLI {
@@ -34,8 +35,8 @@ display_units make_units(const output_options& o);
 void emit(const report& r, const output_set& files, const output_options& o, const display_units& u,
           const std::string& stem);
 
-/// Say that a calculation module is missing; return exit_pending.
-int pending(const std::string& command, const std::string& module, const std::vector<std::string>& needs);
+/// "ok" or the library's sentence for a status.
+std::string status_text(pumploss::status st);
 
 }  // namespace plcli
 

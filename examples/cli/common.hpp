@@ -17,7 +17,6 @@ enum exit_code : int {
   exit_ok = 0,         ///< the job is done
   exit_usage = 1,      ///< bad command line
   exit_input = 2,      ///< bad input file or a calculation refused the inputs
-  exit_pending = 3,    ///< the calculation module is not in this build yet
 };
 
 /// The cautions printed at the foot of every report and of every --help.

@@ -1,5 +1,7 @@
 #include "inputs.hpp"
 
+#include "pumploss/line.hpp"
+
 #include <algorithm>
 #include <cmath>
 #include <tuple>
@@ -186,13 +188,15 @@ std::vector<column_spec> stand_columns() {
       {"speed", column_kind::quantity, D::rotational_speed, true},
       {"inlet pressure", column_kind::quantity, D::pressure, true},
       {"outlet pressure", column_kind::quantity, D::pressure, true},
-      {"outlet flow", column_kind::quantity, D::volume_flow, true},
+      {"outlet flow", column_kind::quantity, D::volume_flow, false},  // a pump's flow
+      {"inlet flow", column_kind::quantity, D::volume_flow, false},   // a motor's flow
       {"torque", column_kind::quantity, D::torque, true},
       {"drain flow", column_kind::quantity, D::volume_flow, true},
       {"inlet temperature", column_kind::quantity, D::temperature, true},
       {"outlet temperature", column_kind::quantity, D::temperature, false},
       {"drain temperature", column_kind::quantity, D::temperature, false},
       {"case pressure", column_kind::quantity, D::pressure, false},
+      {"meter temperature", column_kind::quantity, D::temperature, false},
   };
 }
 
@@ -205,16 +209,26 @@ stand_setup read_stand_setup(const std::string& path) {
   s.pump = m.choice("kind", {"pump", "motor"}) == "pump";
   s.nominal_displacement_m3_rev = positive(m, "displacement", D::displacement);
   s.viscosity_temperature = m.choice("viscosity_temperature", {"inlet", "outlet", "drain"}, "drain");
+  s.displacement_for_efficiency =
+      m.choice("displacement_for_efficiency", {"two-step", "intercept", "slope", "nominal"}, "two-step");
   m.finish();
+  if (auto fm = root.table_opt("flow_meter")) {
+    s.meter_at_port = fm->choice("position", {"port", "return"}) == "port";
+    if (!s.meter_at_port) {
+      s.meter_pressure_pa = fm->quantity("pressure", D::pressure);
+      if (!(s.meter_pressure_pa > -1e5 && s.meter_pressure_pa < 1e8))
+        throw fm->error("pressure", "must be a gauge pressure between -1 bar and 1000 bar");
+    }
+    fm->finish();
+  }
   auto ins = root.table("instruments");
   s.speed = read_instrument(ins, "speed", D::rotational_speed);
   s.pressure = read_instrument(ins, "pressure", D::pressure);
   s.flow = read_instrument(ins, "flow", D::volume_flow);
   s.torque = read_instrument(ins, "torque", D::torque);
-  s.temperature = read_instrument(ins, "temperature", D::temperature);
   ins.finish();
   auto f = root.table("fit");
-  s.model = f.choice("model", {"wilson", "wilson-extended"}, "wilson");
+  s.schloesser = f.choice("model", {"wilson", "wilson+schloesser"}, "wilson") == "wilson+schloesser";
   f.finish();
   auto map = root.table("map");
   std::tie(s.map_speed_lo, s.map_speed_hi) = range_pair(map, "speeds", D::rotational_speed);
@@ -288,6 +302,14 @@ drain_line_spec read_drain_line(const std::string& path) {
     line_component comp;
     comp.name = s.text("name");
     comp.curve = s.pair_list("curve", D::volume_flow, D::pressure);
+    if (!comp.curve.empty() && comp.curve.front().first == 0.0) {
+      // the curve runs through the origin anyway (pumploss::line_component_points)
+      if (comp.curve.front().second != 0.0) throw s.error("curve", "at zero flow the pressure drop must be zero");
+      comp.curve.erase(comp.curve.begin());
+    }
+    if (comp.curve.empty() || comp.curve.size() > static_cast<std::size_t>(pumploss::component_max_points))
+      throw s.error("curve", "needs 1 to " + std::to_string(pumploss::component_max_points) +
+                                 " points with a flow above zero");
     for (std::size_t k = 1; k < comp.curve.size(); ++k)
       if (!(comp.curve[k].first > comp.curve[k - 1].first) || !(comp.curve[k].second >= comp.curve[k - 1].second))
         throw s.error("curve", "flows must rise and pressure drops must not fall from point to point");
@@ -297,11 +319,10 @@ drain_line_spec read_drain_line(const std::string& path) {
     d.components.push_back(comp);
   }
   if (auto z = root.table_opt("sizing")) {
-    if (z->has("bores")) d.sizing_bores_m = z->quantity_list("bores", D::length);
-    for (std::size_t k = 0; k < d.sizing_bores_m.size(); ++k)
-      if (!(d.sizing_bores_m[k] > 0) || (k > 0 && !(d.sizing_bores_m[k] > d.sizing_bores_m[k - 1])))
-        throw z->error("bores", "bores must be above zero and rising");
+    const auto kinds = z->choice("kinds", {"tube", "hose", "tube+hose"}, "tube+hose");
+    d.sizing_kinds = kinds == "tube" ? 1 : (kinds == "hose" ? 2 : 3);
     d.max_velocity_m_s = z->quantity_opt("max_velocity", D::velocity);
+    if (d.max_velocity_m_s && !(*d.max_velocity_m_s > 0)) throw z->error("max_velocity", "must be above zero");
     z->finish();
   }
   root.finish();
@@ -309,8 +330,7 @@ drain_line_spec read_drain_line(const std::string& path) {
 }
 
 double pump_spec::geometric_displacement_m3_rev() const {
-  const double area = kPi * piston_diameter_m * piston_diameter_m / 4;
-  return static_cast<double>(pistons) * area * 2 * pitch_radius_m * std::tan(max_swash_angle_rad);
+  return pumploss::piston_pump_displacement(geometry).value;
 }
 
 pump_spec read_pump(const std::string& path) {
@@ -319,61 +339,86 @@ pump_spec read_pump(const std::string& path) {
   p.oil = read_oil_ref(root);
   auto pu = root.table("pump");
   p.name = pu.text("name");
-  p.pistons = pu.integer("pistons");
-  if (p.pistons < 3 || p.pistons > 15) throw pu.error("pistons", "must lie between 3 and 15");
+  const long z = pu.integer("pistons");
+  if (z < 3 || z > 15) throw pu.error("pistons", "must lie between 3 and 15");
   p.max_displacement_m3_rev = positive(pu, "max_displacement", D::displacement);
   p.rated_speed_rev_s = positive(pu, "rated_speed", D::rotational_speed);
   p.max_pressure_pa = positive(pu, "max_pressure", D::pressure);
   pu.finish();
 
+  auto& q = p.geometry;
+  q.pistons = static_cast<int>(z);
+  q.stated_displacement_m3_rev = p.max_displacement_m3_rev;
   auto g = root.table("geometry");
-  p.piston_diameter_m = positive(g, "piston_diameter", D::length);
-  p.bore_clearance_m = positive(g, "bore_clearance", D::length);
-  p.engaged_length_min_m = positive(g, "engaged_length_min", D::length);
-  p.engaged_length_max_m = positive(g, "engaged_length_max", D::length);
-  if (!(p.engaged_length_max_m >= p.engaged_length_min_m))
-    throw g.error("engaged_length_max", "must not lie below engaged_length_min");
-  p.pitch_radius_m = positive(g, "pitch_radius", D::length);
+  q.piston_diameter_m = positive(g, "piston_diameter", D::length);
+  q.bore_clearance_m = positive(g, "bore_clearance", D::length);
+  q.engaged_length_min_m = positive(g, "engaged_length_min", D::length);
+  q.pitch_radius_m = positive(g, "pitch_radius", D::length);
   const double beta = g.number("max_swash_angle_deg");
   if (!(beta > 0 && beta < 25)) throw g.error("max_swash_angle_deg", "must lie between 0 and 25 degrees");
-  p.max_swash_angle_rad = beta * kPi / 180;
-  const double pitch = 2 * kPi * p.pitch_radius_m / static_cast<double>(p.pistons);
-  if (!(p.piston_diameter_m < pitch))
-    throw g.error("piston_diameter", "is larger than the spacing of the pistons on the pitch circle");
-  auto sl = g.table("slipper");
-  p.slipper_inner_radius_m = positive(sl, "inner_radius", D::length);
-  p.slipper_outer_radius_m = positive(sl, "outer_radius", D::length);
-  if (!(p.slipper_outer_radius_m > p.slipper_inner_radius_m))
-    throw sl.error("outer_radius", "must lie above inner_radius");
-  p.slipper_gap_m = positive(sl, "gap", D::length);
-  p.slipper_orifice_m = positive(sl, "feed_orifice_diameter", D::length);
-  p.slipper_orifice_length_m = positive(sl, "feed_orifice_length", D::length);
-  sl.finish();
-  auto vp = g.table("valve_plate");
-  const auto inner = vp.quantity_list("inner_land", D::length);
-  const auto outer = vp.quantity_list("outer_land", D::length);
-  if (inner.size() != 2 || !(inner[1] > inner[0]) || !(inner[0] > 0))
-    throw vp.error("inner_land", "must be [inner radius, outer radius] of the land, rising");
-  if (outer.size() != 2 || !(outer[1] > outer[0]) || !(outer[0] > inner[1]))
-    throw vp.error("outer_land", "must be [inner radius, outer radius], outside the inner land");
-  p.valve_inner_land_in_m = inner[0];
-  p.valve_inner_land_out_m = inner[1];
-  p.valve_outer_land_in_m = outer[0];
-  p.valve_outer_land_out_m = outer[1];
-  const double arc = vp.number("arc_deg");
-  if (!(arc > 0 && arc < 180)) throw vp.error("arc_deg", "must lie between 0 and 180 degrees");
-  p.valve_arc_rad = arc * kPi / 180;
-  p.valve_gap_m = positive(vp, "gap", D::length);
-  vp.finish();
-  auto ct = g.table("controller");
-  p.controller_flow_m3_s = non_negative(ct, "consumption", D::volume_flow);
-  p.controller_bleed_orifice_m = non_negative(ct, "bleed_orifice_diameter", D::length);
-  ct.finish();
+  q.max_swash_angle_rad = beta * kPi / 180;
+  if (const auto e = g.number_opt("piston_eccentricity")) {
+    if (!(*e >= 0 && *e <= 1)) throw g.error("piston_eccentricity", "must lie between 0 (centred) and 1");
+    q.piston_eccentricity = *e;
+  }
+  if (const auto h = g.number_opt("high_pressure_share")) {
+    if (!(*h > 0 && *h <= 1)) throw g.error("high_pressure_share", "must lie above 0 and at most 1");
+    q.high_pressure_share = *h;
+  }
+  if (!(2 * q.pitch_radius_m * std::sin(kPi / static_cast<double>(z)) > q.piston_diameter_m + 2 * q.bore_clearance_m))
+    throw g.error("piston_diameter", "the bores do not fit side by side on the pitch circle");
+  if (auto sl = g.table_opt("slipper")) {
+    q.slipper_pocket_radius_m = positive(*sl, "inner_radius", D::length);
+    q.slipper_outer_radius_m = positive(*sl, "outer_radius", D::length);
+    if (!(q.slipper_outer_radius_m > q.slipper_pocket_radius_m))
+      throw sl->error("outer_radius", "must lie above inner_radius");
+    q.slipper_gap_m = positive(*sl, "gap", D::length);
+    q.slipper_feed_diameter_m = positive(*sl, "feed_orifice_diameter", D::length);
+    q.slipper_feed_length_m = positive(*sl, "feed_orifice_length", D::length);
+    sl->finish();
+  }
+  if (auto b = g.table_opt("ball")) {
+    q.ball_diameter_m = positive(*b, "diameter", D::length);
+    q.ball_clearance_m = positive(*b, "clearance", D::length);
+    q.ball_length_m = positive(*b, "length", D::length);
+    b->finish();
+  }
+  if (auto vp = g.table_opt("valve_plate")) {
+    const auto inner = vp->quantity_list("inner_land", D::length);
+    const auto outer = vp->quantity_list("outer_land", D::length);
+    if (inner.size() != 2 || !(inner[1] > inner[0]) || !(inner[0] > 0))
+      throw vp->error("inner_land", "must be [inner radius, outer radius] of the land, rising");
+    if (outer.size() != 2 || !(outer[1] > outer[0]) || !(outer[0] > inner[1]))
+      throw vp->error("outer_land", "must be [inner radius, outer radius], outside the inner land");
+    q.valve_inner_land_inner_radius_m = inner[0];
+    q.valve_inner_land_outer_radius_m = inner[1];
+    q.valve_outer_land_inner_radius_m = outer[0];
+    q.valve_outer_land_outer_radius_m = outer[1];
+    const double arc = vp->number("arc_deg");
+    if (!(arc > 0 && arc < 180)) throw vp->error("arc_deg", "must lie between 0 and 180 degrees");
+    q.valve_kidney_arc_rad = arc * kPi / 180;
+    q.valve_gap_m = positive(*vp, "gap", D::length);
+    vp->finish();
+  }
+  if (auto ct = g.table_opt("controller")) {
+    q.controller_flow_m3_s = non_negative(*ct, "consumption", D::volume_flow);
+    q.bleed_orifice_diameter_m = ct->quantity_opt("bleed_orifice_diameter", D::length).value_or(0.0);
+    if (!(q.bleed_orifice_diameter_m >= 0)) throw ct->error("bleed_orifice_diameter", "must not be negative");
+    if (const auto cd = ct->number_opt("bleed_cd")) {
+      if (!(*cd > 0 && *cd <= 1)) throw ct->error("bleed_cd", "must lie above 0 and at most 1");
+      q.bleed_cd = *cd;
+    }
+    ct->finish();
+  }
   g.finish();
-  const double vg = p.geometric_displacement_m3_rev();
-  if (std::fabs(vg / p.max_displacement_m3_rev - 1) > 0.03)
-    throw pu.error("max_displacement", "differs by more than 3 % from the geometry (" +
-                                           std::to_string(vg * 1e6).substr(0, 6) + " cm3/rev)");
+  const auto check = pumploss::validate_piston_pump(q);
+  if (pumploss::is_error(check.st))
+    throw g.error_here(std::string("the geometry is not a possible pump: ") +
+                       pumploss::status_message(static_cast<int>(check.st)));
+  if (check.st == pumploss::status::implausible)
+    throw pu.error("max_displacement", "differs by more than 5 % from the geometry (" +
+                                           std::to_string(check.displacement_m3_rev * 1e6).substr(0, 6) +
+                                           " cm3/rev)");
 
   auto h = root.table("health");
   p.baseline_drain_m3_s = positive(h, "baseline_drain_flow", D::volume_flow);
@@ -382,10 +427,18 @@ pump_spec read_pump(const std::string& path) {
   p.reference_speed_rev_s = positive(h, "reference_speed", D::rotational_speed);
   for (const double v : h.number_list("drain_fraction_bands_percent")) p.fraction_bands.push_back(v / 100);
   for (const double v : h.number_list("growth_bands_percent")) p.growth_bands.push_back(v / 100);
-  for (const auto* b : {&p.fraction_bands, &p.growth_bands})
-    if (b->size() != 3 || !((*b)[0] > 0) || !((*b)[1] > (*b)[0]) || !((*b)[2] > (*b)[1]))
-      throw h.error(b == &p.fraction_bands ? "drain_fraction_bands_percent" : "growth_bands_percent",
-                    "needs three rising values above zero (edges of the four verdict levels)");
+  if (p.fraction_bands.size() != 3 || !(p.fraction_bands[0] > 0) || !(p.fraction_bands[1] > p.fraction_bands[0]) ||
+      !(p.fraction_bands[2] > p.fraction_bands[1]) || !(p.fraction_bands[2] < 1))
+    throw h.error("drain_fraction_bands_percent",
+                  "needs three rising values between 0 and 100 (upper edges of sound and acceptable, lower edge of "
+                  "worn)");
+  if (p.growth_bands.size() != 2 || !(p.growth_bands[0] > 0) || !(p.growth_bands[1] > p.growth_bands[0]))
+    throw h.error("growth_bands_percent", "needs two rising values above zero (moderate and large growth)");
+  if (const auto m = h.number_opt("hot_margin")) {
+    if (!(*m > 0)) throw h.error("hot_margin", "must be above zero");
+    p.hot_margin = *m;
+  }
+  p.clearance_from_drain = h.choice("clearance_temperature", {"oil", "drain"}, "oil") == "drain";
   p.bands_source = h.text("bands_source");
   h.finish();
 
@@ -397,6 +450,7 @@ pump_spec read_pump(const std::string& path) {
   if ((p.sweep_to_pa - p.sweep_from_pa) / p.sweep_step_pa > 1000) throw sw.error("step", "gives more than 1000 points");
   p.sweep_speed_rev_s = positive(sw, "speed", D::rotational_speed);
   p.sweep_case_pa = sw.quantity_opt("case_pressure", D::pressure).value_or(0.0);
+  if (!(p.sweep_case_pa < p.sweep_from_pa)) throw sw.error("case_pressure", "must lie below the sweep's first pressure");
   p.sweep_temperature_k = sw.quantity("temperature", D::temperature);
   p.sweep_displacement_fraction = sw.number_opt("displacement_fraction").value_or(1.0);
   if (!(p.sweep_displacement_fraction >= 0 && p.sweep_displacement_fraction <= 1))
@@ -414,6 +468,7 @@ std::vector<column_spec> field_columns() {
       {"speed", column_kind::quantity, D::rotational_speed, true},
       {"drain flow", column_kind::quantity, D::volume_flow, true},
       {"drain temperature", column_kind::quantity, D::temperature, false},
+      {"case pressure", column_kind::quantity, D::pressure, false},
       {"note", column_kind::text, D::pressure, false},
   };
 }

@@ -11,6 +11,7 @@
 #include "config.hpp"
 #include "csv.hpp"
 #include "pumploss/fluid.hpp"
+#include "pumploss/piston_pump.hpp"
 
 namespace plcli {
 
@@ -61,8 +62,11 @@ struct stand_setup {
   bool pump = true;                        ///< pump or motor
   double nominal_displacement_m3_rev = 0;  ///< maker's figure, for comparison only
   std::string viscosity_temperature;       ///< "inlet", "outlet" or "drain": which column sets mu
-  instrument speed, pressure, flow, torque, temperature;
-  std::string model;                       ///< "wilson" or "wilson-extended"
+  std::string displacement_for_efficiency;  ///< "two-step", "intercept", "slope" or "nominal"
+  instrument speed, pressure, flow, torque;
+  bool meter_at_port = true;               ///< the flow column is read at the port (no correction)
+  double meter_pressure_pa = 0;            ///< gauge pressure at the flow meter (when not at the port)
+  bool schloesser = false;                 ///< also fit the Schloesser extension
   double map_speed_lo = 0, map_speed_hi = 0, map_dp_lo = 0, map_dp_hi = 0, map_temperature_k = 0;
   std::vector<double> map_levels;          ///< overall efficiency contour levels (fractions)
 };
@@ -104,7 +108,7 @@ struct drain_line_spec {
   std::vector<line_segment> segments;
   std::vector<line_fitting> fittings;
   std::vector<line_component> components;
-  std::vector<double> sizing_bores_m;   ///< candidate inside diameters (empty: the module's table)
+  int sizing_kinds = 3;                 ///< standard bores to try: 1 tubes, 2 hoses, 3 both
   std::optional<double> max_velocity_m_s;
 };
 drain_line_spec read_drain_line(const std::string& path);
@@ -113,25 +117,19 @@ drain_line_spec read_drain_line(const std::string& path);
 struct pump_spec {
   oil_spec oil;
   std::string name;
-  long pistons = 0;
   double max_displacement_m3_rev = 0, rated_speed_rev_s = 0, max_pressure_pa = 0;
-  // geometry
-  double piston_diameter_m = 0, bore_clearance_m = 0, engaged_length_min_m = 0, engaged_length_max_m = 0;
-  double pitch_radius_m = 0, max_swash_angle_rad = 0;
-  double slipper_inner_radius_m = 0, slipper_outer_radius_m = 0, slipper_gap_m = 0, slipper_orifice_m = 0,
-         slipper_orifice_length_m = 0;
-  double valve_inner_land_in_m = 0, valve_inner_land_out_m = 0, valve_outer_land_in_m = 0,
-         valve_outer_land_out_m = 0, valve_arc_rad = 0, valve_gap_m = 0;
-  double controller_flow_m3_s = 0, controller_bleed_orifice_m = 0;
+  pumploss::piston_pump<double> geometry;  ///< validated by pumploss::validate_piston_pump
   // health
   double baseline_drain_m3_s = 0, reference_dp_pa = 0, reference_temperature_k = 0, reference_speed_rev_s = 0;
   std::vector<double> fraction_bands;   ///< drain / (V_max n) edges, ascending (3 values)
-  std::vector<double> growth_bands;     ///< growth over baseline edges, ascending (3 values)
+  std::vector<double> growth_bands;     ///< growth over baseline: moderate, large (2 values)
+  double hot_margin = 1.0;              ///< drain rise flagged above this times the throttling rise
+  bool clearance_from_drain = false;    ///< viscosity at the drain temperature (else the oil temperature)
   std::string bands_source;
   // sweep
   double sweep_from_pa = 0, sweep_to_pa = 0, sweep_step_pa = 0, sweep_speed_rev_s = 0, sweep_case_pa = 0,
          sweep_temperature_k = 0, sweep_displacement_fraction = 1;
-  /// Maximum displacement implied by the geometry: z A_p 2 R tan(beta).
+  /// Maximum displacement implied by the geometry (pumploss::piston_pump_displacement).
   double geometric_displacement_m3_rev() const;
 };
 pump_spec read_pump(const std::string& path);

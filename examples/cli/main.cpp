@@ -16,8 +16,7 @@ int main(int argc, char** argv) {
       "Reads test-stand data, drain-line descriptions and field readings; writes text and CSV reports\n"
       "and SVG plots. Units are written in the files ('pressure [bar]', \"12.7 mm\").",
       "pumploss"};
-  app.footer(std::string("\nExit codes: 0 done, 1 bad command line, 2 bad input file or values, 3 calculation "
-                         "module not in this build.\n\n") +
+  app.footer(std::string("\nExit codes: 0 done, 1 bad command line, 2 bad input file or values (nothing written).\n\n") +
              cautions);
   app.set_version_flag("--version", std::string("pumploss ") + pumploss::version_string);
   app.require_subcommand(1, 1);

@@ -1,8 +1,9 @@
 #!/usr/bin/env python3
 """The SVG files of the pumploss program are well-formed XML and hold the expected series.
 
-Runs `pumploss oil` on the demo oil file and the sample writer for the other plot kinds, then
-parses every SVG with xml.etree (standard library). Exit code 0 when all checks pass.
+Runs every reporting subcommand on the demo files and the sample writer for each plot kind, then
+parses every SVG with xml.etree (standard library) and checks the series each plot must hold.
+Exit code 0 when all checks pass.
 """
 import argparse
 import os
@@ -56,6 +57,60 @@ def main():
         with open(os.path.join(out, "oil_properties.csv")) as f:
             rows = [l for l in f if l[0].isdigit()]
         check(len(rows) == 15, "oil: CSV has 15 rows")
+
+        demo = a.demo
+        for args in (["test-stand", os.path.join(demo, "test_stand.csv"), "--setup", os.path.join(demo, "test_stand.toml")],
+                     ["drain-line", os.path.join(demo, "drain_line.toml"), "--size"],
+                     ["health", os.path.join(demo, "field_readings.csv"), "--pump", os.path.join(demo, "pump_p31.toml")],
+                     ["budget", os.path.join(demo, "pump_p31.toml")]):
+            subprocess.run([a.cli] + args + ["--out", out], check=True, stdout=subprocess.DEVNULL)
+
+        def npoints(g):
+            line = g.find(SVG + "polyline")
+            if line is not None:
+                return len(line.get("points").split())
+            return len(g.findall(SVG + "circle"))
+
+        # test-stand: a contour line per level of test_stand.toml and the 30 test points as markers
+        root = ET.parse(os.path.join(out, "test_stand_map.svg")).getroot()
+        got = list(groups(root, "contour"))
+        check(got == ["80 %", "85 %", "88 %", "90 %", "91 %", "92 %"], "map: contour levels %r" % got)
+        for name in ["85 %", "88 %", "90 %"]:
+            g = groups(root, "contour").get(name)
+            check(g is not None and g.find(SVG + "path") is not None and "M" in g.find(SVG + "path").get("d"),
+                  "map: level %s drawn" % name)
+        pts = groups(root, "series").get("test points")
+        check(pts is not None and len(pts.findall(SVG + "circle")) == 30 and pts.find(SVG + "polyline") is None,
+              "map: 30 test points as markers")
+
+        # drain-line: the described line and the sized bore over 8 temperatures, the allowed pressure
+        root = ET.parse(os.path.join(out, "drain_line.svg")).getroot()
+        series = groups(root, "series")
+        names = list(series)
+        check(len(names) == 2 and names[0] == "line as described" and names[1].startswith("with "),
+              "drain-line: series %r" % names)
+        check(all(npoints(g) == 8 for g in series.values()), "drain-line: 8 temperatures per series")
+        check(list(groups(root, "limit")) == ["allowed 1.00 bar"], "drain-line: limit %r" % list(groups(root, "limit")))
+        # the described line fails cold: its first point lies above the limit line (smaller SVG y)
+        lim_y = float(groups(root, "limit")["allowed 1.00 bar"].find(SVG + "line").get("y1"))
+        first_y = float(series["line as described"].find(SVG + "polyline").get("points").split()[0].split(",")[1])
+        check(first_y < lim_y, "drain-line: cold-start case pressure above the allowed value")
+
+        # health: normalised and raw drain flow of 42 readings, the trend, baseline and bands
+        root = ET.parse(os.path.join(out, "health.svg")).getroot()
+        series = groups(root, "series")
+        check(list(series) == ["normalised drain flow", "drain flow as read", "trend, all readings"],
+              "health: series %r" % list(series))
+        check(npoints(series["normalised drain flow"]) == 42, "health: 42 readings")
+        lims = list(groups(root, "limit"))
+        check(len(lims) == 4 and lims[0].startswith("baseline") and lims[3].startswith("worn"),
+              "health: limits %r" % lims)
+
+        # budget: one stacked area per leakage path of the pump file
+        root = ET.parse(os.path.join(out, "budget.svg")).getroot()
+        got = list(groups(root, "area"))
+        check(got == ["piston-bore", "slipper", "ball-socket", "valve-plate-inner", "valve-plate-outer", "controller"],
+              "budget: areas %r" % got)
 
         expected = {
             "lines.svg": ("series", ["12.7 mm line", "19.1 mm line"], ["allowed 1.0 bar"]),
