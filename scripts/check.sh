@@ -5,6 +5,7 @@
 #      consumers (find_package, pkg-config);
 #   3. the C API bad-input test under AddressSanitizer + UndefinedBehaviorSanitizer and the
 #      C API thread test under ThreadSanitizer (clang; only the targets they need);
+#   3b. the libFuzzer targets (tests/fuzz) replaying their committed corpus;
 #   4. the Windows x64 DLL (mingw-w64): export table against pumploss.def and exports.txt,
 #      and the C caller run against it under wine when wine is installed;
 #   5. the docs (Doxygen, warnings as errors).
@@ -64,6 +65,10 @@ cmake --preset ci-linux-clang-tsan -B "$out/tsan" >/dev/null
 cmake --build "$out/tsan" -j "$jobs" --target capi_threads
 # Fewer rounds than the plain build: TSan is 5-15 times slower; 8 threads still overlap.
 TSAN_OPTIONS=halt_on_error=1:second_deadlock_stack=1 "$out/tsan/tests/capi/capi_threads" 20 8
+
+step "fuzz targets (libFuzzer + ASan/UBSan): replay of the committed corpus"
+# Deterministic: every input of tests/fuzz/corpus/<target>/ once (scripts/fuzz.sh N fuzzes N s).
+PUMPLOSS_CHECK_DIR="$out" bash scripts/fuzz.sh 0
 
 step "Windows x64 DLL (mingw-w64): export table, C caller under wine"
 cmake --preset ci-windows-x64 -B "$out/win64" >/dev/null

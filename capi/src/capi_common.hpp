@@ -99,7 +99,12 @@ inline int call_batch(std::size_t n, double* const (&outs)[N], int* status_out, 
   bool failed = false;
   try {
     for (std::size_t i = 0; i < n; ++i) {
-      const status st = elem(i);
+      status st = elem(i);
+      if (!is_error(st)) {  // as in call(): a usable element never has a NaN or infinite output
+        for (double* p : outs) {
+          if (!std::isfinite(p[i])) st = status::overflow;
+        }
+      }
       const int code = static_cast<int>(st);
       status_out[i] = code;
       if (is_error(st)) {
