@@ -1,4 +1,5 @@
 // C API wrappers for efficiency.hpp, leakage.hpp and thermal.hpp.
+#include <cstdint>
 #include <vector>
 
 #include "capi_common.hpp"
@@ -8,6 +9,7 @@
 
 using pumploss::capi::call;
 using pumploss::capi::call_batch;
+using pumploss::capi::call_batch_fast;
 
 namespace {
 template <class F>
@@ -22,17 +24,61 @@ int efficiency_scalar(F&& f, double v, double n, double dp, double q, double t, 
   });
 }
 
-template <class F>
+/// True when [a, a+n) and [b, b+n) share memory (in-place calls take the element-by-element path).
+bool overlap(const double* a, const double* b, std::size_t n) {
+  const auto x = reinterpret_cast<std::uintptr_t>(a), y = reinterpret_cast<std::uintptr_t>(b);
+  const std::uintptr_t len = n * sizeof(double);
+  return x < y + len && y < x + len;
+}
+
+/// Fast path of the efficiency batches: the expressions of pump_efficiency() / motor_efficiency()
+/// for eta_v, eta_hm and eta_t in one branch-free loop, and a flag 0 only where the template is
+/// certain to return status::ok with these values: every input in [1e-100, 1e100] (finite,
+/// positive; then every product, quotient and the template's overflow sum are finite) and both
+/// efficiencies at most 1 (not implausible). Anything else is redone by the template.
+template <bool Pump>
+void efficiency_kernel(std::size_t i0, std::size_t i1, const double* v, const double* sp, const double* dp,
+                       const double* q, const double* t, double* eta_v, double* eta_hm, double* eta_t, int* flag) {
+  const double lo = 1e-100, hi = 1e100;
+  const double inv_two_pi = pumploss::detail::inv_two_pi<double>();
+  for (std::size_t i = i0; i < i1; ++i) {
+    const double vi = v[i], ni = sp[i], dpi = dp[i], qi = q[i], ti = t[i];
+    const double q_th = vi * ni;
+    const double t_th = vi * dpi * inv_two_pi;
+    const double a = Pump ? qi / q_th : q_th / qi;
+    const double b = Pump ? t_th / ti : ti / t_th;
+    eta_v[i] = a;
+    eta_hm[i] = b;
+    eta_t[i] = a * b;
+    const bool ok = (vi >= lo) & (vi <= hi) & (ni >= lo) & (ni <= hi) & (dpi >= lo) & (dpi <= hi) & (qi >= lo) &
+                    (qi <= hi) & (ti >= lo) & (ti <= hi) & (a <= 1.0) & (b <= 1.0);
+    flag[i] = ok ? 0 : 1;
+  }
+}
+
+template <bool Pump, class F>
 int efficiency_batch(F&& f, size_t n, const double* v, const double* sp, const double* dp, const double* q,
                      const double* t, double* eta_v, double* eta_hm, double* eta_t, int* status) {
   const bool in_ok = v != nullptr && sp != nullptr && dp != nullptr && q != nullptr && t != nullptr;
-  return call_batch(n, {eta_v, eta_hm, eta_t}, status, in_ok, [&](std::size_t i) {
+  auto elem = [&](std::size_t i) {
     const auto r = f(v[i], sp[i], dp[i], q[i], t[i]);
     eta_v[i] = r.eta_v;
     eta_hm[i] = r.eta_hm;
     eta_t[i] = r.eta_t;
     return r.st;
-  });
+  };
+  bool aliased = false;
+  if (in_ok && eta_v != nullptr && eta_hm != nullptr && eta_t != nullptr) {
+    for (const double* in : {v, sp, dp, q, t})
+      for (const double* out : {static_cast<const double*>(eta_v), static_cast<const double*>(eta_hm),
+                                static_cast<const double*>(eta_t)})
+        aliased = aliased || overlap(in, out, n);
+  }
+  if (aliased) return call_batch(n, {eta_v, eta_hm, eta_t}, status, in_ok, elem);
+  auto fast = [&](std::size_t i0, std::size_t i1, int* flag) {
+    efficiency_kernel<Pump>(i0, i1, v, sp, dp, q, t, eta_v, eta_hm, eta_t, flag);
+  };
+  return call_batch_fast(n, {eta_v, eta_hm, eta_t}, status, in_ok, fast, elem);
 }
 
 const auto kPump = [](double v, double n, double dp, double q, double t) {
@@ -72,7 +118,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_efficiency_batch(size_t n, const do
                                                               const double* flow_m3_s, const double* torque_n_m,
                                                               double* eta_v, double* eta_hm, double* eta_t,
                                                               int* status) {
-  return efficiency_batch(kPump, n, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, eta_v, eta_hm,
+  return efficiency_batch<true>(kPump, n, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, eta_v, eta_hm,
                           eta_t, status);
 }
 
@@ -81,7 +127,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_batch(size_t n, const d
                                                                const double* flow_m3_s, const double* torque_n_m,
                                                                double* eta_v, double* eta_hm, double* eta_t,
                                                                int* status) {
-  return efficiency_batch(kMotor, n, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, eta_v, eta_hm,
+  return efficiency_batch<false>(kMotor, n, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, eta_v, eta_hm,
                           eta_t, status);
 }
 
