@@ -68,6 +68,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model
                                                      pumploss_model** model) {
   if (model == nullptr) return PUMPLOSS_EMISUSE;
   *model = nullptr;
+  // NULL arrays are misuse whatever else is wrong (the convention of pumploss.h), so before the enums.
+  if (dp_pa == nullptr || speed_rev_s == nullptr || mu_pa_s == nullptr || flow_m3_s == nullptr || torque_n_m == nullptr)
+    return PUMPLOSS_EMISUSE;
   if ((machine_kind != 0 && machine_kind != 1) || (model_kind != 0 && model_kind != 1)) return PUMPLOSS_EDOMAIN;
   pumploss::status st = pumploss::status::ok;
   pumploss_model* h = nullptr;
