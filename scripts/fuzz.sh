@@ -28,6 +28,6 @@ for t in "${targets[@]}"; do
     echo "fuzz: $t found a problem (log $log, input saved as $out/crash-*)"
     exit 1
   fi
-  grep -E '^#[0-9]+ +DONE|stat::number_of_executed_units|stat::peak_rss_mb' "$log" | tr -s ' ' | paste -sd' '
+  grep -E '^#[0-9]+[[:space:]]+DONE|stat::number_of_executed_units|stat::peak_rss_mb' "$log" | tr -s ' ' | paste -sd' '
   echo "     corpus now $(ls "$work" | wc -l) new inputs"
 done

@@ -24,11 +24,10 @@ int efficiency_scalar(F&& f, double v, double n, double dp, double q, double t, 
   });
 }
 
-/// True when [a, a+n) and [b, b+n) share memory (in-place calls take the element-by-element path).
-bool overlap(const double* a, const double* b, std::size_t n) {
+/// True when the byte ranges [a, a + la) and [b, b + lb) share memory.
+bool overlap(const void* a, std::size_t la, const void* b, std::size_t lb) {
   const auto x = reinterpret_cast<std::uintptr_t>(a), y = reinterpret_cast<std::uintptr_t>(b);
-  const std::uintptr_t len = n * sizeof(double);
-  return x < y + len && y < x + len;
+  return la > 0 && lb > 0 && x < y + lb && y < x + la;
 }
 
 /// Fast path of the efficiency batches: the expressions of pump_efficiency() / motor_efficiency()
@@ -37,8 +36,10 @@ bool overlap(const double* a, const double* b, std::size_t n) {
 /// positive; then every product, quotient and the template's overflow sum are finite) and both
 /// efficiencies at most 1 (not implausible). Anything else is redone by the template.
 template <bool Pump>
-void efficiency_kernel(std::size_t i0, std::size_t i1, const double* v, const double* sp, const double* dp,
-                       const double* q, const double* t, double* eta_v, double* eta_hm, double* eta_t, int* flag) {
+void efficiency_kernel(std::size_t i0, std::size_t i1, const double* __restrict v, const double* __restrict sp,
+                       const double* __restrict dp, const double* __restrict q, const double* __restrict t,
+                       double* __restrict eta_v, double* __restrict eta_hm, double* __restrict eta_t,
+                       int* __restrict flag) {
   const double lo = 1e-100, hi = 1e100;
   const double inv_two_pi = pumploss::detail::inv_two_pi<double>();
   for (std::size_t i = i0; i < i1; ++i) {
@@ -67,12 +68,19 @@ int efficiency_batch(F&& f, size_t n, const double* v, const double* sp, const d
     eta_t[i] = r.eta_t;
     return r.st;
   };
+  // The kernel's arrays are __restrict: an output over an input or over another output (or the
+  // status array over any of them) takes the element-by-element path.
   bool aliased = false;
-  if (in_ok && eta_v != nullptr && eta_hm != nullptr && eta_t != nullptr) {
-    for (const double* in : {v, sp, dp, q, t})
-      for (const double* out : {static_cast<const double*>(eta_v), static_cast<const double*>(eta_hm),
-                                static_cast<const double*>(eta_t)})
-        aliased = aliased || overlap(in, out, n);
+  if (in_ok && eta_v != nullptr && eta_hm != nullptr && eta_t != nullptr && status != nullptr) {
+    const std::size_t d = n * sizeof(double), s = n * sizeof(int);
+    const double* outs[] = {eta_v, eta_hm, eta_t};
+    const double* ins[] = {v, sp, dp, q, t};
+    for (int k = 0; k < 3; ++k) {
+      for (const double* in : ins) aliased = aliased || overlap(in, d, outs[k], d);
+      for (int j = k + 1; j < 3; ++j) aliased = aliased || overlap(outs[j], d, outs[k], d);
+      aliased = aliased || overlap(outs[k], d, status, s);
+    }
+    for (const double* in : ins) aliased = aliased || overlap(in, d, status, s);
   }
   if (aliased) return call_batch(n, {eta_v, eta_hm, eta_t}, status, in_ok, elem);
   auto fast = [&](std::size_t i0, std::size_t i1, int* flag) {
