@@ -131,3 +131,22 @@ TEST(CapiEfficiencyBatch, InPlaceOutputOverInputGivesTheSameResults) {
 }
 
 }  // namespace
+
+namespace {
+// Array lengths in the C API are size_t (found under ASan: an int count let the table-driven
+// test pass 1000000 with one-element arrays). Counts above the limit are refused without
+// reading the arrays.
+TEST(CapiArrayLength, ComponentPointsCountIsSizeTAndBounded) {
+  pumploss_line* h = nullptr;
+  ASSERT_EQ(pumploss_line_create(&h), PUMPLOSS_OK);
+  const double q[2] = {1e-4, 2e-4}, dp[2] = {1e4, 3e4};
+  EXPECT_EQ(pumploss_line_add_component_points(h, 2, q, dp, 46e-6, 1.0), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_add_component_points(h, 0, q, dp, 46e-6, 1.0), PUMPLOSS_EDOMAIN);
+  EXPECT_EQ(pumploss_line_add_component_points(h, 17, q, dp, 46e-6, 1.0), PUMPLOSS_EDOMAIN);
+  EXPECT_EQ(pumploss_line_add_component_points(h, static_cast<size_t>(-1), q, dp, 46e-6, 1.0), PUMPLOSS_EDOMAIN);
+  // 2^32 + 2 must not wrap to 2 on its way to the template
+  EXPECT_EQ(pumploss_line_add_component_points(h, (static_cast<size_t>(1) << 32) + 2u, q, dp, 46e-6, 1.0),
+            PUMPLOSS_EDOMAIN);
+  pumploss_line_destroy(h);
+}
+}  // namespace

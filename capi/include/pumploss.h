@@ -960,7 +960,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_power(pumploss_line *
  *  @param nu_exponent m, >= 0
  *  @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for a bad count or data; PUMPLOSS_EMISUSE for NULL.
  *  @sa pumploss::line_component_points */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_points(pumploss_line *line, int n, const double *q_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_points(pumploss_line *line, size_t n, const double *q_m3_s,
                                                                   const double *dp_pa, double nu_ref_m2_s,
                                                                   double nu_exponent);
 /** Set the height of the line's outlet above its inlet (static part rho g dz).

@@ -107,12 +107,14 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_power(pumploss_line* 
                      "add_component_power");
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_points(pumploss_line* h, int n, const double* q_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_component_points(pumploss_line* h, size_t n, const double* q_m3_s,
                                                                   const double* dp_pa, double nu_ref_m2_s,
                                                                   double nu_exponent) {
   if (h == nullptr) return PUMPLOSS_EMISUSE;
   if (q_m3_s == nullptr || dp_pa == nullptr) return set_message(h, status::misuse, "add_component_points");
-  const auto e = pumploss::line_component_points(n, q_m3_s, dp_pa, nu_ref_m2_s, nu_exponent);
+  // n is a size_t as every array length of the C API; the template takes an int of at most 16.
+  const int count = n > static_cast<size_t>(pumploss::component_max_points) ? 0 : static_cast<int>(n);
+  const auto e = pumploss::line_component_points(count, q_m3_s, dp_pa, nu_ref_m2_s, nu_exponent);
   if (is_error(e.st)) return set_message(h, e.st, "add_component_points");
   return add_element(h, e.value, "add_component_points");
 }
