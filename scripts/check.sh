@@ -85,9 +85,11 @@ step "coverage: gcc --coverage build, all tests, gcovr line coverage of include/
 cmake --preset ci-linux-gcc-coverage -B "$out/coverage" >/dev/null
 cmake --build "$out/coverage" -j "$jobs"
 find "$out/coverage" -name '*.gcda' -delete
-ctest --test-dir "$out/coverage" --output-on-failure -j "$jobs" -E 'valgrind'
+# Not the thread test: its 8 threads update the same counters without atomics (negative counts
+# that gcovr refuses); capi_badinput covers the same functions single-threaded.
+ctest --test-dir "$out/coverage" --output-on-failure -j "$jobs" -E 'valgrind|^capi_threads$'
 mkdir -p "$out/coverage/report"
-gcovr -r "$here" --object-directory "$out/coverage" -j "$jobs" \
+gcovr -r "$here" --object-directory "$out/coverage" --gcov-exclude '.*CompilerId.*' \
   --filter "$here/include/" --filter "$here/src/" --filter "$here/capi/src/" \
   --txt "$out/coverage/report/coverage.txt" --html-details "$out/coverage/report/index.html" \
   --print-summary --fail-under-line "${PUMPLOSS_COVERAGE_MIN:-90}"
