@@ -147,9 +147,9 @@ inline int call_batch(std::size_t n, double* const (&outs)[N], int* status_out, 
 inline constexpr std::size_t kBatchBlock = 1024;
 
 /// call_batch() with a fast path. `Fast(i0, i1, flag)` computes the elements [i0, i1) in a
-/// branch-free (vectorisable) loop and sets flag[i] to 0 when it can prove that the full path
+/// branch-free (vectorisable) loop, sets flag[i] to 0 when it can prove that the full path
 /// would return PUMPLOSS_OK with exactly these outputs (same expressions, finite), else to any
-/// other value; it must not throw. Flagged elements are then redone by `Elem(i)` as in
+/// other value, and returns non-zero when any flag is set; it must not throw. Flagged elements are then redone by `Elem(i)` as in
 /// call_batch(), so statuses, NaN outputs and the summary are the same as call_batch()'s, bit
 /// for bit. Only the cheap proof is per element; the FP guard and the try block are per call.
 template <std::size_t N, class Fast, class Elem>
@@ -162,10 +162,7 @@ inline int call_batch_fast(std::size_t n, double* const (&outs)[N], int* status_
   try {
     for (std::size_t i0 = 0; i0 < n; i0 += kBatchBlock) {
       const std::size_t i1 = n - i0 < kBatchBlock ? n : i0 + kBatchBlock;
-      int redo = 0;
-      fast(i0, i1, status_out);
-      for (std::size_t i = i0; i < i1; ++i) redo |= status_out[i];
-      if (redo == 0) continue;
+      if (fast(i0, i1, status_out) == 0) continue;
       for (std::size_t i = i0; i < i1; ++i) {
         if (status_out[i] != 0) detail::batch_summary(detail::batch_element(i, outs, status_out, elem), summary, failed);
       }

@@ -1,4 +1,5 @@
 // C API wrappers for efficiency.hpp, leakage.hpp and thermal.hpp.
+#include <algorithm>
 #include <cstdint>
 #include <vector>
 
@@ -31,17 +32,20 @@ bool overlap(const void* a, std::size_t la, const void* b, std::size_t lb) {
 }
 
 /// Fast path of the efficiency batches: the expressions of pump_efficiency() / motor_efficiency()
-/// for eta_v, eta_hm and eta_t in one branch-free loop, and a flag 0 only where the template is
-/// certain to return status::ok with these values: every input in [1e-100, 1e100] (finite,
-/// positive; then every product, quotient and the template's overflow sum are finite) and both
-/// efficiencies at most 1 (not implausible). Anything else is redone by the template.
+/// for eta_v, eta_hm and eta_t in one branch-free (vectorised) loop, and a flag 0 only where the
+/// template is certain to return status::ok with these values: every input in [1e-100, 1e100]
+/// (finite, positive; then every product, quotient and the template's overflow sum are finite)
+/// and both efficiencies at most 1 (not implausible). The range test uses the smallest and the
+/// largest input; a NaN input, which min/max may drop, makes eta_v or eta_hm NaN and fails
+/// "at most 1". Anything flagged is redone by the template. Returns the OR of the flags.
 template <bool Pump>
-void efficiency_kernel(std::size_t i0, std::size_t i1, const double* __restrict v, const double* __restrict sp,
-                       const double* __restrict dp, const double* __restrict q, const double* __restrict t,
-                       double* __restrict eta_v, double* __restrict eta_hm, double* __restrict eta_t,
-                       int* __restrict flag) {
+int efficiency_kernel(std::size_t i0, std::size_t i1, const double* __restrict v, const double* __restrict sp,
+                      const double* __restrict dp, const double* __restrict q, const double* __restrict t,
+                      double* __restrict eta_v, double* __restrict eta_hm, double* __restrict eta_t,
+                      int* __restrict flag) {
   const double lo = 1e-100, hi = 1e100;
   const double inv_two_pi = pumploss::detail::inv_two_pi<double>();
+  int any = 0;
   for (std::size_t i = i0; i < i1; ++i) {
     const double vi = v[i], ni = sp[i], dpi = dp[i], qi = q[i], ti = t[i];
     const double q_th = vi * ni;
@@ -51,10 +55,13 @@ void efficiency_kernel(std::size_t i0, std::size_t i1, const double* __restrict 
     eta_v[i] = a;
     eta_hm[i] = b;
     eta_t[i] = a * b;
-    const bool ok = (vi >= lo) & (vi <= hi) & (ni >= lo) & (ni <= hi) & (dpi >= lo) & (dpi <= hi) & (qi >= lo) &
-                    (qi <= hi) & (ti >= lo) & (ti <= hi) & (a <= 1.0) & (b <= 1.0);
-    flag[i] = ok ? 0 : 1;
+    const double mn = std::min(std::min(std::min(vi, ni), std::min(dpi, qi)), ti);
+    const double mx = std::max(std::max(std::max(vi, ni), std::max(dpi, qi)), ti);
+    const int bad = ((mn >= lo) & (mx <= hi) & (a <= 1.0) & (b <= 1.0)) ? 0 : 1;
+    flag[i] = bad;
+    any |= bad;
   }
+  return any;
 }
 
 template <bool Pump, class F>
@@ -84,7 +91,7 @@ int efficiency_batch(F&& f, size_t n, const double* v, const double* sp, const d
   }
   if (aliased) return call_batch(n, {eta_v, eta_hm, eta_t}, status, in_ok, elem);
   auto fast = [&](std::size_t i0, std::size_t i1, int* flag) {
-    efficiency_kernel<Pump>(i0, i1, v, sp, dp, q, t, eta_v, eta_hm, eta_t, flag);
+    return efficiency_kernel<Pump>(i0, i1, v, sp, dp, q, t, eta_v, eta_hm, eta_t, flag);
   };
   return call_batch_fast(n, {eta_v, eta_hm, eta_t}, status, in_ok, fast, elem);
 }
