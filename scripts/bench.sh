@@ -33,7 +33,7 @@ def line(text, good):
     ok = ok and good
     print(f"  {'PASS' if good else 'MISS'}  {text}")
 print(f"\nmachine: {d['context'].get('num_cpus')} CPUs at {d['context'].get('mhz_per_cpu')} MHz, "
-      f"library build {d['context'].get('library_build_type')}, medians of the repetitions")
+      f"medians of the repetitions")
 c, fp = "BM_FrictionColebrook", "BM_FrictionColebrookFixedPoint"
 r = ns(fp) / ns(c)
 u = med[c].get("max_ulp", float("nan"))
