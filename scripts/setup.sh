@@ -19,6 +19,7 @@ PACKAGES=(
   clang valgrind                                   # sanitizer builds (ASan, UBSan, TSan), memcheck
   g++-mingw-w64-x86-64                             # Windows x64 DLL cross-build
   wine64                                           # runs a C test against the DLL
+  libclang-rt-dev gcovr linux-perf                 # libFuzzer runtime, coverage report, profiling
   # pumploss:setup-capi
   libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (examples/cli)
   # pumploss:setup-cli

@@ -78,43 +78,96 @@ inline int call(double* const (&outs)[N], Body&& body) noexcept {
   return static_cast<int>(st);
 }
 
+namespace detail {
+/// Element i of a batch by the full path: its status, NaN outputs on an error, a usable status
+/// with a non-finite output turned into an overflow (as call() does). Returns the code.
+template <std::size_t N, class Elem>
+inline int batch_element(std::size_t i, double* const (&outs)[N], int* status_out, Elem& elem) {
+  status st = elem(i);
+  if (!is_error(st)) {
+    for (double* p : outs) {
+      if (!std::isfinite(p[i])) st = status::overflow;
+    }
+  }
+  if (is_error(st)) {
+    for (double* p : outs) p[i] = kNaN;
+  }
+  const int code = static_cast<int>(st);
+  status_out[i] = code;
+  return code;
+}
+
+/// Null and n checks shared by the batch runners: true when the call must stop with EMISUSE
+/// (outputs NaN-filled and statuses EMISUSE where the pointers allow).
+template <std::size_t N>
+inline bool batch_refused(std::size_t n, double* const (&outs)[N], int* status_out, bool inputs_ok) noexcept {
+  bool null_out = status_out == nullptr;
+  for (double* p : outs) null_out = null_out || p == nullptr;
+  if (!null_out && inputs_ok) return false;
+  for (double* p : outs) {
+    if (p != nullptr) for (std::size_t i = 0; i < n; ++i) p[i] = kNaN;
+  }
+  if (status_out != nullptr) for (std::size_t i = 0; i < n; ++i) status_out[i] = PUMPLOSS_EMISUSE;
+  return true;
+}
+
+/// Summary of a batch: WPARTIAL when any element failed, else the first report code, else OK.
+inline void batch_summary(int code, int& summary, bool& failed) noexcept {
+  if (code > 0 && code < 100) {
+    failed = true;
+  } else if (code != PUMPLOSS_OK && summary == PUMPLOSS_OK) {
+    summary = code;
+  }
+}
+}  // namespace detail
+
 /// Run a batch body element by element: null arrays give EMISUSE (non-null outputs NaN-filled
-/// when n allows), each element's status goes to status_out[i] (NaN outputs on its error), and
-/// the summary is OK, the first report code seen, or PUMPLOSS_WPARTIAL when any element failed.
+/// when n allows), each element's status goes to status_out[i] (NaN outputs on its error; a
+/// usable status with a non-finite output becomes EOVERFLOW), and the summary is OK, the first
+/// report code seen, or PUMPLOSS_WPARTIAL when any element failed.
 /// `Elem(i)` returns the element's status and writes its outputs.
 template <std::size_t N, class Elem>
 inline int call_batch(std::size_t n, double* const (&outs)[N], int* status_out, bool inputs_ok,
                       Elem&& elem) noexcept {
-  bool null_out = status_out == nullptr;
-  for (double* p : outs) null_out = null_out || p == nullptr;
-  if (null_out || !inputs_ok) {
-    for (double* p : outs) {
-      if (p != nullptr) for (std::size_t i = 0; i < n; ++i) p[i] = kNaN;
-    }
-    if (status_out != nullptr) for (std::size_t i = 0; i < n; ++i) status_out[i] = PUMPLOSS_EMISUSE;
-    return PUMPLOSS_EMISUSE;
-  }
+  if (detail::batch_refused(n, outs, status_out, inputs_ok)) return PUMPLOSS_EMISUSE;
   fp_guard guard;
   int summary = PUMPLOSS_OK;
   bool failed = false;
   try {
-    for (std::size_t i = 0; i < n; ++i) {
-      status st = elem(i);
-      if (!is_error(st)) {  // as in call(): a usable element never has a NaN or infinite output
-        for (double* p : outs) {
-          if (!std::isfinite(p[i])) st = status::overflow;
-        }
-      }
-      const int code = static_cast<int>(st);
-      status_out[i] = code;
-      if (is_error(st)) {
-        failed = true;
-        for (double* p : outs) p[i] = kNaN;
-      } else if (code != PUMPLOSS_OK && summary == PUMPLOSS_OK) {
-        summary = code;
+    for (std::size_t i = 0; i < n; ++i) detail::batch_summary(detail::batch_element(i, outs, status_out, elem), summary, failed);
+  } catch (...) {  // keep the promise: on an error every output is NaN
+    for (double* p : outs) for (std::size_t i = 0; i < n; ++i) p[i] = kNaN;
+    for (std::size_t i = 0; i < n; ++i) status_out[i] = PUMPLOSS_EINTERNAL;
+    return PUMPLOSS_EINTERNAL;
+  }
+  return failed ? PUMPLOSS_WPARTIAL : summary;
+}
+
+/// Elements per block of call_batch_fast(): the block's statuses stay in L1 between the two passes.
+inline constexpr std::size_t kBatchBlock = 1024;
+
+/// call_batch() with a fast path. `Fast(i0, i1, flag)` computes the elements [i0, i1) in a
+/// branch-free (vectorisable) loop, sets flag[i] to 0 when it can prove that the full path
+/// would return PUMPLOSS_OK with exactly these outputs (same expressions, finite), else to any
+/// other value, and returns non-zero when any flag is set; it must not throw. Flagged elements are then redone by `Elem(i)` as in
+/// call_batch(), so statuses, NaN outputs and the summary are the same as call_batch()'s, bit
+/// for bit. Only the cheap proof is per element; the FP guard and the try block are per call.
+template <std::size_t N, class Fast, class Elem>
+inline int call_batch_fast(std::size_t n, double* const (&outs)[N], int* status_out, bool inputs_ok, Fast&& fast,
+                           Elem&& elem) noexcept {
+  if (detail::batch_refused(n, outs, status_out, inputs_ok)) return PUMPLOSS_EMISUSE;
+  fp_guard guard;
+  int summary = PUMPLOSS_OK;
+  bool failed = false;
+  try {
+    for (std::size_t i0 = 0; i0 < n; i0 += kBatchBlock) {
+      const std::size_t i1 = n - i0 < kBatchBlock ? n : i0 + kBatchBlock;
+      if (fast(i0, i1, status_out) == 0) continue;
+      for (std::size_t i = i0; i < i1; ++i) {
+        if (status_out[i] != 0) detail::batch_summary(detail::batch_element(i, outs, status_out, elem), summary, failed);
       }
     }
-  } catch (...) {  // keep the promise: on an error every output is NaN
+  } catch (...) {
     for (double* p : outs) for (std::size_t i = 0; i < n; ++i) p[i] = kNaN;
     for (std::size_t i = 0; i < n; ++i) status_out[i] = PUMPLOSS_EINTERNAL;
     return PUMPLOSS_EINTERNAL;

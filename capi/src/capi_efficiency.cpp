@@ -1,4 +1,6 @@
 // C API wrappers for efficiency.hpp, leakage.hpp and thermal.hpp.
+#include <algorithm>
+#include <cstdint>
 #include <vector>
 
 #include "capi_common.hpp"
@@ -8,6 +10,7 @@
 
 using pumploss::capi::call;
 using pumploss::capi::call_batch;
+using pumploss::capi::call_batch_fast;
 
 namespace {
 template <class F>
@@ -22,17 +25,75 @@ int efficiency_scalar(F&& f, double v, double n, double dp, double q, double t, 
   });
 }
 
-template <class F>
+/// True when the byte ranges [a, a + la) and [b, b + lb) share memory.
+bool overlap(const void* a, std::size_t la, const void* b, std::size_t lb) {
+  const auto x = reinterpret_cast<std::uintptr_t>(a), y = reinterpret_cast<std::uintptr_t>(b);
+  return la > 0 && lb > 0 && x < y + lb && y < x + la;
+}
+
+/// Fast path of the efficiency batches: the expressions of pump_efficiency() / motor_efficiency()
+/// for eta_v, eta_hm and eta_t in one branch-free (vectorised) loop, and a flag 0 only where the
+/// template is certain to return status::ok with these values: every input in [1e-100, 1e100]
+/// (finite, positive; then every product, quotient and the template's overflow sum are finite)
+/// and both efficiencies at most 1 (not implausible). The range test uses the smallest and the
+/// largest input; a NaN input, which min/max may drop, makes eta_v or eta_hm NaN and fails
+/// "at most 1". Anything flagged is redone by the template. Returns the OR of the flags.
+template <bool Pump>
+int efficiency_kernel(std::size_t i0, std::size_t i1, const double* __restrict v, const double* __restrict sp,
+                      const double* __restrict dp, const double* __restrict q, const double* __restrict t,
+                      double* __restrict eta_v, double* __restrict eta_hm, double* __restrict eta_t,
+                      int* __restrict flag) {
+  const double lo = 1e-100, hi = 1e100;
+  const double inv_two_pi = pumploss::detail::inv_two_pi<double>();
+  int any = 0;
+  for (std::size_t i = i0; i < i1; ++i) {
+    const double vi = v[i], ni = sp[i], dpi = dp[i], qi = q[i], ti = t[i];
+    const double q_th = vi * ni;
+    const double t_th = vi * dpi * inv_two_pi;
+    const double a = Pump ? qi / q_th : q_th / qi;
+    const double b = Pump ? t_th / ti : ti / t_th;
+    eta_v[i] = a;
+    eta_hm[i] = b;
+    eta_t[i] = a * b;
+    const double mn = std::min(std::min(std::min(vi, ni), std::min(dpi, qi)), ti);
+    const double mx = std::max(std::max(std::max(vi, ni), std::max(dpi, qi)), ti);
+    const int bad = ((mn >= lo) & (mx <= hi) & (a <= 1.0) & (b <= 1.0)) ? 0 : 1;
+    flag[i] = bad;
+    any |= bad;
+  }
+  return any;
+}
+
+template <bool Pump, class F>
 int efficiency_batch(F&& f, size_t n, const double* v, const double* sp, const double* dp, const double* q,
                      const double* t, double* eta_v, double* eta_hm, double* eta_t, int* status) {
   const bool in_ok = v != nullptr && sp != nullptr && dp != nullptr && q != nullptr && t != nullptr;
-  return call_batch(n, {eta_v, eta_hm, eta_t}, status, in_ok, [&](std::size_t i) {
+  auto elem = [&](std::size_t i) {
     const auto r = f(v[i], sp[i], dp[i], q[i], t[i]);
     eta_v[i] = r.eta_v;
     eta_hm[i] = r.eta_hm;
     eta_t[i] = r.eta_t;
     return r.st;
-  });
+  };
+  // The kernel's arrays are __restrict: an output over an input or over another output (or the
+  // status array over any of them) takes the element-by-element path.
+  bool aliased = false;
+  if (in_ok && eta_v != nullptr && eta_hm != nullptr && eta_t != nullptr && status != nullptr) {
+    const std::size_t d = n * sizeof(double), s = n * sizeof(int);
+    const double* outs[] = {eta_v, eta_hm, eta_t};
+    const double* ins[] = {v, sp, dp, q, t};
+    for (int k = 0; k < 3; ++k) {
+      for (const double* in : ins) aliased = aliased || overlap(in, d, outs[k], d);
+      for (int j = k + 1; j < 3; ++j) aliased = aliased || overlap(outs[j], d, outs[k], d);
+      aliased = aliased || overlap(outs[k], d, status, s);
+    }
+    for (const double* in : ins) aliased = aliased || overlap(in, d, status, s);
+  }
+  if (aliased) return call_batch(n, {eta_v, eta_hm, eta_t}, status, in_ok, elem);
+  auto fast = [&](std::size_t i0, std::size_t i1, int* flag) {
+    return efficiency_kernel<Pump>(i0, i1, v, sp, dp, q, t, eta_v, eta_hm, eta_t, flag);
+  };
+  return call_batch_fast(n, {eta_v, eta_hm, eta_t}, status, in_ok, fast, elem);
 }
 
 const auto kPump = [](double v, double n, double dp, double q, double t) {
@@ -72,7 +133,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_efficiency_batch(size_t n, const do
                                                               const double* flow_m3_s, const double* torque_n_m,
                                                               double* eta_v, double* eta_hm, double* eta_t,
                                                               int* status) {
-  return efficiency_batch(kPump, n, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, eta_v, eta_hm,
+  return efficiency_batch<true>(kPump, n, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, eta_v, eta_hm,
                           eta_t, status);
 }
 
@@ -81,7 +142,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_batch(size_t n, const d
                                                                const double* flow_m3_s, const double* torque_n_m,
                                                                double* eta_v, double* eta_hm, double* eta_t,
                                                                int* status) {
-  return efficiency_batch(kMotor, n, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, eta_v, eta_hm,
+  return efficiency_batch<false>(kMotor, n, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, eta_v, eta_hm,
                           eta_t, status);
 }
 

@@ -444,6 +444,13 @@ inline std::vector<Case> make_cases(int fn, const Case& base, const Context& ctx
       Case c = base;
       c.args[q].null = true;
       push(c, std::string(pr.name) + " = NULL");
+      // NULL wins over every other problem: with all scalars bad as well, still EMISUSE
+      for (int r = 0; r < f.nparams; ++r) {
+        Arg& o = c.args[static_cast<std::size_t>(r)];
+        if (f.params[r].kind == K_DIN) o.d = kNaN;
+        if (f.params[r].kind == K_IIN) o.i = std::numeric_limits<int>::min();
+      }
+      push(c, std::string(pr.name) + " = NULL, every scalar NaN or INT_MIN");
     }
   }
   if (has_size(f)) {
