@@ -6,7 +6,8 @@
 #   a 10 000-point Wilson fit (time);
 # then python3-fluids' friction factor timed by scripts/bench_fluids_friction.py.
 # Usage: scripts/bench.sh [build dir]   (default build-check/static, configured Release if missing)
-#   PUMPLOSS_BENCH_REPS  repetitions (default 5; the median is used)
+#   PUMPLOSS_BENCH_REPS    repetitions (default 5; the median is used)
+#   PUMPLOSS_BENCH_STRICT  1: exit 1 when a figure is not reached (default: report only)
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$here"
@@ -23,7 +24,7 @@ echo "command: $build/bench/pumploss_bench --benchmark_filter='$filter' --benchm
 "$build/bench/pumploss_bench" --benchmark_filter="$filter" --benchmark_repetitions="$reps" \
   --benchmark_report_aggregates_only=true --benchmark_out="$json" --benchmark_out_format=json
 /usr/bin/python3 - "$json" <<'PY'
-import json, sys
+import json, os, sys
 d = json.load(open(sys.argv[1]))
 med = {b["run_name"]: b for b in d["benchmarks"] if b.get("aggregate_name") == "median"}
 def ns(name): return med[name]["real_time"] * {"ns": 1, "us": 1e3, "ms": 1e6, "s": 1e9}[med[name]["time_unit"]]
@@ -51,6 +52,7 @@ line(f"efficiency batch (C API) {med[b]['bytes_per_second']/1e9:.2f} GB/s, inlin
 w = "BM_WilsonFit/10000"
 line(f"Wilson fit of 10 000 points {ns(w)/1e6:.3f} ms (goal < 2 ms)", ns(w) < 2e6)
 print("all figures reached" if ok else "some figures not reached (a loaded machine slows the runs unevenly: repeat)")
+sys.exit(0 if ok or os.environ.get("PUMPLOSS_BENCH_STRICT") != "1" else 1)
 PY
 echo
 echo "python3-fluids, same 64 points (/usr/bin/python3 scripts/bench_fluids_friction.py):"

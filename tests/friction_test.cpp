@@ -96,6 +96,37 @@ TEST(FrictionColebrook, MultiprecisionTemplateReachesFiftyDigits) {
   }
 }
 
+TEST(FrictionColebrook, FiniteUpToTheLargestReynoldsNumber) {
+  // Beyond the Moody chart (status regime) the solve must still converge and never overflow:
+  // the starting F is far from the root there. Checked against the same 50-digit Newton root;
+  // at Re >= 1e50 this is the fully rough limit 1/sqrt(f) = -2 log10(eps/D / 3.7) for eps/D > 0.
+  const double res[] = {1e9, 1e12, 1e20, 1e50, 1e100, 1e200, 1e300, 1.7976931348623157e308};
+  const double rrs[] = {0.0, 1e-6, 0.03, 0.05, 0.5, 1.0};
+  for (double re : res) {
+    for (double rr : rrs) {
+      const auto got = pumploss::friction_colebrook(re, rr);
+      EXPECT_EQ(got.st, status::regime) << re << " " << rr;
+      EXPECT_LE(pltest::ulps(got.value, colebrook_root(re, rr)), 4.0) << "Re " << re << ", eps/D " << rr;
+    }
+  }
+}
+
+TEST(FrictionColebrook, TableLogarithmAgainstFiftyDigits) {
+  // detail::log_positive_normal() feeds the starting iterations only; its documented bound is
+  // 4e-15 absolute over 1e-3..1e9. Checked there on a fine grid (every table cell many times)
+  // and at the extremes of the double range (DBL_MIN, DBL_MAX) to 2 ulp of ln x.
+  double worst = 0;
+  for (double x = 1e-3; x < 1e9; x *= 1.0009765) {
+    const double err = std::fabs(pumploss::detail::log_positive_normal(x) - static_cast<double>(log(mp50(x))));
+    worst = std::max(worst, err);
+  }
+  EXPECT_LE(worst, 4e-15);
+  std::printf("[log table] worst %.3g absolute over 1e-3..1e9\n", worst);
+  for (double x : {2.2250738585072014e-308, 1e-300, 1e300, 1.7976931348623157e308}) {
+    EXPECT_LE(pltest::ulps(pumploss::detail::log_positive_normal(x), log(mp50(x))), 2.0) << x;
+  }
+}
+
 TEST(FrictionColebrook, MethodsCheckValues) {
   // methods.md 13 rows 1, 6, 7 (fluids documentation / mpmath).
   EXPECT_NEAR(pumploss::friction_colebrook(1e5, 1e-4).value, 0.018513866077, 0.5e-12);
