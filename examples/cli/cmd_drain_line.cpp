@@ -28,8 +28,6 @@ struct drain_options {
   output_options out;
 };
 
-constexpr double kPi = 3.14159265358979323846;
-
 // Case pressure at every temperature of the range for a line (drain flow constant, or scaled as
 // 1/viscosity from the reference temperature).
 std::vector<pumploss::drain_point<double>> check_line(const pumploss::line<double>& l, const drain_line_spec& d,
