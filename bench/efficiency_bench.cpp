@@ -1,7 +1,6 @@
 // Benchmarks of the efficiency module: one point, the C batch against the same formula in a
 // plain C++ loop (the baseline a user would write), and a Wilson loss-model fit.
-// Measured (Release, 2-core shared machine, scripts/bench.sh): batch 0.86-0.93 of the inline loop
-// with the branch-free fast path of capi::call_batch_fast (about 0.5 element by element).
+// Figures and the commands that give them: docs/pages/performance.md (scripts/bench.sh).
 #include <benchmark/benchmark.h>
 
 #include <cstddef>
@@ -85,6 +84,33 @@ void BM_PumpEfficiencyInlineLoop(benchmark::State& state) {
   state.SetItemsProcessed(state.iterations() * state.range(0));
 }
 BENCHMARK(BM_PumpEfficiencyInlineLoop)->Arg(1000000)->Unit(benchmark::kMillisecond);
+
+// The inline loop that also writes one int per point, as the batch writes its status: the floor
+// for any batch that reports per element (its extra memory traffic is the status array).
+void BM_PumpEfficiencyInlineLoopWithStatus(benchmark::State& state) {
+  const auto count = static_cast<std::size_t>(state.range(0));
+  points p(count);
+  const double two_pi = 6.283185307179586;
+  for (auto _ : state) {
+    for (std::size_t i = 0; i < count; ++i) {
+      const double ev = p.q[i] / (p.v[i] * p.n[i]);
+      const double eh = p.v[i] * p.dp[i] / (two_pi * p.t[i]);
+      p.ev[i] = ev;
+      p.eh[i] = eh;
+      p.et[i] = ev * eh;
+      p.st[i] = 0;
+    }
+    benchmark::ClobberMemory();
+  }
+  state.SetBytesProcessed(state.iterations() * state.range(0) * kBytesPerPoint);
+  state.SetItemsProcessed(state.iterations() * state.range(0));
+}
+BENCHMARK(BM_PumpEfficiencyInlineLoopWithStatus)->Arg(1000000)->Unit(benchmark::kMillisecond);
+
+// The same pair on 4 000 points, which stay in cache: the cost of the batch's checks without
+// the memory system in between.
+BENCHMARK(BM_PumpEfficiencyBatchCapi)->Arg(4000)->Unit(benchmark::kMicrosecond);
+BENCHMARK(BM_PumpEfficiencyInlineLoop)->Arg(4000)->Unit(benchmark::kMicrosecond);
 
 }  // namespace
 

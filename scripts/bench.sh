@@ -17,12 +17,14 @@ if [ ! -x "$build/bench/pumploss_bench" ]; then
   cmake -S . -B "$build" -DCMAKE_BUILD_TYPE=Release -DPUMPLOSS_WERROR=ON >/dev/null
   cmake --build "$build" -j "$(nproc 2>/dev/null || echo 2)" --target pumploss_bench
 fi
-filter='^BM_(FrictionColebrook|FrictionColebrookFixedPoint|AnnulusExact/[0-9]+|AnnulusTextbook/[0-9]+|PumpEfficiencyBatchCapi/1000000|PumpEfficiencyInlineLoop/1000000|WilsonFit/10000)$'
+filter='^BM_(FrictionColebrook|FrictionColebrookFixedPoint|AnnulusExact/[0-9]+|AnnulusTextbook/[0-9]+|PumpEfficiency(BatchCapi|InlineLoop|InlineLoopWithStatus)/(1000000|4000)|WilsonFit/10000)$'
 json="$(mktemp)"
 trap 'rm -f "$json"' EXIT
-echo "command: $build/bench/pumploss_bench --benchmark_filter='$filter' --benchmark_repetitions=$reps --benchmark_report_aggregates_only=true"
+# Repetitions in random order, so a pair shares the machine's slow and fast moments.
+echo "command: $build/bench/pumploss_bench --benchmark_filter='$filter' --benchmark_repetitions=$reps --benchmark_enable_random_interleaving=true --benchmark_report_aggregates_only=true"
 "$build/bench/pumploss_bench" --benchmark_filter="$filter" --benchmark_repetitions="$reps" \
-  --benchmark_report_aggregates_only=true --benchmark_out="$json" --benchmark_out_format=json
+  --benchmark_enable_random_interleaving=true --benchmark_report_aggregates_only=true \
+  --benchmark_out="$json" --benchmark_out_format=json
 /usr/bin/python3 - "$json" <<'PY'
 import json, os, sys
 d = json.load(open(sys.argv[1]))
@@ -49,6 +51,14 @@ b, l = "BM_PumpEfficiencyBatchCapi/1000000", "BM_PumpEfficiencyInlineLoop/100000
 r = med[b]["bytes_per_second"] / med[l]["bytes_per_second"]
 line(f"efficiency batch (C API) {med[b]['bytes_per_second']/1e9:.2f} GB/s, inline loop "
      f"{med[l]['bytes_per_second']/1e9:.2f} GB/s: ratio {r:.2f} (goal >= 0.8)", r >= 0.8)
+ws = "BM_PumpEfficiencyInlineLoopWithStatus/1000000"
+if ws in med:
+    print(f"        inline loop writing an int status per point too: {med[ws]['bytes_per_second']/1e9:.2f} GB/s "
+          f"(batch / this: {med[b]['bytes_per_second'] / med[ws]['bytes_per_second']:.2f})")
+b4, l4 = "BM_PumpEfficiencyBatchCapi/4000", "BM_PumpEfficiencyInlineLoop/4000"
+if b4 in med and l4 in med:
+    print(f"        in cache (4 000 points): batch {med[b4]['bytes_per_second']/1e9:.2f} GB/s, inline loop "
+          f"{med[l4]['bytes_per_second']/1e9:.2f} GB/s: ratio {med[b4]['bytes_per_second'] / med[l4]['bytes_per_second']:.2f}")
 w = "BM_WilsonFit/10000"
 line(f"Wilson fit of 10 000 points {ns(w)/1e6:.3f} ms (goal < 2 ms)", ns(w) < 2e6)
 print("all figures reached" if ok else "some figures not reached (a loaded machine slows the runs unevenly: repeat)")

@@ -122,7 +122,7 @@ step "docs (Doxygen, warnings are errors)"
 cmake --build "$out/static" --target docs
 
 step "benchmarks: ratios against the baselines in one run (scripts/bench.sh)"
-PUMPLOSS_BENCH_REPS="${PUMPLOSS_BENCH_REPS:-3}" bash scripts/bench.sh "$out/static"
+PUMPLOSS_BENCH_REPS="${PUMPLOSS_BENCH_REPS:-5}" bash scripts/bench.sh "$out/static"
 
 step "all checks passed"
 timings+=("$(printf '%5ds  total' $((SECONDS - t_all)))")

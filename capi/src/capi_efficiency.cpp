@@ -1,6 +1,7 @@
 // C API wrappers for efficiency.hpp, leakage.hpp and thermal.hpp.
 #include <algorithm>
 #include <cstdint>
+#include <cstring>
 #include <vector>
 
 #include "capi_common.hpp"
@@ -31,21 +32,39 @@ bool overlap(const void* a, std::size_t la, const void* b, std::size_t lb) {
   return la > 0 && lb > 0 && x < y + lb && y < x + la;
 }
 
+/// The bits of a double as an unsigned integer (monotonic in x for x >= +0).
+inline std::uint64_t bits_of(double x) {
+  std::uint64_t b;
+  std::memcpy(&b, &x, sizeof b);
+  return b;
+}
+
+/// A word whose sign bit is clear exactly when x lies in [lo, hi] (given as bits, 0 <= lo <= hi,
+/// hi - lo < 2^63): (x - lo) | (hi - x) in wrapping 64-bit arithmetic. Negative numbers, NaNs
+/// and infinities all fall outside. Branch-free and in integers, so the loop vectorises.
+inline std::uint64_t outside(std::uint64_t x, std::uint64_t lo, std::uint64_t hi) { return (x - lo) | (hi - x); }
+
 /// Fast path of the efficiency batches: the expressions of pump_efficiency() / motor_efficiency()
-/// for eta_v, eta_hm and eta_t in one branch-free (vectorised) loop, and a flag 0 only where the
-/// template is certain to return status::ok with these values: every input in [1e-100, 1e100]
+/// for eta_v, eta_hm and eta_t in one branch-free, vectorised loop, with the proof that the
+/// template would return status::ok with exactly these values: every input in [1e-100, 1e100]
 /// (finite, positive; then every product, quotient and the template's overflow sum are finite)
-/// and both efficiencies at most 1 (not implausible). The range test uses the smallest and the
-/// largest input; a NaN input, which min/max may drop, makes eta_v or eta_hm NaN and fails
-/// "at most 1". Anything flagged is redone by the template. Returns the OR of the flags.
+/// and both efficiencies in [0, 1] (not implausible). The proof is the sign bit of an OR of
+/// outside() words, accumulated over the block; only when it fails somewhere does a second loop
+/// set the per-element flags (0 proven, 1 to be redone by the template). The usual block just
+/// gets its statuses zeroed. Returns 1 when any element is flagged.
 template <bool Pump>
 int efficiency_kernel(std::size_t i0, std::size_t i1, const double* __restrict v, const double* __restrict sp,
                       const double* __restrict dp, const double* __restrict q, const double* __restrict t,
                       double* __restrict eta_v, double* __restrict eta_hm, double* __restrict eta_t,
                       int* __restrict flag) {
-  const double lo = 1e-100, hi = 1e100;
+  const std::uint64_t lo = bits_of(1e-100), hi = bits_of(1e100), zero = 0, one = bits_of(1.0);
   const double inv_two_pi = pumploss::detail::inv_two_pi<double>();
-  int any = 0;
+  auto word = [&](double vi, double ni, double dpi, double qi, double ti, double a, double b) {
+    return outside(bits_of(vi), lo, hi) | outside(bits_of(ni), lo, hi) | outside(bits_of(dpi), lo, hi) |
+           outside(bits_of(qi), lo, hi) | outside(bits_of(ti), lo, hi) | outside(bits_of(a), zero, one) |
+           outside(bits_of(b), zero, one);
+  };
+  std::uint64_t any = 0;
   for (std::size_t i = i0; i < i1; ++i) {
     const double vi = v[i], ni = sp[i], dpi = dp[i], qi = q[i], ti = t[i];
     const double q_th = vi * ni;
@@ -55,13 +74,15 @@ int efficiency_kernel(std::size_t i0, std::size_t i1, const double* __restrict v
     eta_v[i] = a;
     eta_hm[i] = b;
     eta_t[i] = a * b;
-    const double mn = std::min(std::min(std::min(vi, ni), std::min(dpi, qi)), ti);
-    const double mx = std::max(std::max(std::max(vi, ni), std::max(dpi, qi)), ti);
-    const int bad = ((mn >= lo) & (mx <= hi) & (a <= 1.0) & (b <= 1.0)) ? 0 : 1;
-    flag[i] = bad;
-    any |= bad;
+    any |= word(vi, ni, dpi, qi, ti, a, b);
   }
-  return any;
+  if ((any >> 63) == 0) {
+    std::memset(flag + i0, 0, (i1 - i0) * sizeof(int));
+    return 0;
+  }
+  for (std::size_t i = i0; i < i1; ++i)
+    flag[i] = static_cast<int>(word(v[i], sp[i], dp[i], q[i], t[i], eta_v[i], eta_hm[i]) >> 63);
+  return 1;
 }
 
 template <bool Pump, class F>
