@@ -342,8 +342,30 @@ inline bool find_baseline(int fn, const Context& ctx, std::size_t n, Case& out, 
   return have_report;
 }
 
-/// Create one live handle per handle type from the first create function with a valid input.
-inline void make_live_handles(Context& ctx, std::vector<std::string>* notes) {
+/// How a live handle was made: the create function, its input and the output position, so
+/// that fresh handles can be made again without searching for valid inputs.
+struct Recipe {
+  int type, fn, out_param;
+  Case c;
+};
+
+/// Run a recipe in ctx; true when it gave a handle (then ctx.live[type] holds it).
+inline bool cook(const Recipe& r, Context& ctx, Exec& e) {
+  e.prepare(r.c, ctx);
+  e.invoke(r.c);
+  void*& h = e.hbuf[static_cast<std::size_t>(r.out_param)];
+  const bool made = !is_error(e.ret.code) && h != nullptr && h != kHandleSentinel;
+  if (made) {
+    ctx.live[static_cast<std::size_t>(r.type)] = h;
+    h = nullptr;
+  }
+  e.release(r.c, ctx);
+  return made;
+}
+
+/// Create one live handle per handle type from the first create function with a valid input;
+/// the recipes that worked go to `recipes` when given (make_from_recipes() repeats them).
+inline void make_live_handles(Context& ctx, std::vector<std::string>* notes, std::vector<Recipe>* recipes = nullptr) {
   for (int t = 0; t < kHandleTypeCount; ++t) {
     for (int fn = 0; fn < kFunctionCount && ctx.live[static_cast<std::size_t>(t)] == nullptr; ++fn) {
       const Fn& f = kFunctions[fn];
@@ -352,22 +374,20 @@ inline void make_live_handles(Context& ctx, std::vector<std::string>* notes) {
       for (int p = 0; p < f.nparams; ++p)
         if (f.params[p].kind == K_HOUT && f.params[p].handle == t) out_param = p;
       if (out_param < 0) continue;
-      Case c;
-      if (!find_baseline(fn, ctx, 8, c)) continue;
+      Recipe r{t, fn, out_param, Case{}};
+      if (!find_baseline(fn, ctx, 8, r.c)) continue;
       Exec e;
-      e.prepare(c, ctx);
-      e.invoke(c);
-      void* h = e.hbuf[static_cast<std::size_t>(out_param)];
-      if (!is_error(e.ret.code) && h != nullptr && h != kHandleSentinel) {
-        ctx.live[static_cast<std::size_t>(t)] = h;
-        e.hbuf[static_cast<std::size_t>(out_param)] = nullptr;
-      }
-      e.release(c, ctx);
+      if (cook(r, ctx, e) && recipes) recipes->push_back(r);
     }
     if (ctx.live[static_cast<std::size_t>(t)] == nullptr && notes)
       notes->push_back(std::string("no valid ") + kHandleTypes[t] +
                        " could be created: its methods are tested with NULL handles only");
   }
+}
+
+/// A fresh handle of every type that make_live_handles() could make, from its recipes.
+inline void make_from_recipes(const std::vector<Recipe>& recipes, Context& ctx, Exec& e) {
+  for (const Recipe& r : recipes) cook(r, ctx, e);
 }
 
 /// All cases of one function: the baseline, special values in every scalar position, NULL in

@@ -14,64 +14,13 @@
 
 #include "capi_harness.hpp"
 
-namespace {
-/// How make_live_handles() made each handle (create function, its input, output position), so
-/// fresh handles can be made again without searching for valid inputs.
-struct Recipe {
-  int type, fn, out_param;
-  plcapi::Case c;
-};
-
-std::vector<Recipe> handle_recipes() {
-  using namespace plcapi;
-  Context ctx;
-  std::vector<Recipe> out;
-  for (int t = 0; t < kHandleTypeCount; ++t) {
-    for (int fn = 0; fn < kFunctionCount && ctx.live[static_cast<std::size_t>(t)] == nullptr; ++fn) {
-      const Fn& f = kFunctions[fn];
-      if (f.cls != C_CREATE) continue;
-      int out_param = -1;
-      for (int p = 0; p < f.nparams; ++p)
-        if (f.params[p].kind == K_HOUT && f.params[p].handle == t) out_param = p;
-      if (out_param < 0) continue;
-      Case c;
-      if (!find_baseline(fn, ctx, 8, c)) continue;
-      Exec e;
-      e.prepare(c, ctx);
-      e.invoke(c);
-      void* h = e.hbuf[static_cast<std::size_t>(out_param)];
-      if (!is_error(e.ret.code) && h != nullptr && h != kHandleSentinel) {
-        ctx.live[static_cast<std::size_t>(t)] = h;
-        e.hbuf[static_cast<std::size_t>(out_param)] = nullptr;
-        out.push_back({t, fn, out_param, c});
-      }
-      e.release(c, ctx);
-    }
-  }
-  return out;
-}
-
-/// A fresh handle of every type that make_live_handles() can make, from the recipes.
-void make_from_recipes(const std::vector<Recipe>& recipes, plcapi::Context& ctx, plcapi::Exec& e) {
-  for (const Recipe& r : recipes) {
-    e.prepare(r.c, ctx);
-    e.invoke(r.c);
-    void*& h = e.hbuf[static_cast<std::size_t>(r.out_param)];
-    if (!plcapi::is_error(e.ret.code) && h != nullptr && h != plcapi::kHandleSentinel) {
-      ctx.live[static_cast<std::size_t>(r.type)] = h;
-      h = nullptr;
-    }
-    e.release(r.c, ctx);
-  }
-}
-}  // namespace
-
 int main(int argc, char** argv) {
   using namespace plcapi;
   const int rounds = argc > 1 ? std::atoi(argv[1]) : 100;
   const int threads = argc > 2 ? std::atoi(argv[2]) : 8;
   Context ctx;
-  make_live_handles(ctx, nullptr);
+  std::vector<Recipe> recipes;
+  make_live_handles(ctx, nullptr, &recipes);
   std::vector<Case> cases;
   for (int fn = 0; fn < kFunctionCount; ++fn) {
     // Handles may be read, not changed, from several threads at once (pumploss.h): functions
@@ -87,13 +36,13 @@ int main(int argc, char** argv) {
   for (int fn = 0; fn < kFunctionCount; ++fn) {
     if (!mutates_handle(kFunctions[fn])) continue;
     Context fresh;
-    make_live_handles(fresh, nullptr);
+    Exec maker;
+    make_from_recipes(recipes, fresh, maker);
     Case base;
     const std::size_t n = has_size(kFunctions[fn]) ? 5 : 0;
     if (!find_baseline(fn, fresh, n, base)) base = candidate(fn, 0, n);
     for (Case& c : make_cases(fn, base, fresh, 6)) mcases.push_back(std::move(c));
   }
-  const std::vector<Recipe> recipes = handle_recipes();
   auto run_on_fresh_handles = [&recipes](const Case& c, Exec& e) {
     Context fresh;
     make_from_recipes(recipes, fresh, e);
