@@ -4,14 +4,12 @@
 #include <benchmark/benchmark.h>
 
 #include <array>
-#include <boost/multiprecision/cpp_bin_float.hpp>
 #include <cmath>
 #include <cstddef>
-#include <cstdint>
-#include <cstring>
 
 #include "pumploss.h"
 #include "pumploss/friction.hpp"
+#include "test_support.hpp"
 
 namespace {
 
@@ -47,35 +45,11 @@ double colebrook_fixed_point(double re, double rr) {
   return 1.0 / (x * x);
 }
 
-using mp50 = boost::multiprecision::cpp_bin_float_50;
-
-/// 50-digit root of Colebrook-White in x = 1/sqrt(f) by plain Newton to 1e-45 (independent of the
-/// library's scheme; as in tests/friction_test.cpp), rounded to double.
-double colebrook_reference(double re, double rr) {
-  using boost::multiprecision::log;
-  const mp50 r(re), k(rr), ln10 = log(mp50(10)), a = k / mp50("3.7"), b = mp50("2.51") / r;
-  mp50 x = 8;
-  for (int i = 0; i < 200; ++i) {
-    const mp50 s = a + b * x;
-    const mp50 dx = (x + 2 * log(s) / ln10) / (1 + 2 * b / (s * ln10));
-    x -= dx;
-    if (abs(dx) < mp50("1e-46")) break;
-  }
-  return static_cast<double>(1 / (x * x));
-}
-
-double ulp_distance(double a, double b) {
-  std::int64_t i, j;
-  std::memcpy(&i, &a, sizeof i);
-  std::memcpy(&j, &b, sizeof j);
-  return std::fabs(static_cast<double>(i - j));  // both positive here
-}
-
 /// Worst ulp distance from the 50-digit root over the 64 benchmark points.
 template <class F>
 double worst_ulp(F&& f) {
   double worst = 0;
-  for (const point& q : points()) worst = std::fmax(worst, ulp_distance(f(q.re, q.rr), colebrook_reference(q.re, q.rr)));
+  for (const point& q : points()) worst = std::fmax(worst, pltest::ulps(f(q.re, q.rr), pltest::colebrook_root(q.re, q.rr)));
   return worst;
 }
 

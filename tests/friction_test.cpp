@@ -10,6 +10,7 @@
 #include "test_support.hpp"
 
 using pltest::kInf;
+using pltest::colebrook_root;
 using pltest::kNaN;
 using pltest::mp50;
 using pumploss::status;
@@ -38,20 +39,6 @@ const line_row kLineRows[] = {
 #include "reference/friction/published_lines.ipp"
 };
 
-/// The 50-digit root of the Colebrook equation in x = 1/sqrt(f), by plain Newton iteration
-/// to 1e-45 in cpp_bin_float_50: independent of the library's Clamond/Newton scheme.
-mp50 colebrook_root(double re, double rr) {
-  using boost::multiprecision::log;
-  const mp50 r(re), k(rr), ln10 = log(mp50(10)), a = k / mp50("3.7"), b = mp50("2.51") / r;
-  mp50 x = 8;
-  for (int i = 0; i < 200; ++i) {
-    const mp50 s = a + b * x;
-    const mp50 dx = (x + 2 * log(s) / ln10) / (1 + 2 * b / (s * ln10));
-    x -= dx;
-    if (abs(dx) < mp50("1e-46")) break;
-  }
-  return 1 / (x * x);
-}
 }  // namespace
 
 TEST(FrictionColebrook, Within4UlpOf50DigitRootOverTheMoodyChart) {

@@ -38,6 +38,21 @@ inline double ulp_distance(double a, double b) {
 /// ulp distance of a double from the correctly rounded oracle value.
 inline double ulps(double got, const mp50& ref) { return ulp_distance(got, to_double(ref)); }
 
+/// The 50-digit root of the Colebrook equation in x = 1/sqrt(f), by plain Newton iteration
+/// to 1e-45: independent of the library's Clamond/Newton scheme (friction tests and benchmarks).
+inline mp50 colebrook_root(double re, double rr) {
+  using boost::multiprecision::log;
+  const mp50 r(re), k(rr), ln10 = log(mp50(10)), a = k / mp50("3.7"), b = mp50("2.51") / r;
+  mp50 x = 8;
+  for (int i = 0; i < 200; ++i) {
+    const mp50 s = a + b * x;
+    const mp50 dx = (x + 2 * log(s) / ln10) / (1 + 2 * b / (s * ln10));
+    x -= dx;
+    if (abs(dx) < mp50("1e-46")) break;
+  }
+  return 1 / (x * x);
+}
+
 inline const double kNaN = std::numeric_limits<double>::quiet_NaN();
 inline const double kInf = std::numeric_limits<double>::infinity();
 
