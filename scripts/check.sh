@@ -1,8 +1,11 @@
 #!/usr/bin/env bash
 # The whole test suite, as CI runs it: install what is missing, then build and test
 #   1. the static library with warnings as errors, all tests (ctest), valgrind on the callers;
-#   2. the shared library (exported symbols checked), its callers and the installed-package
-#      consumers (find_package, pkg-config);
+#   1a. the demo (scripts/demo.sh) on the static build's program, into a scratch folder;
+#   2. the shared build of everything (libpumploss_cxx.so + libpumploss.so, tests, benchmarks,
+#      examples) and all its tests: exported symbols, the Python ctypes tests, the installed
+#      package's C and C++ consumers (find_package, pkg-config; the static build's ctest ran
+#      them against an installed static package);
 #   3. the whole test suite under AddressSanitizer + UndefinedBehaviorSanitizer and the C API
 #      thread test under ThreadSanitizer (clang);
 #   3a. the libFuzzer targets (tests/fuzz), PUMPLOSS_FUZZ_SECONDS (default 60) each;
@@ -43,23 +46,21 @@ cmake --build "$out/static" -j "$jobs"
 step "static build: tests (incl. valgrind memcheck of the C and Fortran callers)"
 ctest --test-dir "$out/static" --output-on-failure -j "$jobs"
 
-step "shared build (libpumploss.so): exports, callers, installed-package consumers"
+step "demo: scripts/demo.sh on the static build, into $out/demo"
+PUMPLOSS_DEMO_BUILD="$out/static" bash scripts/demo.sh "$out/demo"
+
+step "shared build (libpumploss_cxx.so, libpumploss.so): everything, all tests, installed-package consumers"
 cmake -S . -B "$out/shared" -DCMAKE_BUILD_TYPE=Release -DBUILD_SHARED_LIBS=ON -DPUMPLOSS_WERROR=ON \
-  -DPUMPLOSS_BUILD_BENCH=OFF -DPUMPLOSS_BUILD_DOCS=OFF -DPUMPLOSS_BUILD_EXAMPLES=OFF \
-  -DCMAKE_INSTALL_PREFIX="$here/$out/shared-install" >/dev/null
-# Only what the C API tests need (the C++ unit tests ran in the static build).
-shared_targets=(pumploss capi_c_caller_c90 capi_c_caller_c11 capi_badinput capi_threads
-  capi_noalloc pumploss_header_c90 pumploss_header_c99 pumploss_header_c11)
-if [ -d "$out/shared/tests/capi/CMakeFiles/capi_fortran_caller.dir" ]; then  # gfortran found
-  shared_targets+=(capi_fortran_caller)
-fi
-cmake --build "$out/shared" -j "$jobs" --target "${shared_targets[@]}"
-soname="$(objdump -p "$out"/shared/libpumploss.so | awk '/SONAME/ {print $2}')"
+  -DPUMPLOSS_BUILD_DOCS=OFF >/dev/null
+cmake --build "$out/shared" -j "$jobs"
 major="$(sed -n 's/^#define PUMPLOSS_VERSION_MAJOR \([0-9]*\).*/\1/p' include/pumploss/version.hpp)"
-[ "$soname" = "libpumploss.so.$major" ] || { echo "SONAME is '$soname', expected libpumploss.so.$major"; exit 1; }
-ls "$out"/shared/libpumploss.so.*.*.* >/dev/null || { echo "no versioned libpumploss.so.X.Y.Z"; exit 1; }
-echo "SONAME $soname; file $(basename "$(ls "$out"/shared/libpumploss.so.*.*.*)")"
-ctest --test-dir "$out/shared" --output-on-failure -j "$jobs" -L capi
+for lib in libpumploss libpumploss_cxx; do
+  soname="$(objdump -p "$out/shared/$lib.so" | awk '/SONAME/ {print $2}')"
+  [ "$soname" = "$lib.so.$major" ] || { echo "SONAME is '$soname', expected $lib.so.$major"; exit 1; }
+  ls "$out/shared/$lib".so.*.*.* >/dev/null || { echo "no versioned $lib.so.X.Y.Z"; exit 1; }
+  echo "SONAME $soname; file $(basename "$(ls "$out/shared/$lib".so.*.*.*)")"
+done
+ctest --test-dir "$out/shared" --output-on-failure -j "$jobs"
 
 step "sanitizers: the whole test suite under ASan+UBSan (clang)"
 # Every ctest test of this build: the C++ unit tests, the C API tests (bad input, threads, the C
