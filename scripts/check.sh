@@ -12,7 +12,8 @@
 #   3b. line coverage of include/, src/, capi/ by the test suite (gcc --coverage, gcovr), failing
 #      under PUMPLOSS_COVERAGE_MIN (default 90) percent;
 #   4. the Windows x64 DLL (mingw-w64): export table against pumploss.def and exports.txt,
-#      and the C caller run against it under wine when wine is installed;
+#      and the C caller run against it under wine when wine is installed; pumploss_cxx.dll
+#      (export table: pumploss:: functions only) with a C++ consumer run under wine;
 #   5. the docs (Doxygen, warnings as errors);
 #   6. the benchmarks of the performance page (scripts/bench.sh): their ratios are printed for
 #      the record; they fail the run only with PUMPLOSS_BENCH_STRICT=1 (timings on a shared
@@ -108,15 +109,30 @@ cmake --build "$out/win64" -j "$jobs"
   --exports=tests/capi/exports.txt --dll="$out/win64/pumploss.dll" --objdump=x86_64-w64-mingw32-objdump
 x86_64-w64-mingw32-gcc -std=c89 -pedantic-errors -Wall -Wextra -Werror -DPUMPLOSS_SHARED \
   -Icapi/include tests/capi/c_caller.c "$out/win64/libpumploss.dll.a" -static -o "$out/win64/c_caller.exe"
+# The C++ core as a DLL of its own (PUMPLOSS_SELF_CONTAINED off): its export table holds exactly
+# the PUMPLOSS_CXX_API functions of namespace pumploss, and a C++ program links them (dllimport).
+cmake --preset ci-windows-x64 -B "$out/win64-cxx" -DPUMPLOSS_SELF_CONTAINED=OFF >/dev/null
+cmake --build "$out/win64-cxx" -j "$jobs" --target pumploss_cxx
+cxx_exports="$(x86_64-w64-mingw32-objdump -p "$out/win64-cxx/pumploss_cxx.dll" |
+  awk '/\[Ordinal\/Name Pointer\] Table/ {t = 1; next} t && /^\t\[/ {print $NF; next} t {t = 0}')"
+if [ -z "$cxx_exports" ] || printf '%s\n' "$cxx_exports" | grep -qv '^_ZN8pumploss'; then
+  echo "pumploss_cxx.dll must export pumploss:: functions only; it exports:"; echo "$cxx_exports"; exit 1
+fi
+echo "pumploss_cxx.dll exports $(printf '%s\n' "$cxx_exports" | wc -l) pumploss:: functions, nothing else"
+version="$(sed -n 's/^#define PUMPLOSS_VERSION "\(.*\)"/\1/p' include/pumploss/version.hpp)"
+x86_64-w64-mingw32-g++ -std=c++17 -Wall -Wextra -Werror -DPUMPLOSS_CXX_SHARED -DEXPECTED_SHARED=1 \
+  -DEXPECTED_VERSION="\"$version\"" -Iinclude tests/find-package/consumer.cpp \
+  "$out/win64-cxx/libpumploss_cxx.dll.a" -static -o "$out/win64-cxx/consumer_cxx.exe"
 if command -v wine64 >/dev/null 2>&1 || [ -x /usr/lib/wine/wine64 ]; then
   wine="$(command -v wine64 || echo /usr/lib/wine/wine64)"
   export WINEPREFIX="$here/$out/wineprefix" WINEDEBUG=-all WINEDLLOVERRIDES="mscoree,mshtml="
   (cd "$out/win64" && timeout 300 "$wine" c_caller.exe </dev/null)
+  (cd "$out/win64-cxx" && timeout 300 "$wine" consumer_cxx.exe </dev/null)
   # wait for this prefix's wineserver to exit, so nothing of ours keeps running
   ws="$(dirname "$(readlink -f "$wine")")/wineserver"
   if [ -x "$ws" ]; then timeout 60 "$ws" -w || true; fi
 else
-  echo "wine64 not installed: the DLL's export table was checked, the C caller was not run on it"
+  echo "wine64 not installed: the DLLs' export tables were checked, the C caller and C++ consumer were not run"
 fi
 
 step "docs (Doxygen, warnings are errors)"

@@ -17,7 +17,8 @@ pc() { pkg-config --define-prefix "$@"; }
 version="$(pc --modversion pumploss)"
 [ "$(pc --modversion pumploss-cxx)" = "$version" ] || { echo "pumploss-cxx.pc and pumploss.pc differ in version"; exit 1; }
 libdir="$(pc --variable=libdir pumploss)"
-if ls "$libdir"/libpumploss.so* >/dev/null 2>&1; then shared=1; static=""; else shared=0; static="--static"; fi
+static="--static"; ls "$libdir"/libpumploss.so* >/dev/null 2>&1 && static=""
+shared=0; ls "$libdir"/libpumploss_cxx.so* >/dev/null 2>&1 && shared=1
 mkdir -p "$work"
 # shellcheck disable=SC2046,SC2086
 "$cc" -std=c99 -Wall -Wextra -Werror -DEXPECTED_VERSION="\"$version\"" \
