@@ -1,15 +1,19 @@
 #!/usr/bin/env bash
 # The whole test suite, as CI runs it: install what is missing, then build and test
 #   1. the static library with warnings as errors, all tests (ctest), valgrind on the callers;
-#   2. the shared library (exported symbols checked), its callers and the installed-package
-#      consumers (find_package, pkg-config);
+#   1a. the demo (scripts/demo.sh) on the static build's program, into a scratch folder;
+#   2. the shared build of everything (libpumploss_cxx.so + libpumploss.so, tests, benchmarks,
+#      examples) and all its tests: exported symbols, the Python ctypes tests, the installed
+#      package's C and C++ consumers (find_package, pkg-config; the static build's ctest ran
+#      them against an installed static package);
 #   3. the whole test suite under AddressSanitizer + UndefinedBehaviorSanitizer and the C API
 #      thread test under ThreadSanitizer (clang);
 #   3a. the libFuzzer targets (tests/fuzz), PUMPLOSS_FUZZ_SECONDS (default 60) each;
 #   3b. line coverage of include/, src/, capi/ by the test suite (gcc --coverage, gcovr), failing
 #      under PUMPLOSS_COVERAGE_MIN (default 90) percent;
 #   4. the Windows x64 DLL (mingw-w64): export table against pumploss.def and exports.txt,
-#      and the C caller run against it under wine when wine is installed;
+#      and the C caller run against it under wine when wine is installed; pumploss_cxx.dll
+#      (export table: pumploss:: functions only) with a C++ consumer run under wine;
 #   5. the docs (Doxygen, warnings as errors);
 #   6. the benchmarks of the performance page (scripts/bench.sh): their ratios are printed for
 #      the record; they fail the run only with PUMPLOSS_BENCH_STRICT=1 (timings on a shared
@@ -43,23 +47,21 @@ cmake --build "$out/static" -j "$jobs"
 step "static build: tests (incl. valgrind memcheck of the C and Fortran callers)"
 ctest --test-dir "$out/static" --output-on-failure -j "$jobs"
 
-step "shared build (libpumploss.so): exports, callers, installed-package consumers"
+step "demo: scripts/demo.sh on the static build, into $out/demo"
+PUMPLOSS_DEMO_BUILD="$out/static" bash scripts/demo.sh "$out/demo"
+
+step "shared build (libpumploss_cxx.so, libpumploss.so): everything, all tests, installed-package consumers"
 cmake -S . -B "$out/shared" -DCMAKE_BUILD_TYPE=Release -DBUILD_SHARED_LIBS=ON -DPUMPLOSS_WERROR=ON \
-  -DPUMPLOSS_BUILD_BENCH=OFF -DPUMPLOSS_BUILD_DOCS=OFF -DPUMPLOSS_BUILD_EXAMPLES=OFF \
-  -DCMAKE_INSTALL_PREFIX="$here/$out/shared-install" >/dev/null
-# Only what the C API tests need (the C++ unit tests ran in the static build).
-shared_targets=(pumploss capi_c_caller_c90 capi_c_caller_c11 capi_badinput capi_threads
-  capi_noalloc pumploss_header_c90 pumploss_header_c99 pumploss_header_c11)
-if [ -d "$out/shared/tests/capi/CMakeFiles/capi_fortran_caller.dir" ]; then  # gfortran found
-  shared_targets+=(capi_fortran_caller)
-fi
-cmake --build "$out/shared" -j "$jobs" --target "${shared_targets[@]}"
-soname="$(objdump -p "$out"/shared/libpumploss.so | awk '/SONAME/ {print $2}')"
+  -DPUMPLOSS_BUILD_DOCS=OFF >/dev/null
+cmake --build "$out/shared" -j "$jobs"
 major="$(sed -n 's/^#define PUMPLOSS_VERSION_MAJOR \([0-9]*\).*/\1/p' include/pumploss/version.hpp)"
-[ "$soname" = "libpumploss.so.$major" ] || { echo "SONAME is '$soname', expected libpumploss.so.$major"; exit 1; }
-ls "$out"/shared/libpumploss.so.*.*.* >/dev/null || { echo "no versioned libpumploss.so.X.Y.Z"; exit 1; }
-echo "SONAME $soname; file $(basename "$(ls "$out"/shared/libpumploss.so.*.*.*)")"
-ctest --test-dir "$out/shared" --output-on-failure -j "$jobs" -L capi
+for lib in libpumploss libpumploss_cxx; do
+  soname="$(objdump -p "$out/shared/$lib.so" | awk '/SONAME/ {print $2}')"
+  [ "$soname" = "$lib.so.$major" ] || { echo "SONAME is '$soname', expected $lib.so.$major"; exit 1; }
+  ls "$out/shared/$lib".so.*.*.* >/dev/null || { echo "no versioned $lib.so.X.Y.Z"; exit 1; }
+  echo "SONAME $soname; file $(basename "$(ls "$out/shared/$lib".so.*.*.*)")"
+done
+ctest --test-dir "$out/shared" --output-on-failure -j "$jobs"
 
 step "sanitizers: the whole test suite under ASan+UBSan (clang)"
 # Every ctest test of this build: the C++ unit tests, the C API tests (bad input, threads, the C
@@ -107,15 +109,30 @@ cmake --build "$out/win64" -j "$jobs"
   --exports=tests/capi/exports.txt --dll="$out/win64/pumploss.dll" --objdump=x86_64-w64-mingw32-objdump
 x86_64-w64-mingw32-gcc -std=c89 -pedantic-errors -Wall -Wextra -Werror -DPUMPLOSS_SHARED \
   -Icapi/include tests/capi/c_caller.c "$out/win64/libpumploss.dll.a" -static -o "$out/win64/c_caller.exe"
+# The C++ core as a DLL of its own (PUMPLOSS_SELF_CONTAINED off): its export table holds exactly
+# the PUMPLOSS_CXX_API functions of namespace pumploss, and a C++ program links them (dllimport).
+cmake --preset ci-windows-x64 -B "$out/win64-cxx" -DPUMPLOSS_SELF_CONTAINED=OFF >/dev/null
+cmake --build "$out/win64-cxx" -j "$jobs" --target pumploss_cxx
+cxx_exports="$(x86_64-w64-mingw32-objdump -p "$out/win64-cxx/pumploss_cxx.dll" |
+  awk '/\[Ordinal\/Name Pointer\] Table/ {t = 1; next} t && /^\t\[/ {print $NF; next} t {t = 0}')"
+if [ -z "$cxx_exports" ] || printf '%s\n' "$cxx_exports" | grep -qv '^_ZN8pumploss'; then
+  echo "pumploss_cxx.dll must export pumploss:: functions only; it exports:"; echo "$cxx_exports"; exit 1
+fi
+echo "pumploss_cxx.dll exports $(printf '%s\n' "$cxx_exports" | wc -l) pumploss:: functions, nothing else"
+version="$(sed -n 's/^#define PUMPLOSS_VERSION "\(.*\)"/\1/p' include/pumploss/version.hpp)"
+x86_64-w64-mingw32-g++ -std=c++17 -Wall -Wextra -Werror -DPUMPLOSS_CXX_SHARED -DEXPECTED_SHARED=1 \
+  -DEXPECTED_VERSION="\"$version\"" -Iinclude tests/find-package/consumer.cpp \
+  "$out/win64-cxx/libpumploss_cxx.dll.a" -static -o "$out/win64-cxx/consumer_cxx.exe"
 if command -v wine64 >/dev/null 2>&1 || [ -x /usr/lib/wine/wine64 ]; then
   wine="$(command -v wine64 || echo /usr/lib/wine/wine64)"
   export WINEPREFIX="$here/$out/wineprefix" WINEDEBUG=-all WINEDLLOVERRIDES="mscoree,mshtml="
   (cd "$out/win64" && timeout 300 "$wine" c_caller.exe </dev/null)
+  (cd "$out/win64-cxx" && timeout 300 "$wine" consumer_cxx.exe </dev/null)
   # wait for this prefix's wineserver to exit, so nothing of ours keeps running
   ws="$(dirname "$(readlink -f "$wine")")/wineserver"
   if [ -x "$ws" ]; then timeout 60 "$ws" -w || true; fi
 else
-  echo "wine64 not installed: the DLL's export table was checked, the C caller was not run on it"
+  echo "wine64 not installed: the DLLs' export tables were checked, the C caller and C++ consumer were not run"
 fi
 
 step "docs (Doxygen, warnings are errors)"

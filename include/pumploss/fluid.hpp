@@ -10,6 +10,7 @@
 
 #include <cmath>
 
+#include "export.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 #include "units.hpp"
@@ -211,12 +212,12 @@ struct iso_vg_grade {
 /// @par Source
 /// ISO 3448:1992, Industrial liquid lubricants - ISO viscosity classification, Table 1
 /// (18 grades; mid-points 2.2, 3.2, 4.6, 6.8, 10, ... 1500 mm^2/s; limits +/-10 %).
-result<iso_vg_grade> iso_vg(int grade) noexcept;
+PUMPLOSS_CXX_API result<iso_vg_grade> iso_vg(int grade) noexcept;
 
 /// The ISO 3448 grade whose limits contain a kinematic viscosity measured at 40 degC.
 /// @param nu40_m2_s kinematic viscosity at 40 degC, m^2/s
 /// @return the grade; status::out_of_validity when the value lies in no grade's band.
-result<iso_vg_grade> iso_vg_classify(double nu40_m2_s) noexcept;
+PUMPLOSS_CXX_API result<iso_vg_grade> iso_vg_classify(double nu40_m2_s) noexcept;
 /// @}
 
 /// @name ASTM D2161 Saybolt Universal Seconds

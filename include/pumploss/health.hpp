@@ -18,6 +18,7 @@
 #include <cmath>
 #include <cstddef>
 
+#include "export.hpp"
 #include "fluid.hpp"
 #include "leakage.hpp"
 #include "scalar_traits.hpp"
@@ -74,12 +75,12 @@ enum health_reason : unsigned {
 /// A sentence for one reason bit (static storage, never null).
 /// @param reason one health_reason bit
 /// @return the sentence; a sentence saying so for an unknown bit
-const char* health_reason_text(unsigned reason) noexcept;
+PUMPLOSS_CXX_API const char* health_reason_text(unsigned reason) noexcept;
 
 /// A short name for a level ("sound", "acceptable", "elevated", "worn"; "unknown" otherwise).
 /// @param level the level
 /// @return the name (static storage)
-const char* health_level_name(health_level level) noexcept;
+PUMPLOSS_CXX_API const char* health_level_name(health_level level) noexcept;
 
 /// Bands and limits of the verdict; every one configurable.
 template <class T>

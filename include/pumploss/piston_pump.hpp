@@ -9,6 +9,7 @@
 #include <cmath>
 #include <cstddef>
 
+#include "export.hpp"
 #include "dual.hpp"
 #include "fluid.hpp"
 #include "gap.hpp"
@@ -192,7 +193,7 @@ inline constexpr int leakage_path_count = 9;
 /// Short name of a path ("piston-bore", "slipper", ...), "unknown" for another number.
 /// @param path the path
 /// @return the name (static storage)
-const char* leakage_path_name(leakage_path path) noexcept;
+PUMPLOSS_CXX_API const char* leakage_path_name(leakage_path path) noexcept;
 
 /// The gaps whose size the budget's sensitivity and diagnosis speak of.
 enum class pump_gap : int {
@@ -477,7 +478,7 @@ constexpr path_group group_of(leakage_path path) noexcept {
 /// Short name of a group ("piston", "slipper", "valve-plate", "controller", "extra").
 /// @param group the group
 /// @return the name (static storage), "unknown" for another number
-const char* path_group_name(path_group group) noexcept;
+PUMPLOSS_CXX_API const char* path_group_name(path_group group) noexcept;
 
 /// The pump with the gaps selected by `mask` (bit i for pump_gap i) multiplied by `factor`.
 /// @param p the pump
@@ -536,7 +537,7 @@ struct pump_calibration {
 /// @par Source
 /// Lawson and Hanson, Solving Least Squares Problems (1974), ch. 23 (NNLS); the grouping rule
 /// is ours.
-pump_calibration calibrate_piston_pump(const piston_pump<double>& p, const oil<double>& o,
+PUMPLOSS_CXX_API pump_calibration calibrate_piston_pump(const piston_pump<double>& p, const oil<double>& o,
                                        const drain_measurement* m, std::size_t n) noexcept;
 
 /// The change of one gap alone that would explain a measured drain flow: the factor k on that

@@ -11,6 +11,8 @@
 #include <cstdlib>
 #include <limits>
 #include <type_traits>
+
+#include "export.hpp"
 #if defined(__cpp_exceptions) || defined(__EXCEPTIONS)
 #include <stdexcept>
 #endif
@@ -65,7 +67,7 @@ constexpr status worst(status a, status b) noexcept {
 /// A one-sentence English description of a status code.
 /// @param code a status code (pumploss::status value or PUMPLOSS_* constant)
 /// @return the sentence (static storage, never null); unknown codes give a sentence saying so.
-const char* status_message(int code) noexcept;
+PUMPLOSS_CXX_API const char* status_message(int code) noexcept;
 
 /// A value together with the status of the calculation that produced it.
 ///

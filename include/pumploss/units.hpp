@@ -15,6 +15,7 @@
 
 #include <string_view>
 
+#include "export.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 
@@ -101,20 +102,20 @@ struct unit_info {
 /// Look a unit up by its case-sensitive symbol.
 /// @param symbol the unit symbol, e.g. "L/min"
 /// @return the unit, or nullptr when unknown.
-const unit_info* find_unit(std::string_view symbol) noexcept;
+PUMPLOSS_CXX_API const unit_info* find_unit(std::string_view symbol) noexcept;
 
 /// @return the number of units known to find_unit().
-int unit_count() noexcept;
+PUMPLOSS_CXX_API int unit_count() noexcept;
 
 /// The i-th known unit.
 /// @param i index, 0 <= i < unit_count()
 /// @return the unit, or nullptr for an index out of range.
-const unit_info* unit_at(int i) noexcept;
+PUMPLOSS_CXX_API const unit_info* unit_at(int i) noexcept;
 
 /// The SI unit symbol of a dimension.
 /// @param d the dimension
 /// @return "Pa", "m3/s", ...
-const char* si_symbol(dimension d) noexcept;
+PUMPLOSS_CXX_API const char* si_symbol(dimension d) noexcept;
 
 /// The SI value of one unit in T (exact decimal definition for types that can parse it).
 /// @param u the unit
@@ -182,7 +183,7 @@ inline result<T> convert(T value, const unit_info& from, const unit_info& to) {
 /// @param from_symbol case-sensitive symbol of the value's unit
 /// @param to_symbol case-sensitive symbol of the wanted unit
 /// @return status::unknown_unit when a symbol is not known, otherwise as convert().
-result<double> convert(double value, std::string_view from_symbol, std::string_view to_symbol) noexcept;
+PUMPLOSS_CXX_API result<double> convert(double value, std::string_view from_symbol, std::string_view to_symbol) noexcept;
 
 }  // namespace pumploss
 
