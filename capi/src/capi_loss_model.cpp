@@ -214,7 +214,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_map(const pumploss_model* model, d
         else if (summary == pumploss::status::ok) summary = p.st;
       }
     }
-    return failed ? PUMPLOSS_WPARTIAL : static_cast<int>(summary);
+    return failed ? PUMPLOSS_EPARTIAL : static_cast<int>(summary);
   } catch (...) {
     return PUMPLOSS_EINTERNAL;
   }
