@@ -690,7 +690,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_pad_orifice(double supply_pressure_p
  * @param wall_speed_m_s array of n values: speed of the moving wall along the flow, m/s
  * @param q_m3_s array of n outputs (the leakage flow, m^3/s)
  * @param status array of n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when an element failed (see status);
  *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
  * @sa pumploss_gap_plates_flow
  */
@@ -706,7 +706,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_plates_flow_batch(size_t n, const do
  * @param eccentricity_ratio array of n values: centre offset / radial clearance, 0 (concentric) to 1 (touching)
  * @param q_m3_s array of n outputs (the leakage flow, m^3/s)
  * @param status array of n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when an element failed (see status);
  *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
  * @sa pumploss_gap_annulus_flow
  */
@@ -721,7 +721,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_annulus_flow_batch(size_t n, const d
  * @param height_m array of n values: gap height, m (> 0)
  * @param q_m3_s array of n outputs (the radial flow, m^3/s)
  * @param status array of n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when an element failed (see status);
  *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
  * @sa pumploss_gap_radial_flow
  */
@@ -735,13 +735,12 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_radial_flow_batch(size_t n, const do
  * @param cd array of n values: discharge coefficient (0 < cd <= 1; 0.611 for a sharp edge at high Re)
  * @param q_m3_s array of n outputs (the flow, m^3/s)
  * @param status array of n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when an element failed (see status);
  *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
  * @sa pumploss_orifice_flow
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_flow_batch(size_t n, const double *dp_pa, const double *rho_kg_m3, const double *diameter_m, const double *cd, double *q_m3_s, int *status);
 /** @} */
-/* pumploss:capi-gap (declarations of this subject go above this line) */
 
 /* ==== friction ==== */
 /** @name Friction factor and pipe pressure drop
@@ -893,7 +892,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_flow(double q_m3_s, double rho_kg_m
  * @param relative_roughness n relative roughnesses
  * @param f_darcy receives n friction factors (NaN where an element failed)
  * @param status receives n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when any element failed;
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when any element failed;
  *         PUMPLOSS_EMISUSE for a NULL array (all outputs NaN / EMISUSE).
  * @sa pumploss::friction_factor
  */
@@ -1158,7 +1157,6 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_darby(double k1, double k_i, double k_
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_equivalent_length(double k, double diameter_m, double f_darcy,
                                                           double *length_m);
 /** @} */
-/* pumploss:capi-friction (declarations of this subject go above this line) */
 
 /* ==== efficiency ==== */
 /** @name Efficiency, leakage scaling, heat
@@ -1211,7 +1209,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency(double displacement_m3_
  * @param eta_hm array of n, receives the hydromechanical efficiencies
  * @param eta_t array of n, receives the overall efficiencies
  * @param status array of n, receives each point's status (NaN outputs on its error)
- * @return PUMPLOSS_OK; the first report code seen (e.g. PUMPLOSS_WIMPLAUSIBLE); PUMPLOSS_WPARTIAL
+ * @return PUMPLOSS_OK; the first report code seen (e.g. PUMPLOSS_WIMPLAUSIBLE); PUMPLOSS_EPARTIAL
  *         when some points failed; PUMPLOSS_EMISUSE for a NULL array.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_efficiency_batch(size_t n, const double *displacement_m3_rev,
@@ -1329,7 +1327,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale(double q_ref_m3_s, double 
  * @param mu_pa_s array of n viscosities wanted, Pa s
  * @param q_m3_s array of n, receives the leakages, m^3/s
  * @param status array of n, receives each point's status
- * @return PUMPLOSS_OK, PUMPLOSS_WPARTIAL or PUMPLOSS_EMISUSE.
+ * @return PUMPLOSS_OK, PUMPLOSS_EPARTIAL or PUMPLOSS_EMISUSE.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale_batch(size_t n, const double *q_ref_m3_s,
                                                             const double *dp_ref_pa, const double *mu_ref_pa_s,
@@ -1651,7 +1649,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_predict(const pumploss_model *mode
  * @param speed_rev_s array of n_speed speeds, rev/s
  * @param eta_t array of n_dp * n_speed, receives the overall efficiencies
  * @param status array of n_dp * n_speed, receives each point's status
- * @return PUMPLOSS_OK; the first report seen; PUMPLOSS_WPARTIAL; PUMPLOSS_EMISUSE.
+ * @return PUMPLOSS_OK; the first report seen; PUMPLOSS_EPARTIAL; PUMPLOSS_EMISUSE.
  * @sa pumploss::loss_model_map
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_map(const pumploss_model *model, double mu_pa_s, size_t n_dp,
@@ -1738,7 +1736,6 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_uncertainty(
     double u_displacement_m3_rev, double u_speed_rev_s, double u_dp_pa, double u_flow_m3_s, double u_torque_n_m,
     double r_flow_displacement, double *u_eta_v, double *u_eta_hm, double *u_eta_t);
 /** @} */
-/* pumploss:capi-efficiency (declarations of this subject go above this line) */
 
 /* ==== pump ==== */
 /** @name Pump health from field readings
@@ -2120,12 +2117,6 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_path_name(int path);
  *  @return "piston", "slipper", ... or "unknown" (static storage) */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_group_name(int group);
 /** @} */
-/* pumploss:capi-pump (declarations of this subject go above this line) */
-
-/* ==== capi ==== */
-/* pumploss:capi-capi (declarations of this subject go above this line) */
-
-/* pumploss:capi-declarations (new subjects add their section above this line) */
 
 #ifdef __cplusplus
 }

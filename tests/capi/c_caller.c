@@ -206,7 +206,6 @@ static void test_gap(void) {
   CHECK(pumploss_orifice_flow_batch(3, dpv, NULL, pv, ev, outv, st) == PUMPLOSS_EMISUSE);
 }
 
-/* pumploss:c-caller-gap */
 
 static void test_friction(void) {
   double f = 0.0, dp = 0.0, v = 0.0, re = 0.0;
@@ -315,7 +314,6 @@ static void test_line(void) {
   CHECK(pumploss_equivalent_length(0.5, 0.02, 0.025, &d) == PUMPLOSS_OK && fabs(d - 0.4) < 1e-15);
   CHECK(pumploss_equivalent_length(0.5, 0.02, 0.0, &d) == PUMPLOSS_EDOMAIN && is_nan(d));
 }
-/* pumploss:c-caller-friction */
 
 static void test_efficiency(void) {
   double ev = 0.0, eh = 0.0, et = 0.0, a = 0.0, b = 0.0, c = 0.0, d = 0.0, out = 0.0;
@@ -487,7 +485,6 @@ static void test_loss_model(void) {
                                               &u[2]) == PUMPLOSS_EMISUSE);
 }
 
-/* pumploss:c-caller-efficiency */
 
 static void test_pump_health(void) {
   pumploss_health *h = NULL;
@@ -566,28 +563,20 @@ static void test_pump_budget(void) {
   pumploss_pump_destroy(NULL);
 }
 
-/* pumploss:c-caller-pump */
 
-/* pumploss:c-caller-capi */
 
-/* pumploss:c-caller-tests (new subjects add their test functions above this line) */
 
 int main(void) {
   test_core();
   test_units();
   test_fluid();
   test_gap();
-  /* pumploss:c-caller-calls-gap */
   test_friction();
   test_line();
-  /* pumploss:c-caller-calls-friction */
   test_efficiency();
   test_loss_model();
-  /* pumploss:c-caller-calls-efficiency */
   test_pump_health();
   test_pump_budget();
-  /* pumploss:c-caller-calls-pump */
-  /* pumploss:c-caller-calls-capi */
   printf("%d passed, %d failed\n", checks - failures, failures);
   return failures == 0 ? 0 : 1;
 }

@@ -1,6 +1,6 @@
 // Shared machinery of the table-driven C API tests (bad input, threads, no allocation).
 //
-// capi_table.inc is generated at build time by gen_capi.py from pumploss.h: one entry per
+// capi_table.inc is generated at build time by tools/capigen/capigen.py from pumploss.h: one entry per
 // exported function with its parameter kinds and a thunk that calls it from an array of slots.
 // Here: finding a valid ("baseline") input for each function by a deterministic search around
 // the generator's first guess, building the call cases (special values in every scalar
