@@ -172,9 +172,9 @@ class Library:
         status = getattr(self._dll, name)(*conv)
         vals = []
         for tag, o in outs:
-            if tag in ("D", "I", "H"):
+            if tag in ("D", "I", "Z", "H"):
                 vals.append(o.value)
-            elif tag in ("DA", "IA"):
+            elif tag in ("DA", "IA", "ZA"):
                 vals.append(list(o[:alen]))
             else:
                 vals.append(o.value.decode(errors="replace"))

@@ -96,7 +96,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_flow(double q_m3_s, double rho_kg_m
     *dp_pa = r.dp_pa;
     f = r.friction_factor;
     zero_flow = q_m3_s == 0.0 && !is_error(r.st);
-    if (!zero_flow && !std::isfinite(f)) return status::overflow;
+    if (!is_error(r.st) && !zero_flow && !std::isfinite(f)) return status::overflow;
     return r.st;
   });
   if (is_error(static_cast<status>(code))) return code;

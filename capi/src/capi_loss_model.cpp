@@ -72,6 +72,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model
   if (dp_pa == nullptr || speed_rev_s == nullptr || mu_pa_s == nullptr || flow_m3_s == nullptr || torque_n_m == nullptr)
     return PUMPLOSS_EMISUSE;
   if ((machine_kind != 0 && machine_kind != 1) || (model_kind != 0 && model_kind != 1)) return PUMPLOSS_EDOMAIN;
+  if (count == 0) return PUMPLOSS_EDATA;  // no points (empty buffers below would read as NULL arrays)
   pumploss::status st = pumploss::status::ok;
   pumploss_model* h = nullptr;
   {

@@ -389,9 +389,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump* h, size_t 
   return call({rms_residual_m3_s}, [&] {
     const status s = operating_checks(h);
     if (is_error(s)) return s;
-    if (n > 0 && (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
-                  displacement_fraction == nullptr || t_k == nullptr))
+    // NULL is never a valid array, also with n = 0 (pumploss.h); no points: too few data
+    if (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
+        displacement_fraction == nullptr || t_k == nullptr)
       return status::misuse;
+    if (n == 0) return status::insufficient_data;
     std::vector<pumploss::drain_measurement> m(n);
     for (size_t i = 0; i < n; ++i)
       m[i] = {drain_m3_s[i], outlet_pa[i], case_pa[i], speed_rev_s[i], displacement_fraction[i], t_k[i]};
