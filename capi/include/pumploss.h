@@ -19,7 +19,9 @@
  *   function documents as undefined for those inputs is NaN. A usable status never comes with
  *   an infinite output. Test with the macros, not with number ranges.
  * - A NULL output pointer is an error (PUMPLOSS_EMISUSE), never a crash.
- * - Arrays and counts: every count or length is a size_t. NULL is never a valid array, whatever
+ * - Arrays and counts: every array length, and every count given out through a pointer, is a
+ *   size_t (pumploss_standard_bore_count() returns its small constant as the int value of the
+ *   call; the number of pistons is a design figure, an int). NULL is never a valid array, whatever
  *   the count: a NULL array gives PUMPLOSS_EMISUSE, also with n = 0. With valid arrays and
  *   n = 0 a batch function returns PUMPLOSS_OK and writes nothing; a function that needs data
  *   (a fit, a calibration, a check over temperatures) returns its documented error for too few
@@ -101,7 +103,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_version_number(void);
 
 /** @name Status codes
  *  0 is success; 1-99 are errors (outputs NaN); 100 and up are reports (outputs valid and
- *  finite). Numbers are fixed forever; new codes may be added. @{ */
+ *  finite, see PUMPLOSS_WUNDEFINED). Test with PUMPLOSS_IS_ERROR() and PUMPLOSS_IS_REPORT().
+ *  Numbers are fixed forever; new codes may be added. @{ */
 #define PUMPLOSS_OK 0                 /**< Success. */
 #define PUMPLOSS_EDOMAIN 1            /**< An argument is outside its physical domain. */
 #define PUMPLOSS_ENONFINITE 2         /**< An argument is NaN or infinite. */

@@ -30,7 +30,11 @@ __all__ = ["load", "Library", "PumplossError", "PumplossWarning", "OK", "is_erro
 
 OK = 0
 
-from pumploss_signatures import CONSTANTS, FUNCTIONS, STATUS_CODES
+try:
+    from pumploss_signatures import CONSTANTS, FUNCTIONS, STATUS_CODES
+except ImportError as e:  # pragma: no cover - a packaging mistake, not a run-time condition
+    raise ImportError("pumploss_signatures.py (generated from pumploss.h at build time, in <build>/bindings "
+                      "or installed beside pumploss.py) is not on the import path") from e
 
 globals().update(STATUS_CODES)
 globals().update(CONSTANTS)
