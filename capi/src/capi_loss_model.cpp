@@ -11,6 +11,18 @@
 using pumploss::capi::call;
 using pumploss::capi::kNaN;
 
+// The option constants of pumploss.h equal the C++ enums.
+static_assert(PUMPLOSS_PUMP == static_cast<int>(pumploss::machine::pump), "machine");
+static_assert(PUMPLOSS_MOTOR == static_cast<int>(pumploss::machine::motor), "machine");
+static_assert(PUMPLOSS_MODEL_WILSON == static_cast<int>(pumploss::loss_model_kind::wilson), "model");
+static_assert(PUMPLOSS_MODEL_SCHLOESSER == static_cast<int>(pumploss::loss_model_kind::schloesser), "model");
+static_assert(PUMPLOSS_FIGURE_ABSOLUTE == static_cast<int>(pumploss::uncertainty_basis::absolute), "basis");
+static_assert(PUMPLOSS_FIGURE_PERCENT_OF_READING == static_cast<int>(pumploss::uncertainty_basis::percent_of_reading),
+              "basis");
+static_assert(PUMPLOSS_DIST_STANDARD == static_cast<int>(pumploss::uncertainty_distribution::standard), "dist");
+static_assert(PUMPLOSS_DIST_RECTANGULAR == static_cast<int>(pumploss::uncertainty_distribution::rectangular), "dist");
+static_assert(PUMPLOSS_DIST_EXPANDED_K2 == static_cast<int>(pumploss::uncertainty_distribution::expanded_k2), "dist");
+
 struct pumploss_model {
   pumploss::loss_model<double> m;
   std::vector<double> flow_residual;

@@ -90,3 +90,33 @@ def test_status_messages_cover_every_code(lib):
     for code in CODES:
         msg = lib.status_message(code)
         assert msg and msg != unknown and msg.endswith("."), (code, msg)
+
+
+def test_vba_module_declares_every_function_type_for_type(lib):
+    """The VBA module generated beside the ctypes table: a 64-bit Declare PtrSafe per function,
+    outputs ByRef, pointers and size_t as LongPtr, within the VBA limits (24 line continuations
+    per statement, 1023 characters per line)."""
+    import os
+    import re
+    path = os.path.join(os.path.dirname(pumploss_signatures.__file__), "pumploss.bas")
+    text = open(path, encoding="utf-8", newline="").read()
+    assert "\r\n" in text and "\n" not in text.replace("\r\n", ""), "VBA modules are CRLF text"
+    lines = text.split("\r\n")
+    assert max(len(l) for l in lines) <= 1023
+    statements = re.findall(r"^Public Declare PtrSafe (Function|Sub) (pumploss_\w+) Lib \"pumploss.dll\" \((.*?)\)( As \w+)?$",
+                            text.replace("\r\n", "\n").replace(" _\n    ", " "), re.M)
+    decl = {name: (kind, args, ret) for kind, name, args, ret in statements}
+    assert set(decl) == set(PROTOS)
+    want = {"DIN": "ByVal Double", "IIN": "ByVal Long", "SIZE": "ByVal LongPtr", "BUFLEN": "ByVal LongPtr",
+            "DARR": "ByRef Double", "DOUT": "ByRef Double", "IOUT": "ByRef Long", "ZOUT": "ByRef LongPtr",
+            "IARR": "ByRef Long", "STR": "ByVal String", "CBUF": "ByVal String", "HIN": "ByVal LongPtr",
+            "HOUT": "ByRef LongPtr"}
+    for name, (ret, params, _arrays) in PROTOS.items():
+        kind, args, vret = decl[name]
+        got = [re.sub(r"^(ByVal|ByRef) \w+ As (\w+)$", r"\1 \2", a.strip()) for a in args.split(",") if a.strip()]
+        assert got == [want[k] for k, _, _ in params], name
+        assert (kind == "Sub") == (ret == "void"), name
+        if ret != "void":
+            assert vret == (" As LongPtr" if ret == "const char*" else " As Long"), name
+    for n, v in pumploss_signatures.STATUS_CODES.items():
+        assert f"Public Const {n} As Long = {v}\r\n" in text
