@@ -126,6 +126,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_height(pumploss_line* h, double
   if (h == nullptr) return PUMPLOSS_EMISUSE;
   if (!pumploss::detail::finite(height_m)) return set_message(h, status::nonfinite, "set_height");
   h->line.height_m = height_m;
+  h->message = "no error";
   return PUMPLOSS_OK;
 }
 
@@ -141,6 +142,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_oil(pumploss_line* h, double t1
   h->oil.rho_ref_kg_m3 = rho_ref_kg_m3;
   h->oil.t_ref_k = t_ref_k;
   h->has_oil = true;
+  h->message = "no error";
   return PUMPLOSS_OK;
 }
 
