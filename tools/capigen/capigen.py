@@ -27,6 +27,8 @@ Constants: the status codes are the integer #defines inside the header's "Status
 every other `#define PUMPLOSS_NAME <integer>` (except the version) is an option constant. Both
 go into every binding.
 """
+import io
+import os
 import re
 import sys
 
@@ -434,12 +436,10 @@ def write_vba(funcs, handles, codes, consts, out, template):
 
 WRITERS = {"table": write_table, "fortran": write_fortran, "def": write_def, "python": write_python}
 ALL = {"def": "pumploss.def", "python": "pumploss_signatures.py", "fortran": "pumploss.f90", "vba": "pumploss.bas"}
-VBA_TEMPLATE = __import__("os").path.join(__import__("os").path.dirname(__import__("os").path.abspath(__file__)),
-                                          "pumploss.bas.in")
+VBA_TEMPLATE = os.path.join(os.path.dirname(os.path.abspath(__file__)), "pumploss.bas.in")
 
 
 def render(mode, parsed):
-    import io
     buf = io.StringIO(newline="")
     if mode == "vba":
         write_vba(*parsed, buf, VBA_TEMPLATE)
@@ -473,7 +473,6 @@ def main(argv):
               f"{len(consts)} option constants")
         return 0
     if argv[1] == "all":
-        import os
         os.makedirs(argv[3], exist_ok=True)
         for mode, name in ALL.items():
             write_if_changed(os.path.join(argv[3], name), render(mode, parsed))
