@@ -11,9 +11,9 @@
 #   3a. the libFuzzer targets (tests/fuzz), PUMPLOSS_FUZZ_SECONDS (default 60) each;
 #   3b. line coverage of include/, src/, capi/ by the test suite (gcc --coverage, gcovr), failing
 #      under PUMPLOSS_COVERAGE_MIN (default 90) percent;
-#   4. the Windows x64 DLL (mingw-w64): export table against pumploss.def and exports.txt,
-#      and the C caller run against it under wine when wine is installed; pumploss_cxx.dll
-#      (export table: pumploss:: functions only) with a C++ consumer run under wine;
+#   4. the Windows x64 DLL (mingw-w64): export table against the generated pumploss.def and
+#      exports.txt, and the C caller run against it under wine when wine is installed;
+#      pumploss_cxx.dll (export table: pumploss:: functions only) with a C++ consumer under wine;
 #   5. the docs (Doxygen, warnings as errors);
 #   6. the benchmarks of the performance page (scripts/bench.sh): their ratios are printed for
 #      the record; they fail the run only with PUMPLOSS_BENCH_STRICT=1 (timings on a shared
@@ -72,15 +72,18 @@ cmake --preset ci-linux-clang-asan -B "$out/asan" >/dev/null
 cmake --build "$out/asan" -j "$jobs"
 ASAN_OPTIONS=detect_leaks=1:abort_on_error=0:strict_string_checks=1:detect_stack_use_after_return=1 \
 UBSAN_OPTIONS=print_stacktrace=1:halt_on_error=1 \
-  ctest --test-dir "$out/asan" --output-on-failure -j "$jobs" -E '^capi_threads$'
+  ctest --test-dir "$out/asan" --output-on-failure -j "$jobs" -E '^capi_(threads|shared_handles)$'
 # The thread test with fewer rounds (ASan makes it about 10 times slower; 8 threads still overlap).
 ASAN_OPTIONS=detect_leaks=1 UBSAN_OPTIONS=print_stacktrace=1:halt_on_error=1 "$out/asan/tests/capi/capi_threads" 20 8
+ASAN_OPTIONS=detect_leaks=1 UBSAN_OPTIONS=print_stacktrace=1:halt_on_error=1 "$out/asan/tests/capi/capi_shared_handles" 10 8
 
-step "sanitizers: C API thread test under TSan (clang)"
+step "sanitizers: C API thread tests under TSan (clang)"
 cmake --preset ci-linux-clang-tsan -B "$out/tsan" >/dev/null
-cmake --build "$out/tsan" -j "$jobs" --target capi_threads
+cmake --build "$out/tsan" -j "$jobs" --target capi_threads capi_shared_handles
 # Fewer rounds than the plain build: TSan is 5-15 times slower; 8 threads still overlap.
 TSAN_OPTIONS=halt_on_error=1:second_deadlock_stack=1 "$out/tsan/tests/capi/capi_threads" 20 8
+# The handle contract: 8 threads evaluate ONE shared handle of every kind (pumploss.h).
+TSAN_OPTIONS=halt_on_error=1:second_deadlock_stack=1 "$out/tsan/tests/capi/capi_shared_handles" 10 8
 
 fuzz_secs="${PUMPLOSS_FUZZ_SECONDS:-60}"
 step "fuzzing: libFuzzer + ASan/UBSan, ${fuzz_secs} s per target from the committed corpus"
@@ -92,7 +95,7 @@ cmake --build "$out/coverage" -j "$jobs"
 find "$out/coverage" -name '*.gcda' -delete
 # Not the thread test: its 8 threads update the same counters without atomics (negative counts
 # that gcovr refuses); capi_badinput covers the same functions single-threaded.
-ctest --test-dir "$out/coverage" --output-on-failure -j "$jobs" -E 'valgrind|^capi_threads$'
+ctest --test-dir "$out/coverage" --output-on-failure -j "$jobs" -E 'valgrind|^capi_(threads|shared_handles)$'
 mkdir -p "$out/coverage/report"
 # CMake's compiler-identification objects have notes but never run: gcov would only complain.
 find "$out/coverage/CMakeFiles" -path '*CompilerId*' -name '*.gcno' -delete
@@ -105,7 +108,7 @@ echo "per-file figures: $out/coverage/report/coverage.txt, browsable: $out/cover
 step "Windows x64 DLL (mingw-w64): export table, C caller under wine"
 cmake --preset ci-windows-x64 -B "$out/win64" >/dev/null
 cmake --build "$out/win64" -j "$jobs"
-"$python" tests/capi/check_exports.py --header=capi/include/pumploss.h --def=capi/pumploss.def \
+"$python" tests/capi/check_exports.py --header=capi/include/pumploss.h --def="$out/win64/bindings/pumploss.def" \
   --exports=tests/capi/exports.txt --dll="$out/win64/pumploss.dll" --objdump=x86_64-w64-mingw32-objdump
 x86_64-w64-mingw32-gcc -std=c89 -pedantic-errors -Wall -Wextra -Werror -DPUMPLOSS_SHARED \
   -Icapi/include tests/capi/c_caller.c "$out/win64/libpumploss.dll.a" -static -o "$out/win64/c_caller.exe"

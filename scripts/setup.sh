@@ -9,20 +9,14 @@ PACKAGES=(
   libboost-dev                                     # Boost.Multiprecision (test oracle)
   libgtest-dev libbenchmark-dev                    # GoogleTest, Google Benchmark
   doxygen graphviz                                 # docs
-  python3 python3-pytest python3-fluids python3-mpmath python3-scipy  # Python cross-checks
+  python3 python3-pytest python3-fluids python3-mpmath python3-scipy  # binding generator (build), Python cross-checks
   gfortran                                         # Fortran caller test
-  # pumploss:setup-gap
   python3-numpy                                    # friction cross-checks (ulp distances)
-  # pumploss:setup-friction
-  # pumploss:setup-efficiency
-  # pumploss:setup-pump
   clang valgrind                                   # sanitizer builds (ASan, UBSan, TSan), memcheck
   g++-mingw-w64-x86-64                             # Windows x64 DLL cross-build
   wine64                                           # runs a C test against the DLL
   libclang-rt-dev gcovr linux-perf                 # libFuzzer runtime, coverage report, profiling
-  # pumploss:setup-capi
   libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (examples/cli)
-  # pumploss:setup-cli
 )
 
 missing=()

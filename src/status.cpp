@@ -4,6 +4,7 @@
 namespace pumploss {
 
 const char* status_message(int code) noexcept {
+  if (code == 104) return "Retired status code 104 (was: some elements of a batch call failed); no longer returned.";
   switch (static_cast<status>(code)) {
     case status::ok: return "Success.";
     case status::domain: return "An argument is outside its physical domain (for example a gap, length or viscosity that is zero or negative).";
@@ -22,7 +23,8 @@ const char* status_message(int code) noexcept {
     case status::transition: return "Value in the laminar-turbulent transition region, where friction is uncertain.";
     case status::ill_conditioned: return "The data are nearly collinear; the fitted coefficients are poorly determined.";
     case status::extrapolated: return "Value extrapolated beyond the data or table it is based on.";
-    case status::partial: return "Some elements of a batch call failed; see the per-element status.";
+    case status::partial: return "Some elements of a batch call failed; the per-element status says which elements hold values.";
+    case status::undefined_output: return "Valid, but an output that is undefined for these inputs (for example the friction factor at zero flow) is NaN; the other outputs are usable.";
     case status::implausible: return "Value is physically implausible (for example an efficiency above 1); check the measurements.";
   }
   return "Unknown status code.";

@@ -77,7 +77,7 @@ void expect_same_as_scalar(batch_fn batch, scalar_fn scalar, const columns& c, c
     }
   }
   EXPECT_EQ(mismatches, 0u) << what;
-  EXPECT_EQ(summary, failed ? PUMPLOSS_WPARTIAL : expect_summary) << what;
+  EXPECT_EQ(summary, failed ? PUMPLOSS_EPARTIAL : expect_summary) << what;
 }
 
 TEST(CapiEfficiencyBatch, FastPathEqualsScalarBitForBit) {
@@ -104,7 +104,7 @@ TEST(CapiEfficiencyBatch, AllValidGivesOkAndOnlyOneBadElementGivesPartial) {
   };
   EXPECT_EQ(run(), PUMPLOSS_OK);
   c.in[2][2500] = -1.0;  // in the third block
-  EXPECT_EQ(run(), PUMPLOSS_WPARTIAL);
+  EXPECT_EQ(run(), PUMPLOSS_EPARTIAL);
   EXPECT_EQ(st[2500], PUMPLOSS_EDOMAIN);
   EXPECT_TRUE(std::isnan(ev[2500]) && std::isnan(eh[2500]) && std::isnan(et[2500]));
   EXPECT_EQ(st[2499], PUMPLOSS_OK);

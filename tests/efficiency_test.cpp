@@ -168,7 +168,7 @@ TEST(EfficiencyBatch, MatchesScalarAndReportsPerElement) {
   std::vector<int> st(5);
   EXPECT_EQ(pumploss_pump_efficiency_batch(5, v.data(), n.data(), dp.data(), q.data(), t.data(), ev.data(), eh.data(),
                                            et.data(), st.data()),
-            PUMPLOSS_WPARTIAL);
+            PUMPLOSS_EPARTIAL);
   EXPECT_EQ(st[0], PUMPLOSS_OK);
   EXPECT_EQ(st[1], PUMPLOSS_WIMPLAUSIBLE);
   EXPECT_EQ(st[2], PUMPLOSS_EDOMAIN);

@@ -295,7 +295,7 @@ TEST(FrictionCapi, ScalarAndBatchWrappers) {
   const double rrs[4] = {1e-4, 0.0, 0.0, 1e-5};
   double fs[4];
   int sts[4];
-  EXPECT_EQ(pumploss_friction_factor_batch(4, res, rrs, fs, sts), PUMPLOSS_WPARTIAL);
+  EXPECT_EQ(pumploss_friction_factor_batch(4, res, rrs, fs, sts), PUMPLOSS_EPARTIAL);
   EXPECT_EQ(sts[0], PUMPLOSS_OK);
   EXPECT_EQ(sts[1], PUMPLOSS_WTRANSITION);
   EXPECT_EQ(sts[2], PUMPLOSS_EDOMAIN);
@@ -307,7 +307,7 @@ TEST(FrictionCapi, ScalarAndBatchWrappers) {
   const double q[2] = {1e-4, 1e-4}, rho[2] = {870, 870}, mu[2] = {0.04, 0.04}, d[2] = {0.012, 0.012},
                l[2] = {2.0, -2.0}, e[2] = {0.0, 0.0};
   double dps[2];
-  EXPECT_EQ(pumploss_pipe_pressure_drop_batch(2, q, rho, mu, d, l, e, dps, sts), PUMPLOSS_WPARTIAL);
+  EXPECT_EQ(pumploss_pipe_pressure_drop_batch(2, q, rho, mu, d, l, e, dps, sts), PUMPLOSS_EPARTIAL);
   EXPECT_EQ(dps[0], pumploss::pipe_pressure_drop(1e-4, 870.0, 0.04, 0.012, 2.0, 0.0).dp_pa);
   EXPECT_EQ(sts[1], PUMPLOSS_EDOMAIN);
   EXPECT_TRUE(std::isnan(dps[1]));

@@ -452,7 +452,7 @@ TEST(GapCapi, MatchesTemplatesAndNaNOnError) {
                l[2] = {0.02, 0.02}, u[2] = {0.0, 0.0};
   double out[2];
   int st[2];
-  EXPECT_EQ(pumploss_gap_plates_flow_batch(2, dp, mu, w, h, l, u, out, st), PUMPLOSS_WPARTIAL);
+  EXPECT_EQ(pumploss_gap_plates_flow_batch(2, dp, mu, w, h, l, u, out, st), PUMPLOSS_EPARTIAL);
   EXPECT_EQ(st[0], PUMPLOSS_OK);
   EXPECT_EQ(st[1], PUMPLOSS_EDOMAIN);
   EXPECT_TRUE(std::isnan(out[1]));

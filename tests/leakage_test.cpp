@@ -53,7 +53,7 @@ TEST(LeakageScale, CApiAndBatch) {
   const double dp[3] = {1e7, -1.0, 2e7}, mu[3] = {0.02, 0.02, kInf};
   double o[3];
   int st[3];
-  EXPECT_EQ(pumploss_leakage_scale_batch(3, q, dr, mr, dp, mu, o, st), PUMPLOSS_WPARTIAL);
+  EXPECT_EQ(pumploss_leakage_scale_batch(3, q, dr, mr, dp, mu, o, st), PUMPLOSS_EPARTIAL);
   EXPECT_EQ(st[0], PUMPLOSS_OK);
   EXPECT_EQ(st[1], PUMPLOSS_EDOMAIN);
   EXPECT_EQ(st[2], PUMPLOSS_ENONFINITE);

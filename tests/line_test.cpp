@@ -271,9 +271,9 @@ TEST(LineCapi, HandleLifecycleAndCalls) {
   EXPECT_NE(std::string(pumploss_line_last_message(h)).find("add_pipe"), std::string::npos);
   EXPECT_EQ(pumploss_line_add_pipe(h, 0.0127, 5.0, 0.0), PUMPLOSS_OK);
   EXPECT_EQ(pumploss_line_add_fitting_k(h, 0.0127, 1.0), PUMPLOSS_OK);
-  int n = 0;
+  size_t n = 0;
   EXPECT_EQ(pumploss_line_element_count(h, &n), PUMPLOSS_OK);
-  EXPECT_EQ(n, 2);
+  EXPECT_EQ(n, 2u);
   double dp = 0, share = 0, q = 0;
   EXPECT_EQ(pumploss_line_pressure_drop_at(h, 1e-4, 300.0, &dp), PUMPLOSS_EMISUSE);  // no oil yet
   EXPECT_TRUE(std::isnan(dp));
@@ -282,8 +282,12 @@ TEST(LineCapi, HandleLifecycleAndCalls) {
   ASSERT_EQ(pumploss_line_element_pressure_drop(h, 0, 10e-3 / 60, 870.0, 133.8e-6 * 870.0, &dp, &share), PUMPLOSS_OK);
   EXPECT_NEAR(dp, 1.52e5, 0.006e5);
   EXPECT_GT(share, 0.99);
+  const std::string message_before = pumploss_line_last_message(h);
   EXPECT_EQ(pumploss_line_element_pressure_drop(h, 2, 1e-4, 870.0, 0.04, &dp, &share), PUMPLOSS_EDOMAIN);
   EXPECT_TRUE(std::isnan(dp) && std::isnan(share));
+  // Evaluations never write the handle (pumploss.h, handle contract): a failed evaluation leaves
+  // the message of the last add_ / set_ call.
+  EXPECT_EQ(message_before, pumploss_line_last_message(h));
   ASSERT_EQ(pumploss_line_flow_for_pressure(h, 1.0e5, 870.0, 0.04, &q), PUMPLOSS_OK);
   ASSERT_EQ(pumploss_line_pressure_drop(h, q, 870.0, 0.04, &dp), PUMPLOSS_OK);
   EXPECT_NEAR(dp, 1.0e5, 1e-6);

@@ -23,7 +23,8 @@ TEST(Status, EveryCodeHasItsOwnSentence) {
                        PUMPLOSS_ENOCONVERGE, PUMPLOSS_EMISUSE, PUMPLOSS_EUNIT, PUMPLOSS_EDIMENSION,
                        PUMPLOSS_EBUFFER, PUMPLOSS_ENOMEM, PUMPLOSS_EINTERNAL, PUMPLOSS_EVALIDITY,
                        PUMPLOSS_EDATA, PUMPLOSS_WREGIME, PUMPLOSS_WTRANSITION, PUMPLOSS_WILLCONDITIONED,
-                       PUMPLOSS_WEXTRAPOLATED, PUMPLOSS_WPARTIAL, PUMPLOSS_WIMPLAUSIBLE};
+                       PUMPLOSS_WEXTRAPOLATED, PUMPLOSS_EPARTIAL, PUMPLOSS_WIMPLAUSIBLE,
+                       PUMPLOSS_WUNDEFINED, PUMPLOSS_WPARTIAL};
   const std::string unknown = pumploss_status_message(-1);
   EXPECT_EQ(unknown, pumploss_status_message(99));
   EXPECT_EQ(unknown, pumploss_status_message(1 << 30));
@@ -34,7 +35,13 @@ TEST(Status, EveryCodeHasItsOwnSentence) {
     EXPECT_TRUE(seen.insert(m).second) << "duplicate sentence for " << c;
     EXPECT_EQ(m.back(), '.') << c;
     EXPECT_EQ(pumploss::is_error(static_cast<pumploss::status>(c)), c > 0 && c < 100);
+    EXPECT_EQ(PUMPLOSS_IS_ERROR(c), c > 0 && c < 100) << c;
+    EXPECT_EQ(PUMPLOSS_IS_REPORT(c), c >= 100) << c;
+    EXPECT_FALSE(PUMPLOSS_IS_ERROR(c) && PUMPLOSS_IS_REPORT(c)) << c;
   }
+  EXPECT_FALSE(PUMPLOSS_IS_ERROR(PUMPLOSS_OK) || PUMPLOSS_IS_REPORT(PUMPLOSS_OK));
+  // A batch with a failed element is an error: a caller testing the summary alone never uses a NaN.
+  EXPECT_TRUE(PUMPLOSS_IS_ERROR(PUMPLOSS_EPARTIAL));
 }
 
 TEST(Status, WorstAndResult) {

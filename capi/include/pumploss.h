@@ -10,13 +10,34 @@
  * - Units are SI and are part of each parameter name (dp_pa, mu_pa_s, q_m3_s, n_rev_s, t_k).
  *   Use pumploss_unit_convert() at the edges.
  * - The return value is a status code (PUMPLOSS_OK = 0). Results go out through pointers.
- * - Codes 1-99 are errors: every non-NULL output is set to a quiet NaN, so a spreadsheet shows an
- *   error rather than a wrong number. Codes 100 and up are reports: the outputs are valid, but
- *   were computed outside a stated assumption (e.g. PUMPLOSS_WREGIME).
+ * - Codes 1-99 are errors (PUMPLOSS_IS_ERROR(st)): every non-NULL output is set to a quiet NaN,
+ *   so a spreadsheet shows an error rather than a wrong number; the one exception is
+ *   PUMPLOSS_EPARTIAL of a batch function, where the elements whose own status is OK or a
+ *   report keep their values. Codes 100 and up are reports (PUMPLOSS_IS_REPORT(st)): every
+ *   output is usable and finite, but was computed outside a stated assumption (e.g.
+ *   PUMPLOSS_WREGIME); the one exception is PUMPLOSS_WUNDEFINED, where an output the
+ *   function documents as undefined for those inputs is NaN. A usable status never comes with
+ *   an infinite output. Test with the macros, not with number ranges.
  * - A NULL output pointer is an error (PUMPLOSS_EMISUSE), never a crash.
+ * - Arrays and counts: every array length, and every count given out through a pointer, is a
+ *   size_t (pumploss_standard_bore_count() returns its small constant as the int value of the
+ *   call; the number of pistons is a design figure, an int). NULL is never a valid array, whatever
+ *   the count: a NULL array gives PUMPLOSS_EMISUSE, also with n = 0. With valid arrays and
+ *   n = 0 a batch function returns PUMPLOSS_OK and writes nothing; a function that needs data
+ *   (a fit, a calibration, a check over temperatures) returns its documented error for too few
+ *   points (PUMPLOSS_EDATA or PUMPLOSS_EDOMAIN).
+ * - Every int parameter that selects a mode, method or kind has named constants
+ *   (PUMPLOSS_PUMP, PUMPLOSS_MODEL_WILSON, PUMPLOSS_PATH_SLIPPER, ...): use the names.
  * - No global mutable state: every function is reentrant and safe to call from many threads.
- *   Scalar functions do not allocate. Handles (opaque pointers) are safe to use from several
- *   threads only for reading; destroying NULL is a no-op.
+ *   Scalar functions do not allocate.
+ * - Handles (opaque pointers, one contract for every kind): a handle is changed only by its
+ *   create, set_ / add_ / calibrate functions (they take a non-const pointer); every other
+ *   function takes a const pointer and never writes the handle, not even a message or a cache.
+ *   So any number of threads may evaluate one shared handle at once, with no locking, as long
+ *   as no thread changes it meanwhile; changing a handle needs exclusive use (configure it,
+ *   then share it). Messages go into caller buffers or are fixed when the handle is changed.
+ *   Destroying NULL is a no-op. (Tested: tests/capi/capi_shared_handles.cpp, eight threads on
+ *   one handle of every kind under ThreadSanitizer.)
  * - Every call masks floating-point traps on entry and restores the caller's floating-point
  *   environment on exit, so hosts that run with traps enabled are not disturbed.
  * - New status codes and functions may be added in minor versions; existing ones never change.
@@ -81,7 +102,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_version_number(void);
 /** @} */
 
 /** @name Status codes
- *  0 is success; 1-99 are errors (outputs NaN); 100 and up are reports (outputs valid).
+ *  0 is success; 1-99 are errors (outputs NaN); 100 and up are reports (outputs valid and
+ *  finite, see PUMPLOSS_WUNDEFINED). Test with PUMPLOSS_IS_ERROR() and PUMPLOSS_IS_REPORT().
  *  Numbers are fixed forever; new codes may be added. @{ */
 #define PUMPLOSS_OK 0                 /**< Success. */
 #define PUMPLOSS_EDOMAIN 1            /**< An argument is outside its physical domain. */
@@ -96,12 +118,29 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_version_number(void);
 #define PUMPLOSS_EINTERNAL 10         /**< Internal error (a bug). */
 #define PUMPLOSS_EVALIDITY 11         /**< Inputs outside the range where the method is defined. */
 #define PUMPLOSS_EDATA 12             /**< Too few or degenerate data points. */
+/** Batch: some elements failed. An error, so that a caller testing only the summary never
+ *  uses a NaN; the per-element status array tells which elements hold usable values (those
+ *  elements keep them, the failed ones are NaN). Replaces the retired PUMPLOSS_WPARTIAL. */
+#define PUMPLOSS_EPARTIAL 13
 #define PUMPLOSS_WREGIME 100          /**< Valid, but outside the model's assumptions. */
 #define PUMPLOSS_WTRANSITION 101      /**< Valid, in the laminar-turbulent transition region. */
 #define PUMPLOSS_WILLCONDITIONED 102  /**< Valid, but the fit is ill-conditioned. */
 #define PUMPLOSS_WEXTRAPOLATED 103    /**< Valid, extrapolated beyond data or table. */
-#define PUMPLOSS_WPARTIAL 104         /**< Batch: some elements failed (see per-element status). */
+/** Retired: never returned. Was "batch: some elements failed", a report code that came with
+ *  NaN outputs; batch functions return PUMPLOSS_EPARTIAL instead. The number stays reserved. */
+#define PUMPLOSS_WPARTIAL 104
 #define PUMPLOSS_WIMPLAUSIBLE 105     /**< Valid, but physically implausible (e.g. efficiency > 1). */
+/** Valid, but an output that is undefined for these inputs is NaN: only an output whose
+ *  documentation says so (e.g. the friction factor of pumploss_pipe_flow() at zero flow, the
+ *  gap change of a calibration group without a gap); every other output is usable and finite.
+ *  The one report that may come with a NaN output. */
+#define PUMPLOSS_WUNDEFINED 106
+
+/** True for an error status (1-99): the outputs are NaN (see PUMPLOSS_EPARTIAL for batches). */
+#define PUMPLOSS_IS_ERROR(st) ((st) > 0 && (st) < 100)
+/** True for a report status (100 and up): the outputs are usable, computed outside a stated
+ *  assumption. PUMPLOSS_OK is neither an error nor a report. */
+#define PUMPLOSS_IS_REPORT(st) ((st) >= 100)
 
 /** A one-sentence English description of a status code.
  *  @param status a status code returned by any pumploss function
@@ -129,7 +168,9 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_status_message(int status);
  * @param to_unit   symbol of the wanted unit
  * @param out       receives the converted value
  * @return PUMPLOSS_OK; PUMPLOSS_EUNIT for an unknown symbol; PUMPLOSS_EDIMENSION for units of
- *         different quantities; PUMPLOSS_ENONFINITE for NaN/inf; PUMPLOSS_EMISUSE for NULL.
+ *         different quantities; PUMPLOSS_EDOMAIN for a temperature below absolute zero (the
+ *         temperature units are absolute, not differences); PUMPLOSS_ENONFINITE for NaN/inf;
+ *         PUMPLOSS_EMISUSE for NULL.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_unit_convert(double value, const char *from_unit,
                                                      const char *to_unit, double *out);
@@ -652,7 +693,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_pad_orifice(double supply_pressure_p
  * @param wall_speed_m_s array of n values: speed of the moving wall along the flow, m/s
  * @param q_m3_s array of n outputs (the leakage flow, m^3/s)
  * @param status array of n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when an element failed (see status);
  *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
  * @sa pumploss_gap_plates_flow
  */
@@ -668,7 +709,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_plates_flow_batch(size_t n, const do
  * @param eccentricity_ratio array of n values: centre offset / radial clearance, 0 (concentric) to 1 (touching)
  * @param q_m3_s array of n outputs (the leakage flow, m^3/s)
  * @param status array of n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when an element failed (see status);
  *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
  * @sa pumploss_gap_annulus_flow
  */
@@ -683,7 +724,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_annulus_flow_batch(size_t n, const d
  * @param height_m array of n values: gap height, m (> 0)
  * @param q_m3_s array of n outputs (the radial flow, m^3/s)
  * @param status array of n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when an element failed (see status);
  *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
  * @sa pumploss_gap_radial_flow
  */
@@ -697,13 +738,12 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_gap_radial_flow_batch(size_t n, const do
  * @param cd array of n values: discharge coefficient (0 < cd <= 1; 0.611 for a sharp edge at high Re)
  * @param q_m3_s array of n outputs (the flow, m^3/s)
  * @param status array of n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when an element failed (see status);
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when an element failed (see status);
  *         PUMPLOSS_EMISUSE for a NULL array (outputs NaN).
  * @sa pumploss_orifice_flow
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_orifice_flow_batch(size_t n, const double *dp_pa, const double *rho_kg_m3, const double *diameter_m, const double *cd, double *q_m3_s, int *status);
 /** @} */
-/* pumploss:capi-gap (declarations of this subject go above this line) */
 
 /* ==== friction ==== */
 /** @name Friction factor and pipe pressure drop
@@ -838,9 +878,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_pressure_drop(double q_m3_s, double
  * @param laminar_constant C of the laminar law f = C/Re, > 0 (64 for a round pipe)
  * @param v_m_s receives the mean velocity, m/s
  * @param reynolds receives the Reynolds number
- * @param f_darcy receives the friction factor (+infinity at zero flow)
+ * @param f_darcy receives the friction factor; NaN at zero flow, where it is undefined (it
+ *        grows without bound as C/Re)
  * @param dp_pa receives the pressure drop, Pa
- * @return as pumploss_pipe_pressure_drop().
+ * @return as pumploss_pipe_pressure_drop(); PUMPLOSS_WUNDEFINED at q_m3_s = 0 (v_m_s, reynolds
+ *         and dp_pa are 0, f_darcy is NaN).
  * @sa pumploss::pipe_pressure_drop
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_flow(double q_m3_s, double rho_kg_m3, double mu_pa_s, double diameter_m,
@@ -853,7 +895,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_flow(double q_m3_s, double rho_kg_m
  * @param relative_roughness n relative roughnesses
  * @param f_darcy receives n friction factors (NaN where an element failed)
  * @param status receives n per-element status codes
- * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_WPARTIAL when any element failed;
+ * @return PUMPLOSS_OK; the first report code seen; PUMPLOSS_EPARTIAL when any element failed;
  *         PUMPLOSS_EMISUSE for a NULL array (all outputs NaN / EMISUSE).
  * @sa pumploss::friction_factor
  */
@@ -882,12 +924,15 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_pressure_drop_batch(size_t n, const
 /** @} */
 /** @name Lines, case drain check and sizing
  *  A line is an opaque handle: an ordered list of pipes, fittings and lumped components, a
- *  static height and an oil. Functions taking a handle return PUMPLOSS_EMISUSE for NULL and
- *  keep a per-handle last message (pumploss_line_last_message()); no global state. A handle
- *  may be read from several threads, but not changed while others use it. Results are
- *  engineering estimates; the pump maker's allowed case pressure governs. @{ */
+ *  static height and an oil. Functions taking a handle return PUMPLOSS_EMISUSE for NULL. The
+ *  handle contract of this header's top comment holds: add_ and set_ functions change the
+ *  handle (and its message, pumploss_line_last_message()); evaluations take a const handle and
+ *  never write it, so one configured line may be evaluated from many threads at once. Results
+ *  are engineering estimates; the pump maker's allowed case pressure governs. @{ */
 /** Opaque line handle. */
 typedef struct pumploss_line pumploss_line;
+#define PUMPLOSS_BORE_TUBE 1 /**< Standard bore kind: metric hydraulic tube (a kinds_mask bit). */
+#define PUMPLOSS_BORE_HOSE 2 /**< Standard bore kind: hose, SAE dash size (a kinds_mask bit). */
 /** Create an empty line (no elements, height 0, no oil).
  *  @param out receives the handle (NULL on error); free it with pumploss_line_destroy()
  *  @return PUMPLOSS_OK, PUMPLOSS_EMISUSE (out is NULL), PUMPLOSS_ENOMEM. */
@@ -895,10 +940,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_create(pumploss_line **out);
 /** Destroy a line. Destroying NULL is a no-op.
  *  @param line the handle (or NULL) */
 PUMPLOSS_API void PUMPLOSS_CALL pumploss_line_destroy(pumploss_line *line);
-/** The last message of a handle (why the last failing call failed).
+/** The message of the last add_ or set_ call on the handle (why it failed, or "no error").
+ *  Evaluations never change it: their status says why they failed (pumploss_status_message()).
  *  @param line the handle
- *  @return a sentence owned by the handle, valid until its next call or destruction; a static
- *          sentence for NULL. */
+ *  @return a sentence owned by the handle, valid until its next add_ / set_ call or its
+ *          destruction; a static sentence for NULL. */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_line_last_message(const pumploss_line *line);
 /** Append a straight pipe, tube or hose (Darcy-Weisbach).
  *  @param line the handle
@@ -984,7 +1030,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_oil(pumploss_line *line, double
  *  @param line the handle
  *  @param count receives the count
  *  @return PUMPLOSS_OK; PUMPLOSS_EMISUSE. */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_count(const pumploss_line *line, int *count);
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_count(const pumploss_line *line, size_t *count);
 /** The line's height.
  *  @param line the handle
  *  @param height_m receives the height, m
@@ -997,7 +1043,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_height(const pumploss_line *line, d
  *  @param mu_pa_s dynamic viscosity, Pa s, > 0
  *  @param dp_pa receives the drop, Pa
  *  @return PUMPLOSS_OK, a report (worst element) or an error. @sa pumploss::line_pressure_drop */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop(pumploss_line *line, double q_m3_s, double rho_kg_m3,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop(const pumploss_line *line, double q_m3_s, double rho_kg_m3,
                                                            double mu_pa_s, double *dp_pa);
 /** One element's drop and its share of the total.
  *  @param line the handle
@@ -1008,7 +1054,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop(pumploss_line *line, 
  *  @param dp_pa receives the element's drop, Pa
  *  @param share receives the element's drop divided by the line's total (static part included)
  *  @return as pumploss_line_pressure_drop(); PUMPLOSS_EDOMAIN for a bad index. */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_pressure_drop(pumploss_line *line, int index, double q_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_pressure_drop(const pumploss_line *line, int index, double q_m3_s,
                                                                    double rho_kg_m3, double mu_pa_s, double *dp_pa,
                                                                    double *share);
 /** Total pressure drop at a flow and oil temperature (the oil set by pumploss_line_set_oil()).
@@ -1018,7 +1064,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_pressure_drop(pumploss_line
  *  @param dp_pa receives the drop, Pa
  *  @return as pumploss_line_pressure_drop(); PUMPLOSS_EMISUSE when no oil is set.
  *  @sa pumploss::line_pressure_drop_at */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop_at(pumploss_line *line, double q_m3_s, double t_k,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop_at(const pumploss_line *line, double q_m3_s, double t_k,
                                                               double *dp_pa);
 /** The flow a pressure difference drives through the line (bracket and solve, fixed caps).
  *  @param line the handle
@@ -1028,7 +1074,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop_at(pumploss_line *lin
  *  @param q_m3_s receives the flow, m^3/s
  *  @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY when dp does not exceed the static part;
  *          PUMPLOSS_ENOCONVERGE; element errors. @sa pumploss::line_flow_for_pressure */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(pumploss_line *line, double dp_pa, double rho_kg_m3,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(const pumploss_line *line, double dp_pa, double rho_kg_m3,
                                                                double mu_pa_s, double *q_m3_s);
 /** Case drain check: case pressure p_tank + line drop at n temperatures from cold start to
  *  maximum, against the allowed case pressure.
@@ -1045,7 +1091,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(pumploss_line *li
  *  @param pass receives n_temps flags (1 pass, 0 fail)
  *  @param worst_margin_pa receives the smallest margin, Pa (negative: fails)
  *  @return PUMPLOSS_OK or a report; errors with NaN outputs. @sa pumploss::drain_check */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(pumploss_line *line, double q_drain_m3_s, double t_cold_k,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(const pumploss_line *line, double q_drain_m3_s, double t_cold_k,
                                                          double t_max_k, size_t n_temps, double p_tank_pa,
                                                          double p_allowed_pa, double t_k[], double case_pressure_pa[],
                                                          double margin_pa[], int pass[], double *worst_margin_pa);
@@ -1060,14 +1106,14 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(pumploss_line *line, do
  *  @param p_tank_pa tank pressure, Pa
  *  @param p_allowed_pa allowed case pressure, Pa
  *  @param v_max_m_s largest velocity, m/s (1.5 for drain lines, common practice, no source)
- *  @param kinds_mask 1 tubes, 2 hoses, 3 both
+ *  @param kinds_mask PUMPLOSS_BORE_TUBE, PUMPLOSS_BORE_HOSE or both (bitwise or)
  *  @param diameter_m receives the inside diameter, m
  *  @param velocity_m_s receives the velocity at the drain flow, m/s
  *  @param worst_margin_pa receives the smallest margin, Pa
  *  @return PUMPLOSS_OK or a report; PUMPLOSS_EVALIDITY when no standard bore passes.
  *  @sa pumploss::size_drain_line */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(pumploss_line *line, double q_drain_m3_s, double t_cold_k,
-                                                        double t_max_k, int n_temps, double p_tank_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(const pumploss_line *line, double q_drain_m3_s, double t_cold_k,
+                                                        double t_max_k, size_t n_temps, double p_tank_pa,
                                                         double p_allowed_pa, double v_max_m_s, int kinds_mask,
                                                         double *diameter_m, double *velocity_m_s,
                                                         double *worst_margin_pa);
@@ -1077,7 +1123,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(void);
 /** A standard bore (ascending inside diameter).
  *  @param index 0 to pumploss_standard_bore_count()-1
  *  @param inside_diameter_m receives the inside diameter, m
- *  @param kind receives 1 (metric tube) or 2 (hose, dash size = ID in sixteenths of an inch)
+ *  @param kind receives PUMPLOSS_BORE_TUBE (metric tube) or PUMPLOSS_BORE_HOSE (hose, dash
+ *         size = ID in sixteenths of an inch)
  *  @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for a bad index; PUMPLOSS_EMISUSE for NULL. */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(int index, double *inside_diameter_m, int *kind);
 /** Crane's fully turbulent friction factor f_T of commercial steel.
@@ -1113,7 +1160,6 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_darby(double k1, double k_i, double k_
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_equivalent_length(double k, double diameter_m, double f_darcy,
                                                           double *length_m);
 /** @} */
-/* pumploss:capi-friction (declarations of this subject go above this line) */
 
 /* ==== efficiency ==== */
 /** @name Efficiency, leakage scaling, heat
@@ -1166,7 +1212,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency(double displacement_m3_
  * @param eta_hm array of n, receives the hydromechanical efficiencies
  * @param eta_t array of n, receives the overall efficiencies
  * @param status array of n, receives each point's status (NaN outputs on its error)
- * @return PUMPLOSS_OK; the first report code seen (e.g. PUMPLOSS_WIMPLAUSIBLE); PUMPLOSS_WPARTIAL
+ * @return PUMPLOSS_OK; the first report code seen (e.g. PUMPLOSS_WIMPLAUSIBLE); PUMPLOSS_EPARTIAL
  *         when some points failed; PUMPLOSS_EMISUSE for a NULL array.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_efficiency_batch(size_t n, const double *displacement_m3_rev,
@@ -1284,7 +1330,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale(double q_ref_m3_s, double 
  * @param mu_pa_s array of n viscosities wanted, Pa s
  * @param q_m3_s array of n, receives the leakages, m^3/s
  * @param status array of n, receives each point's status
- * @return PUMPLOSS_OK, PUMPLOSS_WPARTIAL or PUMPLOSS_EMISUSE.
+ * @return PUMPLOSS_OK, PUMPLOSS_EPARTIAL or PUMPLOSS_EMISUSE.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale_batch(size_t n, const double *q_ref_m3_s,
                                                             const double *dp_ref_pa, const double *mu_ref_pa_s,
@@ -1606,7 +1652,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_predict(const pumploss_model *mode
  * @param speed_rev_s array of n_speed speeds, rev/s
  * @param eta_t array of n_dp * n_speed, receives the overall efficiencies
  * @param status array of n_dp * n_speed, receives each point's status
- * @return PUMPLOSS_OK; the first report seen; PUMPLOSS_WPARTIAL; PUMPLOSS_EMISUSE.
+ * @return PUMPLOSS_OK; the first report seen; PUMPLOSS_EPARTIAL; PUMPLOSS_EMISUSE.
  * @sa pumploss::loss_model_map
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_map(const pumploss_model *model, double mu_pa_s, size_t n_dp,
@@ -1616,12 +1662,19 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_map(const pumploss_model *model, d
 
 /** @name Measurement uncertainty (GUM, JCGM 100:2008)
  *  State each instrument's uncertainty yourself: no accuracy-class presets are provided. @{ */
+#define PUMPLOSS_FIGURE_ABSOLUTE 0           /**< The figure is in the reading's unit (SI). */
+#define PUMPLOSS_FIGURE_PERCENT_OF_READING 1 /**< The figure is per cent of the reading. */
+#define PUMPLOSS_DIST_STANDARD 0             /**< The figure is a standard uncertainty u. */
+#define PUMPLOSS_DIST_RECTANGULAR 1          /**< Limits +/- a, rectangular: u = a/sqrt(3). */
+#define PUMPLOSS_DIST_EXPANDED_K2 2          /**< An expanded uncertainty with k = 2: u = U/2. */
 /**
  * Standard uncertainty of a reading from an instrument's stated figure.
  * @param figure the figure: absolute (SI) or per cent of reading (>= 0)
- * @param percent_of_reading 0: figure is absolute; 1: per cent of reading
- * @param distribution 0: figure is a standard uncertainty; 1: rectangular limits (u = a/sqrt(3));
- *        2: expanded with k = 2 (u = U/2)
+ * @param percent_of_reading PUMPLOSS_FIGURE_ABSOLUTE: figure is absolute;
+ *        PUMPLOSS_FIGURE_PERCENT_OF_READING: per cent of reading
+ * @param distribution PUMPLOSS_DIST_STANDARD: figure is a standard uncertainty;
+ *        PUMPLOSS_DIST_RECTANGULAR: rectangular limits (u = a/sqrt(3));
+ *        PUMPLOSS_DIST_EXPANDED_K2: expanded with k = 2 (u = U/2)
  * @param reading the reading, SI (for per cent of reading)
  * @param u receives the standard uncertainty, SI
  * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_EMISUSE for a bad option. @sa pumploss::standard_uncertainty
@@ -1686,7 +1739,6 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_uncertainty(
     double u_displacement_m3_rev, double u_speed_rev_s, double u_dp_pa, double u_flow_m3_s, double u_torque_n_m,
     double r_flow_displacement, double *u_eta_v, double *u_eta_hm, double *u_eta_t);
 /** @} */
-/* pumploss:capi-efficiency (declarations of this subject go above this line) */
 
 /* ==== pump ==== */
 /** @name Pump health from field readings
@@ -2045,12 +2097,16 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump *h, size_t 
  * Result of the last calibration for one group.
  * @param h the handle
  * @param group PUMPLOSS_GROUP_*
- * @param scale receives the fitted factor on the group's flow (NaN: group absent)
- * @param std_error receives its standard error
- * @param gap_growth receives the equivalent gap change (NaN: no gap or not reachable)
+ * @param scale receives the fitted factor on the group's flow
+ * @param std_error receives its standard error (NaN under PUMPLOSS_WUNDEFINED when the
+ *        unconstrained fit failed)
+ * @param gap_growth receives the equivalent gap change (NaN under PUMPLOSS_WUNDEFINED for a
+ *        group without a gap, PUMPLOSS_GROUP_CONTROLLER and PUMPLOSS_GROUP_EXTRA, or when no gap
+ *        change reaches the fitted scale)
  * @param confused_with receives a bit set of the groups the data cannot tell from this one
- * @return PUMPLOSS_OK; PUMPLOSS_EDATA when no calibration has been made; PUMPLOSS_EDOMAIN for
- *         an unknown group; PUMPLOSS_EMISUSE.
+ * @return PUMPLOSS_OK; PUMPLOSS_WUNDEFINED (see std_error, gap_growth); PUMPLOSS_EDATA when no
+ *         calibration has been made or the group has no flow in this pump (absent); PUMPLOSS_EDOMAIN
+ *         for an unknown group; PUMPLOSS_EMISUSE.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pump *h, int group, double *scale,
                                                                double *std_error, double *gap_growth,
@@ -2064,12 +2120,6 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_path_name(int path);
  *  @return "piston", "slipper", ... or "unknown" (static storage) */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_group_name(int group);
 /** @} */
-/* pumploss:capi-pump (declarations of this subject go above this line) */
-
-/* ==== capi ==== */
-/* pumploss:capi-capi (declarations of this subject go above this line) */
-
-/* pumploss:capi-declarations (new subjects add their section above this line) */
 
 #ifdef __cplusplus
 }

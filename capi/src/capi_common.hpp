@@ -111,7 +111,7 @@ inline bool batch_refused(std::size_t n, double* const (&outs)[N], int* status_o
   return true;
 }
 
-/// Summary of a batch: WPARTIAL when any element failed, else the first report code, else OK.
+/// Summary of a batch: EPARTIAL when any element failed, else the first report code, else OK.
 inline void batch_summary(int code, int& summary, bool& failed) noexcept {
   if (code > 0 && code < 100) {
     failed = true;
@@ -124,7 +124,7 @@ inline void batch_summary(int code, int& summary, bool& failed) noexcept {
 /// Run a batch body element by element: null arrays give EMISUSE (non-null outputs NaN-filled
 /// when n allows), each element's status goes to status_out[i] (NaN outputs on its error; a
 /// usable status with a non-finite output becomes EOVERFLOW), and the summary is OK, the first
-/// report code seen, or PUMPLOSS_WPARTIAL when any element failed.
+/// report code seen, or PUMPLOSS_EPARTIAL when any element failed.
 /// `Elem(i)` returns the element's status and writes its outputs.
 template <std::size_t N, class Elem>
 inline int call_batch(std::size_t n, double* const (&outs)[N], int* status_out, bool inputs_ok,
@@ -140,7 +140,7 @@ inline int call_batch(std::size_t n, double* const (&outs)[N], int* status_out, 
     for (std::size_t i = 0; i < n; ++i) status_out[i] = PUMPLOSS_EINTERNAL;
     return PUMPLOSS_EINTERNAL;
   }
-  return failed ? PUMPLOSS_WPARTIAL : summary;
+  return failed ? PUMPLOSS_EPARTIAL : summary;
 }
 
 /// Elements per block of call_batch_fast(): the block's statuses stay in L1 between the two passes.
@@ -172,7 +172,7 @@ inline int call_batch_fast(std::size_t n, double* const (&outs)[N], int* status_
     for (std::size_t i = 0; i < n; ++i) status_out[i] = PUMPLOSS_EINTERNAL;
     return PUMPLOSS_EINTERNAL;
   }
-  return failed ? PUMPLOSS_WPARTIAL : summary;
+  return failed ? PUMPLOSS_EPARTIAL : summary;
 }
 
 }  // namespace pumploss::capi

@@ -332,7 +332,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_fit_power_law(size_t count, cons
                                                               const double* mu_pa_s, double* k, double* a, double* b,
                                                               double* cond) {
   return call({k, a, b, cond}, [&] {
-    std::vector<double> work(pumploss::leakage_fit_workspace(count));
+    // never an empty workspace: its NULL data() would read as the caller's misuse at n = 0
+    std::vector<double> work(pumploss::leakage_fit_workspace(count) + 1);
     const auto r = pumploss::leakage_fit_power_law(q_m3_s, dp_pa, mu_pa_s, count, work.data());
     *k = r.k;
     *a = r.a;
@@ -346,7 +347,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_split(size_t count, const double
                                                       const double* mu_pa_s, double* c_viscous_m3,
                                                       double* c_orifice_m3_s_pa05, double* c_constant_m3_s) {
   return call({c_viscous_m3, c_orifice_m3_s_pa05, c_constant_m3_s}, [&] {
-    std::vector<double> work(pumploss::leakage_fit_workspace(count));
+    // never an empty workspace: its NULL data() would read as the caller's misuse at n = 0
+    std::vector<double> work(pumploss::leakage_fit_workspace(count) + 1);
     const auto r = pumploss::leakage_split(q_m3_s, dp_pa, mu_pa_s, count, work.data());
     *c_viscous_m3 = r.c_viscous;
     *c_orifice_m3_s_pa05 = r.c_orifice;

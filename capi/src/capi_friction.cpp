@@ -1,10 +1,14 @@
 // C API wrappers for friction.hpp: Darcy friction factor correlations and the Darcy-Weisbach
 // pressure drop of a pipe, tube or hose segment, with batch variants.
+#include <cmath>
+
 #include "capi_common.hpp"
 #include "pumploss/friction.hpp"
 
 using pumploss::capi::call;
 using pumploss::capi::call_batch;
+using pumploss::capi::kNaN;
+using pumploss::status;
 
 namespace {
 template <class Fn>
@@ -74,15 +78,31 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_pressure_drop(double q_m3_s, double
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_pipe_flow(double q_m3_s, double rho_kg_m3, double mu_pa_s, double diameter_m,
                                                   double length_m, double roughness_m, double laminar_constant,
                                                   double* v_m_s, double* reynolds, double* f_darcy, double* dp_pa) {
-  return call({v_m_s, reynolds, f_darcy, dp_pa}, [&] {
+  // At zero flow the friction factor is undefined (C/Re grows without bound): it goes out as NaN
+  // under PUMPLOSS_WUNDEFINED, the other outputs are exactly 0 (pumploss.h). It is kept out of
+  // call()'s check, which rightly turns a non-finite output under a usable status into an overflow.
+  if (f_darcy == nullptr) {
+    for (double* p : {v_m_s, reynolds, dp_pa}) if (p != nullptr) *p = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  *f_darcy = kNaN;
+  double f = kNaN;
+  bool zero_flow = false;
+  const int code = call({v_m_s, reynolds, dp_pa}, [&] {
     const auto r = pumploss::pipe_pressure_drop(q_m3_s, rho_kg_m3, mu_pa_s, diameter_m, length_m, roughness_m,
                                                 laminar_constant);
     *v_m_s = r.velocity_m_s;
     *reynolds = r.reynolds;
-    *f_darcy = r.friction_factor;
     *dp_pa = r.dp_pa;
+    f = r.friction_factor;
+    zero_flow = q_m3_s == 0.0 && !is_error(r.st);
+    if (!is_error(r.st) && !zero_flow && !std::isfinite(f)) return status::overflow;
     return r.st;
   });
+  if (is_error(static_cast<status>(code))) return code;
+  if (zero_flow) return PUMPLOSS_WUNDEFINED;
+  *f_darcy = f;
+  return code;
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_factor_batch(size_t n, const double* reynolds,

@@ -11,6 +11,10 @@ using pumploss::capi::call;
 using pumploss::capi::fp_guard;
 using pumploss::capi::kNaN;
 
+static_assert(PUMPLOSS_BORE_TUBE == static_cast<int>(pumploss::bore_kind::tube), "bore kind");
+static_assert(PUMPLOSS_BORE_HOSE == static_cast<int>(pumploss::bore_kind::hose), "bore kind");
+
+/// The message is changed by add_ / set_ calls only (they need exclusive use of the handle).
 struct pumploss_line {
   pumploss::line<double> line;
   pumploss::oil<double> oil = pumploss::typical_mineral_oil<double>({0.0, 0.0});
@@ -44,16 +48,14 @@ int add_element(pumploss_line* h, const pumploss::line_element<double>& e, const
   }
 }
 
+/// An evaluation: reads the handle only (pumploss.h's handle contract: no message, no cache).
 template <std::size_t N, class Body>
-int line_call(pumploss_line* h, double* const (&outs)[N], const char* what, Body&& body) {
+int line_call(const pumploss_line* h, double* const (&outs)[N], Body&& body) {
   if (h == nullptr) {
     for (double* p : outs) if (p != nullptr) *p = kNaN;
     return PUMPLOSS_EMISUSE;
   }
-  const int code = call(outs, body);
-  if (code != PUMPLOSS_OK) set_message(h, static_cast<status>(code), what);
-  else h->message = "no error";
-  return code;
+  return call(outs, body);
 }
 
 }  // namespace
@@ -124,6 +126,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_height(pumploss_line* h, double
   if (h == nullptr) return PUMPLOSS_EMISUSE;
   if (!pumploss::detail::finite(height_m)) return set_message(h, status::nonfinite, "set_height");
   h->line.height_m = height_m;
+  h->message = "no error";
   return PUMPLOSS_OK;
 }
 
@@ -139,16 +142,17 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_oil(pumploss_line* h, double t1
   h->oil.rho_ref_kg_m3 = rho_ref_kg_m3;
   h->oil.t_ref_k = t_ref_k;
   h->has_oil = true;
+  h->message = "no error";
   return PUMPLOSS_OK;
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_count(const pumploss_line* h, int* count) {
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_count(const pumploss_line* h, size_t* count) {
   if (count == nullptr) return PUMPLOSS_EMISUSE;
   if (h == nullptr) {
     *count = 0;
     return PUMPLOSS_EMISUSE;
   }
-  *count = static_cast<int>(h->line.elements.size());
+  *count = h->line.elements.size();
   return PUMPLOSS_OK;
 }
 
@@ -162,19 +166,19 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_height(const pumploss_line* h, doub
   return PUMPLOSS_OK;
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop(pumploss_line* h, double q_m3_s, double rho_kg_m3,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop(const pumploss_line* h, double q_m3_s, double rho_kg_m3,
                                                            double mu_pa_s, double* dp_pa) {
-  return line_call(h, {dp_pa}, "pressure_drop", [&] {
+  return line_call(h, {dp_pa}, [&] {
     const auto r = pumploss::line_pressure_drop(h->line, q_m3_s, rho_kg_m3, mu_pa_s);
     *dp_pa = r.dp_pa;
     return r.st;
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_pressure_drop(pumploss_line* h, int index, double q_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_pressure_drop(const pumploss_line* h, int index, double q_m3_s,
                                                                    double rho_kg_m3, double mu_pa_s, double* dp_pa,
                                                                    double* share) {
-  return line_call(h, {dp_pa, share}, "element_pressure_drop", [&] {
+  return line_call(h, {dp_pa, share}, [&] {
     if (index < 0 || static_cast<std::size_t>(index) >= h->line.elements.size()) return status::domain;
     std::vector<double> parts(h->line.elements.size());
     const auto r = pumploss::line_pressure_drop(h->line, q_m3_s, rho_kg_m3, mu_pa_s, parts.data());
@@ -184,9 +188,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_element_pressure_drop(pumploss_line
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop_at(pumploss_line* h, double q_m3_s, double t_k,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop_at(const pumploss_line* h, double q_m3_s, double t_k,
                                                               double* dp_pa) {
-  return line_call(h, {dp_pa}, "pressure_drop_at", [&] {
+  return line_call(h, {dp_pa}, [&] {
     if (!h->has_oil) return status::misuse;
     const auto r = pumploss::line_pressure_drop_at(h->line, q_m3_s, h->oil, t_k);
     *dp_pa = r.dp_pa;
@@ -194,9 +198,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_pressure_drop_at(pumploss_line* h, 
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(pumploss_line* h, double dp_pa, double rho_kg_m3,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(const pumploss_line* h, double dp_pa, double rho_kg_m3,
                                                                double mu_pa_s, double* q_m3_s) {
-  return line_call(h, {q_m3_s}, "flow_for_pressure", [&] {
+  return line_call(h, {q_m3_s}, [&] {
     const auto r = pumploss::line_flow_for_pressure(h->line.elements.data(), h->line.elements.size(),
                                                     h->line.height_m, dp_pa, rho_kg_m3, mu_pa_s);
     *q_m3_s = r.value;
@@ -204,7 +208,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_flow_for_pressure(pumploss_line* h,
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(pumploss_line* h, double q_drain_m3_s, double t_cold_k,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(const pumploss_line* h, double q_drain_m3_s, double t_cold_k,
                                                          double t_max_k, size_t n_temps, double p_tank_pa,
                                                          double p_allowed_pa, double* t_k, double* case_pressure_pa,
                                                          double* margin_pa, int* pass, double* worst_margin_pa) {
@@ -216,7 +220,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(pumploss_line* h, doubl
     if (margin_pa != nullptr) margin_pa[i] = kNaN;
     if (pass != nullptr) pass[i] = 0;
   }
-  return line_call(h, {worst_margin_pa}, "drain_check", [&] {
+  return line_call(h, {worst_margin_pa}, [&] {
     if (!arrays) return status::misuse;
     if (!h->has_oil) return status::misuse;
     if (n_temps < 1 || n_temps > 1000) return status::domain;
@@ -239,14 +243,15 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(pumploss_line* h, doubl
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(pumploss_line* h, double q_drain_m3_s, double t_cold_k,
-                                                        double t_max_k, int n_temps, double p_tank_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(const pumploss_line* h, double q_drain_m3_s, double t_cold_k,
+                                                        double t_max_k, size_t n_temps, double p_tank_pa,
                                                         double p_allowed_pa, double v_max_m_s, int kinds_mask,
                                                         double* diameter_m, double* velocity_m_s,
                                                         double* worst_margin_pa) {
-  return line_call(h, {diameter_m, velocity_m_s, worst_margin_pa}, "size_drain", [&] {
+  return line_call(h, {diameter_m, velocity_m_s, worst_margin_pa}, [&] {
     if (!h->has_oil) return status::misuse;
-    const auto s = pumploss::size_drain_line(h->line, h->oil, q_drain_m3_s, t_cold_k, t_max_k, n_temps, p_tank_pa,
+    if (n_temps > 1000) return status::domain;  // the documented range, 2 to 1000
+    const auto s = pumploss::size_drain_line(h->line, h->oil, q_drain_m3_s, t_cold_k, t_max_k, static_cast<int>(n_temps), p_tank_pa,
                                              p_allowed_pa, v_max_m_s, kinds_mask);
     *diameter_m = s.diameter_m;
     *velocity_m_s = s.velocity_m_s;

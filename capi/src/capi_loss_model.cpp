@@ -11,6 +11,18 @@
 using pumploss::capi::call;
 using pumploss::capi::kNaN;
 
+// The option constants of pumploss.h equal the C++ enums.
+static_assert(PUMPLOSS_PUMP == static_cast<int>(pumploss::machine::pump), "machine");
+static_assert(PUMPLOSS_MOTOR == static_cast<int>(pumploss::machine::motor), "machine");
+static_assert(PUMPLOSS_MODEL_WILSON == static_cast<int>(pumploss::loss_model_kind::wilson), "model");
+static_assert(PUMPLOSS_MODEL_SCHLOESSER == static_cast<int>(pumploss::loss_model_kind::schloesser), "model");
+static_assert(PUMPLOSS_FIGURE_ABSOLUTE == static_cast<int>(pumploss::uncertainty_basis::absolute), "basis");
+static_assert(PUMPLOSS_FIGURE_PERCENT_OF_READING == static_cast<int>(pumploss::uncertainty_basis::percent_of_reading),
+              "basis");
+static_assert(PUMPLOSS_DIST_STANDARD == static_cast<int>(pumploss::uncertainty_distribution::standard), "dist");
+static_assert(PUMPLOSS_DIST_RECTANGULAR == static_cast<int>(pumploss::uncertainty_distribution::rectangular), "dist");
+static_assert(PUMPLOSS_DIST_EXPANDED_K2 == static_cast<int>(pumploss::uncertainty_distribution::expanded_k2), "dist");
+
 struct pumploss_model {
   pumploss::loss_model<double> m;
   std::vector<double> flow_residual;
@@ -72,6 +84,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model
   if (dp_pa == nullptr || speed_rev_s == nullptr || mu_pa_s == nullptr || flow_m3_s == nullptr || torque_n_m == nullptr)
     return PUMPLOSS_EMISUSE;
   if ((machine_kind != 0 && machine_kind != 1) || (model_kind != 0 && model_kind != 1)) return PUMPLOSS_EDOMAIN;
+  if (count == 0) return PUMPLOSS_EDATA;  // no points (empty buffers below would read as NULL arrays)
   pumploss::status st = pumploss::status::ok;
   pumploss_model* h = nullptr;
   {
@@ -214,7 +227,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_map(const pumploss_model* model, d
         else if (summary == pumploss::status::ok) summary = p.st;
       }
     }
-    return failed ? PUMPLOSS_WPARTIAL : static_cast<int>(summary);
+    return failed ? PUMPLOSS_EPARTIAL : static_cast<int>(summary);
   } catch (...) {
     return PUMPLOSS_EINTERNAL;
   }

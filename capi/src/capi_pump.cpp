@@ -389,9 +389,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump* h, size_t 
   return call({rms_residual_m3_s}, [&] {
     const status s = operating_checks(h);
     if (is_error(s)) return s;
-    if (n > 0 && (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
-                  displacement_fraction == nullptr || t_k == nullptr))
+    // NULL is never a valid array, also with n = 0 (pumploss.h); no points: too few data
+    if (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
+        displacement_fraction == nullptr || t_k == nullptr)
       return status::misuse;
+    if (n == 0) return status::insufficient_data;
     std::vector<pumploss::drain_measurement> m(n);
     for (size_t i = 0; i < n; ++i)
       m[i] = {drain_m3_s[i], outlet_pa[i], case_pa[i], speed_rev_s[i], displacement_fraction[i], t_k[i]};
@@ -409,16 +411,33 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pu
                                                                double* std_error, double* gap_growth,
                                                                int* confused_with) {
   if (confused_with != nullptr) *confused_with = 0;
-  return call({scale, std_error, gap_growth}, [&] {
+  if (std_error == nullptr || gap_growth == nullptr) {
+    for (double* p : {scale, std_error, gap_growth}) if (p != nullptr) *p = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  *std_error = *gap_growth = kNaN;
+  const int code = call({scale}, [&] {
     if (h == nullptr || confused_with == nullptr) return status::misuse;
     if (group < 0 || group >= pumploss::path_group_count) return status::domain;
     if (!h->calibrated) return status::insufficient_data;
+    if (std::isnan(h->calibration.scale[group])) return status::insufficient_data;  // group absent
     *scale = h->calibration.scale[group];
-    *std_error = h->calibration.std_error[group];
-    *gap_growth = h->calibration.gap_growth[group];
     *confused_with = static_cast<int>(h->calibration.confused_with[group]);
     return status::ok;
   });
+  if (code != PUMPLOSS_OK) return code;
+  // Outputs that may be undefined for a present group (no gap; the unconstrained fit failed):
+  // NaN under PUMPLOSS_WUNDEFINED. Kept out of call(), which turns a NaN under a usable status
+  // into an error.
+  const double se = h->calibration.std_error[group], growth = h->calibration.gap_growth[group];
+  if (std::isinf(se) || std::isinf(growth)) {
+    *scale = kNaN;
+    *confused_with = 0;
+    return PUMPLOSS_EOVERFLOW;
+  }
+  *std_error = se;
+  *gap_growth = growth;
+  return std::isnan(se) || std::isnan(growth) ? PUMPLOSS_WUNDEFINED : PUMPLOSS_OK;
 }
 
 PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_pump_path_name(int path) {

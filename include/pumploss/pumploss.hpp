@@ -10,20 +10,15 @@
 #include "fluid.hpp"
 #include "gap.hpp"
 #include "orifice.hpp"
-// pumploss:umbrella-gap
 #include "friction.hpp"
 #include "line.hpp"
-// pumploss:umbrella-friction
 #include "dual.hpp"
 #include "efficiency.hpp"
 #include "leakage.hpp"
 #include "thermal.hpp"
 #include "loss_model.hpp"
 #include "uncertainty.hpp"
-// pumploss:umbrella-efficiency
 #include "health.hpp"
 #include "piston_pump.hpp"
-// pumploss:umbrella-pump
-// pumploss:umbrella-includes (new subject headers are added above this line)
 
 #endif

@@ -34,12 +34,14 @@ enum class status : int {
   internal = 10,         ///< An internal error (a bug): please report it.
   out_of_validity = 11,  ///< The inputs lie outside the range where the method is defined at all.
   insufficient_data = 12,///< Too few or degenerate data points for the requested fit or estimate.
+  partial = 13,          ///< Batch call: some elements failed; the per-element status says which hold values.
   regime = 100,          ///< Valid value, computed outside the model's assumptions (e.g. laminar flow).
   transition = 101,      ///< Valid value in the laminar-turbulent transition region (interpolated).
   ill_conditioned = 102, ///< Valid value, but the data are nearly collinear: coefficients are uncertain.
   extrapolated = 103,    ///< Valid value, extrapolated beyond the data or table it came from.
-  partial = 104,         ///< Batch call: some elements failed; see the per-element status.
-  implausible = 105      ///< Valid value that is physically implausible (e.g. an efficiency above 1).
+  // 104 is retired (it was "partial" as a report code, which came with NaN outputs).
+  implausible = 105,     ///< Valid value that is physically implausible (e.g. an efficiency above 1).
+  undefined_output = 106 ///< Valid, but an output undefined for these inputs (named in its documentation) is NaN.
 };
 
 /// True for error codes (1-99): every output is NaN.

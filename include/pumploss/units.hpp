@@ -154,6 +154,7 @@ inline T unit_offset(const unit_info& u) {
 /// @param to    wanted unit
 /// @return the converted value; status::nonfinite for NaN/inf input,
 ///         status::incompatible_units when the dimensions differ,
+///         status::domain for a temperature below absolute zero (0 K, -273.15 degC, -459.67 degF),
 ///         status::overflow when the result is not finite.
 /// @par Accuracy
 /// Within 2 ulp of the exact conversion for double (tests: units_test.cpp, 50-digit oracle).
@@ -163,6 +164,9 @@ template <class T>
 inline result<T> convert(T value, const unit_info& from, const unit_info& to) {
   if (!detail::finite(value)) return detail::fail<T>(status::nonfinite);
   if (from.dim != to.dim) return detail::fail<T>(status::incompatible_units);
+  // Temperatures are absolute: below 0 K a temperature does not exist (ISO 80000-5).
+  if (from.dim == dimension::temperature && value + unit_offset<T>(from) < T(0))
+    return detail::fail<T>(status::domain);
   T out;
   if (from.offset == 0.0 && to.offset == 0.0) {
     if (&from == &to) {

@@ -1,6 +1,6 @@
 // Shared machinery of the table-driven C API tests (bad input, threads, no allocation).
 //
-// capi_table.inc is generated at build time by gen_capi.py from pumploss.h: one entry per
+// capi_table.inc is generated at build time by tools/capigen/capigen.py from pumploss.h: one entry per
 // exported function with its parameter kinds and a thunk that calls it from an array of slots.
 // Here: finding a valid ("baseline") input for each function by a deterministic search around
 // the generator's first guess, building the call cases (special values in every scalar
@@ -24,7 +24,7 @@
 
 namespace plcapi {
 
-enum Kind { K_DIN, K_IIN, K_SIZE, K_BUFLEN, K_DARR, K_DOUT, K_IOUT, K_IARR, K_STR, K_CBUF, K_HIN, K_HOUT };
+enum Kind { K_DIN, K_IIN, K_SIZE, K_BUFLEN, K_DARR, K_DOUT, K_IOUT, K_ZOUT, K_IARR, K_STR, K_CBUF, K_HIN, K_HOUT };
 enum RetKind { R_INT, R_VALUE, R_VOID, R_STR };
 enum FnClass { C_SCALAR, C_BATCH, C_CREATE, C_DESTROY, C_METHOD };
 
@@ -37,6 +37,7 @@ struct Slot {
   double* pd = nullptr;
   const int* cpi = nullptr;
   int* pi = nullptr;
+  std::size_t* pz = nullptr;
   const char* s = nullptr;
   char* buf = nullptr;
   void* h = nullptr;
@@ -84,10 +85,10 @@ inline bool documented(int c) {
   return false;
 }
 inline bool is_pointer(Kind k) {
-  return k == K_DARR || k == K_DOUT || k == K_IOUT || k == K_IARR || k == K_STR || k == K_CBUF ||
+  return k == K_DARR || k == K_DOUT || k == K_IOUT || k == K_ZOUT || k == K_IARR || k == K_STR || k == K_CBUF ||
          k == K_HIN || k == K_HOUT;
 }
-inline bool is_output(Kind k) { return k == K_DOUT || k == K_IOUT || k == K_CBUF || k == K_HOUT; }
+inline bool is_output(Kind k) { return k == K_DOUT || k == K_IOUT || k == K_ZOUT || k == K_CBUF || k == K_HOUT; }
 inline bool mutates_handle(const Fn& f) {
   for (int p = 0; p < f.nparams; ++p)
     if (f.params[p].kind == K_HIN && !f.params[p].readonly) return true;
@@ -162,6 +163,7 @@ struct Exec {
   std::vector<Slot> slots;
   std::vector<std::vector<double>> dbuf;
   std::vector<std::vector<int>> ibuf;
+  std::vector<std::vector<std::size_t>> zbuf;
   std::vector<std::vector<char>> cbuf;
   std::vector<void*> hbuf;
   Ret ret;
@@ -172,6 +174,7 @@ struct Exec {
     slots.assign(np, Slot{});
     dbuf.resize(np);
     ibuf.resize(np);
+    zbuf.resize(np);
     cbuf.resize(np);
     hbuf.assign(np, nullptr);
     const std::size_t alen = array_length(f, c.n);
@@ -195,6 +198,10 @@ struct Exec {
         case K_IOUT:
           ibuf[p].assign(len == 0 ? 1 : len, -777);
           s.pi = a.null ? nullptr : ibuf[p].data();
+          break;
+        case K_ZOUT:
+          zbuf[p].assign(len == 0 ? 1 : len, 777u);
+          s.pz = a.null ? nullptr : zbuf[p].data();
           break;
         case K_CBUF:
           cbuf[p].assign(256, 'x');
@@ -238,6 +245,9 @@ struct Exec {
           break;
         case K_IOUT:
           for (int v : ibuf[q]) o.push_back(static_cast<std::uint64_t>(static_cast<std::int64_t>(v)));
+          break;
+        case K_ZOUT:
+          for (std::size_t v : zbuf[q]) o.push_back(static_cast<std::uint64_t>(v));
           break;
         case K_CBUF:
           for (char ch : cbuf[q]) o.push_back(static_cast<std::uint64_t>(static_cast<unsigned char>(ch)));
@@ -525,7 +535,7 @@ inline std::string check(const Case& c, const Exec& e, int* inf_with_usable) {
     return msg;
   }
   const std::size_t alen = array_length(f, c.n);
-  // NULL where a pointer is required -> EMISUSE (NULL arrays with n = 0 may also give OK).
+  // NULL where a pointer is required -> EMISUSE, NULL arrays with n = 0 included.
   bool null_required = false, null_n0 = false;
   for (int p = 0; p < f.nparams; ++p) {
     const Kind k = f.params[p].kind;
@@ -537,10 +547,14 @@ inline std::string check(const Case& c, const Exec& e, int* inf_with_usable) {
     std::snprintf(msg, sizeof msg, "a NULL pointer gave status %d, not PUMPLOSS_EMISUSE", code);
     return msg;
   }
-  if (null_n0 && !null_required && code != PUMPLOSS_OK && code != PUMPLOSS_EMISUSE) {
-    std::snprintf(msg, sizeof msg, "n = 0 with NULL arrays gave status %d (OK or EMISUSE expected)", code);
+  if (null_n0 && !null_required && code != PUMPLOSS_EMISUSE) {
+    std::snprintf(msg, sizeof msg, "n = 0 with a NULL array gave status %d, not PUMPLOSS_EMISUSE (pumploss.h: NULL is never a valid array)", code);
     return msg;
   }
+  bool any_null = false;
+  for (int p = 0; p < f.nparams; ++p) any_null = any_null || (c.args[static_cast<std::size_t>(p)].null && is_pointer(f.params[p].kind));
+  if (has_size(f) && c.n == 0 && !any_null && code == PUMPLOSS_EMISUSE)
+    return "n = 0 with valid arrays gave PUMPLOSS_EMISUSE (pumploss.h: OK for a batch, the error for too few points otherwise)";
   const int status_param = status_param_of(f);
   for (int p = 0; p < f.nparams; ++p) {
     const std::size_t q = static_cast<std::size_t>(p);
@@ -566,7 +580,7 @@ inline std::string check(const Case& c, const Exec& e, int* inf_with_usable) {
           std::snprintf(msg, sizeof msg, "%s[%zu] = %d is not a documented code", f.params[p].name, i, s);
           return msg;
         }
-        if (is_error(code) && !is_error(s)) {
+        if (is_error(code) && code != PUMPLOSS_EPARTIAL && !is_error(s)) {
           std::snprintf(msg, sizeof msg, "summary %d is an error but %s[%zu] = %d", code, f.params[p].name, i, s);
           return msg;
         }
@@ -575,31 +589,43 @@ inline std::string check(const Case& c, const Exec& e, int* inf_with_usable) {
     if (k != K_DOUT) continue;
     for (std::size_t i = 0; i < len; ++i) {
       const double v = e.dbuf[q][i];
-      bool elem_error = is_error(code);
-      if (!elem_error && status_param >= 0 && f.params[p].array)
-        elem_error = is_error(e.ibuf[static_cast<std::size_t>(status_param)][i]);
+      // EPARTIAL: each element follows its own status; any other error: every output is NaN
+      const bool per_element = status_param >= 0 && f.params[p].array && (!is_error(code) || code == PUMPLOSS_EPARTIAL);
+      const bool elem_error = per_element ? is_error(e.ibuf[static_cast<std::size_t>(status_param)][i]) : is_error(code);
       if (elem_error && !std::isnan(v)) {
         std::snprintf(msg, sizeof msg, "error status but %s[%zu] = %.17g, not NaN", f.params[p].name, i, v);
         return msg;
       }
-      if (!elem_error && std::isnan(v)) {
+      if (!elem_error && std::isnan(v) && code != PUMPLOSS_WUNDEFINED) {
         std::snprintf(msg, sizeof msg, "usable status %d but %s[%zu] is NaN", code, f.params[p].name, i);
         return msg;
       }
       if (!elem_error && std::isinf(v) && inf_with_usable) ++*inf_with_usable;
     }
   }
-  if (status_param >= 0 && !is_error(code) && alen > 0) {  // the summary follows the elements
+  if (code == PUMPLOSS_EPARTIAL && (status_param < 0 || alen == 0))
+    return "PUMPLOSS_EPARTIAL from a function without per-element statuses";
+  if (code == PUMPLOSS_WUNDEFINED) {  // an undefined output is NaN, not all of them
+    bool any_usable = false;
+    for (int p = 0; p < f.nparams; ++p) {
+      const std::size_t q = static_cast<std::size_t>(p);
+      if (f.params[p].kind == K_DOUT && !c.args[q].null && !std::isnan(e.dbuf[q][0])) any_usable = true;
+      if (f.params[p].kind == K_IOUT || f.params[p].kind == K_ZOUT) any_usable = true;
+    }
+    if (!any_usable) return "PUMPLOSS_WUNDEFINED but every output is NaN";
+  }
+  if (status_param >= 0 && (!is_error(code) || code == PUMPLOSS_EPARTIAL) && alen > 0) {  // the summary follows the elements
     bool any_error = false, all_ok = true;
     for (std::size_t i = 0; i < alen; ++i) {
       const int s = e.ibuf[static_cast<std::size_t>(status_param)][i];
       any_error = any_error || is_error(s);
       all_ok = all_ok && s == PUMPLOSS_OK;
     }
-    if (any_error && code != PUMPLOSS_WPARTIAL) {
-      std::snprintf(msg, sizeof msg, "some elements failed but the summary is %d, not PUMPLOSS_WPARTIAL", code);
+    if (any_error && code != PUMPLOSS_EPARTIAL) {
+      std::snprintf(msg, sizeof msg, "some elements failed but the summary is %d, not PUMPLOSS_EPARTIAL", code);
       return msg;
     }
+    if (!any_error && code == PUMPLOSS_EPARTIAL) return "summary PUMPLOSS_EPARTIAL but no element failed";
     if (all_ok && code != PUMPLOSS_OK) {
       std::snprintf(msg, sizeof msg, "every element OK but the summary is %d", code);
       return msg;

@@ -1,5 +1,5 @@
 // libFuzzer target: every function of pumploss.h through the generated C API table
-// (tests/capi/gen_capi.py), so functions added later are fuzzed without editing this file.
+// (tools/capigen/capigen.py), so functions added later are fuzzed without editing this file.
 // Input: two bytes choose the function; then, per parameter, a control byte and its payload:
 // keep the function's valid (baseline) value, one of the special values (NaN, +/-inf, 0, -0,
 // negative, 1e-300, 1e300, subnormal, DBL_MAX), the raw bits of a double (any NaN payload,

@@ -1,39 +1,37 @@
-"""The ctypes module against the header: its hand-written signature tables agree with
-pumploss.h, every status-returning function of the header is reachable, and every one keeps
-the NaN/status conventions when called with NaN, infinities and zeros. New functions are picked
-up from the header (PUMPLOSS_HEADER, set by ctest) without editing this file."""
+"""The ctypes module against the bindings generated from pumploss.h at build time
+(pumploss_signatures.py, tools/capigen/capigen.py): every function is reachable without a
+header at run time, and every status-returning function keeps the NaN/status conventions when
+called with NaN, infinities and zeros. New functions are picked up without editing this file."""
 import math
-import os
-import re
 
 import pytest
 
 import pumploss
+import pumploss_signatures
 
-HEADER = os.environ.get("PUMPLOSS_HEADER")
-PROTOS = pumploss.parse_header(open(HEADER, encoding="utf-8").read()) if HEADER else {}
-CODES = {int(v) for v in re.findall(r"#define\s+PUMPLOSS_(?:OK|E\w+|W\w+)\s+(\d+)\b",
-                                     open(HEADER, encoding="utf-8").read())} if HEADER else set()
+PROTOS = pumploss_signatures.FUNCTIONS
+CODES = set(pumploss_signatures.STATUS_CODES.values())
 STATUS_FUNCS = sorted(n for n, (ret, params, _arrays) in PROTOS.items() if ret == "int" and params)
 
 
-def test_header_found_and_parsed(lib):
-    assert HEADER, "PUMPLOSS_HEADER is not set; run these tests through ctest"
+def test_generated_table_is_complete(lib):
     assert len(PROTOS) >= 14 and 0 in CODES and 5 in CODES
-    assert all(k != "UNKNOWN" for _, params, _arrays in PROTOS.values() for k, _, _ in params), \
-        "a parameter type the ctypes module cannot map"
+    kinds = set(pumploss._KIND_CTYPES)
+    assert all(k in kinds for _, params, _arrays in PROTOS.values() for k, _, _ in params), \
+        "a parameter kind the ctypes module cannot map"
+    # status codes and option constants are module attributes
+    assert pumploss.PUMPLOSS_EMISUSE == 5 and pumploss.PUMPLOSS_EPARTIAL == 13
+    assert pumploss.PUMPLOSS_MODEL_WILSON == 0 and pumploss.PUMPLOSS_BORE_HOSE == 2
+    assert pumploss.is_error(pumploss.PUMPLOSS_EPARTIAL) and pumploss.is_report(pumploss.PUMPLOSS_WREGIME)
+    assert not pumploss.is_error(0) and not pumploss.is_report(0)
 
 
-def test_tables_agree_with_header(lib):
-    """The hand tables (_SIGNATURES, _SCALAR) must match the header's prototypes exactly."""
-    tables = dict(pumploss._SIGNATURES)
-    for name, (n_in, n_out) in pumploss._SCALAR.items():
-        tables[name] = ([pumploss._D] * n_in + [pumploss._PD] * n_out, n_out)
-    for name, (argtypes, n_out) in tables.items():
-        assert name in PROTOS, f"{name} is in the ctypes tables but not in pumploss.h"
-        want = [pumploss._KIND_CTYPES[k] for k, _, _ in PROTOS[name][1]]
-        assert argtypes == want, f"{name}: table {argtypes} != header {want}"
-        assert n_out == sum(k == "DOUT" for k, _, _ in PROTOS[name][1]), name
+def test_no_header_needed_at_run_time(lib, monkeypatch):
+    monkeypatch.delenv("PUMPLOSS_HEADER", raising=False)
+    again = pumploss.load(lib.path)
+    assert again.raw("pumploss_viscosity_d341", 313.15, 46e-6, 373.15, 6.8e-6, 313.15)[0] == 0
+    st, n = again.raw("pumploss_line_element_count", None)  # size_t* output, NULL handle
+    assert st == pumploss.PUMPLOSS_EMISUSE
 
 
 def test_every_header_function_is_reachable(lib):
@@ -72,15 +70,17 @@ def test_conventions_hold_for_every_function(lib, name, value):
     assert status in CODES, f"{name}: undocumented status {status}"
     if any(k == "HIN" for k, _, _ in params):
         assert status == 5, f"{name}(NULL handle) gave {status}, not PUMPLOSS_EMISUSE"
-    kinds = [k for k, _, _ in params if k in ("DOUT", "IOUT", "CBUF", "HOUT")]
+    kinds = [k for k, _, _ in params if k in ("DOUT", "IOUT", "ZOUT", "CBUF", "HOUT")]
     flat = []
     for kind, out in zip(kinds, outs):
         if kind == "DOUT":
             flat += out if isinstance(out, list) else [out]
-    if 0 < status < 100:
+    if pumploss.is_error(status) and status != pumploss.PUMPLOSS_EPARTIAL:
         assert all(math.isnan(v) for v in flat), f"{name}: error {status} with non-NaN output {flat}"
-    elif not batch:
+    elif not batch and status != pumploss.PUMPLOSS_WUNDEFINED:
         assert not any(math.isnan(v) for v in flat), f"{name}: status {status} with NaN output"
+    if not pumploss.is_error(status):
+        assert not any(math.isinf(v) for v in flat), f"{name}: usable status {status} with an infinite output"
     if math.isnan(value) and any(k == "DIN" for k, _, _ in params) and not batch:
         assert 0 < status < 100, f"{name}: NaN inputs everywhere but status {status}"
 
@@ -90,3 +90,33 @@ def test_status_messages_cover_every_code(lib):
     for code in CODES:
         msg = lib.status_message(code)
         assert msg and msg != unknown and msg.endswith("."), (code, msg)
+
+
+def test_vba_module_declares_every_function_type_for_type(lib):
+    """The VBA module generated beside the ctypes table: a 64-bit Declare PtrSafe per function,
+    outputs ByRef, pointers and size_t as LongPtr, within the VBA limits (24 line continuations
+    per statement, 1023 characters per line)."""
+    import os
+    import re
+    path = os.path.join(os.path.dirname(pumploss_signatures.__file__), "pumploss.bas")
+    text = open(path, encoding="utf-8", newline="").read()
+    assert "\r\n" in text and "\n" not in text.replace("\r\n", ""), "VBA modules are CRLF text"
+    lines = text.split("\r\n")
+    assert max(len(l) for l in lines) <= 1023
+    statements = re.findall(r"^Public Declare PtrSafe (Function|Sub) (pumploss_\w+) Lib \"pumploss.dll\" \((.*?)\)( As \w+)?$",
+                            text.replace("\r\n", "\n").replace(" _\n    ", " "), re.M)
+    decl = {name: (kind, args, ret) for kind, name, args, ret in statements}
+    assert set(decl) == set(PROTOS)
+    want = {"DIN": "ByVal Double", "IIN": "ByVal Long", "SIZE": "ByVal LongPtr", "BUFLEN": "ByVal LongPtr",
+            "DARR": "ByRef Double", "DOUT": "ByRef Double", "IOUT": "ByRef Long", "ZOUT": "ByRef LongPtr",
+            "IARR": "ByRef Long", "STR": "ByVal String", "CBUF": "ByVal String", "HIN": "ByVal LongPtr",
+            "HOUT": "ByRef LongPtr"}
+    for name, (ret, params, _arrays) in PROTOS.items():
+        kind, args, vret = decl[name]
+        got = [re.sub(r"^(ByVal|ByRef) \w+ As (\w+)$", r"\1 \2", a.strip()) for a in args.split(",") if a.strip()]
+        assert got == [want[k] for k, _, _ in params], name
+        assert (kind == "Sub") == (ret == "void"), name
+        if ret != "void":
+            assert vret == (" As LongPtr" if ret == "const char*" else " As Long"), name
+    for n, v in pumploss_signatures.STATUS_CODES.items():
+        assert f"Public Const {n} As Long = {v}\r\n" in text

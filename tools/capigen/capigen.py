@@ -1,26 +1,38 @@
 #!/usr/bin/env python3
-"""Read pumploss.h and write what the C API machinery needs, so every function of the header is
-covered without anybody editing the tests:
+"""capigen: pumploss.h is the one source of the C API bindings. This build tool reads the header
+and writes, at build time, everything that would otherwise be kept by hand:
 
-    gen_capi.py table   HEADER OUT.inc   C++ table of every function (parameter kinds, a thunk
+    capigen.py all     HEADER OUTDIR     pumploss.def (Windows exports), pumploss_signatures.py
+                                         (ctypes table of capi/python/pumploss.py), pumploss.f90
+                                         (Fortran 2003 module) and pumploss.bas (VBA module for
+                                         64-bit spreadsheet hosts) into OUTDIR
+    capigen.py def     HEADER OUT.def    one of them
+    capigen.py python  HEADER OUT.py
+    capigen.py fortran HEADER OUT.f90
+    capigen.py vba     HEADER OUT.bas    (the worksheet functions come from pumploss.bas.in here)
+    capigen.py table   HEADER OUT.inc    C++ table of every function (parameter kinds, a thunk
                                          that calls it, a first guess of a valid input), used by
-                                         the bad-input, thread and no-allocation tests
-    gen_capi.py fortran HEADER OUT.f90   Fortran 2003 module: ISO_C_BINDING interfaces of every
-                                         function and the status codes as parameters
-    gen_capi.py list    HEADER           print each function with its class and kinds
+                                         the bad-input, thread, shared-handle and no-allocation tests
+    capigen.py list    HEADER            print each function with its class and kinds
 
 Parameter kinds (by C type): double in, int in, size_t (batch length or buffer capacity),
 const double* (input array), double* (output: scalar, or array in a batch function), int*
-(per-element status array in a batch function, else an int output), const int* (input array),
-const char* (string), char* (output buffer, followed by its size_t capacity), T* / const T*
-(handle, T declared by `typedef struct X T;`), T** (handle out, in a create function).
-An unknown type stops the build with a message naming the function: teach this script the kind
-rather than leaving a function untested.
+(per-element status array in a batch function, else an int output), size_t* (a count output),
+const int* (input array), const char* (string), char* (output buffer, followed by its size_t
+capacity), T* / const T* (handle, T declared by `typedef struct X T;`), T** (handle out, in a
+create function). An unknown type stops the build with a message naming the function: teach
+this script the kind rather than leaving a function untested.
+
+Constants: the status codes are the integer #defines inside the header's "Status codes" group;
+every other `#define PUMPLOSS_NAME <integer>` (except the version) is an option constant. Both
+go into every binding.
 """
+import io
+import os
 import re
 import sys
 
-KINDS = ("DIN", "IIN", "SIZE", "BUFLEN", "DARR", "DOUT", "IOUT", "IARR", "STR", "CBUF", "HIN", "HOUT")
+KINDS = ("DIN", "IIN", "SIZE", "BUFLEN", "DARR", "DOUT", "IOUT", "ZOUT", "IARR", "STR", "CBUF", "HIN", "HOUT")
 
 
 class Param:
@@ -61,17 +73,23 @@ def norm_type(t):
 
 
 def parse(path):
-    """Returns (functions, handle_types, status_codes)."""
+    """Returns (functions, handle_types, status_codes, option_constants)."""
     raw = open(path, encoding="utf-8").read()
-    codes = [(m.group(1), int(m.group(2)))
-             for m in re.finditer(r"#define\s+(PUMPLOSS_(?:OK|E[A-Z0-9_]+|W[A-Z0-9_]+))\s+(\d+)\b", raw)]
+    block = re.search(r"@name Status codes(.*?)@\}", raw, flags=re.S)
+    if not block:
+        sys.exit(f"capigen.py: no '@name Status codes' group in {path}")
+    define = r"#define\s+(PUMPLOSS_[A-Z0-9_]+)\s+(0x[0-9A-Fa-f]+|\d+)\b"
+    codes = [(m.group(1), int(m.group(2), 0)) for m in re.finditer(define, block.group(1))]
+    code_names = {n for n, _ in codes}
+    consts = [(m.group(1), int(m.group(2), 0)) for m in re.finditer(define, raw)
+              if m.group(1) not in code_names and not m.group(1).startswith("PUMPLOSS_VERSION")]
     text = strip_comments(raw)
     handles = re.findall(r"typedef\s+struct\s+\w+\s+(\w+)\s*;", text)
     funcs = []
     for m in re.finditer(r"PUMPLOSS_API\s+([^;{}()]*?)\s*PUMPLOSS_CALL\s+(pumploss_\w+)\s*\(([^)]*)\)\s*;", text):
         ret, name, args = norm_type(m.group(1)), m.group(2), m.group(3).strip()
         if ret not in ("int", "void", "const char*"):
-            sys.exit(f"gen_capi.py: {name}: return type '{ret}' is not one the C API conventions allow "
+            sys.exit(f"capigen.py: {name}: return type '{ret}' is not one the C API conventions allow "
                      "(int status, void for destroy, const char* for static strings)")
         params = []
         if args and args != "void":
@@ -80,14 +98,14 @@ def parse(path):
                 a = re.sub(r"\[\s*\]", "", a.strip())  # double x[] -> double *x
                 pm = re.match(r"^(.*?)([A-Za-z_]\w*)$", a)
                 if not pm:
-                    sys.exit(f"gen_capi.py: {name}: cannot read parameter '{a}'")
+                    sys.exit(f"capigen.py: {name}: cannot read parameter '{a}'")
                 ctype = norm_type(pm.group(1) + ("*" if declared_array else ""))
                 pname = pm.group(2)
                 prm = classify(name, ctype, pname, handles)
                 # An output is an array in a *_batch function, or when the header declares it
                 # with [] (e.g. `double t_k[]`); its length is the product of the size_t
                 # parameters. Any other double* / int* is one value.
-                if prm.kind in ("DOUT", "IOUT"):
+                if prm.kind in ("DOUT", "IOUT", "ZOUT"):
                     prm.array = name.endswith("_batch") or declared_array
                 params.append(prm)
         # a size_t right after a char* buffer is its capacity; other size_t make a batch function
@@ -96,17 +114,17 @@ def parse(path):
                 p.kind = "BUFLEN"
         for i, p in enumerate(params):
             if p.kind == "CBUF" and (i + 1 >= len(params) or params[i + 1].kind != "BUFLEN"):
-                sys.exit(f"gen_capi.py: {name}: char* {p.name} must be followed by its size_t capacity")
+                sys.exit(f"capigen.py: {name}: char* {p.name} must be followed by its size_t capacity")
         funcs.append(Function(name, ret, params))
     if not funcs:
-        sys.exit(f"gen_capi.py: no PUMPLOSS_API functions found in {path}")
-    return funcs, handles, codes
+        sys.exit(f"capigen.py: no PUMPLOSS_API functions found in {path}")
+    return funcs, handles, codes, consts
 
 
 def classify(fname, ctype, pname, handles):
     simple = {
         "double": "DIN", "int": "IIN", "size_t": "SIZE", "const double*": "DARR", "double*": "DOUT",
-        "int*": "IOUT", "const int*": "IARR", "const char*": "STR", "char*": "CBUF",
+        "int*": "IOUT", "size_t*": "ZOUT", "const int*": "IARR", "const char*": "STR", "char*": "CBUF",
     }
     if ctype in simple:
         return Param(ctype, pname, simple[ctype])
@@ -116,8 +134,8 @@ def classify(fname, ctype, pname, handles):
             return Param(ctype, pname, "HIN", m.group(2), bool(m.group(1)))
         if m.group(3) == "**" and not m.group(1):
             return Param(ctype, pname, "HOUT", m.group(2))
-    sys.exit(f"gen_capi.py: {fname}: parameter '{ctype} {pname}' has a type the C API machinery does not "
-             "know; use one of the documented kinds or add the kind to tests/capi/gen_capi.py")
+    sys.exit(f"capigen.py: {fname}: parameter '{ctype} {pname}' has a type the C API machinery does not "
+             "know; use one of the documented kinds or add the kind to tools/capigen/capigen.py")
 
 
 # First guesses of a valid input from the unit suffix of a parameter name (SI, typical of an
@@ -151,9 +169,9 @@ def c_string(s):
     return '"' + s.replace("\\", "\\\\").replace('"', '\\"') + '"'
 
 
-def write_table(funcs, handles, codes, out):
+def write_table(funcs, handles, codes, consts, out):
     w = out.write
-    w("// Generated by tests/capi/gen_capi.py from pumploss.h at build time: do not edit.\n")
+    w("// Generated by tools/capigen/capigen.py from pumploss.h at build time: do not edit.\n")
     w("// Included by tests/capi/capi_harness.hpp.\n\n")
     w("namespace plcapi {\n\n")
     w(f"inline constexpr int kHandleTypeCount = {len(handles)};\n")
@@ -179,6 +197,8 @@ def write_table(funcs, handles, codes, out):
                 args.append(f"a[{k}].pd")
             elif p.kind == "IOUT":
                 args.append(f"a[{k}].pi")
+            elif p.kind == "ZOUT":
+                args.append(f"a[{k}].pz")
             elif p.kind == "IARR":
                 args.append(f"a[{k}].cpi")
             elif p.kind == "STR":
@@ -238,15 +258,15 @@ def fortran_wrap(head, names, indent="      "):
     return lines
 
 
-def write_fortran(funcs, handles, codes, out):
+def write_fortran(funcs, handles, codes, consts, out):
     w = out.write
-    w("! Generated from pumploss.h by tests/capi/gen_capi.py: do not edit.\n")
+    w("! Generated from pumploss.h by tests/capi/capigen.py: do not edit.\n")
     w("! pumploss for Fortran 2003: ISO_C_BINDING interfaces of every C API function, the status\n")
     w("! codes, and pumploss_string() to read the C strings of pumploss_version() and\n")
     w("! pumploss_status_message(). Units are SI, as in pumploss.h. Pass strings as 'bar'//C_NULL_CHAR.\n")
     w("! Results are engineering estimates; defer to the pump maker's limits and local codes.\n")
     w("module pumploss\n  use, intrinsic :: iso_c_binding\n  implicit none\n\n")
-    for n, v in codes:
+    for n, v in codes + consts:
         w(f"  integer(c_int), parameter :: {n} = {v}\n")
     w("\n  interface\n")
     for f in funcs:
@@ -284,6 +304,9 @@ def write_fortran(funcs, handles, codes, out):
             elif p.kind == "IOUT":
                 d = "integer(c_int), intent(out)"
                 nm += "(*)" if p.array else ""
+            elif p.kind == "ZOUT":
+                d = "integer(c_size_t), intent(out)"
+                nm += "(*)" if p.array else ""
             elif p.kind == "IARR":
                 d = "integer(c_int), intent(in)"
                 nm += "(*)"
@@ -320,21 +343,141 @@ def write_fortran(funcs, handles, codes, out):
     w("end module pumploss\n")
 
 
+def write_def(funcs, handles, codes, consts, out):
+    out.write("; Generated from pumploss.h by tools/capigen/capigen.py at build time: do not edit.\n")
+    out.write("; Exports of pumploss.dll: every function of the C API, undecorated.\n")
+    out.write("LIBRARY pumploss\nEXPORTS\n")
+    for f in sorted(funcs, key=lambda f: f.name):
+        out.write(f"    {f.name}\n")
+
+
+def write_python(funcs, handles, codes, consts, out):
+    w = out.write
+    w('"""ctypes signatures of the pumploss C API, generated from pumploss.h by\n')
+    w('tools/capigen/capigen.py at build time: do not edit. Read by pumploss.py.\n\n')
+    w("FUNCTIONS: name -> (return type, ((kind, C type, parameter name), ...), names of the array\n")
+    w("outputs). Kinds: see tools/capigen/capigen.py.\n")
+    w('"""\n\n')
+    w("FUNCTIONS = {\n")
+    for f in funcs:
+        params = "".join(f"({p.kind!r}, {p.ctype!r}, {p.name!r}), " for p in f.params)
+        arrays = "".join(f"{p.name!r}, " for p in f.params if p.kind in ("DOUT", "IOUT", "ZOUT") and p.array)
+        w(f"    {f.name!r}: ({f.ret!r}, ({params}), ({arrays})),\n")
+    w("}\n\nHANDLES = (" + "".join(f"{h!r}, " for h in handles) + ")\n\n")
+    w("STATUS_CODES = {\n" + "".join(f"    {n!r}: {v},\n" for n, v in codes) + "}\n\n")
+    w("CONSTANTS = {\n" + "".join(f"    {n!r}: {v},\n" for n, v in consts) + "}\n")
+
+
+# Words a VBA parameter may not be called (keywords and statements); such names get a "_".
+VBA_RESERVED = set("""and as boolean byref byte byval call case close const currency date declare dim do
+double each else elseif empty end enum eqv erase error event exit false for friend function get
+global gosub goto if imp implements in input integer is let lib like line lock long longlong longptr
+loop lset me mid mod name new next not nothing null on open option optional or output paramarray
+preserve print private property public put raiseevent random read redim rem resume return rset
+seek select set shared single spc static step stop string sub tab then to true type typeof unlock
+until variant wend while width with withevents write xor""".split())
+
+
+def vba_name(n, taken):
+    nm = n
+    while nm.lower() in VBA_RESERVED or nm.lower() in taken:
+        nm += "_"
+    taken.add(nm.lower())
+    return nm
+
+
+def vba_declarations(funcs, codes, consts):
+    lines = ["' ---- constants of pumploss.h ----------------------------------------------------------------"]
+    for n, v in codes + consts:
+        lines.append(f"Public Const {n} As Long = {v}")
+    lines.append("")
+    lines.append("' ---- declarations of every C function of pumploss.h ------------------------------------------")
+    for f in funcs:
+        taken = {f.name.lower()}
+        args = []
+        for p in f.params:
+            nm = vba_name(p.name, taken)
+            t = {
+                "DIN": f"ByVal {nm} As Double", "IIN": f"ByVal {nm} As Long",
+                "SIZE": f"ByVal {nm} As LongPtr", "BUFLEN": f"ByVal {nm} As LongPtr",
+                "DARR": f"ByRef {nm} As Double", "DOUT": f"ByRef {nm} As Double",
+                "IOUT": f"ByRef {nm} As Long", "ZOUT": f"ByRef {nm} As LongPtr",
+                "IARR": f"ByRef {nm} As Long", "STR": f"ByVal {nm} As String",
+                "CBUF": f"ByVal {nm} As String", "HIN": f"ByVal {nm} As LongPtr",
+                "HOUT": f"ByRef {nm} As LongPtr",
+            }[p.kind]
+            args.append(t)
+        if f.ret == "void":
+            head, tail = f"Public Declare PtrSafe Sub {f.name} Lib \"pumploss.dll\" (", ")"
+        else:
+            ret = "LongPtr" if f.ret == "const char*" else "Long"
+            head, tail = f"Public Declare PtrSafe Function {f.name} Lib \"pumploss.dll\" (", f") As {ret}"
+        if not args:
+            lines.append(head + tail)
+            continue
+        # three parameters per line: at most 24 line continuations in one VBA statement
+        chunks = [", ".join(args[i:i + 3]) for i in range(0, len(args), 3)]
+        if len(chunks) > 24:
+            sys.exit(f"capigen.py: {f.name}: too many parameters for one VBA statement")
+        lines.append(head + " _")
+        for i, c in enumerate(chunks):
+            lines.append("    " + c + ("," + " _" if i + 1 < len(chunks) else tail))
+    return "\n".join(lines) + "\n"
+
+
+def write_vba(funcs, handles, codes, consts, out, template):
+    text = open(template, encoding="utf-8").read()
+    if "' @DECLARATIONS@" not in text:
+        sys.exit(f"capigen.py: {template} lacks the line \"' @DECLARATIONS@\"")
+    text = text.replace("' @DECLARATIONS@\n", vba_declarations(funcs, codes, consts))
+    # VBA modules are read as CRLF text by the host's importer
+    out.write(text.replace("\r\n", "\n").replace("\n", "\r\n"))
+
+
+WRITERS = {"table": write_table, "fortran": write_fortran, "def": write_def, "python": write_python}
+ALL = {"def": "pumploss.def", "python": "pumploss_signatures.py", "fortran": "pumploss.f90", "vba": "pumploss.bas"}
+VBA_TEMPLATE = os.path.join(os.path.dirname(os.path.abspath(__file__)), "pumploss.bas.in")
+
+
+def render(mode, parsed):
+    buf = io.StringIO(newline="")
+    if mode == "vba":
+        write_vba(*parsed, buf, VBA_TEMPLATE)
+    else:
+        WRITERS[mode](*parsed, buf)
+    return buf.getvalue()
+
+
+def write_if_changed(path, text):
+    """Write only when the text changed, so dependants are not rebuilt for nothing."""
+    try:
+        with open(path, encoding="utf-8", newline="") as f:
+            if f.read() == text:
+                return
+    except OSError:
+        pass
+    with open(path, "w", encoding="utf-8", newline="") as f:
+        f.write(text)
+
+
 def main(argv):
-    if len(argv) < 3 or argv[1] not in ("table", "fortran", "list"):
+    modes = ("all", "list", "vba") + tuple(WRITERS)
+    if len(argv) < 3 or argv[1] not in modes or (argv[1] != "list" and len(argv) < 4):
         sys.exit(__doc__)
-    funcs, handles, codes = parse(argv[2])
+    parsed = parse(argv[2])
+    funcs, handles, codes, consts = parsed
     if argv[1] == "list":
         for f in funcs:
             print(f"{f.cls:8} {f.ret:12} {f.name}(" + ", ".join(p.kind + " " + p.name for p in f.params) + ")")
-        print(f"{len(funcs)} functions, {len(handles)} handle types, {len(codes)} status codes")
+        print(f"{len(funcs)} functions, {len(handles)} handle types, {len(codes)} status codes, "
+              f"{len(consts)} option constants")
         return 0
-    import io
-    buf = io.StringIO()
-    (write_table if argv[1] == "table" else write_fortran)(funcs, handles, codes, buf)
-    text = buf.getvalue()
-    with open(argv[3], "w", encoding="utf-8") as f:
-        f.write(text)
+    if argv[1] == "all":
+        os.makedirs(argv[3], exist_ok=True)
+        for mode, name in ALL.items():
+            write_if_changed(os.path.join(argv[3], name), render(mode, parsed))
+        return 0
+    write_if_changed(argv[3], render(argv[1], parsed))
     return 0
 
 
