@@ -11,7 +11,7 @@ demo=examples/demo
 cmake -S . -B build-demo -DCMAKE_BUILD_TYPE=Release -DPUMPLOSS_BUILD_TESTS=OFF \
   -DPUMPLOSS_BUILD_BENCH=OFF -DPUMPLOSS_BUILD_DOCS=OFF >/dev/null
 cmake --build build-demo -j "$(nproc 2>/dev/null || echo 2)" --target pumploss_cli >/dev/null
-pl=./build-demo/examples/cli/pumploss
+pl=./build-demo/app/pumploss
 mkdir -p "$out"
 
 run() {  # run one subcommand; stop at the first failure

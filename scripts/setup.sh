@@ -21,7 +21,7 @@ PACKAGES=(
   wine64                                           # runs a C test against the DLL
   libclang-rt-dev gcovr linux-perf                 # libFuzzer runtime, coverage report, profiling
   # pumploss:setup-capi
-  libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (examples/cli)
+  libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (app/)
   # pumploss:setup-cli
 )
 
