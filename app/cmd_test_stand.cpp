@@ -1,20 +1,15 @@
-// pumploss test-stand: efficiencies per operating point with their expanded uncertainty (GUM,
-// k = 2), the flow corrected to port conditions where the setup says so, the derived
-// displacement by three estimators, a fitted Wilson (and Schloesser) loss model with its
-// diagnostics, and an overall-efficiency map (CSV and SVG contour plot).
+// pumploss test-stand: reads the data (CSV) and the setup (TOML), hands them to the library's
+// reduction (pumploss::reduce_test_stand, include/pumploss/test_stand.hpp) and renders what it
+// returns: efficiencies per operating point with their expanded uncertainty, the derived
+// displacement by three estimators, the fitted loss models, the drain table and the
+// overall-efficiency map (CSV and SVG contour plot).
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
-
-#include <algorithm>
-#include <cmath>
-#include <map>
 
 #include "commands.hpp"
 #include "common.hpp"
 #include "inputs.hpp"
-#include "pumploss/efficiency.hpp"
-#include "pumploss/loss_model.hpp"
-#include "pumploss/uncertainty.hpp"
+#include "pumploss/test_stand.hpp"
 #include "pumploss/version.hpp"
 #include "svg.hpp"
 
@@ -30,185 +25,68 @@ struct stand_options {
   output_options out;
 };
 
-// Level index of each value: sorted values closer than 3 % of the span to the previous one
-// belong to the same level (set-points of a test grid). Returns the level of every value and
-// the number of levels.
-std::pair<std::vector<std::size_t>, std::size_t> level_of(const std::vector<double>& v) {
-  std::vector<std::size_t> order(v.size());
-  for (std::size_t i = 0; i < v.size(); ++i) order[i] = i;
-  std::sort(order.begin(), order.end(), [&](std::size_t a, std::size_t b) { return v[a] < v[b]; });
-  const double tol = v.empty() ? 0.0 : 0.03 * (v[order.back()] - v[order.front()]);
-  std::vector<std::size_t> lev(v.size());
-  std::size_t k = 0;
-  for (std::size_t j = 0; j < order.size(); ++j) {
-    if (j > 0 && v[order[j]] - v[order[j - 1]] > tol) ++k;
-    lev[order[j]] = k;
-  }
-  return {lev, v.empty() ? 0 : k + 1};
+// The readings of the CSV, in SI, as the library takes them.
+pumploss::test_stand_readings readings_of(const csv_data& d, bool pump) {
+  auto col = [&](const char* name) { return d.has(name) ? d.si(name) : std::vector<double>{}; };
+  pumploss::test_stand_readings r;
+  r.speed_rev_s = col("speed");
+  r.inlet_pressure_pa = col("inlet pressure");
+  r.outlet_pressure_pa = col("outlet pressure");
+  r.flow_m3_s = col(pump ? "outlet flow" : "inlet flow");
+  r.torque_n_m = col("torque");
+  r.drain_flow_m3_s = col("drain flow");
+  r.inlet_temperature_k = col("inlet temperature");
+  r.outlet_temperature_k = col("outlet temperature");
+  r.drain_temperature_k = col("drain temperature");
+  r.meter_temperature_k = col("meter temperature");
+  r.case_pressure_pa = col("case pressure");
+  return r;
 }
 
-// Standard uncertainty of one reading: the stated limits (per cent of reading plus absolute,
-// added as the calibration sheets state them) as a rectangular or a standard uncertainty.
-double instrument_u(const instrument& ins, double reading) {
-  using pumploss::uncertainty_basis;
-  using pumploss::uncertainty_distribution;
-  const auto dist = ins.rectangular ? uncertainty_distribution::rectangular : uncertainty_distribution::standard;
-  const auto a = pumploss::standard_uncertainty(ins.absolute_si, uncertainty_basis::absolute, dist, reading);
-  const auto b = pumploss::standard_uncertainty(ins.reading_fraction * 100.0, uncertainty_basis::percent_of_reading,
-                                                dist, reading);
-  return a.value + b.value;
-}
-
-const char* model_name(pumploss::loss_model_kind k) {
-  return k == pumploss::loss_model_kind::wilson ? "Wilson" : "Schloesser";
+// A refusal of the library as an input_error at the file, line and column it concerns.
+[[noreturn]] void refuse(const pumploss::test_stand_message& m, const csv_data& d, const stand_options& o) {
+  if (!m.setting.empty()) throw input_error(o.setup, 0, 0, m.text);
+  const auto k = d.find(m.column);
+  if (m.row != pumploss::test_stand_message::no_row && k < d.spec.size() && d.present[k])
+    throw d.error(m.row, m.column, m.follows_value ? "'" + d.texts[k][m.row] + "' " + m.text : m.text);
+  throw input_error(o.data, 0, 0, m.text);
 }
 
 int run_test_stand(const stand_options& o) {
   const display_units du = make_units(o.out);
   const auto setup = read_stand_setup(o.setup);
+  const auto& s = setup.run;
+  const bool pump = s.kind == pumploss::machine::pump;
   const auto d = read_csv(o.data, stand_columns());
-  const char* flow_col = setup.pump ? "outlet flow" : "inlet flow";
-  if (!d.has(flow_col))
-    throw input_error(o.data, 0, 0,
-                      std::string("missing column '") + flow_col + "' (the " + (setup.pump ? "pump's outlet" : "motor's inlet") +
-                          " flow, as " + o.setup + " says kind = \"" + (setup.pump ? "pump" : "motor") + "\")");
-  d.check_range("speed", 1e-3, 1e3, "is not a speed above zero (and below 60000 rpm)");
-  d.check_range(flow_col, 0.0, 1.0, "is not a flow between zero and 60000 L/min");
-  d.check_range("drain flow", 0.0, 1.0, "is not a flow between zero and 60000 L/min");
-  d.check_range("torque", 0.0, 1e6, "is not a torque between zero and 1e6 N.m");
-  for (const char* t : {"inlet temperature", "outlet temperature", "drain temperature", "meter temperature"})
-    d.check_range(t, 223.15, 473.15, "is not an oil temperature between -50 and 200 degC");
-  const auto& p1 = d.si("inlet pressure");
-  const auto& p2 = d.si("outlet pressure");
-  for (std::size_t i = 0; i < d.rows(); ++i)
-    if (setup.pump ? !(p2[i] > p1[i]) : !(p1[i] > p2[i]))
-      throw d.error(i, "outlet pressure",
-                    setup.pump ? "a pump's outlet pressure must lie above its inlet pressure"
-                               : "a motor's outlet pressure must lie below its inlet pressure");
-  const std::string tvisc = setup.viscosity_temperature + " temperature";
-  if (!d.has(tvisc))
-    throw input_error(o.setup, 0, 0,
-                      "viscosity_temperature = \"" + setup.viscosity_temperature + "\" but " + o.data +
-                          " has no '" + tvisc + "' column");
-  const std::string tport = setup.pump ? "outlet temperature" : "inlet temperature";
-  if (!setup.meter_at_port) {
-    if (!d.has("meter temperature"))
-      throw input_error(o.setup, 0, 0,
-                        "[flow_meter] position = \"return\" needs a 'meter temperature' column in " + o.data);
-    if (!d.has(tport))
-      throw input_error(o.setup, 0, 0, "[flow_meter] position = \"return\" needs an '" + tport + "' column in " +
-                                           o.data + " (the port the flow is corrected to)");
-  }
 
-  const auto kind = setup.pump ? pumploss::machine::pump : pumploss::machine::motor;
-  const auto& oil = setup.oil.props;
-  const std::size_t n = d.rows();
-  const auto& speed = d.si("speed");
-  const auto& torque = d.si("torque");
-  const auto& q_read = d.si(flow_col);
-  std::vector<double> dp(n), q(n), mu(n);
-  bool regime_flow = false;
-  for (std::size_t i = 0; i < n; ++i) {
-    dp[i] = setup.pump ? p2[i] - p1[i] : p1[i] - p2[i];
-    const auto m = pumploss::oil_dynamic_viscosity(oil, d.si(tvisc)[i], 0.0);
-    if (!m.usable())
-      throw d.error(i, tvisc, std::string("no oil viscosity at this temperature: ") +
-                                  pumploss::status_message(static_cast<int>(m.st)));
-    mu[i] = m.value;
-    if (setup.meter_at_port) {
-      q[i] = q_read[i];
-      continue;
-    }
-    const double p_port = setup.pump ? p2[i] : p1[i];
-    const auto r = pumploss::flow_at_port(q_read[i], setup.meter_pressure_pa, d.si("meter temperature")[i], p_port,
-                                          d.si(tport)[i], oil.rho_ref_kg_m3, oil.t_ref_k, oil.alpha_per_k,
-                                          oil.bulk_modulus_pa);
-    if (!r.usable())
-      throw d.error(i, flow_col, std::string("cannot correct the flow to port conditions: ") +
-                                     pumploss::status_message(static_cast<int>(r.st)));
-    if (r.st != status::ok) regime_flow = true;
-    q[i] = r.value;
-  }
+  const auto res = pumploss::reduce_test_stand(s, readings_of(d, pump));
+  if (pumploss::is_error(res.st)) refuse(res.messages.front(), d, o);
 
-  // ---- derived displacement by the three estimators
-  const auto [plev, np] = level_of(dp);
-  const auto [slev, ns] = level_of(speed);
-  std::vector<pumploss::displacement_result<double>> est;
-  {  // A: slope of flow over speed at the lowest pressure level
-    std::vector<double> xs, ys;
-    for (std::size_t i = 0; i < n; ++i)
-      if (plev[i] == 0) {
-        xs.push_back(speed[i]);
-        ys.push_back(q[i]);
-      }
-    est.push_back(pumploss::displacement_slope(xs.data(), ys.data(), xs.size()));
-  }
-  {  // B: zero-pressure intercept at the highest speed level
-    std::vector<double> xs, ys;
-    double nsum = 0;
-    for (std::size_t i = 0; i < n; ++i)
-      if (slev[i] == ns - 1) {
-        xs.push_back(dp[i]);
-        ys.push_back(q[i]);
-        nsum += speed[i];
-      }
-    const double nmean = xs.empty() ? 0.0 : nsum / static_cast<double>(xs.size());
-    est.push_back(pumploss::displacement_intercept(nmean, xs.data(), ys.data(), xs.size()));
-  }
-  {  // C: two-step over the grid, every pressure level with the same number of speeds
-    std::vector<std::vector<std::size_t>> by_level(np);
-    for (std::size_t i = 0; i < n; ++i) by_level[plev[i]].push_back(i);
-    const std::size_t per = by_level.empty() ? 0 : by_level[0].size();
-    bool grid = per > 0;
-    for (const auto& l : by_level) grid = grid && l.size() == per;
-    if (grid) {
-      std::vector<double> xs, ps, ys;
-      for (const auto& l : by_level)
-        for (const std::size_t i : l) {
-          xs.push_back(speed[i]);
-          ps.push_back(dp[i]);
-          ys.push_back(q[i]);
-        }
-      est.push_back(pumploss::displacement_two_step(xs.data(), ps.data(), ys.data(), np, per));
-    } else {
-      const double nan = std::nan("");
-      est.push_back({nan, nan, nan, nan, nan, n, pumploss::displacement_estimator::two_step,
-                     status::insufficient_data});
-    }
-  }
-  double v_used = setup.nominal_displacement_m3_rev, u_v_used = 0.0;
-  std::string v_source = "the maker's nominal displacement (no uncertainty propagated for it)";
-  if (setup.displacement_for_efficiency != "nominal") {
-    const std::size_t k = setup.displacement_for_efficiency == "slope" ? 0
-                          : setup.displacement_for_efficiency == "intercept" ? 1
-                                                                              : 2;
-    if (!pumploss::is_usable(est[k].st))
-      throw std::runtime_error(o.setup + ": displacement_for_efficiency = \"" + setup.displacement_for_efficiency +
-                               "\", but that estimator found no displacement in " + o.data + ": " +
-                               pumploss::status_message(static_cast<int>(est[k].st)) +
-                               " (choose another estimator or \"nominal\")");
-    v_used = est[k].v_m3_rev;
-    u_v_used = est[k].u_v_m3_rev;
-    v_source = std::string("estimator '") + pumploss::displacement_estimator_name(est[k].estimator) + "'";
-  }
+  const std::size_t n = res.points.size();
+  const auto& est = res.estimators;
+  const auto& models = res.models;
+  const std::string v_source = s.displacement == pumploss::displacement_choice::nominal
+                                   ? std::string("the maker's nominal displacement (no uncertainty propagated for it)")
+                                   : std::string("estimator '") +
+                                         pumploss::displacement_estimator_name(
+                                             est[static_cast<std::size_t>(s.displacement)].estimator) +
+                                         "'";
+  const std::string vt = pumploss::viscosity_temperature_name(s.viscosity_at);
 
-  // ---- efficiencies with GUM uncertainty per point
   report r;
   r.title = std::string("Test-stand analysis: ") + setup.machine_name;
   r.facts.emplace_back("Data", o.data + fmt::format(" ({} operating points; {} speed levels x {} pressure levels)", n,
-                                                    ns, np));
-  r.facts.emplace_back("Machine", std::string(setup.pump ? "pump" : "motor") + ", nominal displacement " +
-                                      show_quantity(setup.nominal_displacement_m3_rev, D::displacement, du));
-  r.facts.emplace_back("Oil", setup.oil.name + "; viscosity in the gaps at the " + setup.viscosity_temperature +
-                                  " temperature (ASTM D341)");
-  r.facts.emplace_back("Flow", setup.meter_at_port
+                                                    res.speed_levels, res.pressure_levels));
+  r.facts.emplace_back("Machine", std::string(pump ? "pump" : "motor") + ", nominal displacement " +
+                                      show_quantity(s.nominal_displacement_m3_rev, D::displacement, du));
+  r.facts.emplace_back("Oil", setup.oil.name + "; viscosity in the gaps at the " + vt + " temperature (ASTM D341)");
+  r.facts.emplace_back("Flow", s.meter_at_port
                                    ? std::string("read at the port (no correction)")
-                                   : "meter in the return line at " +
-                                         show_quantity(setup.meter_pressure_pa, D::pressure, du) +
-                                         " and the meter temperature, corrected to the " +
-                                         (setup.pump ? "outlet" : "inlet") +
+                                   : "meter in the return line at " + show_quantity(s.meter_pressure_pa, D::pressure, du) +
+                                         " and the meter temperature, corrected to the " + (pump ? "outlet" : "inlet") +
                                          " port by the density ratio (pumploss::flow_at_port)");
-  r.facts.emplace_back("Displacement used", show_quantity(v_used, D::displacement, du, 5) + " from " + v_source);
+  r.facts.emplace_back("Displacement used",
+                       show_quantity(res.displacement_m3_rev, D::displacement, du, 5) + " from " + v_source);
 
   table tp;
   tp.name = "points";
@@ -225,26 +103,18 @@ int run_test_stand(const stand_options& o) {
              {"U hm", cell_kind::percent, D::pressure, 2},
              {"overall eff", cell_kind::percent, D::pressure, 4},
              {"U overall", cell_kind::percent, D::pressure, 2},
-             {"status", cell_kind::text, D::pressure, 0}};
-  bool implausible = false;
+             {"status", cell_kind::text, D::pressure, 0},
+             {"flow residual", cell_kind::quantity, D::volume_flow, 2},
+             {"torque residual", cell_kind::quantity, D::torque, 2}};
   svg::series measured{"test points", {}, {}, false, true, false};
   for (std::size_t i = 0; i < n; ++i) {
-    const double u_dp =
-        pumploss::pressure_difference_uncertainty(instrument_u(setup.pressure, p1[i]), instrument_u(setup.pressure, p2[i]), 0.0)
-            .value;
-    const pumploss::efficiency_inputs<double> x{v_used, speed[i], dp[i], q[i], torque[i], u_v_used,
-                                                instrument_u(setup.speed, speed[i]), u_dp,
-                                                instrument_u(setup.flow, q_read[i]), instrument_u(setup.torque, torque[i]),
-                                                0.0};
-    const auto g = pumploss::efficiency_gum(kind, x);
-    if (pumploss::is_error(g.st))
-      throw d.error(i, "speed", std::string("no efficiencies for this point: ") +
-                                    pumploss::status_message(static_cast<int>(g.st)));
-    if (g.st == status::implausible) implausible = true;
-    tp.rows.push_back({static_cast<double>(i + 1), speed[i], dp[i], q[i], torque[i], mu[i], g.eta_v.value, g.eta_v.U,
-                       g.eta_hm.value, g.eta_hm.U, g.eta_t.value, g.eta_t.U, status_text(g.st)});
-    measured.x.push_back(du.show(speed[i], D::rotational_speed));
-    measured.y.push_back(du.show(dp[i], D::pressure));
+    const auto& p = res.points[i];
+    const auto& g = p.eta;
+    tp.rows.push_back({static_cast<double>(i + 1), p.speed_rev_s, p.dp_pa, p.flow_m3_s, p.torque_n_m, p.mu_pa_s,
+                       g.eta_v.value, g.eta_v.U, g.eta_hm.value, g.eta_hm.U, g.eta_t.value, g.eta_t.U,
+                       status_text(p.st), p.flow_residual_m3_s, p.torque_residual_n_m});
+    measured.x.push_back(du.show(p.speed_rev_s, D::rotational_speed));
+    measured.y.push_back(du.show(p.dp_pa, D::pressure));
   }
 
   table td;
@@ -259,30 +129,18 @@ int run_test_stand(const stand_options& o) {
     td.rows.push_back({std::string(pumploss::displacement_estimator_name(e.estimator)), e.v_m3_rev, e.u_v_m3_rev,
                        static_cast<double>(e.points), status_text(e.st)});
 
-  // ---- loss models
-  const double rho = pumploss::oil_density_at(oil, d.si(tvisc)[n / 2], 0.0).value;
-  std::vector<pumploss::loss_model_kind> kinds = {pumploss::loss_model_kind::wilson};
-  if (setup.schloesser) kinds.push_back(pumploss::loss_model_kind::schloesser);
-  std::vector<pumploss::loss_model<double>> models;
-  std::vector<double> work(pumploss::loss_fit_workspace(n));
-  std::vector<std::vector<double>> res_q, res_t;
-  for (const auto k : kinds) {
-    std::vector<double> rq(n), rt(n);
-    const auto m = pumploss::fit_loss_model(kind, k, v_used, rho, dp.data(), speed.data(), mu.data(), q.data(),
-                                            torque.data(), n, work.data(), rq.data(), rt.data());
-    if (pumploss::is_error(m.st))
-      throw std::runtime_error(o.data + ": the " + model_name(k) + " loss model cannot be fitted to these points: " +
-                               pumploss::status_message(static_cast<int>(m.st)));
-    models.push_back(m);
-    res_q.push_back(rq);
-    res_t.push_back(rt);
-  }
-  tp.cols.push_back({"flow residual", cell_kind::quantity, D::volume_flow, 2});
-  tp.cols.push_back({"torque residual", cell_kind::quantity, D::torque, 2});
-  for (std::size_t i = 0; i < n; ++i) {
-    tp.rows[i].push_back(res_q[0][i]);
-    tp.rows[i].push_back(res_t[0][i]);
-  }
+  table tdr;
+  tdr.name = "drain";
+  tdr.title = "Case drain flow per operating point: share of the theoretical flow V_i n and of the volumetric loss";
+  tdr.cols = {{"point", cell_kind::number, D::pressure, 2},
+              {"speed", cell_kind::quantity, D::rotational_speed, 4},
+              {"pressure difference", cell_kind::quantity, D::pressure, 4},
+              {"drain flow", cell_kind::quantity, D::volume_flow, 4},
+              {"drain fraction", cell_kind::percent, D::pressure, 3},
+              {"share of volumetric loss", cell_kind::percent, D::pressure, 3}};
+  for (std::size_t i = 0; i < n; ++i)
+    tdr.rows.push_back({static_cast<double>(i + 1), res.points[i].speed_rev_s, res.points[i].dp_pa,
+                        res.drain[i].drain_flow_m3_s, res.drain[i].fraction, res.drain[i].loss_share});
 
   table tm;
   tm.name = "loss_model";
@@ -290,25 +148,22 @@ int run_test_stand(const stand_options& o) {
   tm.cols = {{"coefficient", cell_kind::text, D::pressure, 0}, {"unit", cell_kind::text, D::pressure, 0}};
   for (const auto& m : models) {
     // coefficients span many decades: written as text in scientific notation
-    tm.cols.push_back({model_name(m.model), cell_kind::text, D::pressure, 0});
-    tm.cols.push_back({std::string("u ") + model_name(m.model), cell_kind::text, D::pressure, 0});
+    tm.cols.push_back({pumploss::loss_model_name(m.model), cell_kind::text, D::pressure, 0});
+    tm.cols.push_back({std::string("u ") + pumploss::loss_model_name(m.model), cell_kind::text, D::pressure, 0});
   }
+  using lm = pumploss::loss_model<double>;
   struct coef {
     const char* name;
     const char* unit;
-    double pumploss::loss_model<double>::*v;
-    double pumploss::loss_model<double>::*u;
+    double lm::*v;
+    double lm::*u;
   };
-  const coef coefs[] = {{"C_s laminar slip", "-", &pumploss::loss_model<double>::c_s, &pumploss::loss_model<double>::u_c_s},
-                        {"C_st turbulent slip", "-", &pumploss::loss_model<double>::c_st,
-                         &pumploss::loss_model<double>::u_c_st},
-                        {"C_v viscous drag", "-", &pumploss::loss_model<double>::c_v, &pumploss::loss_model<double>::u_c_v},
-                        {"C_f Coulomb friction", "-", &pumploss::loss_model<double>::c_f,
-                         &pumploss::loss_model<double>::u_c_f},
-                        {"T_c constant torque loss", "N.m", &pumploss::loss_model<double>::t_c_n_m,
-                         &pumploss::loss_model<double>::u_t_c_n_m},
-                        {"C_h hydrodynamic torque", "-", &pumploss::loss_model<double>::c_h,
-                         &pumploss::loss_model<double>::u_c_h}};
+  const coef coefs[] = {{"C_s laminar slip", "-", &lm::c_s, &lm::u_c_s},
+                        {"C_st turbulent slip", "-", &lm::c_st, &lm::u_c_st},
+                        {"C_v viscous drag", "-", &lm::c_v, &lm::u_c_v},
+                        {"C_f Coulomb friction", "-", &lm::c_f, &lm::u_c_f},
+                        {"T_c constant torque loss", "N.m", &lm::t_c_n_m, &lm::u_t_c_n_m},
+                        {"C_h hydrodynamic torque", "-", &lm::c_h, &lm::u_c_h}};
   for (const auto& c : coefs) {
     std::vector<cell> row = {std::string(c.name), std::string(c.unit)};
     for (const auto& m : models) {
@@ -319,64 +174,49 @@ int run_test_stand(const stand_options& o) {
   }
   for (const auto& m : models)
     r.facts.emplace_back(
-        std::string(model_name(m.model)) + " fit",
+        std::string(pumploss::loss_model_name(m.model)) + " fit",
         fmt::format("R^2 flow {:.5f}, torque {:.5f}; RMS residual {}, {}; condition numbers {:.3g}, {:.3g}; {}",
                     m.r2_flow, m.r2_torque, show_quantity(m.rms_flow_m3_s, D::volume_flow, du, 3),
                     show_quantity(m.rms_torque_n_m, D::torque, du, 3), m.cond_flow, m.cond_torque,
                     status_text(m.st)));
 
-  // ---- efficiency map from the fitted model(s)
-  const auto mu_map = pumploss::oil_dynamic_viscosity(oil, setup.map_temperature_k, 0.0);
-  if (!mu_map.usable())
-    throw input_error(o.setup, 0, 0, "[map] temperature: no oil viscosity there: " +
-                                         std::string(pumploss::status_message(static_cast<int>(mu_map.st))));
-  const std::size_t nx = 29, ny = 27;
-  std::vector<double> gs(nx), gp(ny);
-  for (std::size_t j = 0; j < nx; ++j)
-    gs[j] = setup.map_speed_lo + (setup.map_speed_hi - setup.map_speed_lo) * static_cast<double>(j) / (nx - 1);
-  for (std::size_t i = 0; i < ny; ++i)
-    gp[i] = setup.map_dp_lo + (setup.map_dp_hi - setup.map_dp_lo) * static_cast<double>(i) / (ny - 1);
-  std::vector<std::vector<double>> maps;
-  std::vector<std::vector<status>> map_st;
-  for (const auto& m : models) {
-    std::vector<double> eta(nx * ny);
-    std::vector<status> st(nx * ny);
-    pumploss::loss_model_map(m, mu_map.value, gp.data(), ny, gs.data(), nx, eta.data(), st.data());
-    maps.push_back(eta);
-    map_st.push_back(st);
-  }
+  // ---- the map: CSV of every model, contour plot of the last
+  const auto& gs = res.map_speed_rev_s;
+  const auto& gp = res.map_dp_pa;
+  const std::size_t nx = gs.size(), ny = gp.size();
+  const char* map_model = pumploss::loss_model_name(models.back().model);
   table tmap;
   tmap.name = "map";
   tmap.cols = {{"pressure difference", cell_kind::quantity, D::pressure, 4},
                {"speed", cell_kind::quantity, D::rotational_speed, 4}};
-  for (const auto& m : models) tmap.cols.push_back({std::string("overall eff ") + model_name(m.model), cell_kind::percent, D::pressure, 4});
+  for (const auto& mp : res.maps)
+    tmap.cols.push_back({std::string("overall eff ") + pumploss::loss_model_name(mp.model), cell_kind::percent,
+                         D::pressure, 4});
   tmap.cols.push_back({"status", cell_kind::text, D::pressure, 0});
-  std::size_t extrapolated = 0;
   for (std::size_t i = 0; i < ny; ++i)
     for (std::size_t j = 0; j < nx; ++j) {
       std::vector<cell> row = {gp[i], gs[j]};
       status worst_st = status::ok;
-      for (std::size_t k = 0; k < models.size(); ++k) {
-        row.emplace_back(maps[k][i * nx + j]);
-        worst_st = pumploss::worst(worst_st, map_st[k][i * nx + j]);
+      for (const auto& mp : res.maps) {
+        row.emplace_back(mp.eta_t[i * nx + j]);
+        worst_st = pumploss::worst(worst_st, mp.st[i * nx + j]);
       }
-      if (worst_st == status::extrapolated) ++extrapolated;
       row.emplace_back(status_text(worst_st));
       tmap.rows.push_back(std::move(row));
     }
 
   svg::plot p;
   p.title = "Overall efficiency of " + setup.machine_name;
-  p.subtitle = fmt::format("{} loss model at {}; pumploss {}", model_name(models.back().model),
-                           show_quantity(setup.map_temperature_k, D::temperature, du, 3), pumploss::version_string);
+  p.subtitle = fmt::format("{} loss model at {}; pumploss {}", map_model,
+                           show_quantity(s.map_temperature_k, D::temperature, du, 3), pumploss::version_string);
   p.x.label = std::string("speed [") + du.of(D::rotational_speed).symbol + "]";
   p.y.label = std::string("pressure difference [") + du.of(D::pressure).symbol + "]";
   svg::contour c;
-  for (const double s : gs) c.x.push_back(du.show(s, D::rotational_speed));
+  for (const double sp : gs) c.x.push_back(du.show(sp, D::rotational_speed));
   for (const double pp : gp) c.y.push_back(du.show(pp, D::pressure));
   for (std::size_t i = 0; i < ny; ++i) {
     std::vector<double> row;
-    for (std::size_t j = 0; j < nx; ++j) row.push_back(maps.back()[i * nx + j] * 100.0);
+    for (std::size_t j = 0; j < nx; ++j) row.push_back(res.maps.back().eta_t[i * nx + j] * 100.0);
     c.z.push_back(row);
   }
   for (const double l : setup.map_levels) c.levels.push_back(l * 100.0);
@@ -387,24 +227,15 @@ int run_test_stand(const stand_options& o) {
   r.tables.push_back(std::move(td));
   r.tables.push_back(std::move(tm));
   r.tables.push_back(std::move(tp));
+  r.tables.push_back(std::move(tdr));
   r.facts.emplace_back("Efficiency map", fmt::format("{} speeds x {} pressures at {}, {} model; in test_stand_map.csv "
                                                      "and test_stand_map.svg",
-                                                     nx, ny, show_quantity(setup.map_temperature_k, D::temperature, du, 3),
-                                                     model_name(models.back().model)));
+                                                     nx, ny, show_quantity(s.map_temperature_k, D::temperature, du, 3),
+                                                     map_model));
   r.notes.push_back("uncertainties: the stated instrument limits (per cent of reading plus absolute) as rectangular "
                     "distributions (GUM 4.3.7) unless given as standard; u(V_i) is the estimator's standard error; "
                     "flow and V_i taken as uncorrelated (JCGM 100:2008, first order)");
-  if (extrapolated > 0)
-    r.notes.push_back(fmt::format("{} of {} map points lie outside the tested pressures, speeds or viscosities: "
-                                  "extrapolated by the model, marked in the map CSV",
-                                  extrapolated, nx * ny));
-  if (implausible)
-    r.notes.push_back("some efficiencies exceed 100 % (status 'implausible'): check the displacement used and the "
-                      "flow correction");
-  if (regime_flow)
-    r.notes.push_back("some flow corrections span more than 150 K from the oil's reference temperature (flagged)");
-  if (est[2].st == status::regime)
-    r.notes.push_back("the two-step estimator had fewer than 5 speeds x 5 pressures (ISO 8426-1 asks for that grid)");
+  for (const auto& m : res.messages) r.notes.push_back(m.text);
 
   output_set files;
   files.add("test_stand_map.csv", render_csv(tmap, du));

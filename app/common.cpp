@@ -41,23 +41,6 @@ std::string_view trim(std::string_view s) {
   return s.substr(b, e - b + 1);
 }
 
-std::optional<double> parse_number(std::string_view text) {
-  const std::string t(trim(text));
-  if (t.empty()) return std::nullopt;
-  const char* start = t.c_str();
-  char* end = nullptr;
-  errno = 0;
-  const double v = std::strtod(start, &end);
-  if (end == start || *end != '\0' || errno == ERANGE || !std::isfinite(v)) return std::nullopt;
-  // strtod also reads "inf", "nan" and hexadecimal floats: refuse them in data files.
-  for (const char c : t) {
-    if (!(std::isdigit(static_cast<unsigned char>(c)) || c == '.' || c == '-' || c == '+' || c == 'e' ||
-          c == 'E'))
-      return std::nullopt;
-  }
-  return v;
-}
-
 std::optional<quantity_text> split_quantity(std::string_view text) {
   const std::string_view t = trim(text);
   // The number ends where a character no number can hold begins (but "e" only before a digit
@@ -77,40 +60,6 @@ std::optional<quantity_text> split_quantity(std::string_view text) {
   const auto num = parse_number(t.substr(0, i));
   if (!num) return std::nullopt;
   return quantity_text{*num, std::string(trim(t.substr(i)))};
-}
-
-const char* dimension_name(pumploss::dimension d) {
-  using D = pumploss::dimension;
-  switch (d) {
-    case D::pressure: return "pressure";
-    case D::volume_flow: return "volume flow";
-    case D::volume: return "volume";
-    case D::displacement: return "displacement";
-    case D::dynamic_viscosity: return "dynamic viscosity";
-    case D::kinematic_viscosity: return "kinematic viscosity";
-    case D::temperature: return "temperature";
-    case D::power: return "power";
-    case D::torque: return "torque";
-    case D::rotational_speed: return "speed";
-    case D::length: return "length";
-    case D::density: return "density";
-    case D::velocity: return "velocity";
-    case D::mass_flow: return "mass flow";
-    case D::specific_heat: return "specific heat";
-    case D::force: return "force";
-  }
-  return "?";
-}
-
-std::string units_of(pumploss::dimension d) {
-  std::string s;
-  for (int i = 0; i < pumploss::unit_count(); ++i) {
-    const auto* u = pumploss::unit_at(i);
-    if (u->dim != d) continue;
-    if (!s.empty()) s += ", ";
-    s += u->symbol;
-  }
-  return s;
 }
 
 double quantity_si(std::string_view text, pumploss::dimension dim) {

@@ -8,6 +8,7 @@
 #include <string>
 #include <string_view>
 
+#include "pumploss/table_reader.hpp"
 #include "pumploss/units.hpp"
 
 namespace plcli {
@@ -58,13 +59,13 @@ double quantity_si(std::string_view text, pumploss::dimension dim);
 double temperature_difference_k(std::string_view text);
 
 /// Plain name of a dimension ("pressure", "volume flow", ...).
-const char* dimension_name(pumploss::dimension d);
+using pumploss::dimension_name;
 
 /// Known unit symbols of a dimension, comma separated.
-std::string units_of(pumploss::dimension d);
+inline std::string units_of(pumploss::dimension d) { return pumploss::unit_symbols(d); }
 
 /// Parse a finite number filling the whole text (leading/trailing blanks allowed).
-std::optional<double> parse_number(std::string_view text);
+using pumploss::parse_number;
 
 /// Trim blanks (space, tab, CR).
 std::string_view trim(std::string_view s);

@@ -91,18 +91,18 @@ oil_spec read_oil_table(section& o) {
   return spec;
 }
 
-instrument read_instrument(section& parent, const char* key, D dim) {
-  instrument ins;
+pumploss::instrument_limits read_instrument(section& parent, const char* key, D dim) {
+  pumploss::instrument_limits ins;
   auto s = parent.table(key);
   if (const auto p = s.number_opt("reading_percent")) {
     if (!(*p >= 0 && *p < 50)) throw s.error("reading_percent", "must lie between 0 and 50");
     ins.reading_fraction = *p / 100.0;
   }
   if (s.has("absolute")) {
-    ins.absolute_si = dim == D::temperature ? s.temperature_step("absolute") : non_negative(s, "absolute", dim);
+    ins.absolute = dim == D::temperature ? s.temperature_step("absolute") : non_negative(s, "absolute", dim);
   }
   ins.rectangular = s.choice("kind", {"limits", "standard"}, "limits") == "limits";
-  if (ins.reading_fraction == 0 && ins.absolute_si == 0)
+  if (ins.reading_fraction == 0 && ins.absolute == 0)
     throw s.error_here("give 'reading_percent' and/or 'absolute' for the " + std::string(key) + " instrument");
   s.finish();
   return ins;
@@ -201,39 +201,49 @@ std::vector<column_spec> stand_columns() {
 }
 
 stand_setup read_stand_setup(const std::string& path) {
+  using pumploss::displacement_choice;
+  using pumploss::viscosity_temperature;
   auto root = load_config(path);
   stand_setup s;
+  auto& r = s.run;
   s.oil = read_oil_ref(root);
+  r.fluid = s.oil.props;
   auto m = root.table("machine");
   s.machine_name = m.text("name");
-  s.pump = m.choice("kind", {"pump", "motor"}) == "pump";
-  s.nominal_displacement_m3_rev = positive(m, "displacement", D::displacement);
-  s.viscosity_temperature = m.choice("viscosity_temperature", {"inlet", "outlet", "drain"}, "drain");
-  s.displacement_for_efficiency =
-      m.choice("displacement_for_efficiency", {"two-step", "intercept", "slope", "nominal"}, "two-step");
+  r.kind = m.choice("kind", {"pump", "motor"}) == "pump" ? pumploss::machine::pump : pumploss::machine::motor;
+  r.nominal_displacement_m3_rev = positive(m, "displacement", D::displacement);
+  const auto vt = m.choice("viscosity_temperature", {"inlet", "outlet", "drain"}, "drain");
+  r.viscosity_at = vt == "inlet" ? viscosity_temperature::inlet
+                   : vt == "outlet" ? viscosity_temperature::outlet
+                                    : viscosity_temperature::drain;
+  const auto de = m.choice("displacement_for_efficiency", {"two-step", "intercept", "slope", "nominal"}, "two-step");
+  r.displacement = de == "slope"       ? displacement_choice::slope
+                   : de == "intercept" ? displacement_choice::intercept
+                   : de == "nominal"   ? displacement_choice::nominal
+                                       : displacement_choice::two_step;
   m.finish();
   if (auto fm = root.table_opt("flow_meter")) {
-    s.meter_at_port = fm->choice("position", {"port", "return"}) == "port";
-    if (!s.meter_at_port) {
-      s.meter_pressure_pa = fm->quantity("pressure", D::pressure);
-      if (!(s.meter_pressure_pa > -1e5 && s.meter_pressure_pa < 1e8))
+    r.meter_at_port = fm->choice("position", {"port", "return"}) == "port";
+    if (!r.meter_at_port) {
+      r.meter_pressure_pa = fm->quantity("pressure", D::pressure);
+      if (!(r.meter_pressure_pa > -1e5 && r.meter_pressure_pa < 1e8))
         throw fm->error("pressure", "must be a gauge pressure between -1 bar and 1000 bar");
     }
     fm->finish();
   }
   auto ins = root.table("instruments");
-  s.speed = read_instrument(ins, "speed", D::rotational_speed);
-  s.pressure = read_instrument(ins, "pressure", D::pressure);
-  s.flow = read_instrument(ins, "flow", D::volume_flow);
-  s.torque = read_instrument(ins, "torque", D::torque);
+  r.speed = read_instrument(ins, "speed", D::rotational_speed);
+  r.pressure = read_instrument(ins, "pressure", D::pressure);
+  r.flow = read_instrument(ins, "flow", D::volume_flow);
+  r.torque = read_instrument(ins, "torque", D::torque);
   ins.finish();
   auto f = root.table("fit");
-  s.schloesser = f.choice("model", {"wilson", "wilson+schloesser"}, "wilson") == "wilson+schloesser";
+  r.fit_schloesser = f.choice("model", {"wilson", "wilson+schloesser"}, "wilson") == "wilson+schloesser";
   f.finish();
   auto map = root.table("map");
-  std::tie(s.map_speed_lo, s.map_speed_hi) = range_pair(map, "speeds", D::rotational_speed);
-  std::tie(s.map_dp_lo, s.map_dp_hi) = range_pair(map, "pressures", D::pressure);
-  s.map_temperature_k = map.quantity("temperature", D::temperature);
+  std::tie(r.map_speed_lo_rev_s, r.map_speed_hi_rev_s) = range_pair(map, "speeds", D::rotational_speed);
+  std::tie(r.map_dp_lo_pa, r.map_dp_hi_pa) = range_pair(map, "pressures", D::pressure);
+  r.map_temperature_k = map.quantity("temperature", D::temperature);
   for (const double p : map.number_list("levels_percent")) {
     if (!(p > 0 && p < 100)) throw map.error("levels_percent", "each level must lie between 0 and 100 %");
     s.map_levels.push_back(p / 100.0);

@@ -12,6 +12,7 @@
 #include "csv.hpp"
 #include "pumploss/fluid.hpp"
 #include "pumploss/piston_pump.hpp"
+#include "pumploss/test_stand.hpp"
 
 namespace plcli {
 
@@ -48,26 +49,12 @@ oil_file read_oil_file(const std::string& path);
 /// The oil of a configuration file: `oil = "oil.toml"` (relative to the file) or an [oil] table.
 oil_spec read_oil_ref(section& root);
 
-/// Uncertainty of one instrument: limits as per cent of reading plus an absolute part.
-struct instrument {
-  double reading_fraction = 0;  ///< e.g. 0.005 for 0.5 % of reading
-  double absolute_si = 0;       ///< absolute part in SI
-  bool rectangular = true;      ///< limits (u = a / sqrt 3) or a standard uncertainty
-};
-
-/// Test-stand setup (test_stand.toml) and data (CSV).
+/// Test-stand setup (test_stand.toml): what the library's reduction takes, plus what the
+/// report shows (names, contour levels).
 struct stand_setup {
   oil_spec oil;
   std::string machine_name;
-  bool pump = true;                        ///< pump or motor
-  double nominal_displacement_m3_rev = 0;  ///< maker's figure, for comparison only
-  std::string viscosity_temperature;       ///< "inlet", "outlet" or "drain": which column sets mu
-  std::string displacement_for_efficiency;  ///< "two-step", "intercept", "slope" or "nominal"
-  instrument speed, pressure, flow, torque;
-  bool meter_at_port = true;               ///< the flow column is read at the port (no correction)
-  double meter_pressure_pa = 0;            ///< gauge pressure at the flow meter (when not at the port)
-  bool schloesser = false;                 ///< also fit the Schloesser extension
-  double map_speed_lo = 0, map_speed_hi = 0, map_dp_lo = 0, map_dp_hi = 0, map_temperature_k = 0;
+  pumploss::test_stand_setup run;          ///< machine, oil, meter, instruments, fit, map grid
   std::vector<double> map_levels;          ///< overall efficiency contour levels (fractions)
 };
 stand_setup read_stand_setup(const std::string& path);
