@@ -73,6 +73,27 @@ struct column_ref {
   bool required;
 };
 
+// The readings of a column by its name ("outlet flow" and "inlet flow" both name the flow).
+const std::vector<double>* column_of(const test_stand_readings& d, const std::string& name) {
+  const std::pair<const char*, const std::vector<double>*> cols[] = {
+      {"speed", &d.speed_rev_s},
+      {"inlet pressure", &d.inlet_pressure_pa},
+      {"outlet pressure", &d.outlet_pressure_pa},
+      {"outlet flow", &d.flow_m3_s},
+      {"inlet flow", &d.flow_m3_s},
+      {"torque", &d.torque_n_m},
+      {"drain flow", &d.drain_flow_m3_s},
+      {"inlet temperature", &d.inlet_temperature_k},
+      {"outlet temperature", &d.outlet_temperature_k},
+      {"drain temperature", &d.drain_temperature_k},
+      {"meter temperature", &d.meter_temperature_k},
+      {"case pressure", &d.case_pressure_pa},
+  };
+  for (const auto& c : cols)
+    if (name == c.first) return c.second;
+  return nullptr;
+}
+
 // Check the setup's own values (a program's reader checks them too; an embedder may not).
 bool setup_ok(const test_stand_setup& s, run& r) {
   auto bad = [&](const char* setting, const char* text) {
@@ -190,6 +211,24 @@ double instrument_uncertainty(const instrument_limits& ins, double reading) {
   const auto a = standard_uncertainty(ins.absolute, uncertainty_basis::absolute, dist, reading);
   const auto b = standard_uncertainty(ins.reading_fraction * 100.0, uncertainty_basis::percent_of_reading, dist, reading);
   return a.value + b.value;
+}
+
+std::string describe(const test_stand_message& m, const test_stand_readings& readings) {
+  std::string out;
+  if (!m.setting.empty()) out += "setting " + m.setting + ": ";
+  if (m.row != no_row) out += "reading " + std::to_string(m.row + 1) + (m.column.empty() ? ": " : ", ");
+  if (!m.column.empty()) {
+    out += m.column;
+    const auto* v = column_of(readings, m.column);
+    if (m.follows_value && m.row != no_row && v != nullptr && m.row < v->size()) {
+      char buf[48];
+      std::snprintf(buf, sizeof buf, " %.6g", (*v)[m.row]);
+      out += buf;
+      return out + " (SI) " + m.text;
+    }
+    out += ": ";
+  }
+  return out + m.text;
 }
 
 const char* displacement_choice_name(displacement_choice c) noexcept {

@@ -175,6 +175,13 @@ struct test_stand_result {
 /// Wilson and Schloesser loss models as in docs/pages/theory_efficiency.md.
 test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_stand_readings& readings);
 
+/// A message as one sentence for a log or a C caller: "reading 8, speed: -8.333 is not a speed
+/// above zero (and below 60000 rpm)", "setting viscosity_at: ...", or the text alone.
+/// @param m a message of reduce_test_stand()
+/// @param readings the readings it came from (for the value of a reading; SI)
+/// @return the sentence
+std::string describe(const test_stand_message& m, const test_stand_readings& readings);
+
 /// The name of a displacement choice ("slope", "intercept", "two-step", "nominal").
 /// @param c the choice
 /// @return a static string
