@@ -2292,22 +2292,31 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_model(const pumploss_test_sta
                                                          double *c_st, double *c_v, double *c_f, double *t_c_n_m,
                                                          double *c_h, double *r2_flow, double *r2_torque);
 /**
- * The overall-efficiency map of a fitted model: the grid and eta_t[i * n_speed + j] at
- * (dp_pa[i], speed_rev_s[j]).
+ * The overall-efficiency map of a fitted model: eta_t[i * n_speed + j] at the i-th pressure and
+ * the j-th speed of the grid (pumploss_test_stand_map_axis()).
  * @param ts the handle
  * @param model_kind PUMPLOSS_MODEL_WILSON or PUMPLOSS_MODEL_SCHLOESSER
  * @param n_dp grid pressures (as set)
  * @param n_speed grid speeds (as set)
- * @param dp_pa receives the n_dp pressure differences, Pa
- * @param speed_rev_s receives the n_speed speeds, rev/s
  * @param eta_t receives the n_dp * n_speed overall efficiencies (NaN where a point failed)
  * @param status receives each grid point's status (PUMPLOSS_WEXTRAPOLATED outside the tests)
  * @return PUMPLOSS_OK or PUMPLOSS_WEXTRAPOLATED; PUMPLOSS_WPARTIAL when some point failed;
  *         PUMPLOSS_EBUFFER when the sizes differ from the grid; PUMPLOSS_EDATA (model not fitted).
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map(const pumploss_test_stand *ts, int model_kind, size_t n_dp,
-                                                       size_t n_speed, double dp_pa[], double speed_rev_s[],
-                                                       double eta_t[], int status[]);
+                                                       size_t n_speed, double eta_t[], int status[]);
+#define PUMPLOSS_TS_AXIS_PRESSURE 0  /**< pumploss_test_stand_map_axis(): the grid's pressure differences, Pa. */
+#define PUMPLOSS_TS_AXIS_SPEED 1     /**< pumploss_test_stand_map_axis(): the grid's speeds, rev/s. */
+/**
+ * One axis of the map's grid.
+ * @param ts the handle
+ * @param axis PUMPLOSS_TS_AXIS_PRESSURE or PUMPLOSS_TS_AXIS_SPEED
+ * @param count number of grid values on that axis (as set)
+ * @param values_si receives the values (Pa or rev/s)
+ * @return PUMPLOSS_OK; PUMPLOSS_EBUFFER when count differs; PUMPLOSS_EDOMAIN for an unknown axis.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map_axis(const pumploss_test_stand *ts, int axis, size_t count,
+                                                            double values_si[]);
 /** @} */
 /* pumploss:capi-test-stand (declarations of this subject go above this line) */
 

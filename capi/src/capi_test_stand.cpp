@@ -312,30 +312,21 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_model(const pumploss_test_sta
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map(const pumploss_test_stand* ts, int model_kind, size_t n_dp,
-                                                       size_t n_speed, double dp_pa[], double speed_rev_s[],
-                                                       double eta_t[], int status_out[]) {
+                                                       size_t n_speed, double eta_t[], int status_out[]) {
   const size_t total = n_dp * n_speed;
-  nan_fill(n_dp, {dp_pa});
-  nan_fill(n_speed, {speed_rev_s});
   nan_fill(total, {eta_t});
   if (status_out != nullptr)
     for (size_t i = 0; i < total; ++i) status_out[i] = PUMPLOSS_EMISUSE;
-  if (ts == nullptr || dp_pa == nullptr || speed_rev_s == nullptr || eta_t == nullptr || status_out == nullptr)
-    return PUMPLOSS_EMISUSE;
-  if (model_kind != PUMPLOSS_MODEL_WILSON && model_kind != PUMPLOSS_MODEL_SCHLOESSER) {
-    for (size_t i = 0; i < total; ++i) status_out[i] = PUMPLOSS_EDOMAIN;
-    return PUMPLOSS_EDOMAIN;
-  }
+  if (ts == nullptr || eta_t == nullptr || status_out == nullptr) return PUMPLOSS_EMISUSE;
   const auto* m = map_of(ts, model_kind);
-  const int refusal = m == nullptr ? PUMPLOSS_EDATA
+  const int refusal = model_kind != PUMPLOSS_MODEL_WILSON && model_kind != PUMPLOSS_MODEL_SCHLOESSER ? PUMPLOSS_EDOMAIN
+                      : m == nullptr                                                                ? PUMPLOSS_EDATA
                       : (n_dp != ts->r.map_dp_pa.size() || n_speed != ts->r.map_speed_rev_s.size()) ? PUMPLOSS_EBUFFER
-                                                                                                       : PUMPLOSS_OK;
+                                                                                                    : PUMPLOSS_OK;
   if (refusal != PUMPLOSS_OK) {
     for (size_t i = 0; i < total; ++i) status_out[i] = refusal;
     return refusal;
   }
-  for (size_t i = 0; i < n_dp; ++i) dp_pa[i] = ts->r.map_dp_pa[i];
-  for (size_t j = 0; j < n_speed; ++j) speed_rev_s[j] = ts->r.map_speed_rev_s[j];
   status summary = status::ok;
   bool failed = false;
   for (size_t k = 0; k < total; ++k) {
@@ -345,6 +336,17 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map(const pumploss_test_stand
     else if (summary == status::ok) summary = m->st[k];
   }
   return failed ? PUMPLOSS_WPARTIAL : static_cast<int>(summary);
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map_axis(const pumploss_test_stand* ts, int axis, size_t count,
+                                                            double values_si[]) {
+  nan_fill(count, {values_si});
+  if (ts == nullptr || values_si == nullptr) return PUMPLOSS_EMISUSE;
+  if (axis != PUMPLOSS_TS_AXIS_PRESSURE && axis != PUMPLOSS_TS_AXIS_SPEED) return PUMPLOSS_EDOMAIN;
+  const auto& v = axis == PUMPLOSS_TS_AXIS_PRESSURE ? ts->r.map_dp_pa : ts->r.map_speed_rev_s;
+  if (count != v.size()) return PUMPLOSS_EBUFFER;
+  for (size_t i = 0; i < count; ++i) values_si[i] = v[i];
+  return PUMPLOSS_OK;
 }
 
 }  // extern "C"

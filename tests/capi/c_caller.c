@@ -626,8 +626,12 @@ static void test_test_stand(void) {
         PUMPLOSS_OK && c[1] == 0.0 && c[6] > 0.99);
   CHECK(pumploss_test_stand_model(t, PUMPLOSS_MODEL_SCHLOESSER, &c[0], &c[1], &c[2], &c[3], &c[4], &c[5], &c[6],
                                   &c[7]) == PUMPLOSS_EDATA && is_nan(c[0]));
-  code = pumploss_test_stand_map(t, PUMPLOSS_MODEL_WILSON, 4, 5, mdp, msp, meta, mst);
-  CHECK(!(code > 0 && code < 100) && mdp[0] == 20e5 && meta[19] > 0.5 && meta[19] < 1.0);
+  code = pumploss_test_stand_map(t, PUMPLOSS_MODEL_WILSON, 4, 5, meta, mst);
+  CHECK(!(code > 0 && code < 100) && meta[19] > 0.5 && meta[19] < 1.0);
+  CHECK(pumploss_test_stand_map(t, PUMPLOSS_MODEL_WILSON, 3, 5, meta, mst) == PUMPLOSS_EBUFFER && is_nan(meta[0]));
+  CHECK(pumploss_test_stand_map_axis(t, PUMPLOSS_TS_AXIS_PRESSURE, 4, mdp) == PUMPLOSS_OK && mdp[0] == 20e5 &&
+        mdp[3] == 250e5);
+  CHECK(pumploss_test_stand_map_axis(t, PUMPLOSS_TS_AXIS_SPEED, 5, msp) == PUMPLOSS_OK && near_rel(msp[4], 25.0, 1e-15));
   CHECK(pumploss_test_stand_message(t, 99, msg, sizeof msg) == PUMPLOSS_EDATA && msg[0] == '\0');
   pumploss_test_stand_destroy(t);
   t = NULL;
