@@ -1,6 +1,6 @@
 // pumploss budget: the case drain leakage budget of a described piston pump over a pressure
-// sweep: every path's flow and share, the sensitivity of the total to each gap, a table and a
-// stacked SVG.
+// sweep (pumploss::sweep_piston_pump): every path's flow and share, the sensitivity of the total
+// to each gap, a table and a stacked SVG.
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
 
@@ -10,6 +10,7 @@
 #include "common.hpp"
 #include "inputs.hpp"
 #include "pumploss/piston_pump.hpp"
+#include "pumploss/workflows.hpp"
 #include "pumploss/version.hpp"
 #include "svg.hpp"
 
@@ -101,21 +102,29 @@ int run_budget(const budget_options& o) {
   svg::stack st;
   for (const int k : paths) st.names.push_back(pumploss::leakage_path_name(static_cast<leakage_path>(k)));
   st.layers.resize(paths.size());
-  status worst_st = status::ok;
-  double max_re = 0;
   const double one_um_flow = du.show(1.0, D::volume_flow) * 1e-6;  // display flow per m^3/s, times 1 um
-  for (int i = 0;; ++i) {
-    const double pout = p.sweep_from_pa + i * p.sweep_step_pa;
-    if (pout > p.sweep_to_pa * (1 + 1e-12)) break;
-    const pumploss::pump_operating_point<double> op{pout, p.sweep_case_pa, p.sweep_speed_rev_s,
-                                                    p.sweep_displacement_fraction, p.sweep_temperature_k};
-    const auto b = pumploss::piston_pump_budget(g, oil, op);
-    if (pumploss::is_error(b.st))
-      throw std::runtime_error(o.pump + ": no leakage budget at " + show_quantity(pout, D::pressure, du) + ": " +
-                               pumploss::status_message(static_cast<int>(b.st)));
-    const auto s = pumploss::piston_pump_sensitivity(g, oil, op);
-    worst_st = pumploss::worst(worst_st, b.st);
-    max_re = std::max(max_re, b.max_gap_reynolds);
+  pumploss::pump_sweep sw;
+  sw.from_pa = p.sweep_from_pa;
+  sw.to_pa = p.sweep_to_pa;
+  sw.step_pa = p.sweep_step_pa;
+  sw.case_pa = p.sweep_case_pa;
+  sw.speed_rev_s = p.sweep_speed_rev_s;
+  sw.displacement_fraction = p.sweep_displacement_fraction;
+  sw.temperature_k = p.sweep_temperature_k;
+  // the budget at the health reference state, next to the measured baseline
+  sw.with_reference = true;
+  sw.reference = {p.reference_dp_pa + p.sweep_case_pa, p.sweep_case_pa, p.reference_speed_rev_s, 1.0,
+                  p.reference_temperature_k};
+  const auto res = pumploss::sweep_piston_pump(g, oil, sw);
+  if (pumploss::is_error(res.st)) {
+    const double pout = p.sweep_from_pa + static_cast<double>(res.failed_point) * p.sweep_step_pa;
+    throw std::runtime_error(o.pump + ": no leakage budget at " + show_quantity(pout, D::pressure, du) + ": " +
+                             pumploss::status_message(static_cast<int>(res.st)));
+  }
+  for (const auto& pt : res.points) {
+    const auto& b = pt.budget;
+    const auto& s = pt.sensitivity;
+    const double pout = pt.outlet_pa;
     std::vector<cell> rf = {pout}, rs = {pout}, rz = {pout};
     for (std::size_t j = 0; j < paths.size(); ++j) {
       rf.emplace_back(b.flow_m3_s[paths[j]]);
@@ -132,6 +141,8 @@ int run_budget(const budget_options& o) {
     tz.rows.push_back(std::move(rz));
     st.x.push_back(du.show(pout, D::pressure));
   }
+  const status worst_st = res.st;
+  const double max_re = res.max_gap_reynolds;
 
   report r;
   r.title = "Leakage budget: " + p.name;
@@ -151,10 +162,7 @@ int run_budget(const budget_options& o) {
                                             show_quantity(p.sweep_speed_rev_s, D::rotational_speed, du),
                                             show_quantity(p.sweep_temperature_k, D::temperature, du, 3),
                                             100 * p.sweep_displacement_fraction));
-  // the budget at the health reference state, next to the measured baseline
-  const pumploss::pump_operating_point<double> ref_op{p.reference_dp_pa + p.sweep_case_pa, p.sweep_case_pa,
-                                                      p.reference_speed_rev_s, 1.0, p.reference_temperature_k};
-  const auto br = pumploss::piston_pump_budget(g, oil, ref_op);
+  const auto& br = res.reference;
   if (pumploss::is_usable(br.st))
     r.facts.emplace_back("At the health reference",
                          fmt::format("{} predicted at {}, {}, {}; measured baseline {} ({:+.0f} %)",

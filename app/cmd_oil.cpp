@@ -1,6 +1,7 @@
 // pumploss oil: kinematic and dynamic viscosity and density of a hydraulic oil over temperature
 // (ASTM D341 line through two points, or an ISO VG grade plus one point), checked against the
-// pump maker's viscosity limits when the oil file gives them; table, CSV and an SVG plot.
+// pump maker's viscosity limits when the oil file gives them (pumploss::tabulate_oil); table,
+// CSV and an SVG plot.
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
 
@@ -11,6 +12,7 @@
 #include "common.hpp"
 #include "inputs.hpp"
 #include "pumploss/fluid.hpp"
+#include "pumploss/workflows.hpp"
 #include "pumploss/version.hpp"
 #include "svg.hpp"
 
@@ -98,16 +100,26 @@ int run_oil(const oil_options& o) {
                                                show_quantity(f.oil.t2_k, D::temperature, du));
   r.facts.emplace_back("ASTM D341 line", fmt::format("log10 log10 Z = {:.5f} - {:.5f} log10 T, T in K", oil.viscosity.a,
                                                      oil.viscosity.b));
+  pumploss::viscosity_limits lim;
+  if (f.min_nu_m2_s) lim.min_m2_s = *f.min_nu_m2_s;
+  if (f.max_nu_m2_s) lim.max_m2_s = *f.max_nu_m2_s;
+  if (f.max_start_nu_m2_s) lim.max_start_m2_s = *f.max_start_nu_m2_s;
+  const auto tab = pumploss::tabulate_oil(oil, temps, lim, f.oil.grade.value_or(0));
+  if (pumploss::is_error(tab.st)) {
+    if (tab.failed_row < temps.size())
+      throw std::invalid_argument(fmt::format("oil: no properties at {}: {}",
+                                              show_quantity(temps[tab.failed_row], D::temperature, du),
+                                              pumploss::status_message(static_cast<int>(tab.st))));
+    throw std::invalid_argument(std::string("oil: ") + pumploss::status_message(static_cast<int>(tab.st)));
+  }
   if (f.oil.grade) {
     const auto g = pumploss::iso_vg(*f.oil.grade).value;
-    const auto nu40 = pumploss::d341_viscosity(oil.viscosity, 313.15).value;
-    const bool inside = nu40 >= g.min_m2_s && nu40 <= g.max_m2_s;
     r.facts.emplace_back(
         "ISO 3448 grade",
         fmt::format("VG {}: {} at {}, band {} to {}: {}", g.grade,
-                    show_quantity(nu40, D::kinematic_viscosity, du), show_quantity(313.15, D::temperature, du, 3),
+                    show_quantity(tab.nu40_m2_s, D::kinematic_viscosity, du), show_quantity(313.15, D::temperature, du, 3),
                     show_quantity(g.min_m2_s, D::kinematic_viscosity, du),
-                    show_quantity(g.max_m2_s, D::kinematic_viscosity, du), inside ? "inside" : "OUTSIDE"));
+                    show_quantity(g.max_m2_s, D::kinematic_viscosity, du), tab.inside_grade ? "inside" : "OUTSIDE"));
   }
   r.facts.emplace_back("Density", show_quantity(oil.rho_ref_kg_m3, D::density, du) + " at " +
                                       show_quantity(oil.t_ref_k, D::temperature, du) +
@@ -136,28 +148,20 @@ int run_oil(const oil_options& o) {
             {"density", cell_kind::quantity, D::density, 4}};
   if (have_limits) t.cols.push_back({"viscosity check", cell_kind::text, D::pressure, 0});
   svg::series nu_series{"kinematic viscosity", {}, {}, true, true, false};
-  bool regime = false;
-  for (const double tk : temps) {
-    const auto nu = pumploss::oil_kinematic_viscosity(oil, tk);
-    const auto rho = pumploss::oil_density_at(oil, tk, 0.0);
-    const auto mu = pumploss::oil_dynamic_viscosity(oil, tk, 0.0);
-    if (!nu.usable() || !rho.usable() || !mu.usable())
-      throw std::invalid_argument(fmt::format("oil: no properties at {}: {}", show_quantity(tk, D::temperature, du),
-                                              pumploss::status_message(static_cast<int>(
-                                                  !nu.usable() ? nu.st : (!rho.usable() ? rho.st : mu.st)))));
-    if (nu.st != pumploss::status::ok || rho.st != pumploss::status::ok) regime = true;
-    std::vector<cell> row = {tk, nu.value, mu.value, rho.value};
+  for (const auto& row : tab.rows) {
+    std::vector<cell> cells = {row.t_k, row.nu_m2_s, row.mu_pa_s, row.rho_kg_m3};
     if (have_limits) {
-      std::string check = "ok";
-      if (f.max_start_nu_m2_s && nu.value > *f.max_start_nu_m2_s) check = "TOO THICK to start";
-      else if (f.max_nu_m2_s && nu.value > *f.max_nu_m2_s) check = "start only (above running max)";
-      else if (f.min_nu_m2_s && nu.value < *f.min_nu_m2_s) check = "TOO THIN (below min)";
-      row.emplace_back(check);
+      using V = pumploss::viscosity_verdict;
+      cells.emplace_back(row.verdict == V::too_thick_to_start ? "TOO THICK to start"
+                         : row.verdict == V::start_only       ? "start only (above running max)"
+                         : row.verdict == V::too_thin         ? "TOO THIN (below min)"
+                                                              : "ok");
     }
-    t.rows.push_back(std::move(row));
-    nu_series.x.push_back(du.show(tk, D::temperature));
-    nu_series.y.push_back(du.show(nu.value, D::kinematic_viscosity));
+    t.rows.push_back(std::move(cells));
+    nu_series.x.push_back(du.show(row.t_k, D::temperature));
+    nu_series.y.push_back(du.show(row.nu_m2_s, D::kinematic_viscosity));
   }
+  const bool regime = tab.st != pumploss::status::ok;
   r.tables.push_back(std::move(t));
   if (regime)
     r.notes.push_back("some temperatures lie outside the range where the viscosity or density relation is stated "
