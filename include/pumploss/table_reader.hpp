@@ -41,8 +41,8 @@ enum class column_kind : int {
 /// One expected column.
 struct column_spec {
   std::string name;  ///< name in the header, compared without case and outer blanks
-  column_kind kind = column_kind::quantity;
-  dimension dim = dimension::pressure;  ///< for quantity columns
+  column_kind kind = column_kind::quantity;  ///< what the column holds
+  dimension dim = dimension::pressure;       ///< the quantity of a quantity column
   bool required = true;       ///< a missing optional column is fine; a missing required one is an error
   bool allow_missing = false; ///< an empty field is a missing value (NaN) instead of an error
 };
@@ -104,7 +104,9 @@ table_data read_table_file(const std::string& path, const std::vector<column_spe
 std::optional<double> parse_number(std::string_view text);
 
 /// Days since 1970-01-01 of a proleptic Gregorian date (no validation).
-/// @param y year @param m month 1-12 @param d day 1-31
+/// @param y year
+/// @param m month 1-12
+/// @param d day 1-31
 /// @return the day number
 /// @par Source
 /// H. Hinnant, "chrono-Compatible Low-Level Date Algorithms" (public domain), days_from_civil.

@@ -74,14 +74,19 @@ struct test_stand_setup {
   machine kind = machine::pump;             ///< pump (flow at the outlet) or motor (flow at the inlet)
   double nominal_displacement_m3_rev = 0;   ///< the maker's figure, m^3/rev (> 0)
   oil<double> fluid{};                      ///< the oil (D341 line, density, expansion, bulk modulus)
-  viscosity_temperature viscosity_at = viscosity_temperature::drain;
-  displacement_choice displacement = displacement_choice::two_step;
+  viscosity_temperature viscosity_at = viscosity_temperature::drain;  ///< which temperature sets the viscosity
+  displacement_choice displacement = displacement_choice::two_step;    ///< which displacement the efficiencies use
   bool meter_at_port = true;                ///< the flow is read at the port (no correction)
   double meter_pressure_pa = 0;             ///< gauge pressure at a meter in the return line, Pa
-  instrument_limits speed, pressure, flow, torque;  ///< stated limits (SI absolute parts)
+  instrument_limits speed;                  ///< speed meter's stated limits (absolute part in rev/s)
+  instrument_limits pressure;               ///< pressure transducers' stated limits (absolute part in Pa)
+  instrument_limits flow;                   ///< flow meter's stated limits (absolute part in m^3/s)
+  instrument_limits torque;                 ///< torque meter's stated limits (absolute part in N m)
   bool fit_schloesser = false;              ///< also fit the Schloesser extension
-  double map_speed_lo_rev_s = 0, map_speed_hi_rev_s = 0;  ///< map speed range, rev/s
-  double map_dp_lo_pa = 0, map_dp_hi_pa = 0;              ///< map pressure-difference range, Pa
+  double map_speed_lo_rev_s = 0;            ///< lowest map speed, rev/s
+  double map_speed_hi_rev_s = 0;            ///< highest map speed, rev/s
+  double map_dp_lo_pa = 0;                  ///< lowest map pressure difference, Pa
+  double map_dp_hi_pa = 0;                  ///< highest map pressure difference, Pa
   double map_temperature_k = 0;             ///< oil temperature of the map, K
   std::size_t map_speeds = 29;              ///< grid columns (2 or more)
   std::size_t map_pressures = 27;           ///< grid rows (2 or more)
@@ -115,13 +120,16 @@ struct test_stand_message {
 
 /// One operating point after reduction.
 struct test_stand_point {
-  double speed_rev_s = 0, dp_pa = 0;        ///< speed and pressure difference across the machine
+  double speed_rev_s = 0;                   ///< speed, rev/s
+  double dp_pa = 0;                         ///< pressure difference across the machine, Pa
   double flow_m3_s = 0;                     ///< flow at the port (corrected where the meter is elsewhere)
-  double torque_n_m = 0, mu_pa_s = 0;       ///< torque; viscosity in the gaps
+  double torque_n_m = 0;                    ///< torque, N m
+  double mu_pa_s = 0;                       ///< viscosity in the gaps, Pa s
   efficiency_uncertainty<double> eta{};     ///< efficiencies with their GUM uncertainties (U = k u, k = 2)
   double flow_residual_m3_s = 0;            ///< residual of the first fitted model's flow
   double torque_residual_n_m = 0;           ///< residual of the first fitted model's torque
-  std::size_t speed_level = 0, pressure_level = 0;  ///< set-point levels of the grid
+  std::size_t speed_level = 0;              ///< speed set-point level (0 the lowest)
+  std::size_t pressure_level = 0;           ///< pressure set-point level (0 the lowest)
   status st = status::ok;                   ///< the point's efficiency status (ok, implausible)
 };
 
@@ -134,7 +142,7 @@ struct test_stand_drain {
 
 /// The overall-efficiency map of one fitted model.
 struct test_stand_map {
-  loss_model_kind model = loss_model_kind::wilson;
+  loss_model_kind model = loss_model_kind::wilson;  ///< the model mapped
   std::vector<double> eta_t;   ///< row-major [pressure index][speed index]
   std::vector<status> st;      ///< per grid point (ok, extrapolated, or an error)
 };
@@ -143,11 +151,12 @@ struct test_stand_map {
 struct test_stand_result {
   status st = status::ok;                        ///< worst status of the run (error: the reduction stopped)
   std::vector<test_stand_message> messages;      ///< errors and reports, in the order they arose
-  std::size_t speed_levels = 0, pressure_levels = 0;  ///< set-point levels found
+  std::size_t speed_levels = 0;                  ///< speed set-point levels found
+  std::size_t pressure_levels = 0;               ///< pressure set-point levels found
   std::array<displacement_result<double>, 3> estimators{};  ///< slope, intercept, two-step
   double displacement_m3_rev = 0;                ///< V_i used for the efficiencies
   double u_displacement_m3_rev = 0;              ///< its standard uncertainty (0 for the nominal figure)
-  displacement_choice displacement_used = displacement_choice::two_step;
+  displacement_choice displacement_used = displacement_choice::two_step;  ///< where displacement_m3_rev came from
   bool flow_corrected = false;                    ///< the flow was corrected to port conditions
   std::vector<test_stand_point> points;          ///< per reading
   std::vector<test_stand_drain> drain;           ///< per reading

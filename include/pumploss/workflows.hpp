@@ -42,7 +42,7 @@ struct oil_property_row {
   double mu_pa_s = 0;       ///< dynamic viscosity at zero gauge pressure, Pa s
   double rho_kg_m3 = 0;     ///< density at zero gauge pressure, kg/m^3
   status st = status::ok;   ///< worst status of the three (regime outside the stated ranges)
-  viscosity_verdict verdict = viscosity_verdict::not_checked;
+  viscosity_verdict verdict = viscosity_verdict::not_checked;  ///< against the maker's limits
 };
 
 /// An oil's properties over temperature.
@@ -68,7 +68,9 @@ oil_property_table tabulate_oil(const oil<double>& o, const std::vector<double>&
 
 /// A pressure sweep of a piston pump at one speed, temperature and displacement.
 struct pump_sweep {
-  double from_pa = 0, to_pa = 0, step_pa = 0;  ///< outlet pressures (gauge), Pa: from, to (inclusive), step
+  double from_pa = 0;                          ///< first outlet pressure (gauge), Pa
+  double to_pa = 0;                            ///< last outlet pressure (inclusive), Pa
+  double step_pa = 0;                          ///< pressure step, Pa
   double case_pa = 0;                          ///< case pressure (gauge), Pa
   double speed_rev_s = 0;                      ///< rev/s
   double displacement_fraction = 1;            ///< 0..1
