@@ -735,6 +735,30 @@ TEST(CliMalformed, EveryCommandNamesTheLineAndWritesNothing) {
   }
 }
 
+TEST(CliMalformed, SetupAndDataThatDoNotFitNameTheSetup) {
+  // the setup takes the viscosity at the drain temperature; the data lack that column: the
+  // library's refusal names the setting, the program the setup file
+  temp_dir tmp;
+  std::stringstream in(demo_stand());
+  std::string line, csv;
+  while (std::getline(in, line)) {
+    if (!line.empty() && line[0] != '#') {
+      std::size_t at = 0;
+      for (int k = 0; k < 8; ++k) at = line.find(',', at) + 1;
+      line.erase(at - 1, line.find(',', at) - at + 1);  // the 9th field: drain temperature
+    }
+    csv += line + "\n";
+  }
+  ASSERT_EQ(csv.find("drain temperature"), std::string::npos);
+  const std::string file = tmp / "stand.csv", out = tmp / "out";
+  write_file(file, csv);
+  const auto r = run({"test-stand", file, "--setup", kDemo + "/test_stand.toml", "--out", out}, tmp);
+  EXPECT_EQ(r.code, 2) << r.err;
+  EXPECT_NE(r.err.find(kDemo + "/test_stand.toml: "), std::string::npos) << r.err;
+  EXPECT_NE(r.err.find("'drain temperature'"), std::string::npos) << r.err;
+  EXPECT_FALSE(fs::exists(out));
+}
+
 TEST(CliMalformed, EmptyFieldReadings) {
   temp_dir tmp;
   const std::string file = tmp / "empty.csv", out = tmp / "out";
