@@ -10,7 +10,7 @@ here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$here"
 out="${1:-out/demo}"
 demo=examples/demo
-program=examples/cli/pumploss   # the program inside a build folder (target pumploss_cli)
+program=app/pumploss   # the program inside a build folder (target pumploss_cli)
 
 bash scripts/setup.sh
 build="${PUMPLOSS_DEMO_BUILD:-build-demo}"

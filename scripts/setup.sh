@@ -16,7 +16,7 @@ PACKAGES=(
   g++-mingw-w64-x86-64                             # Windows x64 DLL cross-build
   wine64                                           # runs a C test against the DLL
   libclang-rt-dev gcovr linux-perf                 # libFuzzer runtime, coverage report, profiling
-  libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (examples/cli)
+  libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (app/)
 )
 
 missing=()

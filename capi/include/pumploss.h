@@ -2120,6 +2120,263 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_path_name(int path);
  *  @return "piston", "slipper", ... or "unknown" (static storage) */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_group_name(int group);
 /** @} */
+/* pumploss:capi-pump (declarations of this subject go above this line) */
+
+/* ==== capi ==== */
+/* pumploss:capi-capi (declarations of this subject go above this line) */
+
+/* ==== test stand ==== */
+/** @name Test-stand data reduction (opaque handles)
+ *  The whole reduction of a pump or motor test as one call (pumploss::reduce_test_stand): the
+ *  flow corrected to the port, the derived displacement by three estimators (ISO 8426-1),
+ *  efficiencies of every point with their expanded uncertainty (GUM, k = 2), Wilson (and
+ *  Schloesser) loss models and the overall-efficiency map. A pumploss_test_stand_setup holds how
+ *  the test was made (changed by its set functions, not while others use it); a
+ *  pumploss_test_stand holds one reduction, computed completely by pumploss_test_stand_create()
+ *  and never changed afterwards: its functions only read it, so any number of threads may read
+ *  one handle at once. Results are engineering estimates; the pump maker's acceptance rules
+ *  govern. @{ */
+/** Opaque test-stand setup: machine, oil, flow meter, instruments, method, map grid. */
+typedef struct pumploss_test_stand_setup pumploss_test_stand_setup;
+/** Opaque reduced test: every result of one reduction (read-only after creation). */
+typedef struct pumploss_test_stand pumploss_test_stand;
+#define PUMPLOSS_TS_VISCOSITY_INLET 0     /**< Viscosity in the gaps at the inlet temperature. */
+#define PUMPLOSS_TS_VISCOSITY_OUTLET 1    /**< ... at the outlet temperature. */
+#define PUMPLOSS_TS_VISCOSITY_DRAIN 2     /**< ... at the drain temperature (the default). */
+#define PUMPLOSS_TS_DISPLACEMENT_SLOPE 0      /**< Displacement: slope of flow over speed at the lowest pressure. */
+#define PUMPLOSS_TS_DISPLACEMENT_INTERCEPT 1  /**< Displacement: zero-pressure intercept at the highest speed. */
+#define PUMPLOSS_TS_DISPLACEMENT_TWO_STEP 2   /**< Displacement: two-step method over the grid (the default). */
+#define PUMPLOSS_TS_DISPLACEMENT_NOMINAL 3    /**< Displacement: the maker's nominal figure. */
+#define PUMPLOSS_TS_DISPLACEMENT_USED 4       /**< pumploss_test_stand_displacement(): the value the efficiencies used. */
+#define PUMPLOSS_TS_SPEED 0     /**< Instrument: speed (absolute part in rev/s). */
+#define PUMPLOSS_TS_PRESSURE 1  /**< Instrument: pressure (absolute part in Pa). */
+#define PUMPLOSS_TS_FLOW 2      /**< Instrument: flow (absolute part in m^3/s). */
+#define PUMPLOSS_TS_TORQUE 3    /**< Instrument: torque (absolute part in N m). */
+#define PUMPLOSS_TS_STANDARD 0  /**< Instrument figures are standard uncertainties. */
+#define PUMPLOSS_TS_LIMITS 1    /**< Instrument figures are limits (rectangular, u = a/sqrt(3)). */
+#define PUMPLOSS_TS_METER_AT_PORT 1    /**< The flow meter reads at the port (no correction). */
+#define PUMPLOSS_TS_METER_IN_RETURN 0  /**< The meter sits in the return line: corrected to the port. */
+/**
+ * Create a setup: the machine and its oil (ASTM D341 line through two points; density,
+ * expansion and bulk modulus of a typical mineral oil until pumploss_test_stand_setup_set_oil()).
+ * Defaults: viscosity at the drain temperature, two-step displacement, Wilson model, meter at
+ * the port, no instrument uncertainty, map 29 speeds x 27 pressures (its range must be set).
+ * @param machine_kind PUMPLOSS_PUMP or PUMPLOSS_MOTOR
+ * @param nominal_displacement_m3_rev the maker's displacement, m^3/rev (> 0)
+ * @param t1_k first viscosity point: temperature, K
+ * @param nu1_m2_s first viscosity point: kinematic viscosity, m^2/s
+ * @param t2_k second viscosity point: temperature, K
+ * @param nu2_m2_s second viscosity point: kinematic viscosity, m^2/s
+ * @param out receives the handle (NULL on error); free it with pumploss_test_stand_setup_destroy()
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE, PUMPLOSS_ENOMEM.
+ * @sa pumploss::test_stand_setup
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_create(int machine_kind, double nominal_displacement_m3_rev,
+                                                                double t1_k, double nu1_m2_s, double t2_k,
+                                                                double nu2_m2_s, pumploss_test_stand_setup **out);
+/** Destroy a setup; NULL is a no-op.
+ *  @param setup the handle */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_test_stand_setup_destroy(pumploss_test_stand_setup *setup);
+/**
+ * The oil's density, expansion and bulk modulus (for the flow correction and the Schloesser terms).
+ * @param setup the handle
+ * @param rho_kg_m3 density at t_ref_k and zero gauge pressure, kg/m^3 (> 0)
+ * @param t_ref_k its temperature, K (> 0)
+ * @param alpha_per_k volumetric expansion coefficient, 1/K (0 to 0.01)
+ * @param bulk_modulus_pa isothermal secant bulk modulus, Pa (> 0)
+ * @return PUMPLOSS_OK or an error (the setup is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_oil(pumploss_test_stand_setup *setup, double rho_kg_m3,
+                                                                 double t_ref_k, double alpha_per_k,
+                                                                 double bulk_modulus_pa);
+/**
+ * The method: which temperature sets the viscosity, which displacement the efficiencies use,
+ * which loss models are fitted.
+ * @param setup the handle
+ * @param viscosity_temperature PUMPLOSS_TS_VISCOSITY_INLET, _OUTLET or _DRAIN
+ * @param displacement PUMPLOSS_TS_DISPLACEMENT_SLOPE, _INTERCEPT, _TWO_STEP or _NOMINAL
+ * @param fit_model PUMPLOSS_MODEL_WILSON, or PUMPLOSS_MODEL_SCHLOESSER to fit both
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for an unknown choice; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_method(pumploss_test_stand_setup *setup,
+                                                                    int viscosity_temperature, int displacement,
+                                                                    int fit_model);
+/**
+ * Where the flow meter sits.
+ * @param setup the handle
+ * @param meter_position PUMPLOSS_TS_METER_AT_PORT, or PUMPLOSS_TS_METER_IN_RETURN (the readings
+ *        then need the meter temperature and the port's temperature)
+ * @param meter_pressure_pa gauge pressure at a return-line meter, Pa (-1e5 to 1e8; ignored at the port)
+ * @return PUMPLOSS_OK or an error (the setup is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_meter(pumploss_test_stand_setup *setup,
+                                                                   int meter_position, double meter_pressure_pa);
+/**
+ * The stated uncertainty of one instrument: per cent of reading plus an absolute part.
+ * @param setup the handle
+ * @param instrument PUMPLOSS_TS_SPEED, _PRESSURE, _FLOW or _TORQUE
+ * @param reading_percent per cent of reading (0 to 50)
+ * @param absolute_si absolute part in the instrument's SI unit (rev/s, Pa, m^3/s, N m; >= 0)
+ * @param distribution PUMPLOSS_TS_LIMITS or PUMPLOSS_TS_STANDARD
+ * @return PUMPLOSS_OK or an error (the setup is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_instrument(pumploss_test_stand_setup *setup,
+                                                                        int instrument, double reading_percent,
+                                                                        double absolute_si, int distribution);
+/**
+ * The grid of the overall-efficiency map and its oil temperature.
+ * @param setup the handle
+ * @param speed_lo_rev_s lowest speed, rev/s (>= 0)
+ * @param speed_hi_rev_s highest speed, rev/s (> speed_lo_rev_s)
+ * @param dp_lo_pa lowest pressure difference, Pa (>= 0)
+ * @param dp_hi_pa highest pressure difference, Pa (> dp_lo_pa)
+ * @param t_k oil temperature of the map, K
+ * @param speeds number of grid speeds (2 to 10000)
+ * @param pressures number of grid pressures (2 to 10000)
+ * @return PUMPLOSS_OK or an error (the setup is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_map(pumploss_test_stand_setup *setup,
+                                                                 double speed_lo_rev_s, double speed_hi_rev_s,
+                                                                 double dp_lo_pa, double dp_hi_pa, double t_k,
+                                                                 size_t speeds, size_t pressures);
+/**
+ * Reduce a test: every result is computed here and kept in the handle.
+ * A temperature that was not measured is passed as an array of NaN.
+ * @param setup the setup (only read)
+ * @param count number of readings
+ * @param speed_rev_s speeds, rev/s
+ * @param inlet_pressure_pa inlet gauge pressures, Pa
+ * @param outlet_pressure_pa outlet gauge pressures, Pa
+ * @param flow_m3_s flows as the meter read them (pump outlet, motor inlet), m^3/s
+ * @param torque_n_m shaft torques, N m
+ * @param drain_flow_m3_s case drain flows, m^3/s
+ * @param inlet_t_k inlet temperatures, K
+ * @param outlet_t_k outlet temperatures, K (all NaN: not measured)
+ * @param drain_t_k drain temperatures, K (all NaN: not measured)
+ * @param meter_t_k temperatures at the flow meter, K (all NaN: not measured)
+ * @param message receives the first message as a sentence (why an error stopped the reduction,
+ *        or the first report), "" when there is none; may be NULL with message_capacity 0
+ * @param message_capacity size of message in bytes
+ * @param out receives the handle on success and on reports; NULL on every error
+ * @return PUMPLOSS_OK; a report (PUMPLOSS_WEXTRAPOLATED map points, PUMPLOSS_WREGIME,
+ *         PUMPLOSS_WILLCONDITIONED, PUMPLOSS_WIMPLAUSIBLE); PUMPLOSS_EDOMAIN (a reading out of
+ *         range, pressures the wrong way round), PUMPLOSS_EDATA (too few readings, a needed
+ *         temperature missing, no displacement from the chosen estimator), PUMPLOSS_EMISUSE,
+ *         PUMPLOSS_ENOMEM, or the failing step's error.
+ * @sa pumploss::reduce_test_stand
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_create(const pumploss_test_stand_setup *setup, size_t count,
+                                                          const double *speed_rev_s, const double *inlet_pressure_pa,
+                                                          const double *outlet_pressure_pa, const double *flow_m3_s,
+                                                          const double *torque_n_m, const double *drain_flow_m3_s,
+                                                          const double *inlet_t_k, const double *outlet_t_k,
+                                                          const double *drain_t_k, const double *meter_t_k,
+                                                          char *message, size_t message_capacity,
+                                                          pumploss_test_stand **out);
+/** Destroy a reduced test; NULL is a no-op.
+ *  @param ts the handle */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_test_stand_destroy(pumploss_test_stand *ts);
+/**
+ * One message of the reduction (reports such as extrapolated map points) as a sentence.
+ * @param ts the handle
+ * @param index 0 for the first message
+ * @param text receives the sentence ("" past the last message)
+ * @param text_capacity size of text in bytes
+ * @return the message's status code (a report, >= 100); PUMPLOSS_EDATA past the last message;
+ *         PUMPLOSS_EBUFFER when the sentence does not fit (cut); PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_message(const pumploss_test_stand *ts, size_t index, char *text,
+                                                           size_t text_capacity);
+/**
+ * A derived displacement with its standard uncertainty.
+ * @param ts the handle
+ * @param which PUMPLOSS_TS_DISPLACEMENT_SLOPE, _INTERCEPT or _TWO_STEP for that estimator, or
+ *        PUMPLOSS_TS_DISPLACEMENT_USED for the value the efficiencies used
+ * @param v_m3_rev receives the displacement, m^3/rev
+ * @param u_v_m3_rev receives its standard uncertainty, m^3/rev (0 for the nominal figure)
+ * @return the estimator's status (PUMPLOSS_OK, PUMPLOSS_WREGIME for a small grid, or
+ *         PUMPLOSS_EDATA when it found none); PUMPLOSS_EDOMAIN for an unknown which.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_displacement(const pumploss_test_stand *ts, int which,
+                                                                double *v_m3_rev, double *u_v_m3_rev);
+/**
+ * Efficiencies of every reading with their expanded uncertainties (k = 2).
+ * @param ts the handle
+ * @param count number of readings (as given to pumploss_test_stand_create())
+ * @param eta_v receives the volumetric efficiencies
+ * @param U_eta_v receives their expanded uncertainties
+ * @param eta_hm receives the hydromechanical efficiencies
+ * @param U_eta_hm receives their expanded uncertainties
+ * @param eta_t receives the overall efficiencies
+ * @param U_eta_t receives their expanded uncertainties
+ * @param status receives each point's status (PUMPLOSS_OK or PUMPLOSS_WIMPLAUSIBLE)
+ * @return PUMPLOSS_OK; PUMPLOSS_EBUFFER when count differs from the number of readings (outputs NaN).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_points(const pumploss_test_stand *ts, size_t count,
+                                                          double eta_v[], double U_eta_v[], double eta_hm[],
+                                                          double U_eta_hm[], double eta_t[], double U_eta_t[],
+                                                          int status[]);
+/**
+ * What each reading became: the flow at the port, the pressure difference, the viscosity in the
+ * gaps and the drain fraction (drain flow over the theoretical flow V_i n).
+ * @param ts the handle
+ * @param count number of readings
+ * @param flow_m3_s receives the flows at the port, m^3/s
+ * @param dp_pa receives the pressure differences, Pa
+ * @param mu_pa_s receives the viscosities, Pa s
+ * @param drain_fraction receives the drain fractions
+ * @return PUMPLOSS_OK; PUMPLOSS_EBUFFER when count differs from the number of readings.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_point_flows(const pumploss_test_stand *ts, size_t count,
+                                                               double flow_m3_s[], double dp_pa[], double mu_pa_s[],
+                                                               double drain_fraction[]);
+/**
+ * A fitted loss model's coefficients and R^2.
+ * @param ts the handle
+ * @param model_kind PUMPLOSS_MODEL_WILSON or PUMPLOSS_MODEL_SCHLOESSER
+ * @param c_s receives C_s
+ * @param c_st receives C_st (0 for Wilson)
+ * @param c_v receives C_v
+ * @param c_f receives C_f
+ * @param t_c_n_m receives T_c, N m
+ * @param c_h receives C_h (0 for Wilson)
+ * @param r2_flow receives R^2 of the flow regression
+ * @param r2_torque receives R^2 of the torque regression
+ * @return the fit's status; PUMPLOSS_EDATA when that model was not fitted; PUMPLOSS_EDOMAIN.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_model(const pumploss_test_stand *ts, int model_kind, double *c_s,
+                                                         double *c_st, double *c_v, double *c_f, double *t_c_n_m,
+                                                         double *c_h, double *r2_flow, double *r2_torque);
+/**
+ * The overall-efficiency map of a fitted model: eta_t[i * n_speed + j] at the i-th pressure and
+ * the j-th speed of the grid (pumploss_test_stand_map_axis()).
+ * @param ts the handle
+ * @param model_kind PUMPLOSS_MODEL_WILSON or PUMPLOSS_MODEL_SCHLOESSER
+ * @param n_dp grid pressures (as set)
+ * @param n_speed grid speeds (as set)
+ * @param eta_t receives the n_dp * n_speed overall efficiencies (NaN where a point failed)
+ * @param status receives each grid point's status (PUMPLOSS_WEXTRAPOLATED outside the tests)
+ * @return PUMPLOSS_OK or PUMPLOSS_WEXTRAPOLATED; PUMPLOSS_WPARTIAL when some point failed;
+ *         PUMPLOSS_EBUFFER when the sizes differ from the grid; PUMPLOSS_EDATA (model not fitted).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map(const pumploss_test_stand *ts, int model_kind, size_t n_dp,
+                                                       size_t n_speed, double eta_t[], int status[]);
+#define PUMPLOSS_TS_AXIS_PRESSURE 0  /**< pumploss_test_stand_map_axis(): the grid's pressure differences, Pa. */
+#define PUMPLOSS_TS_AXIS_SPEED 1     /**< pumploss_test_stand_map_axis(): the grid's speeds, rev/s. */
+/**
+ * One axis of the map's grid.
+ * @param ts the handle
+ * @param axis PUMPLOSS_TS_AXIS_PRESSURE or PUMPLOSS_TS_AXIS_SPEED
+ * @param count number of grid values on that axis (as set)
+ * @param values_si receives the values (Pa or rev/s)
+ * @return PUMPLOSS_OK; PUMPLOSS_EBUFFER when count differs; PUMPLOSS_EDOMAIN for an unknown axis.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map_axis(const pumploss_test_stand *ts, int axis, size_t count,
+                                                            double values_si[]);
+/** @} */
+/* pumploss:capi-test-stand (declarations of this subject go above this line) */
+
+/* pumploss:capi-declarations (new subjects add their section above this line) */
 
 #ifdef __cplusplus
 }

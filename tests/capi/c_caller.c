@@ -566,6 +566,81 @@ static void test_pump_budget(void) {
 
 
 
+static void test_test_stand(void) {
+  double n[30], p1[30], p2[30], q[30], tq[30], qd[30], ti[30], td[30], none[30];
+  double ev[30], uv[30], eh[30], uh[30], et[30], ut[30], fl[30], dpo[30], mu[30], fr[30];
+  double v, u, c[8], mdp[4], msp[5], meta[20];
+  int st[30], mst[20];
+  char msg[256];
+  int i, j, k = 0, code;
+  pumploss_test_stand_setup *s = NULL;
+  pumploss_test_stand *t = NULL;
+  /* a 71 cm3/rev pump on a 5 x 6 grid at one temperature: slip proportional to pressure, so
+     every displacement estimator finds 71 cm3/rev exactly (self-calculated) */
+  for (i = 0; i < 5; ++i) {
+    for (j = 0; j < 6; ++j) {
+      n[k] = (500.0 + 250.0 * i) / 60.0;
+      p1[k] = 0.3e5;
+      p2[k] = 0.3e5 + (j == 0 ? 20e5 : 50e5 * j);
+      q[k] = 71e-6 * n[k] - 2e-12 * (p2[k] - p1[k]);
+      tq[k] = 1.05 * 71e-6 * (p2[k] - p1[k]) / (2.0 * 3.14159265358979324) + 2.0;
+      qd[k] = 1.5e-12 * (p2[k] - p1[k]);
+      ti[k] = 318.15;
+      td[k] = 323.15;
+      ++k;
+    }
+  }
+  /* "not measured": NaN, taken from the library's own NaN output of a refused call */
+  CHECK(pumploss_iso_vg(47, &none[0], &v, &u) == PUMPLOSS_EDOMAIN && is_nan(none[0]));
+  for (k = 1; k < 30; ++k) none[k] = none[0];
+  CHECK(pumploss_test_stand_setup_create(PUMPLOSS_PUMP, 71e-6, 313.15, 46e-6, 373.15, 6.9e-6, &s) == PUMPLOSS_OK &&
+        s != NULL);
+  CHECK(pumploss_test_stand_setup_set_oil(s, 872.0, 288.15, 7e-4, 1.6e9) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_set_method(s, PUMPLOSS_TS_VISCOSITY_DRAIN, PUMPLOSS_TS_DISPLACEMENT_TWO_STEP,
+                                             PUMPLOSS_MODEL_WILSON) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_set_method(s, 7, PUMPLOSS_TS_DISPLACEMENT_TWO_STEP, PUMPLOSS_MODEL_WILSON) ==
+        PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_test_stand_setup_set_meter(s, PUMPLOSS_TS_METER_AT_PORT, 0.0) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_set_instrument(s, PUMPLOSS_TS_FLOW, 0.3, 0.0, PUMPLOSS_TS_LIMITS) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_set_instrument(s, PUMPLOSS_TS_TORQUE, 0.2, 0.1, PUMPLOSS_TS_LIMITS) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_set_map(s, 500.0 / 60, 1500.0 / 60, 20e5, 250e5, 323.15, 5, 4) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_set_map(s, 500.0 / 60, 1500.0 / 60, 20e5, 250e5, 323.15, 1, 4) == PUMPLOSS_EDOMAIN);
+  code = pumploss_test_stand_create(s, 30, n, p1, p2, q, tq, qd, ti, none, td, none, msg, sizeof msg, &t);
+  CHECK(!(code > 0 && code < 100) && t != NULL);
+  CHECK(pumploss_test_stand_displacement(t, PUMPLOSS_TS_DISPLACEMENT_USED, &v, &u) == PUMPLOSS_OK &&
+        near_rel(v, 71e-6, 1e-10));
+  CHECK(pumploss_test_stand_displacement(t, PUMPLOSS_TS_DISPLACEMENT_SLOPE, &v, &u) == PUMPLOSS_OK &&
+        near_rel(v, 71e-6, 1e-10));
+  CHECK(pumploss_test_stand_displacement(t, 9, &v, &u) == PUMPLOSS_EDOMAIN && is_nan(v));
+  CHECK(pumploss_test_stand_points(t, 30, ev, uv, eh, uh, et, ut, st) == PUMPLOSS_OK &&
+        near_rel(ev[7], q[7] / (71e-6 * n[7]), 1e-10) && ut[7] > 0.0 && st[7] == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_points(t, 29, ev, uv, eh, uh, et, ut, st) == PUMPLOSS_EBUFFER && is_nan(ev[0]));
+  CHECK(pumploss_test_stand_point_flows(t, 30, fl, dpo, mu, fr) == PUMPLOSS_OK && fl[3] == q[3] &&
+        near_rel(fr[3], qd[3] / (71e-6 * n[3]), 1e-10));
+  CHECK(pumploss_test_stand_model(t, PUMPLOSS_MODEL_WILSON, &c[0], &c[1], &c[2], &c[3], &c[4], &c[5], &c[6], &c[7]) ==
+        PUMPLOSS_OK && c[1] == 0.0 && c[6] > 0.99);
+  CHECK(pumploss_test_stand_model(t, PUMPLOSS_MODEL_SCHLOESSER, &c[0], &c[1], &c[2], &c[3], &c[4], &c[5], &c[6],
+                                  &c[7]) == PUMPLOSS_EDATA && is_nan(c[0]));
+  code = pumploss_test_stand_map(t, PUMPLOSS_MODEL_WILSON, 4, 5, meta, mst);
+  CHECK(!(code > 0 && code < 100) && meta[19] > 0.5 && meta[19] < 1.0);
+  CHECK(pumploss_test_stand_map(t, PUMPLOSS_MODEL_WILSON, 3, 5, meta, mst) == PUMPLOSS_EBUFFER && is_nan(meta[0]));
+  CHECK(pumploss_test_stand_map_axis(t, PUMPLOSS_TS_AXIS_PRESSURE, 4, mdp) == PUMPLOSS_OK && mdp[0] == 20e5 &&
+        mdp[3] == 250e5);
+  CHECK(pumploss_test_stand_map_axis(t, PUMPLOSS_TS_AXIS_SPEED, 5, msp) == PUMPLOSS_OK && near_rel(msp[4], 25.0, 1e-15));
+  CHECK(pumploss_test_stand_message(t, 99, msg, sizeof msg) == PUMPLOSS_EDATA && msg[0] == '\0');
+  pumploss_test_stand_destroy(t);
+  t = NULL;
+  /* a negative speed: refused, the reading named in the message, no handle */
+  n[7] = -n[7];
+  CHECK(pumploss_test_stand_create(s, 30, n, p1, p2, q, tq, qd, ti, none, td, none, msg, sizeof msg, &t) ==
+        PUMPLOSS_EDOMAIN && t == NULL && strstr(msg, "reading 8, speed") != NULL);
+  CHECK(pumploss_test_stand_create(s, 30, NULL, p1, p2, q, tq, qd, ti, none, td, none, msg, sizeof msg, &t) ==
+        PUMPLOSS_EMISUSE && t == NULL);
+  pumploss_test_stand_destroy(NULL);
+  pumploss_test_stand_setup_destroy(s);
+  pumploss_test_stand_setup_destroy(NULL);
+}
+
 int main(void) {
   test_core();
   test_units();
@@ -575,6 +650,7 @@ int main(void) {
   test_line();
   test_efficiency();
   test_loss_model();
+  test_test_stand();
   test_pump_health();
   test_pump_budget();
   printf("%d passed, %d failed\n", checks - failures, failures);

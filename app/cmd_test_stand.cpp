@@ -1,0 +1,264 @@
+// pumploss test-stand: reads the data (CSV) and the setup (TOML), hands them to the library's
+// reduction (pumploss::reduce_test_stand, include/pumploss/test_stand.hpp) and renders what it
+// returns: efficiencies per operating point with their expanded uncertainty, the derived
+// displacement by three estimators, the fitted loss models, the drain table and the
+// overall-efficiency map (CSV and SVG contour plot).
+#include <CLI/CLI.hpp>
+#include <fmt/format.h>
+
+#include "commands.hpp"
+#include "common.hpp"
+#include "inputs.hpp"
+#include "pumploss/test_stand.hpp"
+#include "pumploss/version.hpp"
+#include "svg.hpp"
+
+namespace plcli {
+
+namespace {
+
+using D = pumploss::dimension;
+using pumploss::status;
+
+struct stand_options {
+  std::string data, setup;
+  output_options out;
+};
+
+// The readings of the CSV, in SI, as the library takes them.
+pumploss::test_stand_readings readings_of(const csv_data& d, bool pump) {
+  auto col = [&](const char* name) { return d.has(name) ? d.si(name) : std::vector<double>{}; };
+  pumploss::test_stand_readings r;
+  r.speed_rev_s = col("speed");
+  r.inlet_pressure_pa = col("inlet pressure");
+  r.outlet_pressure_pa = col("outlet pressure");
+  r.flow_m3_s = col(pump ? "outlet flow" : "inlet flow");
+  r.torque_n_m = col("torque");
+  r.drain_flow_m3_s = col("drain flow");
+  r.inlet_temperature_k = col("inlet temperature");
+  r.outlet_temperature_k = col("outlet temperature");
+  r.drain_temperature_k = col("drain temperature");
+  r.meter_temperature_k = col("meter temperature");
+  r.case_pressure_pa = col("case pressure");
+  return r;
+}
+
+// A refusal of the library as an input_error at the file, line and column it concerns.
+[[noreturn]] void refuse(const pumploss::test_stand_message& m, const csv_data& d, const stand_options& o) {
+  if (!m.setting.empty()) throw input_error(o.setup, 0, 0, m.text);
+  const auto k = d.find(m.column);
+  if (m.row != pumploss::test_stand_message::no_row && k < d.spec.size() && d.present[k])
+    throw d.error(m.row, m.column, m.follows_value ? "'" + d.texts[k][m.row] + "' " + m.text : m.text);
+  throw input_error(o.data, 0, 0, m.text);
+}
+
+int run_test_stand(const stand_options& o) {
+  const display_units du = make_units(o.out);
+  const auto setup = read_stand_setup(o.setup);
+  const auto& s = setup.run;
+  const bool pump = s.kind == pumploss::machine::pump;
+  const auto d = read_csv(o.data, stand_columns());
+
+  const auto res = pumploss::reduce_test_stand(s, readings_of(d, pump));
+  if (pumploss::is_error(res.st)) refuse(res.messages.front(), d, o);
+
+  const std::size_t n = res.points.size();
+  const auto& est = res.estimators;
+  const auto& models = res.models;
+  const std::string v_source = s.displacement == pumploss::displacement_choice::nominal
+                                   ? std::string("the maker's nominal displacement (no uncertainty propagated for it)")
+                                   : std::string("estimator '") +
+                                         pumploss::displacement_estimator_name(
+                                             est[static_cast<std::size_t>(s.displacement)].estimator) +
+                                         "'";
+  const std::string vt = pumploss::viscosity_temperature_name(s.viscosity_at);
+
+  report r;
+  r.title = std::string("Test-stand analysis: ") + setup.machine_name;
+  r.facts.emplace_back("Data", o.data + fmt::format(" ({} operating points; {} speed levels x {} pressure levels)", n,
+                                                    res.speed_levels, res.pressure_levels));
+  r.facts.emplace_back("Machine", std::string(pump ? "pump" : "motor") + ", nominal displacement " +
+                                      show_quantity(s.nominal_displacement_m3_rev, D::displacement, du));
+  r.facts.emplace_back("Oil", setup.oil.name + "; viscosity in the gaps at the " + vt + " temperature (ASTM D341)");
+  r.facts.emplace_back("Flow", s.meter_at_port
+                                   ? std::string("read at the port (no correction)")
+                                   : "meter in the return line at " + show_quantity(s.meter_pressure_pa, D::pressure, du) +
+                                         " and the meter temperature, corrected to the " + (pump ? "outlet" : "inlet") +
+                                         " port by the density ratio (pumploss::flow_at_port)");
+  r.facts.emplace_back("Displacement used",
+                       show_quantity(res.displacement_m3_rev, D::displacement, du, 5) + " from " + v_source);
+
+  table tp;
+  tp.name = "points";
+  tp.title = "Efficiencies per operating point (U: expanded uncertainty, k = 2, GUM first order)";
+  tp.cols = {{"point", cell_kind::number, D::pressure, 2},
+             {"speed", cell_kind::quantity, D::rotational_speed, 4},
+             {"pressure difference", cell_kind::quantity, D::pressure, 4},
+             {"flow at port", cell_kind::quantity, D::volume_flow, 4},
+             {"torque", cell_kind::quantity, D::torque, 4},
+             {"viscosity", cell_kind::quantity, D::dynamic_viscosity, 3},
+             {"volumetric eff", cell_kind::percent, D::pressure, 4},
+             {"U vol", cell_kind::percent, D::pressure, 2},
+             {"hydromech eff", cell_kind::percent, D::pressure, 4},
+             {"U hm", cell_kind::percent, D::pressure, 2},
+             {"overall eff", cell_kind::percent, D::pressure, 4},
+             {"U overall", cell_kind::percent, D::pressure, 2},
+             {"status", cell_kind::text, D::pressure, 0},
+             {"flow residual", cell_kind::quantity, D::volume_flow, 2},
+             {"torque residual", cell_kind::quantity, D::torque, 2}};
+  svg::series measured{"test points", {}, {}, false, true, false};
+  for (std::size_t i = 0; i < n; ++i) {
+    const auto& p = res.points[i];
+    const auto& g = p.eta;
+    tp.rows.push_back({static_cast<double>(i + 1), p.speed_rev_s, p.dp_pa, p.flow_m3_s, p.torque_n_m, p.mu_pa_s,
+                       g.eta_v.value, g.eta_v.U, g.eta_hm.value, g.eta_hm.U, g.eta_t.value, g.eta_t.U,
+                       status_text(p.st), p.flow_residual_m3_s, p.torque_residual_n_m});
+    measured.x.push_back(du.show(p.speed_rev_s, D::rotational_speed));
+    measured.y.push_back(du.show(p.dp_pa, D::pressure));
+  }
+
+  table td;
+  td.name = "displacement";
+  td.title = "Derived displacement V_i by three estimators (standard error from the fit residuals)";
+  td.cols = {{"estimator", cell_kind::text, D::pressure, 0},
+             {"V_i", cell_kind::quantity, D::displacement, 5},
+             {"u(V_i)", cell_kind::quantity, D::displacement, 2},
+             {"points", cell_kind::number, D::pressure, 2},
+             {"status", cell_kind::text, D::pressure, 0}};
+  for (const auto& e : est)
+    td.rows.push_back({std::string(pumploss::displacement_estimator_name(e.estimator)), e.v_m3_rev, e.u_v_m3_rev,
+                       static_cast<double>(e.points), status_text(e.st)});
+
+  table tdr;
+  tdr.name = "drain";
+  tdr.title = "Case drain flow per operating point: share of the theoretical flow V_i n and of the volumetric loss";
+  tdr.cols = {{"point", cell_kind::number, D::pressure, 2},
+              {"speed", cell_kind::quantity, D::rotational_speed, 4},
+              {"pressure difference", cell_kind::quantity, D::pressure, 4},
+              {"drain flow", cell_kind::quantity, D::volume_flow, 4},
+              {"drain fraction", cell_kind::percent, D::pressure, 3},
+              {"share of volumetric loss", cell_kind::percent, D::pressure, 3}};
+  for (std::size_t i = 0; i < n; ++i)
+    tdr.rows.push_back({static_cast<double>(i + 1), res.points[i].speed_rev_s, res.points[i].dp_pa,
+                        res.drain[i].drain_flow_m3_s, res.drain[i].fraction, res.drain[i].loss_share});
+
+  table tm;
+  tm.name = "loss_model";
+  tm.title = "Loss-model coefficients (dimensionless unless a unit is given) with standard errors";
+  tm.cols = {{"coefficient", cell_kind::text, D::pressure, 0}, {"unit", cell_kind::text, D::pressure, 0}};
+  for (const auto& m : models) {
+    // coefficients span many decades: written as text in scientific notation
+    tm.cols.push_back({pumploss::loss_model_name(m.model), cell_kind::text, D::pressure, 0});
+    tm.cols.push_back({std::string("u ") + pumploss::loss_model_name(m.model), cell_kind::text, D::pressure, 0});
+  }
+  using lm = pumploss::loss_model<double>;
+  struct coef {
+    const char* name;
+    const char* unit;
+    double lm::*v;
+    double lm::*u;
+  };
+  const coef coefs[] = {{"C_s laminar slip", "-", &lm::c_s, &lm::u_c_s},
+                        {"C_st turbulent slip", "-", &lm::c_st, &lm::u_c_st},
+                        {"C_v viscous drag", "-", &lm::c_v, &lm::u_c_v},
+                        {"C_f Coulomb friction", "-", &lm::c_f, &lm::u_c_f},
+                        {"T_c constant torque loss", "N.m", &lm::t_c_n_m, &lm::u_t_c_n_m},
+                        {"C_h hydrodynamic torque", "-", &lm::c_h, &lm::u_c_h}};
+  for (const auto& c : coefs) {
+    std::vector<cell> row = {std::string(c.name), std::string(c.unit)};
+    for (const auto& m : models) {
+      row.emplace_back(fmt::format("{:.5g}", m.*(c.v)));
+      row.emplace_back(fmt::format("{:.2g}", m.*(c.u)));
+    }
+    tm.rows.push_back(std::move(row));
+  }
+  for (const auto& m : models)
+    r.facts.emplace_back(
+        std::string(pumploss::loss_model_name(m.model)) + " fit",
+        fmt::format("R^2 flow {:.5f}, torque {:.5f}; RMS residual {}, {}; condition numbers {:.3g}, {:.3g}; {}",
+                    m.r2_flow, m.r2_torque, show_quantity(m.rms_flow_m3_s, D::volume_flow, du, 3),
+                    show_quantity(m.rms_torque_n_m, D::torque, du, 3), m.cond_flow, m.cond_torque,
+                    status_text(m.st)));
+
+  // ---- the map: CSV of every model, contour plot of the last
+  const auto& gs = res.map_speed_rev_s;
+  const auto& gp = res.map_dp_pa;
+  const std::size_t nx = gs.size(), ny = gp.size();
+  const char* map_model = pumploss::loss_model_name(models.back().model);
+  table tmap;
+  tmap.name = "map";
+  tmap.cols = {{"pressure difference", cell_kind::quantity, D::pressure, 4},
+               {"speed", cell_kind::quantity, D::rotational_speed, 4}};
+  for (const auto& mp : res.maps)
+    tmap.cols.push_back({std::string("overall eff ") + pumploss::loss_model_name(mp.model), cell_kind::percent,
+                         D::pressure, 4});
+  tmap.cols.push_back({"status", cell_kind::text, D::pressure, 0});
+  for (std::size_t i = 0; i < ny; ++i)
+    for (std::size_t j = 0; j < nx; ++j) {
+      std::vector<cell> row = {gp[i], gs[j]};
+      status worst_st = status::ok;
+      for (const auto& mp : res.maps) {
+        row.emplace_back(mp.eta_t[i * nx + j]);
+        worst_st = pumploss::worst(worst_st, mp.st[i * nx + j]);
+      }
+      row.emplace_back(status_text(worst_st));
+      tmap.rows.push_back(std::move(row));
+    }
+
+  svg::plot p;
+  p.title = "Overall efficiency of " + setup.machine_name;
+  p.subtitle = fmt::format("{} loss model at {}; pumploss {}", map_model,
+                           show_quantity(s.map_temperature_k, D::temperature, du, 3), pumploss::version_string);
+  p.x.label = std::string("speed [") + du.of(D::rotational_speed).symbol + "]";
+  p.y.label = std::string("pressure difference [") + du.of(D::pressure).symbol + "]";
+  svg::contour c;
+  for (const double sp : gs) c.x.push_back(du.show(sp, D::rotational_speed));
+  for (const double pp : gp) c.y.push_back(du.show(pp, D::pressure));
+  for (std::size_t i = 0; i < ny; ++i) {
+    std::vector<double> row;
+    for (std::size_t j = 0; j < nx; ++j) row.push_back(res.maps.back().eta_t[i * nx + j] * 100.0);
+    c.z.push_back(row);
+  }
+  for (const double l : setup.map_levels) c.levels.push_back(l * 100.0);
+  c.level_format = "{:.0f} %";
+  p.contours = c;
+  p.lines.push_back(measured);
+
+  r.tables.push_back(std::move(td));
+  r.tables.push_back(std::move(tm));
+  r.tables.push_back(std::move(tp));
+  r.tables.push_back(std::move(tdr));
+  r.facts.emplace_back("Efficiency map", fmt::format("{} speeds x {} pressures at {}, {} model; in test_stand_map.csv "
+                                                     "and test_stand_map.svg",
+                                                     nx, ny, show_quantity(s.map_temperature_k, D::temperature, du, 3),
+                                                     map_model));
+  r.notes.push_back("uncertainties: the stated instrument limits (per cent of reading plus absolute) as rectangular "
+                    "distributions (GUM 4.3.7) unless given as standard; u(V_i) is the estimator's standard error; "
+                    "flow and V_i taken as uncorrelated (JCGM 100:2008, first order)");
+  for (const auto& m : res.messages) r.notes.push_back(m.text);
+
+  output_set files;
+  files.add("test_stand_map.csv", render_csv(tmap, du));
+  files.add("test_stand_map.svg", p.render());
+  emit(r, files, o.out, du, "test_stand");
+  return exit_ok;
+}
+
+}  // namespace
+
+void add_test_stand(CLI::App& app, int& rc) {
+  auto o = std::make_shared<stand_options>();
+  auto* sub = app.add_subcommand("test-stand",
+                                 "Analyse a test-stand data set: efficiencies with uncertainty, derived displacement, "
+                                 "loss-model fit, efficiency map");
+  sub->add_option("data", o->data, "CSV, one operating point per row, units in the header")
+      ->required()
+      ->check(CLI::ExistingFile);
+  sub->add_option("--setup", o->setup, "Test-stand setup (TOML: machine, oil, flow meter, instruments, fit, map)")
+      ->required()
+      ->check(CLI::ExistingFile);
+  add_output_options(*sub, o->out);
+  sub->callback([o, &rc] { rc = run_test_stand(*o); });
+}
+
+}  // namespace plcli

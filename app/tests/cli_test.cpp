@@ -1,0 +1,804 @@
+// Tests of the pumploss command-line program, through its command line only: the built binary
+// (path from CMake) runs on the demo files and on broken copies of them. Outputs are read back
+// with the library's table reader and checked against values the test computes with the
+// library itself, never against a stored copy of a report.
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <cstdio>
+#include <cstdlib>
+#include <filesystem>
+#include <fstream>
+#include <random>
+#include <sstream>
+#include <string>
+
+#include "pumploss/pumploss.hpp"
+#include "pumploss/table_reader.hpp"
+
+namespace fs = std::filesystem;
+using pumploss::column_kind;
+using pumploss::dimension;
+
+namespace {
+
+const std::string kExe = PUMPLOSS_CLI_EXE;
+const std::string kDemo = PUMPLOSS_DEMO_DIR;
+
+// A fresh temporary folder, removed at the end of the test.
+struct temp_dir {
+  fs::path path;
+  temp_dir() {
+    std::random_device rd;
+    path = fs::temp_directory_path() / ("pumploss_cli_test_" + std::to_string(rd()) + std::to_string(rd()));
+    fs::create_directories(path);
+  }
+  ~temp_dir() {
+    std::error_code ec;
+    fs::remove_all(path, ec);
+  }
+  std::string operator/(const std::string& name) const { return (path / name).string(); }
+};
+
+std::string slurp(const std::string& p) {
+  std::ifstream in(p, std::ios::binary);
+  std::stringstream ss;
+  ss << in.rdbuf();
+  return ss.str();
+}
+
+void write_file(const std::string& p, const std::string& content) {
+  std::ofstream out(p, std::ios::binary);
+  out << content;
+}
+
+std::string quote(const std::string& s) {
+  std::string q = "'";
+  for (const char c : s) q += c == '\'' ? std::string("'\\''") : std::string(1, c);
+  return q + "'";
+}
+
+struct run_result {
+  int code;
+  std::string out, err;
+};
+
+// Run the program with arguments (each quoted for the shell).
+run_result run(const std::vector<std::string>& args, const temp_dir& tmp) {
+  std::string cmd = quote(kExe);
+  for (const auto& a : args) cmd += " " + quote(a);
+  const std::string out = tmp / ".stdout", err = tmp / ".stderr";
+  cmd += " >" + quote(out) + " 2>" + quote(err);
+  const int status = std::system(cmd.c_str());
+  const int code = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
+  return {code, slurp(out), slurp(err)};
+}
+
+double rel(double a, double b) { return std::fabs(a - b) / std::max(std::fabs(b), 1e-300); }
+
+// The demo oil, built by the test from the library: 46 cSt at 40 degC (VG 46 mid-point) and
+// 6.9 cSt at 100 degC, density 872 kg/m3 at 15 degC, other properties typical (as oil.toml).
+pumploss::oil<double> demo_oil() {
+  const auto line = pumploss::d341_fit(313.15, 46e-6, 373.15, 6.9e-6);
+  EXPECT_TRUE(line.ok());
+  auto oil = pumploss::typical_mineral_oil(line.value);
+  oil.rho_ref_kg_m3 = 872.0;
+  oil.t_ref_k = 288.15;
+  return oil;
+}
+
+// A CSV read with the library's reader; a reading error fails the test.
+pumploss::table_data read_csv(const std::string& path, const std::vector<pumploss::column_spec>& spec) {
+  auto d = pumploss::read_table_file(path, spec);
+  EXPECT_EQ(d.error.st, pumploss::status::ok) << path << ":" << d.error.line << ":" << d.error.column << ": "
+                                              << d.error.message;
+  return d;
+}
+
+// The columns of the demo's test-stand and field-reading files (docs/pages/cli.md).
+std::vector<pumploss::column_spec> stand_columns() {
+  return {{"speed", column_kind::quantity, dimension::rotational_speed, true},
+          {"inlet pressure", column_kind::quantity, dimension::pressure, true},
+          {"outlet pressure", column_kind::quantity, dimension::pressure, true},
+          {"outlet flow", column_kind::quantity, dimension::volume_flow, false},
+          {"inlet flow", column_kind::quantity, dimension::volume_flow, false},
+          {"torque", column_kind::quantity, dimension::torque, true},
+          {"drain flow", column_kind::quantity, dimension::volume_flow, true},
+          {"inlet temperature", column_kind::quantity, dimension::temperature, true},
+          {"outlet temperature", column_kind::quantity, dimension::temperature, false},
+          {"drain temperature", column_kind::quantity, dimension::temperature, false},
+          {"case pressure", column_kind::quantity, dimension::pressure, false},
+          {"meter temperature", column_kind::quantity, dimension::temperature, false}};
+}
+
+std::vector<pumploss::column_spec> field_columns() {
+  return {{"date", column_kind::date, dimension::pressure, true},
+          {"outlet pressure", column_kind::quantity, dimension::pressure, true},
+          {"oil temperature", column_kind::quantity, dimension::temperature, true},
+          {"speed", column_kind::quantity, dimension::rotational_speed, true},
+          {"drain flow", column_kind::quantity, dimension::volume_flow, true},
+          {"drain temperature", column_kind::quantity, dimension::temperature, false},
+          {"case pressure", column_kind::quantity, dimension::pressure, false},
+          {"note", column_kind::text, dimension::pressure, false}};
+}
+
+std::vector<pumploss::column_spec> oil_csv_columns() {
+  return {{"temperature", column_kind::quantity, dimension::temperature, true},
+          {"kinematic viscosity", column_kind::quantity, dimension::kinematic_viscosity, true},
+          {"dynamic viscosity", column_kind::quantity, dimension::dynamic_viscosity, true},
+          {"density", column_kind::quantity, dimension::density, true},
+          {"viscosity check", column_kind::text, dimension::pressure, false}};
+}
+
+bool has_cautions(const std::string& s) {
+  return s.find("store energy") != std::string::npos && s.find("injection injury") != std::string::npos &&
+         s.find("hot enough to burn") != std::string::npos && s.find("engineering estimates") != std::string::npos &&
+         s.find("licensed engineering practice") != std::string::npos;
+}
+
+}  // namespace
+
+// ------------------------------------------------------------------------------ units
+
+TEST(CliUnits, ConversionMatchesLibrary) {
+  temp_dir tmp;
+  const auto r = run({"units", "250", "bar", "psi"}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  double v = 0;
+  ASSERT_EQ(std::sscanf(r.out.c_str(), "250 bar = %lf psi", &v), 1) << r.out;
+  EXPECT_LT(rel(v, pumploss::convert(250.0, "bar", "psi").value), 1e-11);
+  const auto t = run({"units", "-40", "degC", "degF"}, tmp);
+  ASSERT_EQ(t.code, 0) << t.err;
+  EXPECT_NE(t.out.find("= -40 degF"), std::string::npos) << t.out;
+}
+
+TEST(CliUnits, RejectsUnknownAndIncompatibleUnits) {
+  temp_dir tmp;
+  const auto a = run({"units", "1", "bar", "L/min"}, tmp);
+  EXPECT_EQ(a.code, 1);
+  EXPECT_NE(a.err.find("unit of pressure"), std::string::npos) << a.err;
+  const auto b = run({"units", "1", "bars", "psi"}, tmp);
+  EXPECT_EQ(b.code, 1);
+  EXPECT_NE(b.err.find("unknown unit 'bars'"), std::string::npos) << b.err;
+}
+
+TEST(CliUnits, ListsEveryUnit) {
+  temp_dir tmp;
+  const auto r = run({"units", "--list"}, tmp);
+  ASSERT_EQ(r.code, 0);
+  for (int i = 0; i < pumploss::unit_count(); ++i)
+    EXPECT_NE(r.out.find(pumploss::unit_at(i)->symbol), std::string::npos) << pumploss::unit_at(i)->symbol;
+}
+
+// ------------------------------------------------------------------------------ oil
+
+TEST(CliOil, DemoReportMatchesLibrary) {
+  temp_dir tmp;
+  const std::string out = tmp / "out";
+  const auto r = run({"oil", kDemo + "/oil.toml", "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  EXPECT_TRUE(has_cautions(r.out));
+  EXPECT_TRUE(has_cautions(slurp(out + "/oil.txt")));
+  ASSERT_TRUE(fs::exists(out + "/oil_viscosity.svg"));
+  // The CSV reads back with the program's own reader (units in the header).
+  const auto d = read_csv(out + "/oil_properties.csv", oil_csv_columns());
+  const auto oil = demo_oil();
+  ASSERT_EQ(d.rows(), 15u);  // 0 to 70 degC in 5 K steps
+  for (std::size_t i = 0; i < d.rows(); ++i) {
+    const double t = d.si("temperature")[i];
+    EXPECT_NEAR(t, 273.15 + 5.0 * static_cast<double>(i), 1e-9);
+    const double nu = pumploss::oil_kinematic_viscosity(oil, t).value;
+    EXPECT_LT(rel(d.si("kinematic viscosity")[i], nu), 1e-9) << t;
+    EXPECT_LT(rel(d.si("dynamic viscosity")[i], pumploss::oil_dynamic_viscosity(oil, t, 0.0).value), 1e-9) << t;
+    EXPECT_LT(rel(d.si("density")[i], pumploss::oil_density_at(oil, t, 0.0).value), 1e-9) << t;
+    // limits of oil.toml: 10 cSt min, 400 cSt running max, 1000 cSt at start
+    const std::string expect = nu > 1000e-6 ? "TOO THICK to start"
+                               : nu > 400e-6 ? "start only (above running max)"
+                               : nu < 10e-6  ? "TOO THIN (below min)"
+                                             : "ok";
+    EXPECT_EQ(d.texts[d.find("viscosity check")][i], expect) << t;
+  }
+  // the cold start row really is above the running limit (so the check is exercised)
+  EXPECT_GT(pumploss::oil_kinematic_viscosity(oil, 273.15).value, 400e-6);
+}
+
+TEST(CliOil, CommandLineOilInOtherUnits) {
+  temp_dir tmp;
+  const std::string out = tmp / "out";
+  const auto r = run({"oil", "--grade", "46", "--point", "100 degC", "6.9 cSt", "--at", "32 degF", "--at", "122 degF",
+                      "--unit", "degF", "--unit", "cP", "--unit", "g/cm3", "--out", out},
+                     tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  const std::string csv = slurp(out + "/oil_properties.csv");
+  EXPECT_NE(csv.find("temperature [degF],kinematic viscosity [cSt],dynamic viscosity [cP],density [g/cm3]"),
+            std::string::npos)
+      << csv;
+  const auto d = read_csv(out + "/oil_properties.csv", oil_csv_columns());
+  ASSERT_EQ(d.rows(), 2u);
+  const auto line = pumploss::d341_fit(313.15, 46e-6, 373.15, 6.9e-6).value;
+  const auto oil = pumploss::typical_mineral_oil(line);  // no density given: typical 870 kg/m3
+  const double t[2] = {273.15, 323.15};
+  for (std::size_t i = 0; i < 2; ++i) {
+    EXPECT_NEAR(d.si("temperature")[i], t[i], 1e-9);
+    EXPECT_LT(rel(d.si("kinematic viscosity")[i], pumploss::oil_kinematic_viscosity(oil, t[i]).value), 1e-9);
+    EXPECT_LT(rel(d.si("dynamic viscosity")[i], pumploss::oil_dynamic_viscosity(oil, t[i], 0.0).value), 1e-9);
+  }
+  EXPECT_NE(r.out.find("Typical values used for"), std::string::npos);
+}
+
+TEST(CliOil, BadCommandLineIsAUsageError) {
+  temp_dir tmp;
+  EXPECT_EQ(run({"oil", "--grade", "47", "--point", "100 degC", "6.9 cSt"}, tmp).code, 1);
+  EXPECT_EQ(run({"oil", "--grade", "46"}, tmp).code, 1);  // one point is not enough
+  const auto r = run({"oil", "--grade", "46", "--point", "100 degC", "6.9 bar"}, tmp);
+  EXPECT_EQ(r.code, 1);
+  EXPECT_NE(r.err.find("unit of pressure"), std::string::npos) << r.err;
+  EXPECT_EQ(run({"oil", "--grade", "46", "--point", "100 degC", "6.9 cSt", "--unit", "furlong"}, tmp).code, 1);
+}
+
+// ------------------------------------------------------------------------------ reading outputs
+
+namespace {
+
+// A report CSV of the program: header names to columns of texts ('#' lines are the cautions).
+struct out_csv {
+  std::vector<std::string> head;
+  std::vector<std::vector<std::string>> rows;
+  std::size_t col(const std::string& name) const {
+    for (std::size_t j = 0; j < head.size(); ++j)
+      if (head[j] == name) return j;
+    ADD_FAILURE() << "no column '" << name << "'";
+    return 0;
+  }
+  double num(std::size_t row, const std::string& name) const { return std::stod(rows.at(row).at(col(name))); }
+  const std::string& text(std::size_t row, const std::string& name) const { return rows.at(row).at(col(name)); }
+};
+
+std::vector<std::string> split_csv_line(const std::string& line) {
+  std::vector<std::string> out(1);
+  bool quoted = false;
+  for (std::size_t i = 0; i < line.size(); ++i) {
+    const char c = line[i];
+    if (quoted) {
+      if (c == '"' && i + 1 < line.size() && line[i + 1] == '"') {
+        out.back() += '"';
+        ++i;
+      } else if (c == '"') {
+        quoted = false;
+      } else {
+        out.back() += c;
+      }
+    } else if (c == '"') {
+      quoted = true;
+    } else if (c == ',') {
+      out.emplace_back();
+    } else {
+      out.back() += c;
+    }
+  }
+  return out;
+}
+
+out_csv read_out(const std::string& path) {
+  out_csv t;
+  std::stringstream in(slurp(path));
+  std::string line;
+  bool cautions = false;
+  while (std::getline(in, line)) {
+    if (!line.empty() && line[0] == '#') {
+      cautions = true;
+      continue;
+    }
+    if (t.head.empty()) t.head = split_csv_line(line);
+    else t.rows.push_back(split_csv_line(line));
+  }
+  EXPECT_TRUE(cautions) << path << " has no cautions at its foot";
+  return t;
+}
+
+std::string fmt_r2(double v) {
+  char b[64];
+  std::snprintf(b, sizeof b, "R^2 flow %.5f", v);
+  return b;
+}
+
+double instrument_u(double pct, double abs_si, double x) {  // rectangular limits, as the demo setup
+  return pumploss::standard_uncertainty(abs_si, pumploss::uncertainty_basis::absolute,
+                                        pumploss::uncertainty_distribution::rectangular, x)
+             .value +
+         pumploss::standard_uncertainty(pct, pumploss::uncertainty_basis::percent_of_reading,
+                                        pumploss::uncertainty_distribution::rectangular, x)
+             .value;
+}
+
+}  // namespace
+
+// ------------------------------------------------------------------------------ the demo, checked by the library
+
+TEST(CliDemo, TestStandGridIsFiveSpeedsBySixPressures) {
+  // The demo generator's grid, recovered by the reader (values converted from the header units).
+  const auto d = read_csv(kDemo + "/test_stand.csv", stand_columns());
+  ASSERT_EQ(d.rows(), 30u);
+  for (std::size_t i = 0; i < d.rows(); ++i) {
+    const double rpm = d.si("speed")[i] * 60.0;
+    EXPECT_NEAR(rpm, 500.0 + 250.0 * static_cast<double>(i / 6), 3.0);
+    // consistency of the invented data: the outlet flow at the port (the meter reads it in the return
+    // line) below the geometric flow, the drain flow below the loss
+    const auto oil = demo_oil();
+    const double q_port = pumploss::flow_at_port(d.si("outlet flow")[i], 0.5e5, d.si("meter temperature")[i],
+                                                 d.si("outlet pressure")[i], d.si("outlet temperature")[i],
+                                                 oil.rho_ref_kg_m3, oil.t_ref_k, oil.alpha_per_k, oil.bulk_modulus_pa)
+                              .value;
+    const double q_th = 71e-6 * d.si("speed")[i];
+    EXPECT_LT(q_port, q_th);
+    EXPECT_LT(q_port, d.si("outlet flow")[i]);  // compressed at the port
+    EXPECT_LT(d.si("drain flow")[i], q_th - q_port + 1e-6);
+    // torque above the theoretical torque of a pump
+    const double dp = d.si("outlet pressure")[i] - d.si("inlet pressure")[i];
+    EXPECT_GT(d.si("torque")[i], 71e-6 * dp / (2 * M_PI));
+  }
+}
+
+TEST(CliDemo, PumpFileGeometryGivesItsDisplacement) {
+  // The budget report states the displacement the pump file's geometry implies (9 pistons of
+  // 17 mm on a 56.8 mm pitch radius at 17 degrees) next to the stated 71 cm3/rev.
+  temp_dir tmp;
+  const auto r = run({"budget", kDemo + "/pump_p31.toml"}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  const double vg = 9 * M_PI / 4 * 0.017 * 0.017 * 2 * 0.0568 * std::tan(17 * M_PI / 180);
+  EXPECT_LT(std::fabs(vg / 71e-6 - 1), 0.01);
+  char want[128];
+  std::snprintf(want, sizeof want, "(9 pistons, 71.00 cm3/rev stated, %.2f cm3/rev from the geometry)", vg * 1e6);
+  EXPECT_NE(r.out.find(want), std::string::npos) << want << "\n" << r.out;
+}
+
+TEST(CliTestStand, DemoMatchesLibrary) {
+  temp_dir tmp;
+  const std::string out = tmp / "out";
+  const auto r = run({"test-stand", kDemo + "/test_stand.csv", "--setup", kDemo + "/test_stand.toml", "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  EXPECT_TRUE(has_cautions(slurp(out + "/test_stand.txt")));
+
+  // the test's own pipeline: flow at the port, two-step displacement, GUM, Wilson fit
+  const auto d = read_csv(kDemo + "/test_stand.csv", stand_columns());
+  const auto oil = demo_oil();
+  const std::size_t n = d.rows();
+  std::vector<double> q(n), dp(n), mu(n);
+  for (std::size_t i = 0; i < n; ++i) {
+    dp[i] = d.si("outlet pressure")[i] - d.si("inlet pressure")[i];
+    const auto qp = pumploss::flow_at_port(d.si("outlet flow")[i], 0.5e5, d.si("meter temperature")[i],
+                                           d.si("outlet pressure")[i], d.si("outlet temperature")[i], oil.rho_ref_kg_m3,
+                                           oil.t_ref_k, oil.alpha_per_k, oil.bulk_modulus_pa);
+    ASSERT_TRUE(qp.ok());
+    q[i] = qp.value;
+    mu[i] = pumploss::oil_dynamic_viscosity(oil, d.si("drain temperature")[i], 0.0).value;
+  }
+  std::vector<double> gs, gp, gq;  // level-major: 6 pressure levels x 5 speeds (the file is speed-major)
+  for (std::size_t j = 0; j < 6; ++j)
+    for (std::size_t k = 0; k < 5; ++k) {
+      gs.push_back(d.si("speed")[k * 6 + j]);
+      gp.push_back(dp[k * 6 + j]);
+      gq.push_back(q[k * 6 + j]);
+    }
+  const auto v = pumploss::displacement_two_step(gs.data(), gp.data(), gq.data(), 6, 5);
+  ASSERT_TRUE(v.st == pumploss::status::ok);
+  const auto disp = read_out(out + "/test_stand_displacement.csv");
+  ASSERT_EQ(disp.rows.size(), 3u);
+  EXPECT_EQ(disp.text(2, "estimator"), pumploss::displacement_estimator_name(pumploss::displacement_estimator::two_step));
+  EXPECT_LT(rel(disp.num(2, "V_i [cm3/rev]") * 1e-6, v.v_m3_rev), 1e-9);
+  EXPECT_EQ(disp.text(0, "estimator"),
+            pumploss::displacement_estimator_name(pumploss::displacement_estimator::slope_low_pressure));
+
+  const auto pts = read_out(out + "/test_stand_points.csv");
+  ASSERT_EQ(pts.rows.size(), n);
+  for (std::size_t i = 0; i < n; ++i) {
+    const double n_i = d.si("speed")[i], t_i = d.si("torque")[i];
+    const double u_dp = pumploss::pressure_difference_uncertainty(instrument_u(0, 0.25e5, d.si("inlet pressure")[i]),
+                                                                  instrument_u(0, 0.25e5, d.si("outlet pressure")[i]), 0.0)
+                            .value;
+    const pumploss::efficiency_inputs<double> x{v.v_m3_rev, n_i, dp[i], q[i], t_i, v.u_v_m3_rev,
+                                                instrument_u(0.1, 0.5 / 60, n_i), u_dp,
+                                                instrument_u(0.3, 0, d.si("outlet flow")[i]),
+                                                instrument_u(0.2, 0.1, t_i), 0.0};
+    const auto g = pumploss::efficiency_gum(pumploss::machine::pump, x);
+    EXPECT_LT(rel(pts.num(i, "overall eff percent") / 100, g.eta_t.value), 1e-8) << i;
+    EXPECT_LT(rel(pts.num(i, "U overall percent") / 100, g.eta_t.U), 1e-8) << i;
+    EXPECT_LT(rel(pts.num(i, "volumetric eff percent") / 100, g.eta_v.value), 1e-8) << i;
+    EXPECT_LT(rel(pts.num(i, "U hm percent") / 100, g.eta_hm.U), 1e-8) << i;
+    EXPECT_LT(rel(pts.num(i, "flow at port [L/min]") / 60000, q[i]), 1e-9) << i;
+  }
+
+  // the drain table: drain flow over the theoretical flow of the displacement used
+  const auto drain = read_out(out + "/test_stand_drain.csv");
+  ASSERT_EQ(drain.rows.size(), n);
+  for (std::size_t i = 0; i < n; ++i)
+    EXPECT_LT(rel(drain.num(i, "drain fraction percent") / 100, d.si("drain flow")[i] / (v.v_m3_rev * d.si("speed")[i])),
+              1e-8)
+        << i;
+
+  const double rho = pumploss::oil_density_at(oil, d.si("drain temperature")[n / 2], 0.0).value;
+  std::vector<double> work(pumploss::loss_fit_workspace(n));
+  const auto m = pumploss::fit_loss_model(pumploss::machine::pump, pumploss::loss_model_kind::wilson, v.v_m3_rev, rho,
+                                          dp.data(), d.si("speed").data(), mu.data(), q.data(), d.si("torque").data(), n,
+                                          work.data());
+  ASSERT_EQ(m.st, pumploss::status::ok);
+  const auto lm = read_out(out + "/test_stand_loss_model.csv");
+  EXPECT_LT(rel(std::stod(lm.text(0, "Wilson")), m.c_s), 1e-4);
+  EXPECT_LT(rel(std::stod(lm.text(3, "Wilson")), m.c_f), 1e-4);
+  EXPECT_LT(rel(std::stod(lm.text(4, "Wilson")), m.t_c_n_m), 1e-4);
+  EXPECT_NE(r.out.find(fmt_r2(m.r2_flow)), std::string::npos) << r.out;
+
+  // the map: a point of the grid predicted by the Schloesser model at 50 degC
+  const auto map = read_out(out + "/test_stand_map.csv");
+  ASSERT_EQ(map.rows.size(), 29u * 27u);
+  const auto ms = pumploss::fit_loss_model(pumploss::machine::pump, pumploss::loss_model_kind::schloesser, v.v_m3_rev,
+                                           rho, dp.data(), d.si("speed").data(), mu.data(), q.data(),
+                                           d.si("torque").data(), n, work.data());
+  const std::size_t k = 10 * 29 + 12;  // pressure 10 of 27, speed 12 of 29
+  const double pk = map.num(k, "pressure difference [bar]") * 1e5, sk = map.num(k, "speed [rpm]") / 60;
+  const auto pr = pumploss::loss_model_predict(ms, pk, sk, pumploss::oil_dynamic_viscosity(oil, 323.15, 0.0).value);
+  EXPECT_LT(rel(map.num(k, "overall eff Schloesser percent") / 100, pr.eta_t), 1e-8);
+}
+
+TEST(CliDrainLine, DemoMatchesLibrary) {
+  temp_dir tmp;
+  const std::string out = tmp / "out";
+  const auto r = run({"drain-line", kDemo + "/drain_line.toml", "--size", "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  // the line of drain_line.toml, built here from the library
+  pumploss::line<double> l;
+  l.height_m = 0.6;
+  l.elements.push_back(pumploss::line_pipe(0.0127, 1.8, 5e-6));
+  l.elements.push_back(pumploss::line_pipe(0.013, 4.5, 0.0015e-3));
+  for (int k = 0; k < 3; ++k) l.elements.push_back(pumploss::line_fitting_k(0.013, 0.3));
+  l.elements.push_back(pumploss::line_fitting_k(0.013, 0.5));
+  l.elements.push_back(pumploss::line_fitting_k(0.013, 1.0));
+  const double qc[2] = {10.0 / 60000, 20.0 / 60000}, pc[2] = {0.05e5, 0.12e5};
+  l.elements.push_back(pumploss::line_component_points(2, qc, pc, 32e-6, 1.0).value);
+  const auto oil = demo_oil();
+  pumploss::drain_point<double> pts[8];
+  const auto sum = pumploss::drain_check(l, oil, 8.0 / 60000, 273.15, 343.15, 8, 0.0, 1e5, pts);
+  const auto t = read_out(out + "/drain_line_check.csv");
+  ASSERT_EQ(t.rows.size(), 8u);
+  for (std::size_t i = 0; i < 8; ++i) {
+    EXPECT_LT(rel(t.num(i, "case pressure [bar]") * 1e5, pts[i].case_pressure_pa), 1e-8) << i;
+    EXPECT_EQ(t.text(i, "verdict"), pts[i].pass ? "pass" : "FAIL") << i;
+  }
+  EXPECT_NE(r.out.find(sum.pass ? "PASS" : "FAIL"), std::string::npos);
+  const auto z = pumploss::size_drain_line(l, oil, 8.0 / 60000, 273.15, 343.15, 8, 0.0, 1e5, 1.5, 3);
+  ASSERT_GE(z.bore_index, 0);
+  EXPECT_NE(r.out.find(std::string("Smallest standard bore:  ") + pumploss::standard_bores[z.bore_index].name),
+            std::string::npos)
+      << r.out;
+  EXPECT_TRUE(has_cautions(r.out));
+}
+
+TEST(CliHealth, DemoMatchesLibrary) {
+  temp_dir tmp;
+  const std::string out = tmp / "out";
+  const auto r = run({"health", kDemo + "/field_readings.csv", "--pump", kDemo + "/pump_p31.toml", "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  const auto oil = demo_oil();
+  pumploss::health_reference<double> ref{71e-6, 250e5, 323.15, oil.viscosity,
+                                         pumploss::oil_density_at(oil, 323.15, 0.0).value, oil.cp_j_kg_k, 1.0, 1.0,
+                                         4.0 / 60000};
+  pumploss::health_bands<double> bands;
+  bands.sound_max = 0.06;
+  bands.acceptable_max = 0.10;
+  bands.worn_min = 0.15;
+  bands.growth_moderate = 0.25;
+  bands.growth_large = 0.50;
+  const auto d = read_csv(kDemo + "/field_readings.csv", field_columns());
+  const auto t = read_out(out + "/health_readings.csv");
+  const auto why = read_out(out + "/health_reasons.csv");
+  ASSERT_EQ(t.rows.size(), d.rows());
+  std::vector<double> days, frac;
+  for (std::size_t i = 0; i < d.rows(); ++i) {
+    pumploss::health_reading<double> rd{d.si("drain flow")[i], d.si("outlet pressure")[i], 0.0,
+                                        d.si("drain temperature")[i], d.si("speed")[i]};
+    rd.drain_t_k = d.si("drain temperature")[i];
+    rd.inlet_t_k = d.si("oil temperature")[i];
+    const auto a = pumploss::assess_health(ref, bands, rd);
+    EXPECT_LT(rel(t.num(i, "normalised drain flow [L/min]") / 60000, a.drain_at_reference_m3_s), 1e-8) << i;
+    EXPECT_EQ(t.text(i, "verdict"), pumploss::health_level_name(a.level)) << i;
+    for (unsigned bit = 1; bit <= a.reasons; bit <<= 1)
+      if (a.reasons & bit) {
+        EXPECT_NE(why.text(i, "reasons").find(pumploss::health_reason_text(bit)), std::string::npos) << i;
+      }
+    days.push_back(d.si("date")[i]);
+    frac.push_back(a.fraction_at_reference);
+  }
+  const auto tr = pumploss::fit_health_trend(days.data(), frac.data(), days.size(), 0.15);
+  char slope[64];
+  std::snprintf(slope, sizeof slope, "%+.2f percentage points per year over all %zu readings",
+                100 * 365.25 * tr.slope_per_day, days.size());
+  EXPECT_NE(r.out.find(slope), std::string::npos) << slope << "\n" << r.out;
+  EXPECT_NE(r.out.find("Latest verdict:       worn"), std::string::npos);
+}
+
+TEST(CliBudget, DemoMatchesLibrary) {
+  temp_dir tmp;
+  const std::string out = tmp / "out";
+  const auto r = run({"budget", kDemo + "/pump_p31.toml", "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  // pump_p31.toml, written out here
+  pumploss::piston_pump<double> p;
+  p.pistons = 9;
+  p.piston_diameter_m = 0.017;
+  p.bore_clearance_m = 15e-6;
+  p.piston_eccentricity = 0.3;
+  p.engaged_length_min_m = 0.021;
+  p.pitch_radius_m = 0.0568;
+  p.max_swash_angle_rad = 17 * M_PI / 180;
+  p.slipper_pocket_radius_m = 0.0055;
+  p.slipper_outer_radius_m = 0.010;
+  p.slipper_gap_m = 21e-6;
+  p.slipper_feed_diameter_m = 0.8e-3;
+  p.slipper_feed_length_m = 6e-3;
+  p.ball_diameter_m = 0.013;
+  p.ball_clearance_m = 6e-6;
+  p.ball_length_m = 0.003;
+  p.valve_inner_land_inner_radius_m = 0.038;
+  p.valve_inner_land_outer_radius_m = 0.042;
+  p.valve_outer_land_inner_radius_m = 0.058;
+  p.valve_outer_land_outer_radius_m = 0.062;
+  p.valve_kidney_arc_rad = 150 * M_PI / 180;
+  p.valve_gap_m = 16e-6;
+  p.controller_flow_m3_s = 0.3 / 60000;
+  const auto oil = demo_oil();
+  const auto t = read_out(out + "/budget_flows.csv");
+  const auto z = read_out(out + "/budget_sensitivity.csv");
+  ASSERT_EQ(t.rows.size(), 13u);  // 20 to 260 bar in steps of 20
+  for (std::size_t i = 0; i < 13; ++i) {
+    const pumploss::pump_operating_point<double> op{(20.0 + 20.0 * static_cast<double>(i)) * 1e5, 0.5e5, 25.0, 1.0,
+                                                    323.15};
+    const auto b = pumploss::piston_pump_budget(p, oil, op);
+    ASSERT_EQ(b.st, pumploss::status::ok);
+    EXPECT_LT(rel(t.num(i, "total [L/min]") / 60000, b.total_m3_s), 1e-8) << i;
+    EXPECT_LT(rel(t.num(i, "slipper [L/min]") / 60000, b.flow_m3_s[1]), 1e-8) << i;
+    EXPECT_LT(rel(t.num(i, "piston-bore [L/min]") / 60000, b.flow_m3_s[0]), 1e-8) << i;
+    const auto s = pumploss::piston_pump_sensitivity(p, oil, op);
+    EXPECT_LT(rel(z.num(i, "elasticity valve plate gap"), s.elasticity[3]), 1e-8) << i;
+  }
+  EXPECT_EQ(t.head.size(), 10u);  // pressure, 6 paths (no bleed orifice, no user paths), total, fraction, status
+}
+
+// ------------------------------------------------------------------------------ malformed inputs
+
+namespace {
+// The demo test-stand CSV with one change, as (file, line of the fault).
+std::string demo_stand() { return slurp(kDemo + "/test_stand.csv"); }
+
+std::string replace_line(const std::string& text, int line_no, const std::string& new_line) {
+  std::stringstream in(text);
+  std::string out, line;
+  int n = 0;
+  while (std::getline(in, line)) out += (++n == line_no ? new_line : line) + "\n";
+  return out;
+}
+
+std::string line_at(const std::string& text, int line_no) {
+  std::stringstream in(text);
+  std::string line;
+  for (int n = 0; n < line_no; ++n) std::getline(in, line);
+  return line;
+}
+
+// Run test-stand on a broken copy; expect exit 2, "file:line:" in the message and no output.
+void expect_rejected(const std::string& content, const std::string& where, const std::string& what) {
+  temp_dir tmp;
+  const std::string csv = tmp / "stand.csv", out = tmp / "out";
+  write_file(csv, content);
+  const auto r = run({"test-stand", csv, "--setup", kDemo + "/test_stand.toml", "--out", out}, tmp);
+  EXPECT_EQ(r.code, 2) << r.err;
+  EXPECT_NE(r.err.find(csv + ":" + where), std::string::npos) << r.err;
+  EXPECT_NE(r.err.find(what), std::string::npos) << r.err;
+  EXPECT_FALSE(fs::exists(out));
+  EXPECT_EQ(r.out, "");
+}
+}  // namespace
+
+TEST(CliMalformed, MissingColumn) {
+  // header is line 4 (three comment lines); drop the drain flow column from the header only
+  std::string s = demo_stand();
+  const std::string head = line_at(s, 4);
+  std::string cut = head;
+  cut.erase(cut.find(",drain flow [L/min]"), std::string(",drain flow [L/min]").size());
+  expect_rejected(replace_line(s, 4, cut), "4:", "missing column 'drain flow'");
+}
+
+TEST(CliMalformed, BadNumber) {
+  std::string s = demo_stand();
+  std::string row = line_at(s, 9);
+  const auto c1 = row.find(',');
+  const auto c2 = row.find(',', c1 + 1);
+  row = row.substr(0, c2 + 1) + "2OO.1" + row.substr(row.find(',', c2 + 1));
+  expect_rejected(replace_line(s, 9, row), "9:" + std::to_string(c2 + 2) + ":", "'2OO.1' is not a number");
+}
+
+TEST(CliMalformed, UnknownUnit) {
+  std::string s = demo_stand();
+  std::string head = line_at(s, 4);
+  head.replace(head.find("[N.m]"), 5, "[Nm]");
+  expect_rejected(replace_line(s, 4, head), "4:", "unknown unit 'Nm'");
+}
+
+TEST(CliMalformed, UnitOfTheWrongQuantity) {
+  std::string s = demo_stand();
+  std::string head = line_at(s, 4);
+  head.replace(head.find("[L/min]"), 7, "[bar]");
+  expect_rejected(replace_line(s, 4, head), "4:", "is a unit of pressure");
+}
+
+TEST(CliMalformed, EmptyFile) { expect_rejected("", "1:", "empty"); }
+
+TEST(CliMalformed, OnlyAHeader) {
+  expect_rejected("# no rows yet\n" + line_at(demo_stand(), 4) + "\n", "2:", "no data rows");
+}
+
+TEST(CliMalformed, WrongDelimiter) {
+  std::string s = demo_stand();
+  for (auto& c : s)
+    if (c == ',') c = ';';
+  expect_rejected(s, "4:", "separated by ';'");
+}
+
+TEST(CliMalformed, DecimalComma) {
+  std::string s = demo_stand();
+  std::string row = line_at(s, 12);
+  row.replace(row.find('.'), 1, ",");
+  expect_rejected(replace_line(s, 12, row), "12:", "decimal comma");
+}
+
+TEST(CliMalformed, ImpossibleValueNamesItsField) {
+  std::string s = demo_stand();
+  std::string row = line_at(s, 5);
+  row = "-" + row;  // negative speed
+  expect_rejected(replace_line(s, 5, row), "5:1:", "column 'speed'");
+}
+
+TEST(CliMalformed, ConfigurationErrorsNameLineAndColumn) {
+  temp_dir tmp;
+  const std::string oil = slurp(kDemo + "/oil.toml");
+  struct c {
+    std::string from, to, where, what;
+  };
+  const std::vector<c> cases = {
+      {"step = \"5 K\"", "step = \"5 K\"\nsetp = \"5 K\"", ":17:1:", "unknown key 'setp'"},
+      {"step = \"5 K\"", "", ":13:1:", "missing key 'step' in [temperatures]"},
+      {"density = \"872 kg/m3\"", "density = 872", ":8:11:", "needs a unit"},
+      {"\"6.9 cSt\"", "\"6.9 cSx\"", ":7:22:", "unknown unit 'cSx'"},
+      {"grade = 46 ", "grade = 45 ", ":6:9:", "not an ISO 3448 grade"},
+      {"[limits]", "[limits", ":18:", "expected ']'"},
+  };
+  for (const auto& k : cases) {
+    std::string text = oil;
+    const auto pos = text.find(k.from);
+    ASSERT_NE(pos, std::string::npos) << k.from;
+    text.replace(pos, k.from.size(), k.to);
+    const std::string file = tmp / "oil.toml", out = tmp / "out";
+    write_file(file, text);
+    const auto r = run({"oil", file, "--out", out}, tmp);
+    EXPECT_EQ(r.code, 2) << k.to << ": " << r.err;
+    EXPECT_NE(r.err.find(file + k.where), std::string::npos) << k.to << ": " << r.err;
+    EXPECT_NE(r.err.find(k.what), std::string::npos) << r.err;
+    EXPECT_FALSE(fs::exists(out));
+  }
+}
+
+TEST(CliMalformed, EveryCommandNamesTheLineAndWritesNothing) {
+  // broken copies of each demo input: (command, file to break, from, to, where, what)
+  struct c {
+    std::string command, file, from, to, where, what;
+  };
+  const std::vector<c> cases = {
+      {"health", "field_readings.csv", "2022-03-18,203,40.6", "2022-03-18,2O3,40.6", ":5:12:", "'2O3' is not a number"},
+      {"health", "field_readings.csv", "drain flow [L/min]", "drain flow [L/mn]", ":2:", "unknown unit 'L/mn'"},
+      {"health", "field_readings.csv", "2022-03-18,", "2022-13-18,", ":5:1:", "date"},
+      {"health", "field_readings.csv", ",speed [rpm],", ",", ":2:", "missing column 'speed'"},
+      {"budget", "pump_p31.toml", "gap = \"16 um\"", "gap = \"16\"", ":", "needs a unit"},
+      {"budget", "pump_p31.toml", "clearance = \"6 um\"", "clearance = \"6 um\"\nclearence = \"6 um\"", ":", "unknown key 'clearence'"},
+      {"budget", "pump_p31.toml", "pistons = 9", "pistons = 99", ":11:11:", "between 3 and 15"},
+      {"drain-line", "drain_line.toml", "length = \"4.5 m\"", "length = \"4.5 furlong\"", ":", "unknown unit 'furlong'"},
+      {"drain-line", "drain_line.toml", "k = 0.5", "k = -0.5", ":", "must not be negative"},
+      {"test-stand", "test_stand.toml", "reading_percent = 0.3", "reading_percent = 0,3", ":", "expected"},
+  };
+  for (const auto& k : cases) {
+    temp_dir tmp;
+    for (const char* f : {"oil.toml", "pump_p31.toml", "drain_line.toml", "field_readings.csv", "test_stand.csv",
+                          "test_stand.toml"})
+      write_file(tmp / f, slurp(kDemo + "/" + f));
+    std::string text = slurp(kDemo + "/" + k.file);
+    const auto pos = text.find(k.from);
+    ASSERT_NE(pos, std::string::npos) << k.from;
+    text.replace(pos, k.from.size(), k.to);
+    const std::string file = tmp / k.file, out = tmp / "out";
+    write_file(file, text);
+    std::vector<std::string> args;
+    if (k.command == "health") args = {"health", tmp / "field_readings.csv", "--pump", tmp / "pump_p31.toml"};
+    if (k.command == "budget") args = {"budget", tmp / "pump_p31.toml"};
+    if (k.command == "drain-line") args = {"drain-line", tmp / "drain_line.toml", "--size"};
+    if (k.command == "test-stand") args = {"test-stand", tmp / "test_stand.csv", "--setup", tmp / "test_stand.toml"};
+    args.push_back("--out");
+    args.push_back(out);
+    const auto r = run(args, tmp);
+    EXPECT_EQ(r.code, 2) << k.to << ": " << r.err;
+    const auto at = r.err.find(file + k.where);
+    EXPECT_NE(at, std::string::npos) << k.to << ": " << r.err;
+    // a line number follows the file name
+    if (at != std::string::npos) {
+      EXPECT_TRUE(std::isdigit(static_cast<unsigned char>(r.err[at + file.size() + 1]))) << r.err;
+    }
+    EXPECT_NE(r.err.find(k.what), std::string::npos) << r.err;
+    EXPECT_FALSE(fs::exists(out)) << k.to;
+    EXPECT_EQ(r.out, "") << k.to;
+  }
+}
+
+TEST(CliMalformed, SetupAndDataThatDoNotFitNameTheSetup) {
+  // the setup takes the viscosity at the drain temperature; the data lack that column: the
+  // library's refusal names the setting, the program the setup file
+  temp_dir tmp;
+  std::stringstream in(demo_stand());
+  std::string line, csv;
+  while (std::getline(in, line)) {
+    if (!line.empty() && line[0] != '#') {
+      std::size_t at = 0;
+      for (int k = 0; k < 8; ++k) at = line.find(',', at) + 1;
+      line.erase(at - 1, line.find(',', at) - at + 1);  // the 9th field: drain temperature
+    }
+    csv += line + "\n";
+  }
+  ASSERT_EQ(csv.find("drain temperature"), std::string::npos);
+  const std::string file = tmp / "stand.csv", out = tmp / "out";
+  write_file(file, csv);
+  const auto r = run({"test-stand", file, "--setup", kDemo + "/test_stand.toml", "--out", out}, tmp);
+  EXPECT_EQ(r.code, 2) << r.err;
+  EXPECT_NE(r.err.find(kDemo + "/test_stand.toml: "), std::string::npos) << r.err;
+  EXPECT_NE(r.err.find("'drain temperature'"), std::string::npos) << r.err;
+  EXPECT_FALSE(fs::exists(out));
+}
+
+TEST(CliMalformed, EmptyFieldReadings) {
+  temp_dir tmp;
+  const std::string file = tmp / "empty.csv", out = tmp / "out";
+  write_file(file, "");
+  const auto r = run({"health", file, "--pump", kDemo + "/pump_p31.toml", "--out", out}, tmp);
+  EXPECT_EQ(r.code, 2);
+  EXPECT_NE(r.err.find(file + ":1:"), std::string::npos) << r.err;
+  EXPECT_FALSE(fs::exists(out));
+}
+
+// ------------------------------------------------------------------------------ help and cautions
+
+TEST(CliHelp, EveryHelpCarriesTheCautions) {
+  temp_dir tmp;
+  for (const char* sub : {"", "units", "oil", "test-stand", "drain-line", "health", "budget"}) {
+    std::vector<std::string> args;
+    if (*sub) args.push_back(sub);
+    args.push_back("--help");
+    const auto r = run(args, tmp);
+    EXPECT_EQ(r.code, 0) << sub;
+    EXPECT_TRUE(has_cautions(r.out)) << sub << ":\n" << r.out;
+  }
+  EXPECT_EQ(run({}, tmp).code, 1);  // no subcommand
+  EXPECT_EQ(run({"pump-it"}, tmp).code, 1);
+}
+
+// ------------------------------------------------------------------------------ report format
+
+TEST(CliReport, UnitsInHeadingsFullPrecisionCsvAndCautionsAtTheFoot) {
+  temp_dir tmp;
+  const std::string out = tmp / "out";
+  const auto r = run({"budget", kDemo + "/pump_p31.toml", "--unit", "psi", "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  const std::string text = slurp(out + "/budget.txt");
+  EXPECT_NE(text.find("outlet pressure [psi]"), std::string::npos) << text;
+  EXPECT_TRUE(has_cautions(text));
+  EXPECT_EQ(text.rfind("take precedence.\n"), text.size() - 17);
+  const auto t = read_out(out + "/budget_flows.csv");
+  ASSERT_FALSE(t.rows.empty());
+  // 20 bar in psi to the CSV's ten significant digits
+  EXPECT_LT(rel(t.num(0, "outlet pressure [psi]"), pumploss::convert(20.0, "bar", "psi").value), 1e-9);
+  EXPECT_NE(t.head.back().find("status"), std::string::npos);
+}

@@ -1,0 +1,212 @@
+/// @file test_stand.hpp
+/// @brief Test-stand data reduction of a pump or motor as one workflow: readings in, per-point
+/// efficiencies with their uncertainty, the derived displacement, fitted loss models, an
+/// efficiency map and a drain table out, with a status and a list of messages.
+///
+/// The steps, each a function of the header core:
+/// 1. the flow corrected to port conditions where the meter sits in the return line
+///    (flow_at_port(): density ratio, ISO 4409:2019 clause 6 asks for the flow at the port);
+/// 2. the oil viscosity in the gaps at the chosen temperature (ASTM D341, oil_dynamic_viscosity());
+/// 3. the derived displacement by three estimators (ISO 8426-1): the slope of flow over speed at
+///    the lowest pressure level, the zero-pressure intercept at the highest speed level, and the
+///    two-step method over the whole grid; points belong to a level when their set-points lie
+///    within 3 % of the column's span (common practice, no source);
+/// 4. volumetric, hydromechanical and overall efficiency of every point with the expanded
+///    uncertainty (k = 2) propagated from the stated instrument limits to first order
+///    (JCGM 100:2008 GUM; limits as rectangular distributions, GUM 4.3.7), efficiency_gum();
+/// 5. a Wilson loss model (and optionally the Schloesser extension) fitted to the points
+///    (fit_loss_model()), and its overall-efficiency map over a pressure-speed grid at one
+///    temperature (loss_model_map());
+/// 6. the drain table: each point's case drain flow as a fraction of the theoretical flow
+///    V_i n, the trade's indicator of wear (common practice, no source: a high-quality piston
+///    pump drains about 5 % at maximum pressure, a worn one 15 % or more).
+///
+/// Every array is SI. Nothing throws except std::bad_alloc. The result's `st` is the worst status
+/// of the run: an error when the reduction could not be made (the first error message says why;
+/// the other results are then incomplete), else ok or a report code (>= 100) with messages.
+/// The messages name the row and column of a reading, or the setup field, they refer to, so a
+/// program can point its user at the line of the file.
+///
+/// Results are engineering estimates; the pump maker's data and acceptance rules govern.
+#ifndef PUMPLOSS_TEST_STAND_HPP
+#define PUMPLOSS_TEST_STAND_HPP
+
+#include <array>
+#include <cstddef>
+#include <string>
+#include <vector>
+
+#include "export.hpp"
+#include "efficiency.hpp"
+#include "fluid.hpp"
+#include "loss_model.hpp"
+#include "status.hpp"
+#include "uncertainty.hpp"
+
+namespace pumploss {
+
+/// Stated limits of one instrument: per cent of reading plus an absolute part, added as the
+/// calibration sheets state them.
+struct instrument_limits {
+  double reading_fraction = 0;  ///< e.g. 0.005 for 0.5 % of reading
+  double absolute = 0;          ///< absolute part in the SI unit of the quantity
+  bool rectangular = true;      ///< limits (u = a / sqrt 3, GUM 4.3.7) or a standard uncertainty
+};
+
+/// Standard uncertainty of one reading from an instrument's stated limits.
+/// @param ins the limits
+/// @param reading the reading (SI)
+/// @return u, in the unit of the reading
+PUMPLOSS_CXX_API double instrument_uncertainty(const instrument_limits& ins, double reading);
+
+/// Which temperature reading sets the viscosity in the gaps.
+enum class viscosity_temperature : int { inlet = 0, outlet = 1, drain = 2 };
+
+/// Which displacement the efficiencies use: one of the three estimators or the maker's figure.
+enum class displacement_choice : int {
+  slope = 0,      ///< displacement_slope() at the lowest pressure level
+  intercept = 1,  ///< displacement_intercept() at the highest speed level
+  two_step = 2,   ///< displacement_two_step() over the grid (the default)
+  nominal = 3     ///< the maker's nominal displacement (no uncertainty propagated)
+};
+
+/// How the test was made: machine, oil, flow meter, instruments, fit and map.
+struct test_stand_setup {
+  machine kind = machine::pump;             ///< pump (flow at the outlet) or motor (flow at the inlet)
+  double nominal_displacement_m3_rev = 0;   ///< the maker's figure, m^3/rev (> 0)
+  oil<double> fluid{};                      ///< the oil (D341 line, density, expansion, bulk modulus)
+  viscosity_temperature viscosity_at = viscosity_temperature::drain;  ///< which temperature sets the viscosity
+  displacement_choice displacement = displacement_choice::two_step;    ///< which displacement the efficiencies use
+  bool meter_at_port = true;                ///< the flow is read at the port (no correction)
+  double meter_pressure_pa = 0;             ///< gauge pressure at a meter in the return line, Pa
+  instrument_limits speed;                  ///< speed meter's stated limits (absolute part in rev/s)
+  instrument_limits pressure;               ///< pressure transducers' stated limits (absolute part in Pa)
+  instrument_limits flow;                   ///< flow meter's stated limits (absolute part in m^3/s)
+  instrument_limits torque;                 ///< torque meter's stated limits (absolute part in N m)
+  bool fit_schloesser = false;              ///< also fit the Schloesser extension
+  double map_speed_lo_rev_s = 0;            ///< lowest map speed, rev/s
+  double map_speed_hi_rev_s = 0;            ///< highest map speed, rev/s
+  double map_dp_lo_pa = 0;                  ///< lowest map pressure difference, Pa
+  double map_dp_hi_pa = 0;                  ///< highest map pressure difference, Pa
+  double map_temperature_k = 0;             ///< oil temperature of the map, K
+  std::size_t map_speeds = 29;              ///< grid columns (2 or more)
+  std::size_t map_pressures = 27;           ///< grid rows (2 or more)
+};
+
+/// The readings, one element per operating point (SI). Optional columns are empty when not measured.
+struct test_stand_readings {
+  std::vector<double> speed_rev_s;           ///< shaft speed, rev/s
+  std::vector<double> inlet_pressure_pa;     ///< gauge, Pa
+  std::vector<double> outlet_pressure_pa;    ///< gauge, Pa
+  std::vector<double> flow_m3_s;             ///< pump outlet or motor inlet flow as the meter read it, m^3/s
+  std::vector<double> torque_n_m;            ///< shaft torque, N m
+  std::vector<double> drain_flow_m3_s;       ///< case drain flow, m^3/s
+  std::vector<double> inlet_temperature_k;   ///< K
+  std::vector<double> outlet_temperature_k;  ///< K (optional)
+  std::vector<double> drain_temperature_k;   ///< K (optional)
+  std::vector<double> meter_temperature_k;   ///< K at the flow meter (needed for a return-line meter)
+  std::vector<double> case_pressure_pa;      ///< gauge, Pa (optional; not used yet)
+};
+
+/// One message of a reduction: an error that stopped it, or a report on the results.
+struct test_stand_message {
+  static constexpr std::size_t no_row = static_cast<std::size_t>(-1);  ///< `row` of a message on no single row
+  status st = status::ok;     ///< the error or report code
+  std::size_t row = no_row;   ///< index of the reading it concerns, or no_row
+  std::string column;         ///< the reading it concerns ("speed", "outlet flow", ...), or empty
+  std::string setting;        ///< the setup field it concerns ("viscosity_at", "map_temperature_k", ...), or empty
+  std::string text;           ///< the sentence
+  bool follows_value = false; ///< the sentence follows the reading's value ("is not a speed above zero ...")
+};
+
+/// One operating point after reduction.
+struct test_stand_point {
+  double speed_rev_s = 0;                   ///< speed, rev/s
+  double dp_pa = 0;                         ///< pressure difference across the machine, Pa
+  double flow_m3_s = 0;                     ///< flow at the port (corrected where the meter is elsewhere)
+  double torque_n_m = 0;                    ///< torque, N m
+  double mu_pa_s = 0;                       ///< viscosity in the gaps, Pa s
+  efficiency_uncertainty<double> eta{};     ///< efficiencies with their GUM uncertainties (U = k u, k = 2)
+  double flow_residual_m3_s = 0;            ///< residual of the first fitted model's flow
+  double torque_residual_n_m = 0;           ///< residual of the first fitted model's torque
+  std::size_t speed_level = 0;              ///< speed set-point level (0 the lowest)
+  std::size_t pressure_level = 0;           ///< pressure set-point level (0 the lowest)
+  status st = status::ok;                   ///< the point's efficiency status (ok, implausible)
+};
+
+/// One row of the drain table.
+struct test_stand_drain {
+  double drain_flow_m3_s = 0;  ///< case drain flow as read
+  double fraction = 0;         ///< drain flow / (V_i n): share of the theoretical flow
+  double loss_share = 0;       ///< drain flow / (V_i n - Q_port) for a pump, / (Q_port - V_i n) for a motor: share of the volumetric loss (NaN when the loss is not positive)
+};
+
+/// The overall-efficiency map of one fitted model.
+struct test_stand_map {
+  loss_model_kind model = loss_model_kind::wilson;  ///< the model mapped
+  std::vector<double> eta_t;   ///< row-major [pressure index][speed index]
+  std::vector<status> st;      ///< per grid point (ok, extrapolated, or an error)
+};
+
+/// Everything a reduction gives.
+struct test_stand_result {
+  status st = status::ok;                        ///< worst status of the run (error: the reduction stopped)
+  std::vector<test_stand_message> messages;      ///< errors and reports, in the order they arose
+  std::size_t speed_levels = 0;                  ///< speed set-point levels found
+  std::size_t pressure_levels = 0;               ///< pressure set-point levels found
+  std::array<displacement_result<double>, 3> estimators{};  ///< slope, intercept, two-step
+  double displacement_m3_rev = 0;                ///< V_i used for the efficiencies
+  double u_displacement_m3_rev = 0;              ///< its standard uncertainty (0 for the nominal figure)
+  displacement_choice displacement_used = displacement_choice::two_step;  ///< where displacement_m3_rev came from
+  bool flow_corrected = false;                    ///< the flow was corrected to port conditions
+  std::vector<test_stand_point> points;          ///< per reading
+  std::vector<test_stand_drain> drain;           ///< per reading
+  double fit_density_kg_m3 = 0;                  ///< density the Schloesser terms used (oil at the middle point)
+  std::vector<loss_model<double>> models;        ///< Wilson, then Schloesser when asked for
+  std::vector<double> map_speed_rev_s;           ///< map grid speeds
+  std::vector<double> map_dp_pa;                 ///< map grid pressure differences
+  double map_mu_pa_s = 0;                        ///< viscosity of the map temperature
+  std::vector<test_stand_map> maps;              ///< one per model
+  std::size_t map_extrapolated = 0;              ///< grid points outside the tested range (worst over the models)
+};
+
+/// Reduce a test-stand data set.
+/// @param setup how the test was made
+/// @param readings the readings (every column of one length; required: speed, pressures, flow,
+///        torque, drain flow, inlet temperature, and the temperature setup.viscosity_at names;
+///        a return-line meter also needs the meter temperature and the port's temperature)
+/// @return the results; st is an error (domain, insufficient_data, misuse, nonfinite, or the
+///         failing step's code) when the reduction could not be made, with the reason first in
+///         messages; else ok or a report: regime (a flow correction across more than 150 K, or a
+///         grid smaller than 5 x 5 for the two-step estimator), ill_conditioned (a fit),
+///         extrapolated (map points outside the tests), implausible (an efficiency above 1).
+/// @par Source
+/// ISO 4409:2019 (test method), ISO 8426-1 (derived displacement), JCGM 100:2008 (uncertainty),
+/// Wilson and Schloesser loss models as in docs/pages/theory_efficiency.md.
+PUMPLOSS_CXX_API test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_stand_readings& readings);
+
+/// A message as one sentence for a log or a C caller: "reading 8, speed: -8.333 is not a speed
+/// above zero (and below 60000 rpm)", "setting viscosity_at: ...", or the text alone.
+/// @param m a message of reduce_test_stand()
+/// @param readings the readings it came from (for the value of a reading; SI)
+/// @return the sentence
+PUMPLOSS_CXX_API std::string describe(const test_stand_message& m, const test_stand_readings& readings);
+
+/// The name of a displacement choice ("slope", "intercept", "two-step", "nominal").
+/// @param c the choice
+/// @return a static string
+PUMPLOSS_CXX_API const char* displacement_choice_name(displacement_choice c) noexcept;
+
+/// The name of a viscosity temperature ("inlet", "outlet", "drain").
+/// @param t the choice
+/// @return a static string
+PUMPLOSS_CXX_API const char* viscosity_temperature_name(viscosity_temperature t) noexcept;
+
+/// The name of a loss model ("Wilson", "Schloesser").
+/// @param k the model
+/// @return a static string
+PUMPLOSS_CXX_API const char* loss_model_name(loss_model_kind k) noexcept;
+
+}  // namespace pumploss
+
+#endif

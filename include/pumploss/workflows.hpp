@@ -1,0 +1,111 @@
+/// @file workflows.hpp
+/// @brief Small workflows behind the program's reports, callable by an embedder: an oil's
+/// property table over temperature checked against the pump maker's viscosity limits, and the
+/// leakage budget of a described piston pump over a pressure sweep.
+///
+/// Each takes SI inputs and returns a struct with a status (the first error stops it and says
+/// where) and the rows a report shows. Nothing throws except std::bad_alloc. Results are
+/// engineering estimates; the pump maker's data and limits govern.
+#ifndef PUMPLOSS_WORKFLOWS_HPP
+#define PUMPLOSS_WORKFLOWS_HPP
+
+#include <cstddef>
+#include <limits>
+#include <vector>
+
+#include "export.hpp"
+#include "fluid.hpp"
+#include "piston_pump.hpp"
+#include "status.hpp"
+
+namespace pumploss {
+
+/// The pump maker's viscosity limits (NaN: not given).
+struct viscosity_limits {
+  double min_m2_s = std::numeric_limits<double>::quiet_NaN();        ///< lowest running viscosity
+  double max_m2_s = std::numeric_limits<double>::quiet_NaN();        ///< highest running viscosity
+  double max_start_m2_s = std::numeric_limits<double>::quiet_NaN();  ///< highest viscosity at a start
+};
+
+/// An oil's viscosity against the maker's limits.
+enum class viscosity_verdict : int {
+  not_checked = 0,         ///< no limits given
+  ok = 1,                  ///< within the running range
+  start_only = 2,          ///< above the running maximum, below the start maximum
+  too_thick_to_start = 3,  ///< above the start maximum
+  too_thin = 4             ///< below the running minimum
+};
+
+/// One row of an oil table.
+struct oil_property_row {
+  double t_k = 0;           ///< temperature, K
+  double nu_m2_s = 0;       ///< kinematic viscosity (ASTM D341), m^2/s
+  double mu_pa_s = 0;       ///< dynamic viscosity at zero gauge pressure, Pa s
+  double rho_kg_m3 = 0;     ///< density at zero gauge pressure, kg/m^3
+  status st = status::ok;   ///< worst status of the three (regime outside the stated ranges)
+  viscosity_verdict verdict = viscosity_verdict::not_checked;  ///< against the maker's limits
+};
+
+/// An oil's properties over temperature.
+struct oil_property_table {
+  status st = status::ok;                      ///< ok, regime (some row outside a stated range), or the first error
+  std::size_t failed_row = static_cast<std::size_t>(-1);  ///< the temperature that failed (on an error)
+  std::vector<oil_property_row> rows;          ///< one per temperature (up to the failed one)
+  double nu40_m2_s = 0;                        ///< viscosity at 40 degC (for the grade check)
+  bool inside_grade = false;                   ///< nu40 inside the ISO 3448 band of the grade given
+};
+
+/// Tabulate an oil over temperatures and check each against the maker's limits.
+/// @param o the oil
+/// @param t_k temperatures, K
+/// @param limits the maker's viscosity limits (NaN where not given)
+/// @param iso_grade an ISO 3448 grade to check the 40 degC viscosity against (0: none)
+/// @return the table; an error status (the failing step's) with failed_row on a temperature
+///         where the properties are not defined
+/// @par Source
+/// ASTM D341-20 (viscosity), ISO 3448:1992 (grades); density as in fluid.hpp.
+PUMPLOSS_CXX_API oil_property_table tabulate_oil(const oil<double>& o, const std::vector<double>& t_k, const viscosity_limits& limits,
+                                int iso_grade = 0);
+
+/// A pressure sweep of a piston pump at one speed, temperature and displacement.
+struct pump_sweep {
+  double from_pa = 0;                          ///< first outlet pressure (gauge), Pa
+  double to_pa = 0;                            ///< last outlet pressure (inclusive), Pa
+  double step_pa = 0;                          ///< pressure step, Pa
+  double case_pa = 0;                          ///< case pressure (gauge), Pa
+  double speed_rev_s = 0;                      ///< rev/s
+  double displacement_fraction = 1;            ///< 0..1
+  double temperature_k = 0;                    ///< oil temperature, K
+  bool with_reference = false;                 ///< also evaluate `reference`
+  pump_operating_point<double> reference{};    ///< e.g. the health reference state
+};
+
+/// One pressure of a sweep.
+struct pump_sweep_point {
+  double outlet_pa = 0;                     ///< outlet pressure, Pa
+  leakage_budget<double> budget{};          ///< flow of every path, shares, total
+  budget_sensitivity<double> sensitivity{}; ///< elasticities and derivatives to each gap
+};
+
+/// A sweep's results.
+struct pump_sweep_result {
+  status st = status::ok;                   ///< ok, a report of some point (worst), or the first error
+  std::size_t failed_point = static_cast<std::size_t>(-1);  ///< the pressure that failed (on an error)
+  std::vector<pump_sweep_point> points;     ///< one per pressure
+  double max_gap_reynolds = 0;              ///< largest gap Reynolds number of the sweep
+  leakage_budget<double> reference{};       ///< the budget at the reference (when asked for)
+};
+
+/// The leakage budget and its gap sensitivities over a pressure sweep (at most 1001 pressures).
+/// @param p the pump (validate_piston_pump() it first)
+/// @param o the oil
+/// @param s the sweep
+/// @return the results; status::domain for a sweep that is not step > 0, to > from > case
+///         pressure and at most 1000 steps
+/// @par Source
+/// piston_pump_budget() and piston_pump_sensitivity() (docs/pages/theory_pump.md).
+PUMPLOSS_CXX_API pump_sweep_result sweep_piston_pump(const piston_pump<double>& p, const oil<double>& o, const pump_sweep& s);
+
+}  // namespace pumploss
+
+#endif

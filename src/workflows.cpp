@@ -1,0 +1,79 @@
+// The oil table and the piston-pump pressure sweep (workflows.hpp).
+#include "pumploss/workflows.hpp"
+
+#include <algorithm>
+#include <cmath>
+
+namespace pumploss {
+
+oil_property_table tabulate_oil(const oil<double>& o, const std::vector<double>& t_k, const viscosity_limits& limits,
+                                int iso_grade) {
+  oil_property_table t;
+  if (iso_grade != 0) {
+    const auto g = iso_vg(iso_grade);
+    if (!g.usable()) {
+      t.st = g.st;
+      return t;
+    }
+    t.nu40_m2_s = d341_viscosity(o.viscosity, 313.15).value;
+    t.inside_grade = t.nu40_m2_s >= g.value.min_m2_s && t.nu40_m2_s <= g.value.max_m2_s;
+  }
+  const bool have_limits =
+      !std::isnan(limits.min_m2_s) || !std::isnan(limits.max_m2_s) || !std::isnan(limits.max_start_m2_s);
+  for (std::size_t i = 0; i < t_k.size(); ++i) {
+    const double tk = t_k[i];
+    const auto nu = oil_kinematic_viscosity(o, tk);
+    const auto rho = oil_density_at(o, tk, 0.0);
+    const auto mu = oil_dynamic_viscosity(o, tk, 0.0);
+    if (!nu.usable() || !rho.usable() || !mu.usable()) {
+      t.st = !nu.usable() ? nu.st : (!rho.usable() ? rho.st : mu.st);
+      t.failed_row = i;
+      return t;
+    }
+    oil_property_row r;
+    r.t_k = tk;
+    r.nu_m2_s = nu.value;
+    r.mu_pa_s = mu.value;
+    r.rho_kg_m3 = rho.value;
+    r.st = nu.st != status::ok ? nu.st : rho.st;
+    if (r.st != status::ok) t.st = worst(t.st, status::regime);
+    if (have_limits) {
+      r.verdict = viscosity_verdict::ok;
+      if (nu.value > limits.max_start_m2_s) r.verdict = viscosity_verdict::too_thick_to_start;
+      else if (nu.value > limits.max_m2_s) r.verdict = viscosity_verdict::start_only;
+      else if (nu.value < limits.min_m2_s) r.verdict = viscosity_verdict::too_thin;
+    }
+    t.rows.push_back(r);
+  }
+  return t;
+}
+
+pump_sweep_result sweep_piston_pump(const piston_pump<double>& p, const oil<double>& o, const pump_sweep& s) {
+  pump_sweep_result r;
+  if (!(s.step_pa > 0) || !(s.to_pa > s.from_pa) || !(s.from_pa > s.case_pa) ||
+      (s.to_pa - s.from_pa) / s.step_pa > 1000 || !std::isfinite(s.to_pa)) {
+    r.st = status::domain;
+    return r;
+  }
+  for (int i = 0;; ++i) {
+    const double pout = s.from_pa + i * s.step_pa;
+    if (pout > s.to_pa * (1 + 1e-12)) break;
+    const pump_operating_point<double> op{pout, s.case_pa, s.speed_rev_s, s.displacement_fraction, s.temperature_k};
+    pump_sweep_point pt;
+    pt.outlet_pa = pout;
+    pt.budget = piston_pump_budget(p, o, op);
+    if (is_error(pt.budget.st)) {
+      r.st = pt.budget.st;
+      r.failed_point = r.points.size();
+      return r;
+    }
+    pt.sensitivity = piston_pump_sensitivity(p, o, op);
+    r.st = worst(r.st, pt.budget.st);
+    r.max_gap_reynolds = std::max(r.max_gap_reynolds, pt.budget.max_gap_reynolds);
+    r.points.push_back(pt);
+  }
+  if (s.with_reference) r.reference = piston_pump_budget(p, o, s.reference);
+  return r;
+}
+
+}  // namespace pumploss

@@ -1,0 +1,139 @@
+// The table reader (table_reader.hpp): header units converted to SI (exact factors of NIST SP 811
+// 2008, Appendix B), dates, missing values, and every refusal with its line and column.
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <cstdio>
+#include <fstream>
+
+#include "pumploss/table_reader.hpp"
+
+namespace {
+
+using pumploss::column_kind;
+using pumploss::dimension;
+using pumploss::status;
+
+const std::vector<pumploss::column_spec> kSpec = {{"p", column_kind::quantity, dimension::pressure, true},
+                                                  {"q", column_kind::quantity, dimension::volume_flow, true},
+                                                  {"t", column_kind::quantity, dimension::temperature, true},
+                                                  {"note", column_kind::text, dimension::pressure, false}};
+
+struct bad_case {
+  const char* text;
+  status st;
+  int line, column;
+  const char* what;
+};
+
+}  // namespace
+
+TEST(TableReader, ConvertsHeaderUnitsToSi) {
+  const auto d = pumploss::read_table("\xEF\xBB\xBF# comment\nP [psi], Q [gpm],T [degF],note\n100,2,212,\"a, b\"\n\n"
+                                      "1e3,0.5,32,x\n",
+                                      kSpec, "a.csv");
+  ASSERT_EQ(d.error.st, status::ok) << d.error.message;
+  ASSERT_EQ(d.rows(), 2u);
+  EXPECT_EQ(d.line[0], 3);
+  EXPECT_EQ(d.line[1], 5);
+  // NIST SP 811 (2008), Appendix B: 1 psi = 6894.757293168361 Pa, 1 gal = 3.785411784e-3 m^3 (exact)
+  EXPECT_NEAR(d.si("p")[0], 689475.7293168361, 1e-9);
+  EXPECT_NEAR(d.si("q")[1], 0.5 * 3.785411784e-3 / 60, 1e-18);
+  EXPECT_NEAR(d.si("t")[0], 373.15, 1e-12);  // 212 degF
+  EXPECT_NEAR(d.si("t")[1], 273.15, 1e-12);  // 32 degF
+  EXPECT_EQ(d.texts[3][0], "a, b");
+  EXPECT_EQ(d.pos[1][0], 5);  // "2" stands in character column 5 of "100,2,..."
+  EXPECT_TRUE(d.has("note"));
+  EXPECT_FALSE(d.has("nothing"));
+  EXPECT_TRUE(d.si("nothing").empty());
+  EXPECT_EQ(d.unit[0]->symbol, std::string("psi"));
+}
+
+TEST(TableReader, DatesAndCalendar) {
+  // 2024-02-29 is day 19782 after 1970-01-01 (self-calculated: 54 years of 365 days + 13 leap days + 59)
+  EXPECT_EQ(pumploss::days_from_civil(1970, 1, 1), 0);
+  EXPECT_EQ(pumploss::days_from_civil(2024, 2, 29), 54 * 365 + 13 + 59);
+  EXPECT_EQ(pumploss::civil_from_days(pumploss::days_from_civil(2024, 2, 29)), "2024-02-29");
+  EXPECT_EQ(pumploss::civil_from_days(-1), "1969-12-31");
+  const std::vector<pumploss::column_spec> spec = {{"date", column_kind::date, dimension::pressure, true},
+                                                   {"x", column_kind::number, dimension::pressure, true}};
+  const auto ok = pumploss::read_table("date,x\n2024-02-29,1\n", spec);
+  ASSERT_EQ(ok.error.st, status::ok);
+  EXPECT_EQ(ok.si("date")[0], 19782.0);
+  const auto bad = pumploss::read_table("date,x\n2023-02-29,1\n", spec);
+  EXPECT_EQ(bad.error.st, status::domain);
+  EXPECT_EQ(bad.error.line, 2);
+  EXPECT_EQ(bad.error.column, 1);
+}
+
+TEST(TableReader, MissingValuesWhereAllowed) {
+  std::vector<pumploss::column_spec> spec = {{"a", column_kind::number, dimension::pressure, true},
+                                             {"b", column_kind::quantity, dimension::pressure, true, true}};
+  const auto d = pumploss::read_table("a,b [bar]\n1,\n2,3\n", spec);
+  ASSERT_EQ(d.error.st, status::ok) << d.error.message;
+  EXPECT_TRUE(std::isnan(d.si("b")[0]));
+  EXPECT_EQ(d.si("b")[1], 3e5);
+  spec[1].allow_missing = false;
+  const auto e = pumploss::read_table("a,b [bar]\n1,\n", spec);
+  EXPECT_EQ(e.error.st, status::domain);
+  EXPECT_EQ(e.error.line, 2);
+  EXPECT_NE(e.error.message.find("empty field"), std::string::npos);
+}
+
+TEST(TableReader, RefusalsNameLineAndColumn) {
+  const bad_case cases[] = {
+      {"p [bar],q [L/min],t [degC]\ninf,1,2\n", status::domain, 2, 1, "'inf' is not a number"},
+      {"p [bar],q [L/min],t [degC]\n1,nan,2\n", status::domain, 2, 3, "'nan' is not a number"},
+      {"p [bar],q [L/min],t [degC]\n0x10,1,2\n", status::domain, 2, 1, "not a number"},
+      {"p [bar],q [L/min],t [degC]\n1e999,1,2\n", status::domain, 2, 1, "not a number"},
+      {"p [bar],q [L/min],t [degC],x\n1,1,1,1\n", status::domain, 1, 28, "unknown column 'x'"},
+      {"p [bar],q [L/min],p [bar],t [degC]\n", status::domain, 1, 19, "appears twice"},
+      {"p [bar],q [L/min]\n1,2\n", status::insufficient_data, 1, 0, "missing column 't'"},
+      {"p,q [L/min],t [degC]\n1,2,3\n", status::domain, 1, 1, "needs its unit"},
+      {"p [bars],q [L/min],t [degC]\n", status::unknown_unit, 1, 1, "unknown unit 'bars'"},
+      {"p [L/min],q [L/min],t [degC]\n", status::incompatible_units, 1, 1, "is a unit of volume flow"},
+      {"p [bar];q [L/min];t [degC]\n", status::domain, 1, 8, "separated by ';'"},
+      {"p [bar],q [L/min],t [degC]\n1,2,5,5\n", status::domain, 2, 7, "decimal comma"},
+      {"p [bar],q [L/min],t [degC]\n1;2;3\n", status::domain, 2, 0, "not separated by commas"},
+      {"p [bar],q [L/min],t [degC],note\n1,2,3,\"open\n", status::domain, 2, 7, "closing quote"},
+      {"p [bar],q [L/min],t [degC],note\n1,2,3,\"a\"b\n", status::domain, 2, 10, "after a closing quote"},
+      {"", status::insufficient_data, 1, 0, "empty"},
+      {"# only a comment\n", status::insufficient_data, 1, 0, "empty"},
+      {"p [bar],q [L/min],t [degC]\n", status::insufficient_data, 1, 0, "no data rows"},
+      {"p [bar],q [L/min],t [degC],note [m]\n", status::domain, 1, 28, "takes no unit"},
+      {"p [bar,q [L/min],t [degC]\n", status::domain, 1, 1, "write the unit as"},
+  };
+  for (const auto& c : cases) {
+    const auto d = pumploss::read_table(c.text, kSpec, "f.csv");
+    EXPECT_EQ(d.error.st, c.st) << c.text;
+    EXPECT_EQ(d.error.line, c.line) << c.text;
+    EXPECT_EQ(d.error.column, c.column) << c.text << ": " << d.error.message;
+    EXPECT_NE(d.error.message.find(c.what), std::string::npos) << c.text << ": " << d.error.message;
+  }
+}
+
+TEST(TableReader, ReadsAFileAndRefusesAMissingOne) {
+  const std::string path = ::testing::TempDir() + "pumploss_table_reader_test.csv";
+  {
+    std::ofstream out(path, std::ios::binary);
+    out << "t [K],p [kPa],q [L/s]\r\n300,1,2\r\n";
+  }
+  const auto d = pumploss::read_table_file(path, kSpec);
+  std::remove(path.c_str());
+  ASSERT_EQ(d.error.st, status::ok) << d.error.message;
+  EXPECT_EQ(d.source, path);
+  EXPECT_EQ(d.si("p")[0], 1e3);
+  EXPECT_EQ(d.si("q")[0], 2e-3);
+  const auto none = pumploss::read_table_file(path, kSpec);
+  EXPECT_EQ(none.error.st, status::misuse);
+  EXPECT_EQ(none.error.line, 0);
+}
+
+TEST(TableReader, NumbersAndNames) {
+  EXPECT_EQ(pumploss::parse_number(" -1.5e3 ").value_or(0), -1500.0);
+  EXPECT_FALSE(pumploss::parse_number("1,5"));
+  EXPECT_FALSE(pumploss::parse_number(""));
+  EXPECT_FALSE(pumploss::parse_number("Infinity"));
+  EXPECT_STREQ(pumploss::dimension_name(dimension::rotational_speed), "speed");
+  EXPECT_EQ(pumploss::unit_symbols(dimension::density), "kg/m3, g/cm3");
+}

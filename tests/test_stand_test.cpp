@@ -1,0 +1,298 @@
+// The test-stand reduction (test_stand.hpp) end to end on data generated from a known truth: a
+// pump that follows Wilson's loss model exactly (the displacement, slip and friction
+// coefficients are then recovered to rounding), the same pump with measurement noise and
+// temperature drift (recovered within the reported uncertainties), a flow meter in the return
+// line, and the messy inputs people produce (short columns, impossible values, a missing
+// temperature, an incomplete grid, a motor's pressures the wrong way round).
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <random>
+
+#include "pumploss/test_stand.hpp"
+
+namespace {
+
+using pumploss::status;
+
+constexpr double kPi = 3.14159265358979323846;
+
+// The truth (self-calculated, invented for the test): an axial piston pump of 71 cm3/rev.
+struct truth {
+  double v = 71e-6;      // displacement, m^3/rev
+  double c_s = 4.0e-9;   // laminar slip
+  double c_v = 2.0e4;    // viscous drag
+  double c_f = 0.02;     // Coulomb friction
+  double t_c = 1.5;      // constant torque loss, N m
+  double drain_share = 0.8;  // share of the slip that leaves through the case drain
+};
+
+pumploss::oil<double> vg46() {
+  // ISO VG 46 mid-point at 40 degC and 6.9 cSt at 100 degC (a typical HM oil's data sheet, invented here)
+  const auto line = pumploss::d341_fit(313.15, 46e-6, 373.15, 6.9e-6);
+  EXPECT_TRUE(line.ok());
+  return pumploss::typical_mineral_oil(line.value);
+}
+
+pumploss::test_stand_setup setup_for(const pumploss::oil<double>& oil) {
+  pumploss::test_stand_setup s;
+  s.kind = pumploss::machine::pump;
+  s.nominal_displacement_m3_rev = 71e-6;
+  s.fluid = oil;
+  s.viscosity_at = pumploss::viscosity_temperature::drain;
+  s.speed = {0.001, 0.5 / 60, true};
+  s.pressure = {0.0, 0.25e5, true};
+  s.flow = {0.003, 0.0, true};
+  s.torque = {0.002, 0.1, true};
+  s.fit_schloesser = true;
+  s.map_speed_lo_rev_s = 400.0 / 60;
+  s.map_speed_hi_rev_s = 1800.0 / 60;
+  s.map_dp_lo_pa = 20e5;
+  s.map_dp_hi_pa = 280e5;
+  s.map_temperature_k = 323.15;
+  return s;
+}
+
+// A grid of 5 speeds x 6 pressures (speed-major, as a test runs it) from the truth at the drain
+// temperatures `t_k(i)`, with relative noise `noise` on flow and torque.
+template <class Temp>
+pumploss::test_stand_readings make_readings(const truth& w, const pumploss::oil<double>& oil, Temp t_k, double noise,
+                                            unsigned seed = 1) {
+  std::mt19937 rng(seed);
+  std::normal_distribution<double> gauss(0.0, 1.0);
+  pumploss::test_stand_readings r;
+  std::size_t i = 0;
+  for (int k = 0; k < 5; ++k)
+    for (int j = 0; j < 6; ++j, ++i) {
+      const double n = (500.0 + 250.0 * k) / 60;
+      const double dp = (j == 0 ? 20e5 : 50e5 * j);
+      const double t = t_k(i);
+      const double mu = pumploss::oil_dynamic_viscosity(oil, t, 0.0).value;
+      const double d = w.v / (2 * kPi);
+      const double slip = w.c_s * d * dp / mu;
+      const double q = w.v * n - slip;
+      const double tq = d * dp + w.c_v * d * mu * 2 * kPi * n + w.c_f * d * dp + w.t_c;
+      r.speed_rev_s.push_back(n);
+      r.inlet_pressure_pa.push_back(0.3e5);
+      r.outlet_pressure_pa.push_back(0.3e5 + dp);
+      r.flow_m3_s.push_back(q * (1 + noise * gauss(rng)));
+      r.torque_n_m.push_back(tq * (1 + noise * gauss(rng)));
+      r.drain_flow_m3_s.push_back(w.drain_share * slip);
+      r.inlet_temperature_k.push_back(t - 3);
+      r.drain_temperature_k.push_back(t);
+    }
+  return r;
+}
+
+double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
+
+}  // namespace
+
+TEST(TestStandReduction, ExactWilsonPumpIsRecovered) {
+  const truth w;
+  const auto oil = vg46();
+  const auto s = setup_for(oil);
+  const auto r = make_readings(w, oil, [](std::size_t) { return 323.15; }, 0.0);
+  const auto res = pumploss::reduce_test_stand(s, r);
+  ASSERT_TRUE(pumploss::is_usable(res.st)) << res.messages.front().text;
+  EXPECT_EQ(res.speed_levels, 5u);
+  EXPECT_EQ(res.pressure_levels, 6u);
+  // every estimator finds the true displacement: slip does not depend on speed at one viscosity
+  for (const auto& e : res.estimators) {
+    ASSERT_EQ(e.st, status::ok) << pumploss::displacement_estimator_name(e.estimator);
+    EXPECT_LT(rel(e.v_m3_rev, w.v), 1e-12) << pumploss::displacement_estimator_name(e.estimator);
+  }
+  EXPECT_LT(rel(res.displacement_m3_rev, w.v), 1e-12);
+  ASSERT_EQ(res.models.size(), 2u);
+  const auto& m = res.models[0];
+  EXPECT_EQ(m.model, pumploss::loss_model_kind::wilson);
+  EXPECT_LT(rel(m.c_s, w.c_s), 1e-9);
+  EXPECT_LT(rel(m.c_v, w.c_v), 1e-9);
+  EXPECT_LT(rel(m.c_f, w.c_f), 1e-9);
+  EXPECT_LT(rel(m.t_c_n_m, w.t_c), 1e-9);
+  ASSERT_EQ(res.points.size(), 30u);
+  for (std::size_t i = 0; i < 30; ++i) {
+    const auto& p = res.points[i];
+    const double q_th = w.v * r.speed_rev_s[i];
+    const double t_th = w.v * p.dp_pa / (2 * kPi);
+    EXPECT_LT(rel(p.eta.eta_v.value, r.flow_m3_s[i] / q_th), 1e-12) << i;
+    EXPECT_LT(rel(p.eta.eta_hm.value, t_th / r.torque_n_m[i]), 1e-12) << i;
+    EXPECT_GT(p.eta.eta_t.U, 0.0);
+    EXPECT_LT(std::fabs(p.flow_residual_m3_s), 1e-12 * q_th) << i;
+    // the drain table: the truth sends 80 % of the slip to the case
+    EXPECT_LT(rel(res.drain[i].loss_share, w.drain_share), 1e-9) << i;
+    EXPECT_LT(rel(res.drain[i].fraction, r.drain_flow_m3_s[i] / q_th), 1e-12) << i;
+  }
+  // the map at the test temperature reproduces the model's efficiency
+  ASSERT_EQ(res.maps.size(), 2u);
+  ASSERT_EQ(res.maps[0].eta_t.size(), 29u * 27u);
+  const std::size_t k = 10 * 29 + 12;
+  const auto pr = pumploss::loss_model_predict(m, res.map_dp_pa[10], res.map_speed_rev_s[12], res.map_mu_pa_s);
+  EXPECT_EQ(res.maps[0].eta_t[k], pr.eta_t);
+  // the map reaches below the tested speeds and above the tested pressures: reported
+  EXPECT_GT(res.map_extrapolated, 0u);
+  EXPECT_EQ(res.st, status::extrapolated);
+  ASSERT_FALSE(res.messages.empty());
+  EXPECT_EQ(res.messages.front().st, status::extrapolated);
+}
+
+TEST(TestStandReduction, NoisyDriftingPumpIsRecoveredWithinItsUncertainty) {
+  const truth w;
+  const auto oil = vg46();
+  auto s = setup_for(oil);
+  s.fit_schloesser = false;
+  // drain temperature drifting 45 to 52 degC over the run, 0.1 % noise on flow and torque
+  const auto r = make_readings(w, oil, [](std::size_t i) { return 318.15 + 0.25 * static_cast<double>(i); }, 1e-3, 7);
+  const auto res = pumploss::reduce_test_stand(s, r);
+  ASSERT_TRUE(pumploss::is_usable(res.st)) << res.messages.front().text;
+  const auto& e = res.estimators[2];
+  ASSERT_EQ(e.st, status::ok);
+  EXPECT_LT(std::fabs(e.v_m3_rev - w.v), 4 * e.u_v_m3_rev + 1e-3 * w.v) << e.v_m3_rev << " +- " << e.u_v_m3_rev;
+  const auto& m = res.models[0];
+  EXPECT_LT(std::fabs(m.c_f - w.c_f), 4 * m.u_c_f + 0.1 * w.c_f);
+  EXPECT_LT(std::fabs(m.t_c_n_m - w.t_c), 4 * m.u_t_c_n_m + 0.5);
+  EXPECT_GT(m.r2_torque, 0.99);
+  // the expanded uncertainty of the overall efficiency covers the truth at most points
+  int covered = 0;
+  for (std::size_t i = 0; i < 30; ++i) {
+    const auto& p = res.points[i];
+    const double mu = pumploss::oil_dynamic_viscosity(oil, r.drain_temperature_k[i], 0.0).value;
+    const double d = w.v / (2 * kPi);
+    const double q = w.v * p.speed_rev_s - w.c_s * d * p.dp_pa / mu;
+    const double tq = d * p.dp_pa + w.c_v * d * mu * 2 * kPi * p.speed_rev_s + w.c_f * d * p.dp_pa + w.t_c;
+    const double eta_t = q * p.dp_pa / (2 * kPi * p.speed_rev_s * tq);
+    if (std::fabs(p.eta.eta_t.value - eta_t) <= p.eta.eta_t.U) ++covered;
+  }
+  EXPECT_GE(covered, 27);  // k = 2: about 95 % of the points
+}
+
+TEST(TestStandReduction, ReturnLineMeterIsCorrectedToThePort) {
+  const truth w;
+  const auto oil = vg46();
+  auto s = setup_for(oil);
+  s.meter_at_port = false;
+  s.meter_pressure_pa = 0.5e5;
+  const auto port = make_readings(w, oil, [](std::size_t) { return 323.15; }, 0.0);
+  auto r = port;
+  // the meter sits in the return line at 0.5 bar and 40 degC: the same mass flow, another density
+  r.outlet_temperature_k.assign(30, 324.15);
+  r.meter_temperature_k.assign(30, 313.15);
+  for (std::size_t i = 0; i < 30; ++i) {
+    const double rho_port = pumploss::oil_density_at(oil, 324.15, r.outlet_pressure_pa[i]).value;
+    const double rho_meter = pumploss::oil_density_at(oil, 313.15, 0.5e5).value;
+    r.flow_m3_s[i] = port.flow_m3_s[i] * rho_port / rho_meter;
+  }
+  const auto res = pumploss::reduce_test_stand(s, r);
+  ASSERT_TRUE(pumploss::is_usable(res.st)) << res.messages.front().text;
+  EXPECT_TRUE(res.flow_corrected);
+  for (std::size_t i = 0; i < 30; ++i) EXPECT_LT(rel(res.points[i].flow_m3_s, port.flow_m3_s[i]), 1e-12) << i;
+  EXPECT_LT(rel(res.displacement_m3_rev, w.v), 1e-9);
+  // without the meter temperature the correction cannot be made: the setting and the column are named
+  r.meter_temperature_k.clear();
+  const auto bad = pumploss::reduce_test_stand(s, r);
+  EXPECT_EQ(bad.st, status::insufficient_data);
+  ASSERT_EQ(bad.messages.size(), 1u);
+  EXPECT_EQ(bad.messages[0].column, "meter temperature");
+  EXPECT_EQ(bad.messages[0].setting, "meter_at_port");
+}
+
+TEST(TestStandReduction, MessyInputsAreRefusedWithRowAndColumn) {
+  const truth w;
+  const auto oil = vg46();
+  const auto s = setup_for(oil);
+  const auto good = make_readings(w, oil, [](std::size_t) { return 323.15; }, 0.0);
+  const auto first = [](const pumploss::test_stand_result& res) { return res.messages.at(0); };
+  {  // a column one reading short
+    auto r = good;
+    r.torque_n_m.pop_back();
+    const auto res = pumploss::reduce_test_stand(s, r);
+    EXPECT_EQ(res.st, status::misuse);
+    EXPECT_EQ(first(res).column, "torque");
+  }
+  {  // no readings at all
+    const auto res = pumploss::reduce_test_stand(s, pumploss::test_stand_readings{});
+    EXPECT_EQ(res.st, status::insufficient_data);
+  }
+  {  // a negative speed in row 7, and a NaN torque
+    auto r = good;
+    r.speed_rev_s[7] = -r.speed_rev_s[7];
+    auto res = pumploss::reduce_test_stand(s, r);
+    EXPECT_EQ(res.st, status::domain);
+    EXPECT_EQ(first(res).row, 7u);
+    EXPECT_EQ(first(res).column, "speed");
+    EXPECT_TRUE(first(res).follows_value);
+    r = good;
+    r.torque_n_m[3] = std::nan("");
+    res = pumploss::reduce_test_stand(s, r);
+    EXPECT_EQ(first(res).row, 3u);
+    EXPECT_EQ(first(res).column, "torque");
+  }
+  {  // outlet below inlet
+    auto r = good;
+    r.outlet_pressure_pa[4] = 0.1e5;
+    const auto res = pumploss::reduce_test_stand(s, r);
+    EXPECT_EQ(res.st, status::domain);
+    EXPECT_EQ(first(res).row, 4u);
+    EXPECT_EQ(first(res).column, "outlet pressure");
+  }
+  {  // the viscosity temperature was not measured
+    auto r = good;
+    r.drain_temperature_k.clear();
+    const auto res = pumploss::reduce_test_stand(s, r);
+    EXPECT_EQ(res.st, status::insufficient_data);
+    EXPECT_EQ(first(res).setting, "viscosity_at");
+    auto s2 = s;
+    s2.viscosity_at = pumploss::viscosity_temperature::inlet;  // the inlet was measured
+    EXPECT_TRUE(pumploss::is_usable(pumploss::reduce_test_stand(s2, r).st));
+  }
+  {  // an incomplete grid: no two-step estimate; the report says so when it was asked for
+    auto r = good;
+    for (auto* v : {&r.speed_rev_s, &r.inlet_pressure_pa, &r.outlet_pressure_pa, &r.flow_m3_s, &r.torque_n_m,
+                    &r.drain_flow_m3_s, &r.inlet_temperature_k, &r.drain_temperature_k})
+      v->erase(v->begin() + 5);
+    auto res = pumploss::reduce_test_stand(s, r);
+    EXPECT_TRUE(pumploss::is_error(res.st));
+    EXPECT_EQ(first(res).setting, "displacement");
+    EXPECT_EQ(res.estimators[2].st, status::insufficient_data);
+    auto s2 = s;
+    s2.displacement = pumploss::displacement_choice::slope;
+    res = pumploss::reduce_test_stand(s2, r);
+    EXPECT_TRUE(pumploss::is_usable(res.st));
+    EXPECT_EQ(res.displacement_used, pumploss::displacement_choice::slope);
+    s2.displacement = pumploss::displacement_choice::nominal;
+    res = pumploss::reduce_test_stand(s2, r);
+    EXPECT_EQ(res.displacement_m3_rev, 71e-6);
+    EXPECT_EQ(res.u_displacement_m3_rev, 0.0);
+  }
+  {  // a motor's readings with the pump's pressures: refused
+    auto s2 = s;
+    s2.kind = pumploss::machine::motor;
+    const auto res = pumploss::reduce_test_stand(s2, good);
+    EXPECT_EQ(res.st, status::domain);
+    EXPECT_EQ(first(res).column, "outlet pressure");
+  }
+  {  // setup errors name the setting
+    auto s2 = s;
+    s2.nominal_displacement_m3_rev = 0;
+    EXPECT_EQ(first(pumploss::reduce_test_stand(s2, good)).setting, "nominal_displacement_m3_rev");
+    s2 = s;
+    s2.map_speed_hi_rev_s = s2.map_speed_lo_rev_s;
+    EXPECT_EQ(first(pumploss::reduce_test_stand(s2, good)).setting, "map_speed_lo_rev_s");
+    s2 = s;
+    s2.map_temperature_k = 10.0;  // below the oil's D341 range
+    const auto res = pumploss::reduce_test_stand(s2, good);
+    EXPECT_TRUE(pumploss::is_error(res.st));
+    EXPECT_EQ(first(res).setting, "map_temperature_k");
+  }
+}
+
+TEST(TestStandReduction, InstrumentUncertaintyAddsTheStatedParts) {
+  // 0.3 % of reading plus 0.5 (rectangular): u = (0.003 x + 0.5) / sqrt 3 (GUM 4.3.7)
+  const pumploss::instrument_limits ins{0.003, 0.5, true};
+  EXPECT_NEAR(pumploss::instrument_uncertainty(ins, 100.0), (0.3 + 0.5) / std::sqrt(3.0), 1e-14);
+  const pumploss::instrument_limits std_u{0.003, 0.5, false};
+  EXPECT_NEAR(pumploss::instrument_uncertainty(std_u, 100.0), 0.8, 1e-14);
+  EXPECT_STREQ(pumploss::displacement_choice_name(pumploss::displacement_choice::two_step), "two-step");
+  EXPECT_STREQ(pumploss::loss_model_name(pumploss::loss_model_kind::schloesser), "Schloesser");
+  EXPECT_STREQ(pumploss::viscosity_temperature_name(pumploss::viscosity_temperature::drain), "drain");
+}
