@@ -80,12 +80,12 @@ inline T inv_two_pi() {
 ///         negative flow; status::nonfinite for NaN/inf (all fields NaN on error).
 /// @par Validity
 /// Steady state. eta_v is the ISO 4409 flow ratio: at high pressure it mixes leakage with
-/// compression of the trapped volume (methods.md 2.1).
+/// compression of the trapped volume (docs/pages/theory_efficiency.md).
 /// @par Accuracy
 /// A few ulp against a 50-digit evaluation (tests/efficiency_test.cpp: at most 3 ulp seen over 3 000 points).
 /// @par Source
 /// ISO 4409:2019 (test method) with the definitions of ISO 4391; pump eta_hm = eta_t / eta_v,
-/// methods.md 2.1.
+/// ISO 4409:2019 and ISO 4391 (docs/pages/theory_efficiency.md).
 template <class T>
 inline efficiency_point<T> pump_efficiency(T displacement_m3_rev, T speed_rev_s, T dp_pa, T flow_m3_s,
                                            T torque_n_m) {
@@ -126,7 +126,7 @@ inline efficiency_point<T> pump_efficiency(T displacement_m3_rev, T speed_rev_s,
 /// @par Accuracy
 /// A few ulp against a 50-digit evaluation (tests/efficiency_test.cpp: at most 3 ulp seen over 3 000 points).
 /// @par Source
-/// ISO 4409:2019 with the definitions of ISO 4391, methods.md 2.1.
+/// ISO 4409:2019 with the definitions of ISO 4391.
 template <class T>
 inline efficiency_point<T> motor_efficiency(T displacement_m3_rev, T speed_rev_s, T dp_pa, T flow_m3_s,
                                             T torque_n_m) {
@@ -157,7 +157,7 @@ inline efficiency_point<T> motor_efficiency(T displacement_m3_rev, T speed_rev_s
 /// @param torque_n_m pump input torque or motor output torque, N m
 /// @return as pump_efficiency() or motor_efficiency()
 /// @par Source
-/// ISO 4409:2019, methods.md 2.1.
+/// ISO 4409:2019.
 template <class T>
 inline efficiency_point<T> machine_efficiency(machine kind, T displacement_m3_rev, T speed_rev_s, T dp_pa,
                                               T flow_m3_s, T torque_n_m) {
@@ -173,7 +173,7 @@ inline efficiency_point<T> machine_efficiency(machine kind, T displacement_m3_re
 /// @par Accuracy
 /// Correctly rounded (one multiplication).
 /// @par Source
-/// ISO 4391 definition, methods.md 2.1.
+/// ISO 4391 definition.
 template <class T>
 inline result<T> theoretical_flow(T displacement_m3_rev, T speed_rev_s) {
   if (!detail::all_finite(displacement_m3_rev, speed_rev_s)) return detail::fail<T>(status::nonfinite);
@@ -188,7 +188,7 @@ inline result<T> theoretical_flow(T displacement_m3_rev, T speed_rev_s) {
 /// @par Accuracy
 /// Within 2 ulp.
 /// @par Source
-/// ISO 4391 definition, methods.md 2.1.
+/// ISO 4391 definition.
 template <class T>
 inline result<T> theoretical_torque(T displacement_m3_rev, T dp_pa) {
   if (!detail::all_finite(displacement_m3_rev, dp_pa)) return detail::fail<T>(status::nonfinite);
@@ -204,7 +204,7 @@ inline result<T> theoretical_torque(T displacement_m3_rev, T dp_pa) {
 /// @par Accuracy
 /// Correctly rounded.
 /// @par Source
-/// Definition, methods.md 2.1.
+/// Definition (docs/pages/theory_efficiency.md).
 template <class T>
 inline result<T> hydraulic_power(T flow_m3_s, T dp_pa) {
   if (!detail::all_finite(flow_m3_s, dp_pa)) return detail::fail<T>(status::nonfinite);
@@ -222,7 +222,7 @@ inline result<T> hydraulic_power(T flow_m3_s, T dp_pa) {
 /// @par Accuracy
 /// Within 2 ulp.
 /// @par Source
-/// Definition, methods.md 2.1.
+/// Definition (docs/pages/theory_efficiency.md).
 template <class T>
 inline result<T> shaft_power(T speed_rev_s, T torque_n_m) {
   if (!detail::all_finite(speed_rev_s, torque_n_m)) return detail::fail<T>(status::nonfinite);
@@ -255,8 +255,8 @@ inline result<T> shaft_power(T speed_rev_s, T torque_n_m) {
 /// @par Accuracy
 /// Within 4 ulp of the 50-digit evaluation (tests/efficiency_test.cpp).
 /// @par Source
-/// Mass conservation with the density model of methods.md 9.5; the approach of ISO 4409:2019
-/// (clause text not seen, methods.md 2.3).
+/// Mass conservation with the density model of docs/pages/theory_fluid.md; the approach of ISO 4409:2019
+/// (clause text not seen).
 template <class T>
 inline result<T> flow_at_port(T q_meter_m3_s, T p_meter_pa, T t_meter_k, T p_port_pa, T t_port_k,
                               T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_modulus_pa) {
@@ -286,7 +286,7 @@ inline result<T> flow_at_port(T q_meter_m3_s, T p_meter_pa, T t_meter_k, T p_por
 /// Differs from flow_at_port() by second-order terms: 0.03 % for 250 bar and 13 K
 /// (tests/efficiency_test.cpp).
 /// @par Source
-/// First-order expansion of the density ratio, methods.md 2.3.
+/// First-order expansion of the density ratio (docs/pages/theory_efficiency.md).
 template <class T>
 inline result<T> flow_at_port_linear(T q_meter_m3_s, T p_meter_pa, T t_meter_k, T p_port_pa, T t_port_k,
                                      T alpha_per_k, T bulk_modulus_pa) {
@@ -304,7 +304,7 @@ inline result<T> flow_at_port_linear(T q_meter_m3_s, T p_meter_pa, T t_meter_k, 
 }
 /// @}
 
-/// @name Derived displacement V_i from test data (methods.md section 3)
+/// @name Derived displacement V_i from test data (docs/pages/theory_efficiency.md)
 /// @{
 
 
@@ -366,7 +366,7 @@ inline displacement_result<T> displacement_fail(displacement_estimator e, std::s
 /// @par Accuracy
 /// Recovers an exact line to 1e-14 relative (tests/efficiency_test.cpp).
 /// @par Source
-/// Straight-line least squares (methods.md 3, estimator A; self-derived, no standard text).
+/// Straight-line least squares (estimator A of docs/pages/theory_efficiency.md; self-derived, no standard text).
 template <class T>
 inline displacement_result<T> displacement_slope(const T* speed_rev_s, const T* flow_m3_s, std::size_t count) {
   const auto e = displacement_estimator::slope_low_pressure;
@@ -399,7 +399,7 @@ inline displacement_result<T> displacement_slope(const T* speed_rev_s, const T* 
 /// Recovers an exact line to 1e-14 relative (tests/efficiency_test.cpp).
 /// @par Source
 /// ISO 8426-2:2025 (zero-pressure intercept at a single shaft speed; scope seen, clause text
-/// not), methods.md 3, estimator B.
+/// not), estimator B of docs/pages/theory_efficiency.md.
 template <class T>
 inline displacement_result<T> displacement_intercept(T speed_rev_s, const T* dp_pa, const T* flow_m3_s,
                                                      std::size_t count) {
@@ -439,7 +439,7 @@ inline displacement_result<T> displacement_intercept(T speed_rev_s, const T* dp_
 /// Recovers exact synthetic data to 1e-13 relative (tests/efficiency_test.cpp).
 /// @par Source
 /// Toet, Johnson, Montague, Torres, Garcia-Bravo, Energies 12(3):415 (2019); ISO 8426-1:2025
-/// (scope seen), methods.md 3, estimator C.
+/// (scope seen), estimator C of docs/pages/theory_efficiency.md.
 template <class T>
 inline displacement_result<T> displacement_two_step(const T* speed_rev_s, const T* dp_pa, const T* flow_m3_s,
                                                     std::size_t levels, std::size_t per_level) {

@@ -32,7 +32,7 @@ namespace pumploss {
 /// logarithm, which holds for nu above about 0.2 mm^2/s.
 /// @par Source
 /// ASTM D341, "Standard Practice for Viscosity-Temperature Equations and Charts for Liquid
-/// Petroleum or Hydrocarbon Products" (form with low-viscosity term, methods.md 9.1).
+/// Petroleum or Hydrocarbon Products" (form with the low-viscosity term).
 template <class T>
 inline T d341_z(T nu_mm2_s) {
   using std::exp;
@@ -55,7 +55,7 @@ inline T d341_z(T nu_mm2_s) {
 /// The low-viscosity inverse is the standard's own approximation, not the exact inverse of
 /// d341_z(); the round trip differs by up to about 1e-3 mm^2/s below 2 mm^2/s.
 /// @par Source
-/// ASTM D341 (methods.md 9.1).
+/// ASTM D341 (docs/pages/theory_fluid.md).
 template <class T>
 inline T d341_nu_from_z(T z) {
   using std::exp;
@@ -103,7 +103,7 @@ inline status d341_check(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
 ///         a viscosity is too low for the relation (Z <= 1), or viscosity does not fall with
 ///         temperature (B <= 0); status::nonfinite for NaN/inf.
 /// @par Source
-/// ASTM D341 (methods.md 9.1). Check: 32 mm^2/s at 40 degC and 5.4 mm^2/s at 100 degC give
+/// ASTM D341 (docs/pages/theory_fluid.md). Check: 32 mm^2/s at 40 degC and 5.4 mm^2/s at 100 degC give
 /// A = 9.5259, B = 3.7449 with T = theta + 273 (published worked example).
 template <class T>
 inline result<d341_line<T>> d341_fit(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
@@ -137,7 +137,7 @@ inline result<d341_line<T>> d341_fit(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
 ///         low-viscosity form is no longer defined (threshold from memory);
 ///         status::overflow when Z overflows (very cold).
 /// @par Source
-/// ASTM D341 (methods.md 9.1).
+/// ASTM D341 (docs/pages/theory_fluid.md).
 template <class T>
 inline result<T> d341_viscosity(const d341_line<T>& line, T t_k) {
   using std::log;
@@ -168,7 +168,7 @@ inline result<T> d341_viscosity(const d341_line<T>& line, T t_k) {
 /// Within 1e-13 relative of the 50-digit evaluation of the same formula (tests/fluid_test.cpp);
 /// the double logarithm amplifies input rounding by up to ln(Z) ln(10).
 /// @par Source
-/// ASTM D341 (methods.md 9.1); check value 8.53 mm^2/s at 80 degC for 32 mm^2/s at 40 degC and
+/// ASTM D341 (docs/pages/theory_fluid.md); check value 8.53 mm^2/s at 80 degC for 32 mm^2/s at 40 degC and
 /// 5.4 mm^2/s at 100 degC (published worked example, quoted as 8.5).
 template <class T>
 inline result<T> viscosity_d341(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s, T t_k) {
@@ -346,7 +346,7 @@ inline result<T> kinematic_viscosity(T mu_pa_s, T rho_kg_m3) {
 ///         the reference (a limit of our own choosing, no source).
 /// @par Source
 /// Definitions of the secant bulk modulus and expansion coefficient: Vacca & Franzoni,
-/// Hydraulic Fluid Power, Wiley 2021, sections 2.4-2.5; model as methods.md 9.5.
+/// Hydraulic Fluid Power, Wiley 2021, sections 2.4-2.5; model in docs/pages/theory_fluid.md.
 template <class T>
 inline result<T> oil_density(T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_modulus_pa, T t_k, T p_pa) {
   using std::fabs;
@@ -372,7 +372,7 @@ inline result<T> oil_density(T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_m
 /// @param p_pa gauge pressure, Pa, >= 0
 /// @return mu in Pa s; status::regime above 100 MPa, where other laws are preferred.
 /// @par Source
-/// C. Barus, Am. J. Sci. 45 (1893) 87-96; limits as methods.md 9.4 (from memory).
+/// C. Barus, Am. J. Sci. 45 (1893) 87-96; limits from memory.
 template <class T>
 inline result<T> viscosity_barus(T mu0_pa_s, T alpha_per_pa, T p_pa) {
   using std::exp;
@@ -406,7 +406,7 @@ struct oil {
 /// | property | value | source |
 /// |---|---|---|
 /// | density at 15 degC | 870 kg/m^3 | low end of 870-900 kg/m^3, Vacca & Franzoni, Hydraulic Fluid Power (Wiley 2021) 2.4 |
-/// | expansion coefficient | 6.5e-4 1/K | methods.md 9.5, typical 6.5e-4 to 7e-4 (common practice, no source) |
+/// | expansion coefficient | 6.5e-4 1/K | docs/pages/theory_fluid.md, typical 6.5e-4 to 7e-4 (common practice, no source) |
 /// | secant bulk modulus | 1.4e9 Pa | about 0.7 % volume loss per 100 bar, Vacca & Franzoni 2.5 |
 /// | specific heat | 1.9e3 J/(kg K) | mid of 1.8-2.1 kJ/(kg K) (from memory) |
 /// | Barus coefficient | 2.0e-8 1/Pa | mid of 1.5e-8 to 3e-8 near 40 degC (from memory) |

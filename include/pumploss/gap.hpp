@@ -312,12 +312,12 @@ inline T cubic_positive_root(T p, T r) {
 ///         NaN/inf. Check the laminar assumption with gap_reynolds().
 /// @par Validity
 /// Laminar, fully developed, incompressible flow, h much smaller than b and L, constant
-/// viscosity (methods.md 6.1).
+/// viscosity (docs/pages/theory_gap.md).
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
 /// Standard lubrication result; e.g. Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19
-/// (annulus form); methods.md 6.1.
+/// (annulus form); docs/pages/theory_gap.md.
 template <class T>
 inline result<T> gap_plates_flow(T dp_pa, T mu_pa_s, T width_m, T height_m, T length_m, T wall_speed_m_s) {
   if (!detail::all_finite(dp_pa, mu_pa_s, width_m, height_m, length_m, wall_speed_m_s))
@@ -344,7 +344,7 @@ inline result<T> gap_plates_flow(T dp_pa, T mu_pa_s, T width_m, T height_m, T le
 /// @par Accuracy
 /// A few ulp (closed form).
 /// @par Source
-/// methods.md 6.1 (standard plane Couette-Poiseuille profile).
+/// Standard plane Couette-Poiseuille profile (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_plates_velocity(T dp_pa, T mu_pa_s, T height_m, T length_m, T wall_speed_m_s, T y_m) {
   if (!detail::all_finite(dp_pa, mu_pa_s, height_m, length_m, wall_speed_m_s, y_m))
@@ -372,7 +372,7 @@ inline result<T> gap_plates_velocity(T dp_pa, T mu_pa_s, T height_m, T length_m,
 /// @par Accuracy
 /// Within a few ulp of the 50-digit evaluation except where the two terms cancel.
 /// @par Source
-/// methods.md 6.1 (wall shear of the Couette-Poiseuille profile).
+/// Wall shear of the plane Couette-Poiseuille profile (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_plates_shear_force(T dp_pa, T mu_pa_s, T width_m, T height_m, T length_m, T wall_speed_m_s) {
   if (!detail::all_finite(dp_pa, mu_pa_s, width_m, height_m, length_m, wall_speed_m_s))
@@ -399,7 +399,7 @@ inline result<T> gap_plates_shear_force(T dp_pa, T mu_pa_s, T width_m, T height_
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation (sum of positive terms).
 /// @par Source
-/// methods.md 6.1.
+/// Plane Couette-Poiseuille flow (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_plates_power_loss(T dp_pa, T mu_pa_s, T width_m, T height_m, T length_m, T wall_speed_m_s) {
   if (!detail::all_finite(dp_pa, mu_pa_s, width_m, height_m, length_m, wall_speed_m_s))
@@ -425,11 +425,11 @@ inline result<T> gap_plates_power_loss(T dp_pa, T mu_pa_s, T width_m, T height_m
 /// @return h in m; status::domain when q and dp differ in sign or are zero.
 /// @par Validity
 /// As gap_plates_flow(). One measurement gives one lumped gap; parallel paths cannot be
-/// separated (methods.md 6.7).
+/// separated.
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation.
 /// @par Source
-/// methods.md 6.7.
+/// Inverse of the laminar gap flow, derived here (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_plates_height(T q_m3_s, T dp_pa, T mu_pa_s, T width_m, T length_m) {
   using std::cbrt;
@@ -461,7 +461,7 @@ inline result<T> gap_plates_height(T q_m3_s, T dp_pa, T mu_pa_s, T width_m, T le
 /// Within 1e-14 relative of the 50-digit evaluation across shear/pressure ratios 1e-8..1e8
 /// (tests/gap_test.cpp).
 /// @par Source
-/// methods.md 6.7 (equation); cubic formulas: standard algebra (Cardano, Viete).
+/// docs/pages/theory_gap.md (inverse problem); cubic formulas: standard algebra (Cardano, Viete).
 template <class T>
 inline result<T> gap_plates_height_couette(T q_m3_s, T dp_pa, T mu_pa_s, T width_m, T length_m, T wall_speed_m_s) {
   using std::cbrt;
@@ -524,7 +524,7 @@ inline result<T> gap_plates_height_couette(T q_m3_s, T dp_pa, T mu_pa_s, T width
 /// @par Source
 /// Eccentric annulus: Piercy, Hooper and Winny, Phil. Mag. 15 (1933); as given in F. M. White,
 /// Viscous Fluid Flow (McGraw-Hill), section on the eccentric annulus (equation number from
-/// memory, not cited); methods.md 6.2-6.3.
+/// memory, not cited); docs/pages/theory_gap.md (concentric and eccentric annulus).
 template <class T>
 inline result<T> gap_annulus_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, T piston_diameter_m, T length_m,
                                   T eccentricity_ratio) {
@@ -562,7 +562,7 @@ inline result<T> gap_annulus_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, T pisto
 /// @par Source
 /// Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19 (concentric); eccentricity
 /// factor: Manring, Hydraulic Control Systems, Wiley 2005 (equation number from memory);
-/// methods.md 6.2-6.3.
+/// docs/pages/theory_gap.md (concentric and eccentric annulus).
 template <class T>
 inline result<T> gap_annulus_narrow_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, T piston_diameter_m, T length_m,
                                          T eccentricity_ratio) {
@@ -598,7 +598,7 @@ inline result<T> gap_annulus_narrow_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, 
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
-/// Derived here (methods.md 6.2 for the narrow form, Rabie 2009 Eq. 2.19): harmonic solution
+/// Derived here (narrow form: M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19): harmonic solution
 /// (xi - alpha)/(beta - alpha) in the bipolar coordinates of the eccentric-annulus solution
 /// (Piercy, Hooper and Winny 1933), integrated over the cross-section.
 template <class T>
@@ -668,7 +668,7 @@ inline result<T> gap_piston_leakage(T dp_pa, T mu_pa_s, T bore_diameter_m, T pis
 /// @par Accuracy
 /// Round trip within 1e-14 relative (tests/gap_test.cpp).
 /// @par Source
-/// methods.md 6.7.
+/// Inverse of the laminar gap flow, derived here (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_annulus_clearance(T q_m3_s, T dp_pa, T mu_pa_s, T bore_diameter_m, T length_m,
                                        T eccentricity_ratio) {
@@ -740,7 +740,7 @@ inline status radial_check(T mu, T ri, T ro, T h) {
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
-/// Standard lubrication result (methods.md 6.4).
+/// Standard lubrication result (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_radial_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T outer_radius_m, T height_m) {
   using std::log1p;
@@ -770,7 +770,7 @@ inline result<T> gap_radial_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T outer_r
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation.
 /// @par Source
-/// methods.md 6.4 (sector fraction of the disc flow).
+/// docs/pages/theory_gap.md (sector fraction of the disc flow).
 template <class T>
 inline result<T> gap_radial_sector_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T outer_radius_m, T height_m,
                                         T angle_rad) {
@@ -800,7 +800,7 @@ inline result<T> gap_radial_sector_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T 
 /// @par Accuracy
 /// Within a few ulp (log1p forms).
 /// @par Source
-/// methods.md 6.4.
+/// Standard lubrication result (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_radial_pressure(T inner_pressure_pa, T outer_pressure_pa, T inner_radius_m, T outer_radius_m,
                                      T radius_m) {
@@ -836,7 +836,7 @@ inline result<T> gap_radial_pressure(T inner_pressure_pa, T outer_pressure_pa, T
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
-/// Integration of methods.md 6.4 p(r).
+/// Integration of the logarithmic land pressure p(r) of gap_radial_flow() (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_radial_land_force(T inner_pressure_pa, T outer_pressure_pa, T inner_radius_m,
                                        T outer_radius_m, T angle_rad) {
@@ -868,7 +868,7 @@ inline result<T> gap_radial_land_force(T inner_pressure_pa, T outer_pressure_pa,
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation.
 /// @par Source
-/// methods.md 6.7.
+/// Inverse of the laminar gap flow, derived here (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_radial_height(T q_m3_s, T dp_pa, T mu_pa_s, T inner_radius_m, T outer_radius_m) {
   using std::cbrt;
@@ -949,7 +949,7 @@ inline pad_state<T> pad_finish(T ps, T pr, T q, T ri, T ro, T piston_d) {
 /// @par Source
 /// Rowe, Hydrostatic, Aerostatic and Hybrid Bearing Design, 2012; Stachowiak and Batchelor,
 /// Engineering Tribology, chapter on hydrostatic lubrication (citations from memory);
-/// algebra methods.md 6.5.
+/// algebra in docs/pages/theory_gap.md.
 template <class T>
 inline pad_state<T> gap_pad_capillary(T supply_pressure_pa, T mu_pa_s, T capillary_diameter_m, T capillary_length_m,
                                       T inner_radius_m, T outer_radius_m, T height_m, T piston_diameter_m) {
@@ -987,7 +987,7 @@ inline pad_state<T> gap_pad_capillary(T supply_pressure_pa, T mu_pa_s, T capilla
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
-/// As gap_pad_capillary(); methods.md 6.5.
+/// As gap_pad_capillary().
 template <class T>
 inline pad_state<T> gap_pad_orifice(T supply_pressure_pa, T rho_kg_m3, T mu_pa_s, T orifice_diameter_m, T cd,
                                     T inner_radius_m, T outer_radius_m, T height_m, T piston_diameter_m) {
@@ -1024,7 +1024,7 @@ inline pad_state<T> gap_pad_orifice(T supply_pressure_pa, T rho_kg_m3, T mu_pa_s
 /// @par Accuracy
 /// Round trip with gap_pad_capillary() within 1e-14 relative.
 /// @par Source
-/// methods.md 6.5 (inverted here).
+/// W. B. Rowe, Hydrostatic, Aerostatic and Hybrid Bearing Design, 2012 (from memory), inverted here; docs/pages/theory_gap.md.
 template <class T>
 inline result<T> gap_pad_capillary_height(T supply_pressure_pa, T mu_pa_s, T capillary_diameter_m,
                                           T capillary_length_m, T inner_radius_m, T outer_radius_m, T load_n) {
@@ -1065,7 +1065,7 @@ inline result<T> gap_pad_capillary_height(T supply_pressure_pa, T mu_pa_s, T cap
 /// @par Accuracy
 /// Round trip with gap_pad_orifice() within 1e-14 relative.
 /// @par Source
-/// methods.md 6.5 (inverted here).
+/// W. B. Rowe, Hydrostatic, Aerostatic and Hybrid Bearing Design, 2012 (from memory), inverted here; docs/pages/theory_gap.md.
 template <class T>
 inline result<T> gap_pad_orifice_height(T supply_pressure_pa, T rho_kg_m3, T mu_pa_s, T orifice_diameter_m, T cd,
                                         T inner_radius_m, T outer_radius_m, T load_n) {
@@ -1102,13 +1102,13 @@ inline result<T> gap_pad_orifice_height(T supply_pressure_pa, T rho_kg_m3, T mu_
 /// @param rho_kg_m3 \f$\rho\f$ density, kg/m^3, > 0
 /// @param mu_pa_s   \f$\mu\f$ dynamic viscosity, Pa s, > 0
 /// @return Re (dimensionless); status::regime when Re > 2000 (laminar gap formulas no longer
-///         apply; threshold from memory, methods.md 6.6).
+///         apply; threshold from memory).
 /// @par Validity
 /// Also check the reduced number Re h/L << 1 for inertia-free flow (see gap_reduced_reynolds()).
 /// @par Accuracy
 /// A few ulp.
 /// @par Source
-/// methods.md 6.6.
+/// Definition of the Reynolds number with D_h = 2h (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_reynolds(T q_m3_s, T width_m, T rho_kg_m3, T mu_pa_s) {
   using std::fabs;
@@ -1130,11 +1130,11 @@ inline result<T> gap_reynolds(T q_m3_s, T width_m, T rho_kg_m3, T mu_pa_s) {
 /// @param mu_pa_s   \f$\mu\f$, Pa s, > 0
 /// @return Re* ; status::regime when Re* > 1 or Re > 2000.
 /// @par Validity
-/// Threshold 1 is a convention here (methods.md 6.6: "inertia-free when Re h/L << 1").
+/// Threshold 1 is a convention of this library for "inertia-free when Re h/L << 1".
 /// @par Accuracy
 /// A few ulp.
 /// @par Source
-/// methods.md 6.6.
+/// Definition of the Reynolds number with D_h = 2h (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_reduced_reynolds(T q_m3_s, T width_m, T height_m, T length_m, T rho_kg_m3, T mu_pa_s) {
   const result<T> re = gap_reynolds(q_m3_s, width_m, rho_kg_m3, mu_pa_s);
@@ -1156,7 +1156,7 @@ inline result<T> gap_reduced_reynolds(T q_m3_s, T width_m, T height_m, T length_
 /// @par Accuracy
 /// Exact up to one rounding.
 /// @par Source
-/// methods.md 6.2.
+/// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19 (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_narrow_ratio(T bore_diameter_m, T piston_diameter_m) {
   if (!detail::all_finite(bore_diameter_m, piston_diameter_m)) return detail::fail<T>(status::nonfinite);

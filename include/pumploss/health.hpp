@@ -139,7 +139,7 @@ struct health_assessment {
 /// @param r the reading
 /// @return the drain flow at the reference state, m^3/s
 /// @par Source
-/// Laminar leakage scaling q ~ dp/mu (methods.md 5); exponents configurable; computed by
+/// Laminar leakage scaling q ~ dp/mu (docs/pages/theory_efficiency.md, leakage scaling); exponents configurable; computed by
 /// leakage_scale_power_law().
 template <class T>
 inline result<T> health_normalise(const health_reference<T>& ref, const health_reading<T>& r) {
@@ -198,7 +198,7 @@ inline health_level max_level(health_level a, health_level b) {
 ///         (figures NaN), status::implausible when the drain fraction exceeds 1.
 /// @par Source
 /// Bands: common practice, no source (see health.hpp). Throttling rise: first law for an
-/// adiabatic throttle of a liquid with constant rho and cp (methods.md 10).
+/// adiabatic throttle of a liquid with constant rho and cp (docs/pages/theory_efficiency.md, Heat).
 template <class T>
 inline health_assessment<T> assess_health(const health_reference<T>& ref, const health_bands<T>& bands,
                                           const health_reading<T>& r) {

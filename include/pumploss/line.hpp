@@ -386,7 +386,7 @@ struct line_drop {
 /// @par Accuracy
 /// As the element methods (pipe_pressure_drop(), k_hooper(), k_darby(), crane_ft()).
 /// @par Source
-/// methods.md 8 (case drain back pressure); elements as cited at each method.
+/// docs/pages/theory_friction.md (case drain back pressure); elements as cited at each method.
 template <class T>
 inline line_drop<T> line_pressure_drop(const line_element<T>* elements, std::size_t count, T height_m, T q_m3_s,
                                        T rho_kg_m3, T mu_pa_s, T* element_dp_pa = nullptr, T d_override_m = T(0)) {
@@ -558,7 +558,7 @@ struct drain_summary {
 /// @par Accuracy
 /// As line_pressure_drop() and d341_viscosity().
 /// @par Source
-/// methods.md 8 (case drain back pressure) and 12 (common practice).
+/// docs/pages/theory_friction.md (case drain back pressure; limits common practice, no source).
 template <class T>
 inline drain_summary<T> drain_check(const line<T>& l, const oil<T>& o, T q_drain_m3_s, T t_cold_k, T t_max_k,
                                     int n_temps, T p_tank_pa, T p_allowed_pa, drain_point<T>* points) {
@@ -644,7 +644,7 @@ struct velocity_range {
 /// @param s the service
 /// @return the range in m/s
 /// @par Source
-/// Common practice, no source (methods.md 12).
+/// Common practice, no source.
 constexpr velocity_range recommended_velocity(line_service s) noexcept {
   switch (s) {
     case line_service::suction: return {0.6, 1.2};
@@ -689,7 +689,7 @@ struct drain_sizing {
 /// @par Accuracy
 /// As drain_check().
 /// @par Source
-/// methods.md 8 and 12; bore table: hose dash sizes (trade convention), tube sizes common
+/// docs/pages/theory_friction.md (common practice, no source); bore table: hose dash sizes (trade convention), tube sizes common
 /// practice, no source.
 template <class T>
 inline drain_sizing<T> size_drain_line(const line<T>& l, const oil<T>& o, T q_drain_m3_s, T t_cold_k, T t_max_k,

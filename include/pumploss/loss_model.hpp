@@ -86,7 +86,7 @@ template <class T>
 struct loss_terms {
   T omega, d, flow_slip, flow_turb, tq_visc, tq_coul, tq_hydro;
 };
-// Regressor columns of methods.md 4.2 at one point.
+// Regressor columns of the linear loss-model fit at one point (docs/pages/theory_efficiency.md).
 template <class T>
 inline loss_terms<T> loss_columns(T d, T rho, T dp, T n, T mu) {
   using std::cbrt;
@@ -148,7 +148,7 @@ inline loss_model<T> loss_model_fail(machine kind, loss_model_kind model, T v, T
 ///         nonfinite / misuse for bad input.
 /// @par Validity
 /// Wilson's form assumes laminar slip and linear friction laws; at low Stribeck number
-/// mu n / dp (mixed lubrication) real machines depart from it (methods.md 4.1).
+/// mu n / dp (mixed lubrication) real machines depart from it (equations as in Merritt 1967).
 /// @par Accuracy
 /// Exact synthetic data are recovered to 1e-10 relative; on noisy data the coefficients lie within
 /// their reported standard errors (tests/loss_model_test.cpp); agrees with numpy.linalg.lstsq
@@ -156,7 +156,7 @@ inline loss_model<T> loss_model_fail(machine kind, loss_model_kind model, T v, T
 /// @par Source
 /// W. E. Wilson, Trans. ASME 71 (1949) and Positive-Displacement Pumps and Fluid Motors (1950), as
 /// in H. E. Merritt, Hydraulic Control Systems, Wiley 1967; W. M. J. Schlösser, Hydraulic Pneumatic
-/// Power (1961) (both citations from memory, methods.md 4.1-4.3); Householder QR as in Golub & Van
+/// Power (1961) (both citations from memory); Householder QR as in Golub & Van
 /// Loan, Matrix Computations, 4th ed. 2013, 5.3.
 template <class T>
 inline loss_model<T> fit_loss_model(machine kind, loss_model_kind model, T displacement_m3_rev, T rho_kg_m3,
@@ -277,7 +277,7 @@ inline loss_model<T> fit_loss_model(machine kind, loss_model_kind model, T displ
 /// @par Accuracy
 /// As the fitted coefficients; the evaluation itself within a few ulp.
 /// @par Source
-/// Wilson's model as in Merritt 1967 (methods.md 4.1); Schlösser 1961 (methods.md 4.3).
+/// Wilson's model as in H. E. Merritt, Hydraulic Control Systems, Wiley 1967; Schlösser 1961.
 template <class T>
 inline loss_prediction<T> loss_model_predict(const loss_model<T>& m, T dp_pa, T speed_rev_s, T mu_pa_s) {
   const T nan = scalar_traits<T>::nan();

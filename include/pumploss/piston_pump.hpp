@@ -269,7 +269,7 @@ inline leakage_budget<T> budget_fail(status s) {
 /// @par Accuracy
 /// Each path as its gap model (1e-12 relative or better); the sum within a few ulp.
 /// @par Source
-/// Gap and orifice models of gap.hpp and orifice.hpp (methods.md 6-7); the path list follows
+/// Gap and orifice models of gap.hpp and orifice.hpp (docs/pages/theory_gap.md); the path list follows
 /// the usual breakdown of swashplate pump leakage (e.g. Ivantysyn & Ivantysynova, Hydrostatic
 /// Pumps and Motors, 2001, ch. 5 (from memory)).
 template <class T>
