@@ -25,7 +25,7 @@ enum class machine : int {
 
 /// Efficiencies, ideal quantities, powers and losses of one operating point.
 template <class T>
-struct efficiency_point {
+struct [[nodiscard]] efficiency_point {
   T eta_v;      ///< volumetric efficiency (ISO 4409 definition), fraction
   T eta_hm;     ///< hydromechanical efficiency, fraction
   T eta_t;      ///< overall (total) efficiency, fraction
@@ -37,6 +37,10 @@ struct efficiency_point {
   T torque_loss;///< torque loss (pump: T - T_th; motor: T_th - T), N m
   T heat_w;     ///< power lost to heat (pump: P_m - P_h; motor: P_h - P_m), W
   status st;    ///< ok, implausible (an efficiency above 1), or an error (all fields NaN)
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 namespace detail {
@@ -330,7 +334,7 @@ inline const char* displacement_estimator_name(displacement_estimator e) noexcep
 
 /// A derived displacement with its standard error and the estimator that produced it.
 template <class T>
-struct displacement_result {
+struct [[nodiscard]] displacement_result {
   T v_m3_rev;                        ///< derived displacement V_i, m^3/rev
   T u_v_m3_rev;                      ///< standard error of V_i (from the fit residuals), m^3/rev
   T aux;                             ///< A: flow intercept c (m^3/s); B: slope dq/ddp (m^3/(s Pa)); C: slope dV/ddp (m^3/(rev Pa))
@@ -339,6 +343,10 @@ struct displacement_result {
   std::size_t points;                ///< number of points used
   displacement_estimator estimator;  ///< the estimator used: always state it with V_i
   status st;                         ///< ok, regime (fewer points than the standard asks), or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 namespace detail {

@@ -10,6 +10,7 @@
 
 #include <cmath>
 
+#include "detail/roots.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 #include "units.hpp"
@@ -259,40 +260,38 @@ inline result<T> sus_from_kinematic(T nu_m2_s) {
 /// ASTM D2161-93; check 700 SUS -> 151.0891 mm^2/s (`chemicals` documentation).
 template <class T>
 inline result<T> kinematic_from_sus(T sus) {
-  using std::fabs;
   if (!detail::finite(sus)) return detail::fail<T>(status::nonfinite);
   if (!(sus > T(0))) return detail::fail<T>(status::domain);
-  const T a = detail::constant<T>(4.6324L, "4.6324");
-  T lo = (sus - detail::constant<T>(25.5L, "25.5")) / a;
-  if (lo < T(0)) lo = T(0);
-  T hi = sus / a;
   const T mm2 = detail::constant<T>(1e6L, "1000000");
-  auto f = [&](T v) { return sus_from_kinematic(v / mm2).value - sus; };
-  T x = (lo + hi) / 2;
-  const T tol = 4 * scalar_traits<T>::epsilon();
-  for (int i = 0; i < scalar_traits<T>::max_iterations; ++i) {
-    const T fx = f(x);
-    if (fx > T(0)) hi = x; else lo = x;
-    // derivative by the analytic form of dSUS/dnu
-    const T den = detail::constant<T>(3930.2L, "3930.2") +
-                  x * (detail::constant<T>(262.7L, "262.7") +
-                       x * (detail::constant<T>(23.97L, "23.97") + x * detail::constant<T>(1.646L, "1.646")));
-    const T dden = detail::constant<T>(262.7L, "262.7") +
-                   x * (2 * detail::constant<T>(23.97L, "23.97") + 3 * x * detail::constant<T>(1.646L, "1.646"));
-    const T num = T(1) + detail::constant<T>(0.03264L, "0.03264") * x;
-    const T dfx = a + (detail::constant<T>(0.03264L, "0.03264") * den - num * dden) / (den * den) *
-                          detail::constant<T>(1e5L, "100000");
-    T xn = x - fx / dfx;
-    if (!(xn > lo && xn < hi)) xn = (lo + hi) / 2;
-    if (fabs(xn - x) <= tol * fabs(xn) || hi - lo <= tol * fabs(hi)) {
-      x = xn;
-      const T nu = x / mm2;
-      if (x < detail::constant<T>(1.8L, "1.8")) return {nu, status::regime};
-      return {nu, status::ok};
-    }
-    x = xn;
+  if constexpr (detail::is_dual_v<T>) {  // root in the value type, derivatives by the implicit rule
+    const auto v = kinematic_from_sus(detail::primal(sus));
+    if (is_error(v.st)) return detail::fail<T>(v.st);
+    auto residual = [](auto nu, auto s) { return sus_from_kinematic(nu).value - s; };
+    return {detail::implicit_root<T>(v.value, residual, sus), v.st};
+  } else {
+    const T a = detail::constant<T>(4.6324L, "4.6324");
+    T lo = (sus - detail::constant<T>(25.5L, "25.5")) / a;
+    if (lo < T(0)) lo = T(0);
+    const T hi = sus / a;
+    // SUS - sus and its analytic derivative in nu (mm^2/s)
+    auto f = [&](T x) {
+      const T den = detail::constant<T>(3930.2L, "3930.2") +
+                    x * (detail::constant<T>(262.7L, "262.7") +
+                         x * (detail::constant<T>(23.97L, "23.97") + x * detail::constant<T>(1.646L, "1.646")));
+      const T dden = detail::constant<T>(262.7L, "262.7") +
+                     x * (2 * detail::constant<T>(23.97L, "23.97") + 3 * x * detail::constant<T>(1.646L, "1.646"));
+      const T num = T(1) + detail::constant<T>(0.03264L, "0.03264") * x;
+      const T dfx = a + (detail::constant<T>(0.03264L, "0.03264") * den - num * dden) / (den * den) *
+                            detail::constant<T>(1e5L, "100000");
+      return detail::value_slope<T>{sus_from_kinematic(x / mm2).value - sus, dfx};
+    };
+    const auto r = detail::newton_bisect(f, lo, hi, (lo + hi) / 2, 4 * scalar_traits<T>::epsilon(),
+                                         scalar_traits<T>::max_iterations);
+    if (r.st != status::ok) return detail::fail<T>(r.st == status::nonfinite ? status::overflow : r.st);
+    const T nu = r.x / mm2;
+    if (r.x < detail::constant<T>(1.8L, "1.8")) return {nu, status::regime};
+    return {nu, status::ok};
   }
-  return detail::fail<T>(status::no_convergence);
 }
 /// @}
 

@@ -372,12 +372,16 @@ inline result<T> friction_factor(T reynolds, T relative_roughness, T laminar_con
 
 /// Flow state and pressure drop of one straight round segment.
 template <class T>
-struct pipe_flow {
+struct [[nodiscard]] pipe_flow {
   T velocity_m_s;     ///< mean velocity v = 4q/(pi D^2), m/s (sign of q)
   T reynolds;         ///< Reynolds number rho |v| D / mu
   T friction_factor;  ///< Darcy friction factor (friction_factor()); +infinity at zero flow
   T dp_pa;            ///< pressure drop, Pa (sign of q)
   pumploss::status st;  ///< status of the calculation
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Mean velocity in a round bore: \f$ v = 4q/(\pi D^2) \f$.

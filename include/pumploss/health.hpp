@@ -120,7 +120,7 @@ struct health_reading {
 
 /// A verdict with its reasons and figures.
 template <class T>
-struct health_assessment {
+struct [[nodiscard]] health_assessment {
   health_level level;               ///< the verdict
   unsigned reasons;                 ///< health_reason bits
   T fraction;                       ///< drain fraction as read
@@ -130,6 +130,10 @@ struct health_assessment {
   T drain_rise_k;                   ///< drain minus inlet temperature, K (NaN if not measured)
   T throttling_rise_k;              ///< dp/(rho cp): rise of oil throttled from outlet to case, K
   pumploss::status st;              ///< status of the assessment
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Normalise a drain reading to the reference state with the power law
@@ -259,11 +263,15 @@ inline health_assessment<T> assess_health(const health_reference<T>& ref, const 
 
 /// Linear trend of normalised drain flow over time, by least squares.
 template <class T>
-struct health_trend {
+struct [[nodiscard]] health_trend {
   T slope_per_day;     ///< growth of the normalised drain fraction per day (1/day)
   T intercept;         ///< fitted fraction at day 0
   T days_to_worn;      ///< days from the last reading until the fit crosses the worn band (inf if not rising, 0 if there)
   pumploss::status st; ///< status::insufficient_data for fewer than 2 readings or one single day
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Fit a straight line to (day, normalised drain fraction) and project it to the worn band.

@@ -141,7 +141,7 @@ inline result<T> leakage_series(T r_lam_pa_s_m3, T r_t_pa_s2_m6, T dp_pa) {
 
 /// A fitted leakage power law \f$ q = k\,\Delta p^a \mu^{-b} \f$ with its diagnostics.
 template <class T>
-struct leakage_power_law {
+struct [[nodiscard]] leakage_power_law {
   T k;        ///< coefficient k, m^3/s / (Pa^a (Pa s)^-b)
   T a;        ///< pressure exponent
   T b;        ///< viscosity exponent
@@ -151,6 +151,10 @@ struct leakage_power_law {
   T rms_log;  ///< RMS residual of ln q (about the relative RMS error)
   T cond;     ///< condition number of the column-scaled design matrix (1-norm of R)
   status st;  ///< ok, ill_conditioned (report), or an error (insufficient_data, domain, ...)
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Workspace (number of T values) that leakage_fit_power_law() and leakage_split() need for
@@ -230,13 +234,17 @@ inline leakage_power_law<T> leakage_fit_power_law(const T* q_m3_s, const T* dp_p
 
 /// Drain readings split into a viscous, an orifice-like and a constant part.
 template <class T>
-struct leakage_split_result {
+struct [[nodiscard]] leakage_split_result {
   T c_viscous;   ///< coefficient of dp/mu, m^3 (q_visc = c dp / mu)
   T c_orifice;   ///< coefficient of sqrt(dp), m^3/(s Pa^0.5)
   T c_constant;  ///< constant part, m^3/s
   T rms;         ///< RMS residual, m^3/s
   int iterations;///< active-set iterations used
   status st;     ///< ok or an error (no_convergence, insufficient_data, domain, misuse, nonfinite)
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Split drain readings into a viscous part (laminar gaps, dp/mu), an orifice-like part

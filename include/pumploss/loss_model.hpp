@@ -26,7 +26,7 @@ enum class loss_model_kind : int {
 
 /// A fitted loss model with its diagnostics.
 template <class T>
-struct loss_model {
+struct [[nodiscard]] loss_model {
   machine kind;                 ///< pump or motor (the signs of the losses differ)
   loss_model_kind model;        ///< wilson or schloesser
   T displacement_m3_rev;        ///< V_i used (state the estimator that gave it)
@@ -57,6 +57,10 @@ struct loss_model {
   T mu_max;                     ///< highest viscosity of the data, Pa s
   std::size_t points;           ///< number of test points
   status st;                    ///< ok, ill_conditioned (report), or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Fit options.
@@ -72,13 +76,17 @@ constexpr std::size_t loss_fit_workspace(std::size_t count) noexcept { return 5 
 
 /// A prediction of flow, torque and efficiencies from a fitted model.
 template <class T>
-struct loss_prediction {
+struct [[nodiscard]] loss_prediction {
   T flow_m3_s;   ///< pump outlet flow or motor inlet flow, m^3/s
   T torque_n_m;  ///< pump input torque or motor output torque, N m
   T eta_v;       ///< volumetric efficiency
   T eta_hm;      ///< hydromechanical efficiency
   T eta_t;       ///< overall efficiency
   status st;     ///< ok, extrapolated (outside the data's ranges), or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 namespace detail {

@@ -92,13 +92,17 @@ struct gum_value {
 
 /// Efficiencies and powers of one operating point with their GUM uncertainties.
 template <class T>
-struct efficiency_uncertainty {
+struct [[nodiscard]] efficiency_uncertainty {
   gum_value<T> eta_v;   ///< volumetric efficiency
   gum_value<T> eta_hm;  ///< hydromechanical efficiency
   gum_value<T> eta_t;   ///< overall efficiency
   gum_value<T> p_hyd;   ///< hydraulic power, W
   gum_value<T> p_mech;  ///< shaft power, W
   status st;            ///< the efficiency status (ok, implausible) or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Inputs of efficiency_gum(): the five readings and their standard uncertainties.
