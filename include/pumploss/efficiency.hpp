@@ -484,6 +484,17 @@ inline displacement_result<T> displacement_two_step(const T* speed_rev_s, const 
 }
 /// @}
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(flow_at_port)
+PUMPLOSS_PROMOTE(flow_at_port_linear)
+PUMPLOSS_PROMOTE(hydraulic_power)
+PUMPLOSS_PROMOTE(motor_efficiency)
+PUMPLOSS_PROMOTE(pump_efficiency)
+PUMPLOSS_PROMOTE(shaft_power)
+PUMPLOSS_PROMOTE(theoretical_flow)
+PUMPLOSS_PROMOTE(theoretical_torque)
+
 }  // namespace pumploss
 
 #endif

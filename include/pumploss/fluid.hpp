@@ -462,6 +462,19 @@ inline result<T> oil_dynamic_viscosity(const oil<T>& o, T t_k, T p_pa) {
 }
 /// @}
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(d341_fit)
+PUMPLOSS_PROMOTE(d341_nu_from_z)
+PUMPLOSS_PROMOTE(d341_z)
+PUMPLOSS_PROMOTE(dynamic_viscosity)
+PUMPLOSS_PROMOTE(kinematic_from_sus)
+PUMPLOSS_PROMOTE(kinematic_viscosity)
+PUMPLOSS_PROMOTE(oil_density)
+PUMPLOSS_PROMOTE(sus_from_kinematic)
+PUMPLOSS_PROMOTE(viscosity_barus)
+PUMPLOSS_PROMOTE(viscosity_d341)
+
 }  // namespace pumploss
 
 #endif

@@ -483,6 +483,15 @@ inline pipe_flow<T> pipe_pressure_drop(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diame
 }
 /// @}
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(friction_churchill)
+PUMPLOSS_PROMOTE(friction_colebrook)
+PUMPLOSS_PROMOTE(friction_haaland)
+PUMPLOSS_PROMOTE(friction_swamee_jain)
+PUMPLOSS_PROMOTE(pipe_reynolds)
+PUMPLOSS_PROMOTE(pipe_velocity)
+
 }  // namespace pumploss
 
 #endif

@@ -954,6 +954,32 @@ inline result<T> gap_narrow_ratio(T bore_diameter_m, T piston_diameter_m) {
 }
 /// @}
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(gap_annulus_clearance)
+PUMPLOSS_PROMOTE(gap_annulus_drag_flow)
+PUMPLOSS_PROMOTE(gap_annulus_flow)
+PUMPLOSS_PROMOTE(gap_annulus_narrow_flow)
+PUMPLOSS_PROMOTE(gap_narrow_ratio)
+PUMPLOSS_PROMOTE(gap_pad_capillary)
+PUMPLOSS_PROMOTE(gap_pad_capillary_height)
+PUMPLOSS_PROMOTE(gap_pad_orifice)
+PUMPLOSS_PROMOTE(gap_pad_orifice_height)
+PUMPLOSS_PROMOTE(gap_piston_leakage)
+PUMPLOSS_PROMOTE(gap_plates_flow)
+PUMPLOSS_PROMOTE(gap_plates_height)
+PUMPLOSS_PROMOTE(gap_plates_height_couette)
+PUMPLOSS_PROMOTE(gap_plates_power_loss)
+PUMPLOSS_PROMOTE(gap_plates_shear_force)
+PUMPLOSS_PROMOTE(gap_plates_velocity)
+PUMPLOSS_PROMOTE(gap_radial_flow)
+PUMPLOSS_PROMOTE(gap_radial_height)
+PUMPLOSS_PROMOTE(gap_radial_land_force)
+PUMPLOSS_PROMOTE(gap_radial_pressure)
+PUMPLOSS_PROMOTE(gap_radial_sector_flow)
+PUMPLOSS_PROMOTE(gap_reduced_reynolds)
+PUMPLOSS_PROMOTE(gap_reynolds)
+
 }  // namespace pumploss
 
 #endif

@@ -328,6 +328,10 @@ inline health_trend<T> fit_health_trend(const T* days, const T* fractions, std::
   return out;
 }
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(drain_fraction)
+
 }  // namespace pumploss
 
 #endif

@@ -310,6 +310,12 @@ inline leakage_split_result<T> leakage_split(const T* q_m3_s, const T* dp_pa, co
   return r;
 }
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(leakage_scale)
+PUMPLOSS_PROMOTE(leakage_scale_power_law)
+PUMPLOSS_PROMOTE(leakage_series)
+
 }  // namespace pumploss
 
 #endif

@@ -741,6 +741,19 @@ inline drain_sizing<T> size_drain_line(const line<T>& l, const oil<T>& o, T q_dr
 }
 /// @}
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(crane_ft)
+PUMPLOSS_PROMOTE(equivalent_length)
+PUMPLOSS_PROMOTE(k_darby)
+PUMPLOSS_PROMOTE(k_hooper)
+PUMPLOSS_PROMOTE(line_component_power)
+PUMPLOSS_PROMOTE(line_fitting_crane)
+PUMPLOSS_PROMOTE(line_fitting_darby)
+PUMPLOSS_PROMOTE(line_fitting_hooper)
+PUMPLOSS_PROMOTE(line_fitting_k)
+PUMPLOSS_PROMOTE(line_pipe)
+
 }  // namespace pumploss
 
 #endif

@@ -368,6 +368,20 @@ inline result<T> orifice_flow_cda(T dp_pa, T rho_kg_m3, T cda_m2) {
 }
 /// @}
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(capillary_dp)
+PUMPLOSS_PROMOTE(capillary_flow)
+PUMPLOSS_PROMOTE(orifice_cd_low_re)
+PUMPLOSS_PROMOTE(orifice_diameter)
+PUMPLOSS_PROMOTE(orifice_dp)
+PUMPLOSS_PROMOTE(orifice_flow)
+PUMPLOSS_PROMOTE(orifice_flow_cda)
+PUMPLOSS_PROMOTE(orifice_flow_viscous)
+PUMPLOSS_PROMOTE(orifice_parallel_cda)
+PUMPLOSS_PROMOTE(orifice_reynolds)
+PUMPLOSS_PROMOTE(orifice_series_cda)
+
 }  // namespace pumploss
 
 #endif

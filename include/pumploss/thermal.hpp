@@ -170,6 +170,14 @@ inline result<T> case_drain_temperature_from_leakage(T t_inlet_k, T dp_pa, T dra
                                 cp_j_kg_k);
 }
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(case_drain_temperature)
+PUMPLOSS_PROMOTE(case_drain_temperature_from_leakage)
+PUMPLOSS_PROMOTE(heat_load)
+PUMPLOSS_PROMOTE(throttle_temperature_rise)
+PUMPLOSS_PROMOTE(throttle_temperature_rise_isenthalpic)
+
 }  // namespace pumploss
 
 #endif

@@ -193,6 +193,10 @@ inline efficiency_uncertainty<T> efficiency_gum(machine kind, const efficiency_i
   return r;
 }
 
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(pressure_difference_uncertainty)
+
 }  // namespace pumploss
 
 #endif

@@ -165,30 +165,6 @@ inline root_result<T> newton_bisect(FDF&& fdf, T lo, T hi, T x, T rel_tol, int m
   return {x, max_iterations, status::no_convergence};
 }
 
-/// True for pumploss::dual types.
-template <class T>
-struct is_dual : std::false_type {};
-/// True for pumploss::dual types.
-template <class V, std::size_t N>
-struct is_dual<dual<V, N>> : std::true_type {};
-/// True for pumploss::dual types.
-template <class T>
-inline constexpr bool is_dual_v = is_dual<T>::value;
-
-/// The value type under a scalar: V for dual<V, N>, T otherwise.
-template <class T>
-struct value_type_of {
-  using type = T;  ///< the value type
-};
-/// The value type under a scalar: V for dual<V, N>.
-template <class V, std::size_t N>
-struct value_type_of<dual<V, N>> {
-  using type = V;  ///< the value type
-};
-/// The value type under a scalar.
-template <class T>
-using value_type_of_t = typename value_type_of<T>::type;
-
 /// The implicit-function rule: given the root x0 (found in the value type) of F(x, p...) = 0,
 /// the root in T with derivatives dx/dp = -F_p / F_x, where F_p comes from one evaluation of F
 /// in T at the constant x0 and F_x from one evaluation with x seeded in a one-direction dual
