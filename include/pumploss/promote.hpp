@@ -128,10 +128,10 @@ using promote_args_t = typename detail::promote_args<A...>::type;
 }  // namespace pumploss
 
 #if defined(PUMPLOSS_DOXYGEN)
-#define PUMPLOSS_PROMOTE(name)
-#else
 /// Adds the mixed-argument overload of the formula template `name` (see promote.hpp). Place it
 /// after the template, in namespace pumploss.
+#define PUMPLOSS_PROMOTE(name)
+#else
 #define PUMPLOSS_PROMOTE(name)                                                                         \
   template <class... PromoteA, std::enable_if_t<::pumploss::detail::promote_needed<PromoteA...>::value, \
                                                 int> = 0>                                             \
