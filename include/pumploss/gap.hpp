@@ -420,7 +420,7 @@ inline result<T> gap_piston_leakage(T dp_pa, T mu_pa_s, T bore_diameter_m, T pis
 /// (inverse of gap_annulus_flow()).
 ///
 /// Solved on log q against log h (q grows like h^3) by Brent's method (detail/roots.hpp) on a
-/// bracket grown from the narrow-gap estimate; typically 4 to 8 evaluations. For dual numbers
+/// bracket grown from the narrow-gap estimate; typically 5 to 7 evaluations. For dual numbers
 /// the root is found in the value type and the derivatives follow from the implicit-function
 /// rule (dh/dp = -F_p/F_h).
 ///
@@ -474,22 +474,28 @@ inline result<T> gap_annulus_clearance(T q_m3_s, T dp_pa, T mu_pa_s, T bore_diam
     auto f = [&](T x) {
       return residual(T(exp(x)), q_m3_s, dp_pa, mu_pa_s, bore_diameter_m, length_m, eccentricity_ratio);
     };
-    const T xmax = log(hmax), fmax = f(xmax);
-    if (!(fmax >= T(0))) return detail::fail<T>(status::domain);
+    const T xmax = log(hmax);
     const T e2 = eccentricity_ratio * eccentricity_ratio;
     T h0 = cbrt(T(12) * mu_pa_s * length_m * ratio / (detail::pi<T>() * T(2) * a * (T(1) + T(3) * e2 / 2)));
     if (!(h0 < hmax)) h0 = hmax / 2;
     const T x0 = log(h0), f0 = f(x0);
     const int cap = scalar_traits<T>::max_iterations;
     const T tol = 4 * scalar_traits<T>::epsilon();
-    detail::root_result<T> r{};
-    if (f0 < T(0)) {
-      r = detail::brent(f, x0, xmax, f0, fmax, tol, T(0), cap);
-    } else {  // the estimate is too wide: step down by factors of e until F < 0
-      const auto br = detail::expand_bracket(f, x0, f0, [](T x) { return x - T(1); }, cap);
-      if (br.st != status::ok) return detail::fail<T>(br.st == status::nonfinite ? status::domain : br.st);
-      r = detail::brent(f, br.b, br.a, br.fb, br.fa, tol, T(0), cap);
-    }
+    // bracket from the estimate: F grows like 3 log h, so step by -F/3 (a sixteenth more, to
+    // cross the root at once), doubling the step until F changes sign; the last step stops at
+    // hmax, and F < 0 there means no clearance explains the leakage (NaN ends the search)
+    T step = -f0 / 3 * detail::constant<T>(1.0625L, "1.0625");
+    const auto br = detail::expand_bracket(
+        f, x0, f0,
+        [&](T x) {
+          if (x == xmax) return scalar_traits<T>::nan();
+          const T next = x + step;
+          step *= 2;
+          return next < xmax ? next : xmax;
+        },
+        cap);
+    if (br.st != status::ok) return detail::fail<T>(br.st == status::nonfinite ? status::domain : br.st);
+    const auto r = detail::brent(f, br.a, br.b, br.fa, br.fb, tol, T(0), cap);
     if (r.st != status::ok) return detail::fail<T>(r.st == status::nonfinite ? status::domain : r.st);
     return {exp(r.x), status::ok};
   }
