@@ -113,7 +113,7 @@ void BM_PlatesHeightCouetteClosedForm(benchmark::State& state) {
 }
 BENCHMARK(BM_PlatesHeightCouetteClosedForm);
 
-// Baseline: Newton iteration from the pressure-only root, as methods.md 6.7 suggests.
+// Baseline: Newton iteration from the pressure-only root, the usual way to solve the cubic (docs/pages/theory_gap.md).
 void BM_PlatesHeightCouetteNewton(benchmark::State& state) {
   double q = 2e-7;
   const double A = 0.02 * 1e6 / (12 * 0.04 * 0.01), B = 0.02 * 2.0 / 2;

@@ -14,7 +14,7 @@
 #   4. the Windows x64 DLL (mingw-w64): export table against the generated pumploss.def and
 #      exports.txt, and the C caller run against it under wine when wine is installed;
 #      pumploss_cxx.dll (export table: pumploss:: functions only) with a C++ consumer under wine;
-#   5. the docs (Doxygen, warnings as errors);
+#   5. the docs (Doxygen, warnings as errors) and the citation check (scripts/check_citations.py);
 #   6. the benchmarks of the performance page (scripts/bench.sh): their ratios are printed for
 #      the record; they fail the run only with PUMPLOSS_BENCH_STRICT=1 (timings on a shared
 #      machine scatter; correctness never depends on them).
@@ -139,6 +139,9 @@ else
 fi
 
 step "docs (Doxygen, warnings are errors)"
+# every file a comment or page cites exists; the checker's own test first (tests/check_citations_test.py)
+/usr/bin/python3 "$here/tests/check_citations_test.py"
+/usr/bin/python3 "$here/scripts/check_citations.py"
 cmake --build "$out/static" --target docs
 
 step "benchmarks: ratios against the baselines in one run (scripts/bench.sh)"

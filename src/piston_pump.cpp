@@ -8,6 +8,7 @@
 #include <vector>
 
 #include "pumploss/detail/lsq.hpp"
+#include "pumploss/detail/roots.hpp"
 
 namespace pumploss {
 
@@ -87,13 +88,13 @@ double gap_factor_for_scale(const piston_pump<double>& p, const oil<double>& o, 
     if (is_error(group_flows(scale_gaps(p, kGroupGaps[g], k), o, m, f))) return kNaN;
     return f[g];
   };
-  double lo = -std::log(20.0), hi = std::log(20.0);
-  if (!(flow(std::exp(lo)) <= target) || !(flow(std::exp(hi)) >= target)) return kNaN;
-  for (int i = 0; i < 80; ++i) {
-    const double mid = 0.5 * (lo + hi);
-    if (flow(std::exp(mid)) < target) lo = mid; else hi = mid;
-  }
-  return std::exp(0.5 * (lo + hi));
+  const double lo = -std::log(20.0), hi = std::log(20.0);
+  const double flo = flow(std::exp(lo)) - target, fhi = flow(std::exp(hi)) - target;
+  if (!(flo <= 0.0) || !(fhi >= 0.0)) return kNaN;
+  const double tol = 4 * scalar_traits<double>::epsilon();
+  const auto r = detail::brent([&](double x) { return flow(std::exp(x)) - target; }, lo, hi, flo, fhi, tol, tol,
+                               scalar_traits<double>::max_iterations);
+  return r.st == status::ok ? std::exp(r.x) : kNaN;
 }
 
 }  // namespace

@@ -246,7 +246,7 @@ TEST(Efficiency, DualNumberSensitivities) {
 }
 
 TEST(FlowAtPort, ExactAndLinearisedCorrection) {
-  // methods.md 2.3 example: 250 bar between port and meter, 13 K warmer meter, K = 1.6 GPa,
+  // methods_2_3_example (tests/reference/SOURCES.md): 250 bar between port and meter, 13 K warmer meter, K = 1.6 GPa,
   // alpha = 6.5e-4 1/K: linear factor 1 - 2.5e7/1.6e9 - 6.5e-4*13 = 1 - 0.015625 - 0.00845 = 0.975925.
   const double q_e = 2.5e-3, rho = 870, tr = 288.15;
   const auto lin = pumploss::flow_at_port_linear(q_e, 0.0, 333.15, 2.5e7, 320.15, 6.5e-4, 1.6e9);

@@ -115,7 +115,7 @@ TEST(FrictionColebrook, TableLogarithmAgainstFiftyDigits) {
 }
 
 TEST(FrictionColebrook, MethodsCheckValues) {
-  // methods.md 13 rows 1, 6, 7 (fluids documentation / mpmath).
+  // fluids_doc_friction and mpmath_colebrook_root (tests/reference/SOURCES.md; fluids documentation / mpmath).
   EXPECT_NEAR(pumploss::friction_colebrook(1e5, 1e-4).value, 0.018513866077, 0.5e-12);
   EXPECT_NEAR(pumploss::friction_colebrook(1e4, 0.0).value, 0.030882950, 0.5e-9);
   EXPECT_NEAR(pumploss::friction_colebrook(1e7, 1e-2).value, 0.037909826, 0.5e-9);
@@ -131,7 +131,7 @@ TEST(FrictionExplicit, MatchFluidsReferenceLibrary) {
     EXPECT_NEAR(pumploss::friction_swamee_jain(r.re, r.rr).value / r.swamee_jain, 1, 1e-5) << r.re;
     EXPECT_NEAR(pumploss::friction_churchill(r.re, r.rr).value / r.churchill, 1, 1e-13) << r.re;
   }
-  // methods.md 13 rows 3-5 (fluids documentation).
+  // fluids_doc_friction (tests/reference/SOURCES.md; fluids documentation).
   EXPECT_NEAR(pumploss::friction_haaland(1e5, 1e-4).value, 0.018265053015, 0.5e-12);
   EXPECT_NEAR(pumploss::friction_swamee_jain(1e5, 1e-4).value, 0.018452424432, 1e-7);
   EXPECT_NEAR(pumploss::friction_churchill(1e5, 1e-4).value, 0.018462624566, 0.5e-12);

@@ -174,7 +174,7 @@ TEST(GapAnnulus, LimitsConcentricNarrowAndTouching) {
     const double qn = pumploss::gap_annulus_narrow_flow(1e6, 0.04, 2 * a, 2 * b, 0.02, e).value;
     EXPECT_NEAR(qe / qn, 1.0, 1e-5) << e;
   }
-  // wide gap, concentric: exact / narrow(D_m mean) = 1 + t^2/60 - t^3/60 + ... (methods.md 6.2,
+  // wide gap, concentric: exact / narrow(D_m mean) = 1 + t^2/60 - t^3/60 + ... (docs/pages/theory_gap.md,
   // with D_m = 2 r_i + h)
   for (double t : {1e-3, 1e-2, 0.05}) {
     const double b = 0.01, a = b * (1 + t);
@@ -183,7 +183,7 @@ TEST(GapAnnulus, LimitsConcentricNarrowAndTouching) {
     const double series = 1 + t * t / 60 - t * t * t / 60 + 37 * t * t * t * t / 2520;
     EXPECT_NEAR(qe / qn, series, 0.02 * t * t * t * t * t + 1e-14) << t;  // next term about -0.0126 t^5
   }
-  // the design's check (methods.md 6.3): a = 7, b = 5, c = 1 differs from the narrow factor by
+  // self-calculated check (finite-difference Poisson solution): a = 7, b = 5, c = 1 differs from the narrow factor by
   // about 0.5 % and from a finite-difference Poisson solution by 0.07 %: here exact/narrow.
   const double qe = pumploss::gap_annulus_flow(1.0, 1.0, 14.0, 10.0, 1.0, 0.5).value;
   const double qn = pumploss::gap_annulus_narrow_flow(1.0, 1.0, 14.0, 10.0, 1.0, 0.5).value;
@@ -433,7 +433,7 @@ TEST(GapValidity, ReynoldsNumbers) {
   EXPECT_EQ(pumploss::gap_reynolds(1.0, 0.06, 870.0, 0.04).st, status::regime);
   EXPECT_EQ(pumploss::gap_reduced_reynolds(1e-4, 0.06, 1e-3, 1e-3, 870.0, 0.001).st, status::regime);
   EXPECT_EQ(pumploss::gap_reduced_reynolds(1e-6, 0.06, 1e-5, 0.03, 870.0, 0.04).st, status::ok);
-  // methods.md 13 row 15: Re_Dh = 0.076 at q = 6.5483e-3 L/min, b = pi * 20 mm, rho 870
+  // selfcalc_methods13 (tests/reference/SOURCES.md): Re_Dh = 0.076 at q = 6.5483e-3 L/min, b = pi * 20 mm, rho 870
   const double q = 6.5483e-3 / 60000.0;
   EXPECT_NEAR(pumploss::gap_reynolds(q, kPi * 0.02001, 870.0, 0.040).value, 0.076, 0.0005);
   EXPECT_EQ(pumploss::gap_reynolds(q, 0.0, 870.0, 0.04).st, status::domain);

@@ -34,15 +34,15 @@ const crane_row kCraneRows[] = {
 
 constexpr double kPi = 3.14159265358979323846;
 
-/// VG 46 with 6.8 mm2/s at 100 degC (methods.md 13 row 12), typical mineral oil, but with
-/// density 870 kg/m3 at every temperature (no expansion) to match methods.md row 20.
+/// VG 46 with 6.8 mm2/s at 100 degC (selfcalc_vg46 in tests/reference/SOURCES.md), typical mineral oil, but with
+/// density 870 kg/m3 at every temperature (no expansion) to match methods_row20 (tests/reference/SOURCES.md).
 pumploss::oil<double> vg46_const_density() {
   auto o = pumploss::typical_mineral_oil(pumploss::d341_fit(313.15, 46e-6, 373.15, 6.8e-6).value);
   o.alpha_per_k = 0.0;
   return o;
 }
 
-/// The drain line of methods.md 13 row 20: 5 m of 12.7 mm bore (smooth), nothing else.
+/// The drain line of methods_row20 (tests/reference/SOURCES.md, self-calculated): 5 m of 12.7 mm bore (smooth), nothing else.
 pumploss::line<double> row20_line() {
   pumploss::line<double> l;
   l.elements.push_back(pumploss::line_pipe(0.0127, 5.0, 0.0));
@@ -62,7 +62,7 @@ TEST(LineFittings, MatchFluidsHooperDarbyCrane) {
       EXPECT_NEAR(k.value / r.k, 1, 1e-14) << r.source << " Darby " << r.k1;
     }
   }
-  // methods.md 13 rows 8 and 9 (fluids documentation).
+  // fluids_fittings (tests/reference/SOURCES.md; fluids documentation).
   EXPECT_NEAR(pumploss::k_hooper(1500.0, 4.0, 2 * 0.0254, 1e4).value, 6.15, 1e-12);
   EXPECT_NEAR(pumploss::k_darby(950.0, 0.25, 4.0, 12.0, 1e4).value, 0.8195103, 0.5e-7);
   for (const auto& r : kCraneRows) {

@@ -14,7 +14,7 @@ using pltest::mp50;
 using pumploss::status;
 
 TEST(ThrottleTemperatureRise, MethodsRow18) {
-  // methods13_row18 (self-calculated in methods.md): 10 bar, 880 kg/m3, 2030 J/(kg K) -> 0.560 K
+  // methods13_row18 (self-calculated, tests/reference/SOURCES.md): 10 bar, 880 kg/m3, 2030 J/(kg K) -> 0.560 K
   // hand: 1e6 / (880 * 2030) = 1e6 / 1 786 400 = 0.55978504 K
   const auto r = pumploss::throttle_temperature_rise(1e6, 880.0, 2030.0);
   ASSERT_EQ(r.st, status::ok);
@@ -33,7 +33,7 @@ TEST(ThrottleTemperatureRise, MethodsRow18) {
 }
 
 TEST(ThrottleTemperatureRise, IsenthalpicIsAbout079AtFiftyDegrees) {
-  // methods.md 10: (1 - alpha T) = 1 - 6.5e-4 * 323.15 = 0.78995 at 50 degC
+  // isenthalpic throttle, self-calculated: (1 - alpha T) = 1 - 6.5e-4 * 323.15 = 0.78995 at 50 degC
   const auto s = pumploss::throttle_temperature_rise(2.5e7, 870.0, 1900.0);
   const auto i = pumploss::throttle_temperature_rise_isenthalpic(2.5e7, 870.0, 1900.0, 6.5e-4, 323.15);
   ASSERT_EQ(i.st, status::ok);

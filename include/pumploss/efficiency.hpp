@@ -25,7 +25,7 @@ enum class machine : int {
 
 /// Efficiencies, ideal quantities, powers and losses of one operating point.
 template <class T>
-struct efficiency_point {
+struct [[nodiscard]] efficiency_point {
   T eta_v;      ///< volumetric efficiency (ISO 4409 definition), fraction
   T eta_hm;     ///< hydromechanical efficiency, fraction
   T eta_t;      ///< overall (total) efficiency, fraction
@@ -37,6 +37,10 @@ struct efficiency_point {
   T torque_loss;///< torque loss (pump: T - T_th; motor: T_th - T), N m
   T heat_w;     ///< power lost to heat (pump: P_m - P_h; motor: P_h - P_m), W
   status st;    ///< ok, implausible (an efficiency above 1), or an error (all fields NaN)
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 namespace detail {
@@ -80,12 +84,12 @@ inline T inv_two_pi() {
 ///         negative flow; status::nonfinite for NaN/inf (all fields NaN on error).
 /// @par Validity
 /// Steady state. eta_v is the ISO 4409 flow ratio: at high pressure it mixes leakage with
-/// compression of the trapped volume (methods.md 2.1).
+/// compression of the trapped volume (docs/pages/theory_efficiency.md).
 /// @par Accuracy
 /// A few ulp against a 50-digit evaluation (tests/efficiency_test.cpp: at most 3 ulp seen over 3 000 points).
 /// @par Source
 /// ISO 4409:2019 (test method) with the definitions of ISO 4391; pump eta_hm = eta_t / eta_v,
-/// methods.md 2.1.
+/// ISO 4409:2019 and ISO 4391 (docs/pages/theory_efficiency.md).
 template <class T>
 inline efficiency_point<T> pump_efficiency(T displacement_m3_rev, T speed_rev_s, T dp_pa, T flow_m3_s,
                                            T torque_n_m) {
@@ -126,7 +130,7 @@ inline efficiency_point<T> pump_efficiency(T displacement_m3_rev, T speed_rev_s,
 /// @par Accuracy
 /// A few ulp against a 50-digit evaluation (tests/efficiency_test.cpp: at most 3 ulp seen over 3 000 points).
 /// @par Source
-/// ISO 4409:2019 with the definitions of ISO 4391, methods.md 2.1.
+/// ISO 4409:2019 with the definitions of ISO 4391.
 template <class T>
 inline efficiency_point<T> motor_efficiency(T displacement_m3_rev, T speed_rev_s, T dp_pa, T flow_m3_s,
                                             T torque_n_m) {
@@ -157,7 +161,7 @@ inline efficiency_point<T> motor_efficiency(T displacement_m3_rev, T speed_rev_s
 /// @param torque_n_m pump input torque or motor output torque, N m
 /// @return as pump_efficiency() or motor_efficiency()
 /// @par Source
-/// ISO 4409:2019, methods.md 2.1.
+/// ISO 4409:2019.
 template <class T>
 inline efficiency_point<T> machine_efficiency(machine kind, T displacement_m3_rev, T speed_rev_s, T dp_pa,
                                               T flow_m3_s, T torque_n_m) {
@@ -173,7 +177,7 @@ inline efficiency_point<T> machine_efficiency(machine kind, T displacement_m3_re
 /// @par Accuracy
 /// Correctly rounded (one multiplication).
 /// @par Source
-/// ISO 4391 definition, methods.md 2.1.
+/// ISO 4391 definition.
 template <class T>
 inline result<T> theoretical_flow(T displacement_m3_rev, T speed_rev_s) {
   if (!detail::all_finite(displacement_m3_rev, speed_rev_s)) return detail::fail<T>(status::nonfinite);
@@ -188,7 +192,7 @@ inline result<T> theoretical_flow(T displacement_m3_rev, T speed_rev_s) {
 /// @par Accuracy
 /// Within 2 ulp.
 /// @par Source
-/// ISO 4391 definition, methods.md 2.1.
+/// ISO 4391 definition.
 template <class T>
 inline result<T> theoretical_torque(T displacement_m3_rev, T dp_pa) {
   if (!detail::all_finite(displacement_m3_rev, dp_pa)) return detail::fail<T>(status::nonfinite);
@@ -204,7 +208,7 @@ inline result<T> theoretical_torque(T displacement_m3_rev, T dp_pa) {
 /// @par Accuracy
 /// Correctly rounded.
 /// @par Source
-/// Definition, methods.md 2.1.
+/// Definition (docs/pages/theory_efficiency.md).
 template <class T>
 inline result<T> hydraulic_power(T flow_m3_s, T dp_pa) {
   if (!detail::all_finite(flow_m3_s, dp_pa)) return detail::fail<T>(status::nonfinite);
@@ -222,7 +226,7 @@ inline result<T> hydraulic_power(T flow_m3_s, T dp_pa) {
 /// @par Accuracy
 /// Within 2 ulp.
 /// @par Source
-/// Definition, methods.md 2.1.
+/// Definition (docs/pages/theory_efficiency.md).
 template <class T>
 inline result<T> shaft_power(T speed_rev_s, T torque_n_m) {
   if (!detail::all_finite(speed_rev_s, torque_n_m)) return detail::fail<T>(status::nonfinite);
@@ -255,8 +259,8 @@ inline result<T> shaft_power(T speed_rev_s, T torque_n_m) {
 /// @par Accuracy
 /// Within 4 ulp of the 50-digit evaluation (tests/efficiency_test.cpp).
 /// @par Source
-/// Mass conservation with the density model of methods.md 9.5; the approach of ISO 4409:2019
-/// (clause text not seen, methods.md 2.3).
+/// Mass conservation with the density model of docs/pages/theory_fluid.md; the approach of ISO 4409:2019
+/// (clause text not seen).
 template <class T>
 inline result<T> flow_at_port(T q_meter_m3_s, T p_meter_pa, T t_meter_k, T p_port_pa, T t_port_k,
                               T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_modulus_pa) {
@@ -286,7 +290,7 @@ inline result<T> flow_at_port(T q_meter_m3_s, T p_meter_pa, T t_meter_k, T p_por
 /// Differs from flow_at_port() by second-order terms: 0.03 % for 250 bar and 13 K
 /// (tests/efficiency_test.cpp).
 /// @par Source
-/// First-order expansion of the density ratio, methods.md 2.3.
+/// First-order expansion of the density ratio (docs/pages/theory_efficiency.md).
 template <class T>
 inline result<T> flow_at_port_linear(T q_meter_m3_s, T p_meter_pa, T t_meter_k, T p_port_pa, T t_port_k,
                                      T alpha_per_k, T bulk_modulus_pa) {
@@ -304,7 +308,7 @@ inline result<T> flow_at_port_linear(T q_meter_m3_s, T p_meter_pa, T t_meter_k, 
 }
 /// @}
 
-/// @name Derived displacement V_i from test data (methods.md section 3)
+/// @name Derived displacement V_i from test data (docs/pages/theory_efficiency.md)
 /// @{
 
 
@@ -330,7 +334,7 @@ inline const char* displacement_estimator_name(displacement_estimator e) noexcep
 
 /// A derived displacement with its standard error and the estimator that produced it.
 template <class T>
-struct displacement_result {
+struct [[nodiscard]] displacement_result {
   T v_m3_rev;                        ///< derived displacement V_i, m^3/rev
   T u_v_m3_rev;                      ///< standard error of V_i (from the fit residuals), m^3/rev
   T aux;                             ///< A: flow intercept c (m^3/s); B: slope dq/ddp (m^3/(s Pa)); C: slope dV/ddp (m^3/(rev Pa))
@@ -339,6 +343,10 @@ struct displacement_result {
   std::size_t points;                ///< number of points used
   displacement_estimator estimator;  ///< the estimator used: always state it with V_i
   status st;                         ///< ok, regime (fewer points than the standard asks), or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 namespace detail {
@@ -366,7 +374,7 @@ inline displacement_result<T> displacement_fail(displacement_estimator e, std::s
 /// @par Accuracy
 /// Recovers an exact line to 1e-14 relative (tests/efficiency_test.cpp).
 /// @par Source
-/// Straight-line least squares (methods.md 3, estimator A; self-derived, no standard text).
+/// Straight-line least squares (estimator A of docs/pages/theory_efficiency.md; self-derived, no standard text).
 template <class T>
 inline displacement_result<T> displacement_slope(const T* speed_rev_s, const T* flow_m3_s, std::size_t count) {
   const auto e = displacement_estimator::slope_low_pressure;
@@ -399,7 +407,7 @@ inline displacement_result<T> displacement_slope(const T* speed_rev_s, const T* 
 /// Recovers an exact line to 1e-14 relative (tests/efficiency_test.cpp).
 /// @par Source
 /// ISO 8426-2:2025 (zero-pressure intercept at a single shaft speed; scope seen, clause text
-/// not), methods.md 3, estimator B.
+/// not), estimator B of docs/pages/theory_efficiency.md.
 template <class T>
 inline displacement_result<T> displacement_intercept(T speed_rev_s, const T* dp_pa, const T* flow_m3_s,
                                                      std::size_t count) {
@@ -439,7 +447,7 @@ inline displacement_result<T> displacement_intercept(T speed_rev_s, const T* dp_
 /// Recovers exact synthetic data to 1e-13 relative (tests/efficiency_test.cpp).
 /// @par Source
 /// Toet, Johnson, Montague, Torres, Garcia-Bravo, Energies 12(3):415 (2019); ISO 8426-1:2025
-/// (scope seen), methods.md 3, estimator C.
+/// (scope seen), estimator C of docs/pages/theory_efficiency.md.
 template <class T>
 inline displacement_result<T> displacement_two_step(const T* speed_rev_s, const T* dp_pa, const T* flow_m3_s,
                                                     std::size_t levels, std::size_t per_level) {
@@ -475,6 +483,17 @@ inline displacement_result<T> displacement_two_step(const T* speed_rev_s, const 
   return {g.intercept, g.u_intercept, g.slope, g.u_slope, g.s_r, count, e, st};
 }
 /// @}
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(flow_at_port)
+PUMPLOSS_PROMOTE(flow_at_port_linear)
+PUMPLOSS_PROMOTE(hydraulic_power)
+PUMPLOSS_PROMOTE(motor_efficiency)
+PUMPLOSS_PROMOTE(pump_efficiency)
+PUMPLOSS_PROMOTE(shaft_power)
+PUMPLOSS_PROMOTE(theoretical_flow)
+PUMPLOSS_PROMOTE(theoretical_torque)
 
 }  // namespace pumploss
 

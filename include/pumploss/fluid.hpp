@@ -11,6 +11,7 @@
 #include <cmath>
 
 #include "export.hpp"
+#include "detail/roots.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 #include "units.hpp"
@@ -33,7 +34,7 @@ namespace pumploss {
 /// logarithm, which holds for nu above about 0.2 mm^2/s.
 /// @par Source
 /// ASTM D341, "Standard Practice for Viscosity-Temperature Equations and Charts for Liquid
-/// Petroleum or Hydrocarbon Products" (form with low-viscosity term, methods.md 9.1).
+/// Petroleum or Hydrocarbon Products" (form with the low-viscosity term).
 template <class T>
 inline T d341_z(T nu_mm2_s) {
   using std::exp;
@@ -56,7 +57,7 @@ inline T d341_z(T nu_mm2_s) {
 /// The low-viscosity inverse is the standard's own approximation, not the exact inverse of
 /// d341_z(); the round trip differs by up to about 1e-3 mm^2/s below 2 mm^2/s.
 /// @par Source
-/// ASTM D341 (methods.md 9.1).
+/// ASTM D341 (docs/pages/theory_fluid.md).
 template <class T>
 inline T d341_nu_from_z(T z) {
   using std::exp;
@@ -104,7 +105,7 @@ inline status d341_check(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
 ///         a viscosity is too low for the relation (Z <= 1), or viscosity does not fall with
 ///         temperature (B <= 0); status::nonfinite for NaN/inf.
 /// @par Source
-/// ASTM D341 (methods.md 9.1). Check: 32 mm^2/s at 40 degC and 5.4 mm^2/s at 100 degC give
+/// ASTM D341 (docs/pages/theory_fluid.md). Check: 32 mm^2/s at 40 degC and 5.4 mm^2/s at 100 degC give
 /// A = 9.5259, B = 3.7449 with T = theta + 273 (published worked example).
 template <class T>
 inline result<d341_line<T>> d341_fit(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
@@ -138,7 +139,7 @@ inline result<d341_line<T>> d341_fit(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
 ///         low-viscosity form is no longer defined (threshold from memory);
 ///         status::overflow when Z overflows (very cold).
 /// @par Source
-/// ASTM D341 (methods.md 9.1).
+/// ASTM D341 (docs/pages/theory_fluid.md).
 template <class T>
 inline result<T> d341_viscosity(const d341_line<T>& line, T t_k) {
   using std::log;
@@ -169,7 +170,7 @@ inline result<T> d341_viscosity(const d341_line<T>& line, T t_k) {
 /// Within 1e-13 relative of the 50-digit evaluation of the same formula (tests/fluid_test.cpp);
 /// the double logarithm amplifies input rounding by up to ln(Z) ln(10).
 /// @par Source
-/// ASTM D341 (methods.md 9.1); check value 8.53 mm^2/s at 80 degC for 32 mm^2/s at 40 degC and
+/// ASTM D341 (docs/pages/theory_fluid.md); check value 8.53 mm^2/s at 80 degC for 32 mm^2/s at 40 degC and
 /// 5.4 mm^2/s at 100 degC (published worked example, quoted as 8.5).
 template <class T>
 inline result<T> viscosity_d341(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s, T t_k) {
@@ -260,40 +261,38 @@ inline result<T> sus_from_kinematic(T nu_m2_s) {
 /// ASTM D2161-93; check 700 SUS -> 151.0891 mm^2/s (`chemicals` documentation).
 template <class T>
 inline result<T> kinematic_from_sus(T sus) {
-  using std::fabs;
   if (!detail::finite(sus)) return detail::fail<T>(status::nonfinite);
   if (!(sus > T(0))) return detail::fail<T>(status::domain);
-  const T a = detail::constant<T>(4.6324L, "4.6324");
-  T lo = (sus - detail::constant<T>(25.5L, "25.5")) / a;
-  if (lo < T(0)) lo = T(0);
-  T hi = sus / a;
   const T mm2 = detail::constant<T>(1e6L, "1000000");
-  auto f = [&](T v) { return sus_from_kinematic(v / mm2).value - sus; };
-  T x = (lo + hi) / 2;
-  const T tol = 4 * scalar_traits<T>::epsilon();
-  for (int i = 0; i < scalar_traits<T>::max_iterations; ++i) {
-    const T fx = f(x);
-    if (fx > T(0)) hi = x; else lo = x;
-    // derivative by the analytic form of dSUS/dnu
-    const T den = detail::constant<T>(3930.2L, "3930.2") +
-                  x * (detail::constant<T>(262.7L, "262.7") +
-                       x * (detail::constant<T>(23.97L, "23.97") + x * detail::constant<T>(1.646L, "1.646")));
-    const T dden = detail::constant<T>(262.7L, "262.7") +
-                   x * (2 * detail::constant<T>(23.97L, "23.97") + 3 * x * detail::constant<T>(1.646L, "1.646"));
-    const T num = T(1) + detail::constant<T>(0.03264L, "0.03264") * x;
-    const T dfx = a + (detail::constant<T>(0.03264L, "0.03264") * den - num * dden) / (den * den) *
-                          detail::constant<T>(1e5L, "100000");
-    T xn = x - fx / dfx;
-    if (!(xn > lo && xn < hi)) xn = (lo + hi) / 2;
-    if (fabs(xn - x) <= tol * fabs(xn) || hi - lo <= tol * fabs(hi)) {
-      x = xn;
-      const T nu = x / mm2;
-      if (x < detail::constant<T>(1.8L, "1.8")) return {nu, status::regime};
-      return {nu, status::ok};
-    }
-    x = xn;
+  if constexpr (detail::is_dual_v<T>) {  // root in the value type, derivatives by the implicit rule
+    const auto v = kinematic_from_sus(detail::primal(sus));
+    if (is_error(v.st)) return detail::fail<T>(v.st);
+    auto residual = [](auto nu, auto s) { return sus_from_kinematic(nu).value - s; };
+    return {detail::implicit_root<T>(v.value, residual, sus), v.st};
+  } else {
+    const T a = detail::constant<T>(4.6324L, "4.6324");
+    T lo = (sus - detail::constant<T>(25.5L, "25.5")) / a;
+    if (lo < T(0)) lo = T(0);
+    const T hi = sus / a;
+    // SUS - sus and its analytic derivative in nu (mm^2/s)
+    auto f = [&](T x) {
+      const T den = detail::constant<T>(3930.2L, "3930.2") +
+                    x * (detail::constant<T>(262.7L, "262.7") +
+                         x * (detail::constant<T>(23.97L, "23.97") + x * detail::constant<T>(1.646L, "1.646")));
+      const T dden = detail::constant<T>(262.7L, "262.7") +
+                     x * (2 * detail::constant<T>(23.97L, "23.97") + 3 * x * detail::constant<T>(1.646L, "1.646"));
+      const T num = T(1) + detail::constant<T>(0.03264L, "0.03264") * x;
+      const T dfx = a + (detail::constant<T>(0.03264L, "0.03264") * den - num * dden) / (den * den) *
+                            detail::constant<T>(1e5L, "100000");
+      return detail::value_slope<T>{sus_from_kinematic(x / mm2).value - sus, dfx};
+    };
+    const auto r = detail::newton_bisect(f, lo, hi, (lo + hi) / 2, 4 * scalar_traits<T>::epsilon(),
+                                         scalar_traits<T>::max_iterations);
+    if (r.st != status::ok) return detail::fail<T>(r.st == status::nonfinite ? status::overflow : r.st);
+    const T nu = r.x / mm2;
+    if (r.x < detail::constant<T>(1.8L, "1.8")) return {nu, status::regime};
+    return {nu, status::ok};
   }
-  return detail::fail<T>(status::no_convergence);
 }
 /// @}
 
@@ -347,7 +346,7 @@ inline result<T> kinematic_viscosity(T mu_pa_s, T rho_kg_m3) {
 ///         the reference (a limit of our own choosing, no source).
 /// @par Source
 /// Definitions of the secant bulk modulus and expansion coefficient: Vacca & Franzoni,
-/// Hydraulic Fluid Power, Wiley 2021, sections 2.4-2.5; model as methods.md 9.5.
+/// Hydraulic Fluid Power, Wiley 2021, sections 2.4-2.5; model in docs/pages/theory_fluid.md.
 template <class T>
 inline result<T> oil_density(T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_modulus_pa, T t_k, T p_pa) {
   using std::fabs;
@@ -373,7 +372,7 @@ inline result<T> oil_density(T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_m
 /// @param p_pa gauge pressure, Pa, >= 0
 /// @return mu in Pa s; status::regime above 100 MPa, where other laws are preferred.
 /// @par Source
-/// C. Barus, Am. J. Sci. 45 (1893) 87-96; limits as methods.md 9.4 (from memory).
+/// C. Barus, Am. J. Sci. 45 (1893) 87-96; limits from memory.
 template <class T>
 inline result<T> viscosity_barus(T mu0_pa_s, T alpha_per_pa, T p_pa) {
   using std::exp;
@@ -407,7 +406,7 @@ struct oil {
 /// | property | value | source |
 /// |---|---|---|
 /// | density at 15 degC | 870 kg/m^3 | low end of 870-900 kg/m^3, Vacca & Franzoni, Hydraulic Fluid Power (Wiley 2021) 2.4 |
-/// | expansion coefficient | 6.5e-4 1/K | methods.md 9.5, typical 6.5e-4 to 7e-4 (common practice, no source) |
+/// | expansion coefficient | 6.5e-4 1/K | docs/pages/theory_fluid.md, typical 6.5e-4 to 7e-4 (common practice, no source) |
 /// | secant bulk modulus | 1.4e9 Pa | about 0.7 % volume loss per 100 bar, Vacca & Franzoni 2.5 |
 /// | specific heat | 1.9e3 J/(kg K) | mid of 1.8-2.1 kJ/(kg K) (from memory) |
 /// | Barus coefficient | 2.0e-8 1/Pa | mid of 1.5e-8 to 3e-8 near 40 degC (from memory) |
@@ -463,6 +462,19 @@ inline result<T> oil_dynamic_viscosity(const oil<T>& o, T t_k, T p_pa) {
   return {mu.value, worst(worst(nu.st, rho.st), mu.st)};
 }
 /// @}
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(d341_fit)
+PUMPLOSS_PROMOTE(d341_nu_from_z)
+PUMPLOSS_PROMOTE(d341_z)
+PUMPLOSS_PROMOTE(dynamic_viscosity)
+PUMPLOSS_PROMOTE(kinematic_from_sus)
+PUMPLOSS_PROMOTE(kinematic_viscosity)
+PUMPLOSS_PROMOTE(oil_density)
+PUMPLOSS_PROMOTE(sus_from_kinematic)
+PUMPLOSS_PROMOTE(viscosity_barus)
+PUMPLOSS_PROMOTE(viscosity_d341)
 
 }  // namespace pumploss
 

@@ -19,9 +19,9 @@
 
 namespace pumploss {
 
-/// Reynolds number up to which friction_factor() uses the laminar law (methods.md 8).
+/// Reynolds number up to which friction_factor() uses the laminar law (docs/pages/theory_friction.md).
 inline constexpr double laminar_reynolds_limit = 2000.0;
-/// Reynolds number from which friction_factor() uses Colebrook-White (methods.md 8).
+/// Reynolds number from which friction_factor() uses Colebrook-White (docs/pages/theory_friction.md).
 inline constexpr double turbulent_reynolds_limit = 4000.0;
 
 namespace detail {
@@ -159,7 +159,7 @@ inline status friction_range(T re, T rr, double re_lo, double re_hi, double rr_h
 /// One rounding (0.5 ulp).
 /// @par Source
 /// Hagen-Poiseuille law; any fluid mechanics text (e.g. F. M. White, Fluid Mechanics, 7th ed.,
-/// McGraw-Hill 2011, Eq. 6.47); methods.md 8.
+/// McGraw-Hill 2011, Eq. 6.47); docs/pages/theory_friction.md.
 template <class T>
 inline result<T> friction_laminar(T reynolds, T laminar_constant = T(64)) {
   if (!detail::all_finite(reynolds, laminar_constant)) return detail::fail<T>(status::nonfinite);
@@ -203,7 +203,7 @@ inline result<T> friction_laminar(T reynolds, T laminar_constant = T(64)) {
 /// C. F. Colebrook, "Turbulent flow in pipes, with particular reference to the transition
 /// region between the smooth and rough pipe laws", J. ICE 11(4) (1939) 133-156.
 /// D. Clamond, "Efficient resolution of the Colebrook equation", Ind. Eng. Chem. Res. 48(7)
-/// (2009) 3665-3671 (methods.md 8).
+/// (2009) 3665-3671 (docs/pages/theory_friction.md).
 template <class T>
 inline result<T> friction_colebrook(T reynolds, T relative_roughness) {
   const status s = detail::friction_check(reynolds, relative_roughness);
@@ -298,7 +298,7 @@ inline result<T> friction_swamee_jain(T reynolds, T relative_roughness) {
 /// FrictionExplicit.ErrorBoundsAgainstColebrook); laminar within 1e-6 of 64/Re for Re <= 1000.
 /// @par Source
 /// S. W. Churchill, "Friction-factor equation spans all fluid-flow regimes", Chem. Eng. 84(24)
-/// (1977) 91-92 (journal details from memory; formula as in python3-fluids, methods.md 8).
+/// (1977) 91-92 (journal details from memory; formula as in python3-fluids).
 template <class T>
 inline result<T> friction_churchill(T reynolds, T relative_roughness) {
   using std::log;
@@ -344,7 +344,7 @@ inline result<T> friction_churchill(T reynolds, T relative_roughness) {
 /// transition branches a few roundings.
 /// @par Source
 /// Laminar and Colebrook as above; the transition bridge is this library's own policy
-/// (methods.md 8 gives 2000-4000 as the transition).
+/// (docs/pages/theory_friction.md: transition 2000-4000).
 template <class T>
 inline result<T> friction_factor(T reynolds, T relative_roughness, T laminar_constant = T(64)) {
   const status s = detail::friction_check(reynolds, relative_roughness);
@@ -372,12 +372,16 @@ inline result<T> friction_factor(T reynolds, T relative_roughness, T laminar_con
 
 /// Flow state and pressure drop of one straight round segment.
 template <class T>
-struct pipe_flow {
+struct [[nodiscard]] pipe_flow {
   T velocity_m_s;     ///< mean velocity v = 4q/(pi D^2), m/s (sign of q)
   T reynolds;         ///< Reynolds number rho |v| D / mu
   T friction_factor;  ///< Darcy friction factor (friction_factor()); +infinity at zero flow
   T dp_pa;            ///< pressure drop, Pa (sign of q)
   pumploss::status st;  ///< status of the calculation
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Mean velocity in a round bore: \f$ v = 4q/(\pi D^2) \f$.
@@ -406,7 +410,7 @@ inline result<T> pipe_velocity(T q_m3_s, T diameter_m) {
 /// @par Accuracy
 /// A few roundings.
 /// @par Source
-/// Definition (methods.md 8: Re = 4q/(pi D nu)).
+/// Definition: Re = 4q/(pi D nu).
 template <class T>
 inline result<T> pipe_reynolds(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diameter_m) {
   using std::fabs;
@@ -444,7 +448,7 @@ inline result<T> pipe_reynolds(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diameter_m) {
 /// the 50-digit evaluation, tests/friction_test.cpp).
 /// @par Source
 /// Darcy-Weisbach equation (e.g. F. M. White, Fluid Mechanics, 7th ed., McGraw-Hill 2011,
-/// Eq. 6.10); methods.md 8.
+/// Eq. 6.10); docs/pages/theory_friction.md.
 template <class T>
 inline pipe_flow<T> pipe_pressure_drop(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diameter_m, T length_m, T roughness_m,
                                        T laminar_constant = T(64)) {
@@ -478,6 +482,15 @@ inline pipe_flow<T> pipe_pressure_drop(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diame
   return {v, re, f.value, dp, f.st};
 }
 /// @}
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(friction_churchill)
+PUMPLOSS_PROMOTE(friction_colebrook)
+PUMPLOSS_PROMOTE(friction_haaland)
+PUMPLOSS_PROMOTE(friction_swamee_jain)
+PUMPLOSS_PROMOTE(pipe_reynolds)
+PUMPLOSS_PROMOTE(pipe_velocity)
 
 }  // namespace pumploss
 

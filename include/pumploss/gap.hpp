@@ -20,246 +20,14 @@
 #include <cmath>
 #include <type_traits>
 
-#include "detail/gap_tables.hpp"
+#include "detail/eccentric_annulus.hpp"
+#include "detail/roots.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 
 namespace pumploss {
 
 namespace detail {
-
-template <class T>
-inline T tab(const table_entry& e) {
-  return constant<T>(e.v, e.s);
-}
-
-/// sinh(d)/d - 1 without cancellation (series with positive terms for |d| <= 1).
-template <class T>
-inline T sinhc_m1(T d) {
-  using std::fabs;
-  using std::sinh;
-  if (fabs(d) > T(1)) return sinh(d) / d - T(1);
-  const T d2 = d * d;
-  const T eps = scalar_traits<T>::epsilon();
-  T term = d2 / T(6), sum = term;
-  for (int k = 2; k < 60 && term > eps * sum; ++k) {
-    term *= d2 / T((2 * k) * (2 * k + 1));
-    sum += term;
-  }
-  return sum;
-}
-
-/// ln(1 + h/b) = ln(a/b).
-template <class T>
-inline T log1p_ratio(T h, T b) {
-  using std::log1p;
-  return log1p(h / b);
-}
-
-/// cosh(d) - 1 = 2 sinh^2(d/2).
-template <class T>
-inline T cosh_m1(T d) {
-  using std::sinh;
-  const T s = sinh(d / 2);
-  return T(2) * s * s;
-}
-
-/// cosh(d) - sinh(d)/d = sum_k 2k d^(2k)/(2k+1)! (positive terms; no cancellation).
-template <class T>
-inline T cosh_minus_sinhc(T d) {
-  using std::cosh;
-  using std::fabs;
-  using std::sinh;
-  if (fabs(d) > T(2)) return cosh(d) - sinh(d) / d;
-  const T d2 = d * d;
-  const T eps = scalar_traits<T>::epsilon();
-  T p = d2 / T(6);  // d^(2k)/(2k+1)!
-  T sum = T(2) * p;
-  for (int k = 2; k < 80; ++k) {
-    p *= d2 / T((2 * k) * (2 * k + 1));
-    const T term = T(2 * k) * p;
-    sum += term;
-    if (term <= eps * sum) break;
-  }
-  return sum;
-}
-
-/// r(w) = psi'(w + 1/2) - 1/w for w >= 1 (psi' = trigamma), without cancellation:
-/// shift with psi'(z) = psi'(z+1) + 1/z^2, written so that each step adds
-/// -1/(4 (w+1/2)^2 w (w+1)), then the asymptotic series
-/// psi'(w+1/2) ~ 1/w - sum_k (1 - 2^(1-2k)) B_2k / w^(2k+1).
-template <class T>
-inline T trigamma_half_rem(T w) {
-  using std::fabs;
-  const int digits = scalar_traits<T>::digits10;
-  const T w0 = T(digits <= 20 ? 12 : (digits * 9) / 10);
-  const T eps = scalar_traits<T>::epsilon();
-  T acc = T(0);
-  while (w < w0) {
-    const T wh = w + T(1) / 2;
-    acc += T(1) / (wh * wh * w * (w + T(1)));
-    w += T(1);
-  }
-  const T iw2 = T(1) / (w * w);
-  T pw = T(1) / (w * w * w);
-  T sum = T(0);
-  for (int k = 0; k < 30; ++k) {
-    const T term = tab<T>(kTrigammaHalfCoef[k]) * pw;
-    sum -= term;
-    if (fabs(term) <= eps * fabs(sum)) break;
-    pw *= iw2;
-  }
-  return sum - acc / 4;
-}
-
-/// R = sum_{n>=2} x^n (n sinh D / sinh(nD) - 1), x = exp(-2 sigma), by direct summation with
-/// a cancellation-free recurrence for u_n = sinh(nD) - n sinh(D) (sigma not small).
-/// s1 = sinh(D), delta = cosh(D) - 1.
-template <class T>
-inline T ecc_sum_direct(T x, T s1, T delta) {
-  const T eps = scalar_traits<T>::epsilon();
-  T s = s1, d = s1, u = T(0), c = s1;  // s_n = sinh(nD), d_n = s_n - s_(n-1), u_n, C_n = sum s_j
-  T xn = x, sum = T(0);
-  const T two_delta = T(2) * delta;
-  for (int n = 1; n < 4000; ++n) {
-    d += two_delta * s;  // advance to n+1
-    u += two_delta * c;
-    s += d;
-    c += s;
-    xn *= x;
-    const T term = xn * u / s;
-    sum += term;
-    // the term ratio tends to x < 1/e: the tail is below term/(1 - x)
-    if (term <= eps * sum * (T(1) - x) / 16) break;
-  }
-  return -sum;
-}
-
-/// 1/m for m = 1..60 in T (exact table for built-in types, division otherwise).
-template <class T>
-inline T inv_int(int m) {
-  if constexpr (std::is_arithmetic_v<T>) {
-    static constexpr long double kInv[61] = {
-        0.0L,      1.0L,      1.0L / 2,  1.0L / 3,  1.0L / 4,  1.0L / 5,  1.0L / 6,  1.0L / 7,  1.0L / 8,
-        1.0L / 9,  1.0L / 10, 1.0L / 11, 1.0L / 12, 1.0L / 13, 1.0L / 14, 1.0L / 15, 1.0L / 16, 1.0L / 17,
-        1.0L / 18, 1.0L / 19, 1.0L / 20, 1.0L / 21, 1.0L / 22, 1.0L / 23, 1.0L / 24, 1.0L / 25, 1.0L / 26,
-        1.0L / 27, 1.0L / 28, 1.0L / 29, 1.0L / 30, 1.0L / 31, 1.0L / 32, 1.0L / 33, 1.0L / 34, 1.0L / 35,
-        1.0L / 36, 1.0L / 37, 1.0L / 38, 1.0L / 39, 1.0L / 40, 1.0L / 41, 1.0L / 42, 1.0L / 43, 1.0L / 44,
-        1.0L / 45, 1.0L / 46, 1.0L / 47, 1.0L / 48, 1.0L / 49, 1.0L / 50, 1.0L / 51, 1.0L / 52, 1.0L / 53,
-        1.0L / 54, 1.0L / 55, 1.0L / 56, 1.0L / 57, 1.0L / 58, 1.0L / 59, 1.0L / 60};
-    return static_cast<T>(kInv[m]);
-  } else {
-    return T(1) / T(m);
-  }
-}
-
-/// The same sum R for small sigma by Euler-Maclaurin: integral (closed form with the trigamma
-/// function) minus the endpoint corrections at y = 0 of g(y) = e^{-2 sigma y} phi(y),
-/// phi(y) = y sinh(D)/sinh(yD) - 1.
-template <class T>
-inline T ecc_sum_em(T sigma, T dd, T g1) {
-  using std::fabs;
-  const T eps = scalar_traits<T>::epsilon();
-  constexpr int kmax = 30;
-  T phi[2 * kmax];  // Taylor coefficients of phi (even orders only are nonzero)
-  T ex[2 * kmax];   // Taylor coefficients of exp(-2 sigma y)
-  phi[0] = g1;
-  ex[0] = T(1);
-  const T dd2 = dd * dd;
-  const T m2s = -T(2) * sigma;
-  T dp = T(1);
-  const T integral = g1 / (T(2) * sigma) + (T(1) + g1) * trigamma_half_rem(sigma / dd) / (T(2) * dd);
-  T r = integral - g1 / 2;
-  int have = 1;  // coefficients 0..have-1 are filled
-  for (int k = 1; k <= kmax; ++k) {
-    const int m = 2 * k - 1;
-    for (; have <= m; ++have) {
-      ex[have] = ex[have - 1] * m2s * inv_int<T>(have);
-      if (have % 2 == 0) {
-        dp *= dd2;
-        phi[have] = (T(1) + g1) * tab<T>(kUSinhCoef[have / 2 - 1]) * dp;
-      } else {
-        phi[have] = T(0);
-      }
-    }
-    T gm = T(0);
-    for (int j = 0; j <= m; j += 2) gm += phi[j] * ex[m - j];
-    const T term = tab<T>(kEmCoef[k - 1]) * gm;
-    r -= term;
-    if (k > 2 && fabs(term) <= eps * fabs(integral) / 16) break;
-  }
-  return r;
-}
-
-/// Bracket of the exact eccentric-annulus flow, B = a^4 - b^4 - 4c^2M^2/(beta-alpha) - 8 c^2 M^2
-/// sum n e^{-n(beta+alpha)}/sinh(n(beta-alpha)), so that q = pi dp B/(8 mu L). Rewritten without
-/// cancellation (sigma = (alpha+beta)/2, D = beta-alpha, P = sinh(alpha) sinh(beta) = M^2/(ab)):
-/// B = a^3 b^3 c E / M^3 with
-/// E = delta sinh(2 sigma)(cosh(2 sigma)+2) - delta^2 coth(sigma) - 4P^2 (g1 + 2R),
-/// delta = cosh D - 1, g1 = sinh(D)/D - 1, R = sum_{n>=2} e^{-2n sigma}(n sinh D/sinh nD - 1).
-/// sinh D = cM/(ab), sinh(2 sigma) = M(a+b)/(ab eps) and
-/// cosh(2 sigma) = ((2-eps^2)(a+b)^2 - eps^2 h^2)/(4 eps^2 ab) are algebraic.
-/// h = a - b is passed separately so that callers holding h exactly (the inverse problem) keep
-/// its digits.
-template <class T>
-inline T eccentric_bracket_abh(T a, T b, T h, T eps) {
-  using std::asinh;
-  using std::sqrt;
-  // concentric (and eccentricity too small to change the result at this precision)
-  const T tiny = sqrt(scalar_traits<T>::epsilon()) / 100;
-  if (eps < tiny) {
-    const T dd = log1p_ratio(h, b);
-    return T(2) * a * b * h * (a + b) * cosh_minus_sinhc(dd);
-  }
-  if (eps == T(1)) {
-    // touching limit (M -> 0 with sigma/D -> w): closed form with the trigamma function
-    const T w = (a + b) / (T(2) * h);
-    const T f = T(1) - T(1) / (T(4) * w * w);
-    const T w2 = w * w;
-    const T e = T(3) / w2 - T(1) / (T(4) * w2 * w2) - T(4) * w * f * f * trigamma_half_rem(w);
-    return a * a * b * b * e / (w * f * f);
-  }
-  const T c = eps * h;
-  const T apb = a + b;
-  const T m = sqrt((T(1) - eps) * (T(1) + eps) * (apb - c) * (apb + c)) / (T(2) * eps);
-  const T ab = a * b;
-  const T z = c * m / ab;                            // sinh D
-  const T delta = z * z / (sqrt(T(1) + z * z) + T(1));  // cosh D - 1
-  const T dd = asinh(z);
-  const T g1 = sinhc_m1(dd);
-  const T sh2 = m * apb / (ab * eps);                                                   // sinh(2 sigma)
-  const T ch2 = ((T(2) - eps * eps) * apb * apb - eps * eps * h * h) / (T(4) * eps * eps * ab);  // cosh(2 sigma)
-  const T p = m * m / ab;
-  const int digits = scalar_traits<T>::digits10;
-  const T sh2_em = digits <= 20 ? detail::constant<T>(1.1752011936438014569L, "1.17520119364380145688238185059560081515571798133409587022957")
-                                : detail::constant<T>(0.6366535821482412711L, "0.636653582148241271123301400108017690050104935659658631296");
-  // sinh(2 sigma) thresholds: sinh(1) (sigma = 1/2) for double, sinh(0.6) (sigma = 0.3) for wider types
-  T r;
-  if (sh2 < sh2_em) {
-    const T sigma = asinh(sh2) / 2;
-    r = ecc_sum_em(sigma, dd, g1);
-  } else {
-    r = ecc_sum_direct(T(1) / (ch2 + sh2), z, delta);
-  }
-  const T coth = (ch2 + T(1)) / sh2;
-  const T e = delta * sh2 * (ch2 + T(2)) - delta * delta * coth - T(4) * p * p * (g1 + T(2) * r);
-  return ab * ab * ab * c * e / (m * m * m);
-}
-
-/// eccentric_bracket_abh() with h = a - b.
-template <class T>
-inline T eccentric_bracket(T a, T b, T eps) {
-  return eccentric_bracket_abh(a, b, T(a - b), eps);
-}
-
-/// The textbook concentric annulus bracket a^4 - b^4 - (a^2 - b^2)^2 / ln(a/b) as usually
-/// written (cancels catastrophically for small gaps; kept for comparison and benchmarks).
-template <class T>
-inline T annulus_concentric_textbook_bracket(T a, T b) {
-  using std::log;
-  const T a2 = a * a, b2 = b * b;
-  return a2 * a2 - b2 * b2 - (a2 - b2) * (a2 - b2) / log(a / b);
-}
 
 /// Common checks of the annulus functions: finite inputs, bore > piston > 0, eps in [0, 1].
 template <class T>
@@ -312,12 +80,12 @@ inline T cubic_positive_root(T p, T r) {
 ///         NaN/inf. Check the laminar assumption with gap_reynolds().
 /// @par Validity
 /// Laminar, fully developed, incompressible flow, h much smaller than b and L, constant
-/// viscosity (methods.md 6.1).
+/// viscosity (docs/pages/theory_gap.md).
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
 /// Standard lubrication result; e.g. Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19
-/// (annulus form); methods.md 6.1.
+/// (annulus form); docs/pages/theory_gap.md.
 template <class T>
 inline result<T> gap_plates_flow(T dp_pa, T mu_pa_s, T width_m, T height_m, T length_m, T wall_speed_m_s) {
   if (!detail::all_finite(dp_pa, mu_pa_s, width_m, height_m, length_m, wall_speed_m_s))
@@ -344,7 +112,7 @@ inline result<T> gap_plates_flow(T dp_pa, T mu_pa_s, T width_m, T height_m, T le
 /// @par Accuracy
 /// A few ulp (closed form).
 /// @par Source
-/// methods.md 6.1 (standard plane Couette-Poiseuille profile).
+/// Standard plane Couette-Poiseuille profile (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_plates_velocity(T dp_pa, T mu_pa_s, T height_m, T length_m, T wall_speed_m_s, T y_m) {
   if (!detail::all_finite(dp_pa, mu_pa_s, height_m, length_m, wall_speed_m_s, y_m))
@@ -372,7 +140,7 @@ inline result<T> gap_plates_velocity(T dp_pa, T mu_pa_s, T height_m, T length_m,
 /// @par Accuracy
 /// Within a few ulp of the 50-digit evaluation except where the two terms cancel.
 /// @par Source
-/// methods.md 6.1 (wall shear of the Couette-Poiseuille profile).
+/// Wall shear of the plane Couette-Poiseuille profile (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_plates_shear_force(T dp_pa, T mu_pa_s, T width_m, T height_m, T length_m, T wall_speed_m_s) {
   if (!detail::all_finite(dp_pa, mu_pa_s, width_m, height_m, length_m, wall_speed_m_s))
@@ -399,7 +167,7 @@ inline result<T> gap_plates_shear_force(T dp_pa, T mu_pa_s, T width_m, T height_
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation (sum of positive terms).
 /// @par Source
-/// methods.md 6.1.
+/// Plane Couette-Poiseuille flow (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_plates_power_loss(T dp_pa, T mu_pa_s, T width_m, T height_m, T length_m, T wall_speed_m_s) {
   if (!detail::all_finite(dp_pa, mu_pa_s, width_m, height_m, length_m, wall_speed_m_s))
@@ -425,11 +193,11 @@ inline result<T> gap_plates_power_loss(T dp_pa, T mu_pa_s, T width_m, T height_m
 /// @return h in m; status::domain when q and dp differ in sign or are zero.
 /// @par Validity
 /// As gap_plates_flow(). One measurement gives one lumped gap; parallel paths cannot be
-/// separated (methods.md 6.7).
+/// separated.
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation.
 /// @par Source
-/// methods.md 6.7.
+/// Inverse of the laminar gap flow, derived here (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_plates_height(T q_m3_s, T dp_pa, T mu_pa_s, T width_m, T length_m) {
   using std::cbrt;
@@ -461,7 +229,7 @@ inline result<T> gap_plates_height(T q_m3_s, T dp_pa, T mu_pa_s, T width_m, T le
 /// Within 1e-14 relative of the 50-digit evaluation across shear/pressure ratios 1e-8..1e8
 /// (tests/gap_test.cpp).
 /// @par Source
-/// methods.md 6.7 (equation); cubic formulas: standard algebra (Cardano, Viete).
+/// docs/pages/theory_gap.md (inverse problem); cubic formulas: standard algebra (Cardano, Viete).
 template <class T>
 inline result<T> gap_plates_height_couette(T q_m3_s, T dp_pa, T mu_pa_s, T width_m, T length_m, T wall_speed_m_s) {
   using std::cbrt;
@@ -524,7 +292,7 @@ inline result<T> gap_plates_height_couette(T q_m3_s, T dp_pa, T mu_pa_s, T width
 /// @par Source
 /// Eccentric annulus: Piercy, Hooper and Winny, Phil. Mag. 15 (1933); as given in F. M. White,
 /// Viscous Fluid Flow (McGraw-Hill), section on the eccentric annulus (equation number from
-/// memory, not cited); methods.md 6.2-6.3.
+/// memory, not cited); docs/pages/theory_gap.md (concentric and eccentric annulus).
 template <class T>
 inline result<T> gap_annulus_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, T piston_diameter_m, T length_m,
                                   T eccentricity_ratio) {
@@ -562,7 +330,7 @@ inline result<T> gap_annulus_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, T pisto
 /// @par Source
 /// Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19 (concentric); eccentricity
 /// factor: Manring, Hydraulic Control Systems, Wiley 2005 (equation number from memory);
-/// methods.md 6.2-6.3.
+/// docs/pages/theory_gap.md (concentric and eccentric annulus).
 template <class T>
 inline result<T> gap_annulus_narrow_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, T piston_diameter_m, T length_m,
                                          T eccentricity_ratio) {
@@ -598,7 +366,7 @@ inline result<T> gap_annulus_narrow_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, 
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
-/// Derived here (methods.md 6.2 for the narrow form, Rabie 2009 Eq. 2.19): harmonic solution
+/// Derived here (narrow form: M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19): harmonic solution
 /// (xi - alpha)/(beta - alpha) in the bipolar coordinates of the eccentric-annulus solution
 /// (Piercy, Hooper and Winny 1933), integrated over the cross-section.
 template <class T>
@@ -651,8 +419,10 @@ inline result<T> gap_piston_leakage(T dp_pa, T mu_pa_s, T bore_diameter_m, T pis
 /// Radial clearance that explains a measured leakage through an annulus of known bore
 /// (inverse of gap_annulus_flow()).
 ///
-/// Solved on log q against log h (q grows like h^3) by the secant method from the narrow-gap
-/// estimate; at most 40 steps, typically 4 to 6.
+/// Solved on log q against log h (q grows like h^3) by Brent's method (detail/roots.hpp) on a
+/// bracket grown from the narrow-gap estimate; typically 5 to 7 evaluations. For dual numbers
+/// the root is found in the value type and the derivatives follow from the implicit-function
+/// rule (dh/dp = -F_p/F_h).
 ///
 /// @param q_m3_s             \f$q\f$ measured leakage, m^3/s, same sign as dp, nonzero
 /// @param dp_pa              \f$\Delta p\f$ pressure drop, Pa, nonzero
@@ -668,12 +438,11 @@ inline result<T> gap_piston_leakage(T dp_pa, T mu_pa_s, T bore_diameter_m, T pis
 /// @par Accuracy
 /// Round trip within 1e-14 relative (tests/gap_test.cpp).
 /// @par Source
-/// methods.md 6.7.
+/// Inverse of the laminar gap flow, derived here (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_annulus_clearance(T q_m3_s, T dp_pa, T mu_pa_s, T bore_diameter_m, T length_m,
                                        T eccentricity_ratio) {
   using std::cbrt;
-  using std::fabs;
   using std::log;
   using std::exp;
   if (!detail::all_finite(q_m3_s, dp_pa, mu_pa_s, bore_diameter_m, length_m, eccentricity_ratio))
@@ -683,32 +452,53 @@ inline result<T> gap_annulus_clearance(T q_m3_s, T dp_pa, T mu_pa_s, T bore_diam
     return detail::fail<T>(status::domain);
   const T ratio = q_m3_s / dp_pa;
   if (!(ratio > T(0)) || !detail::finite(ratio)) return detail::fail<T>(status::domain);
-  const T a = bore_diameter_m / 2;
-  const T hmax = detail::constant<T>(0.99L, "0.99") * a;
-  const T e2 = eccentricity_ratio * eccentricity_ratio;
-  // target: bracket(h) = 8 mu L q / (pi dp)
-  const T target = T(8) * mu_pa_s * length_m * ratio / detail::pi<T>();
-  auto lnq = [&](T h) { return log(detail::eccentric_bracket_abh(a, T(a - h), h, eccentricity_ratio)) - log(target); };
-  const T fmax = lnq(hmax);
-  if (!(fmax >= T(0))) return detail::fail<T>(status::domain);
-  T h0 = cbrt(T(12) * mu_pa_s * length_m * ratio / (detail::pi<T>() * T(2) * a * (T(1) + T(3) * e2 / 2)));
-  if (!(h0 < hmax)) h0 = hmax / 2;
-  T x0 = log(h0), f0 = lnq(h0);
-  T x1 = x0 - f0 / 3;
-  if (x1 > log(hmax)) x1 = log(hmax);
-  T f1 = lnq(exp(x1));
-  const T tol = 4 * scalar_traits<T>::epsilon();
-  for (int i = 0; i < 40; ++i) {
-    if (f1 == T(0) || fabs(x1 - x0) <= tol * fabs(x1)) return {exp(x1), status::ok};
-    if (f1 == f0) return {exp(x1), status::ok};
-    T x2 = x1 - f1 * (x1 - x0) / (f1 - f0);
-    if (x2 > log(hmax)) x2 = (x1 + log(hmax)) / 2;
-    x0 = x1;
-    f0 = f1;
-    x1 = x2;
-    f1 = lnq(exp(x1));
+  // F(h) = log B(h) - log(8 mu L q / (pi dp)): zero at the clearance, increasing in h
+  auto residual = [](auto h, auto q, auto dp, auto mu, auto d, auto l, auto e) {
+    using std::log;
+    using U = decltype(h);
+    const U a = d / 2;
+    return log(detail::eccentric_bracket_abh(a, U(a - h), h, e)) -
+           log(U(8) * mu * l * (q / dp) / detail::pi<U>());
+  };
+  if constexpr (detail::is_dual_v<T>) {  // root in the value type, derivatives by the implicit rule
+    using detail::primal;
+    const auto v = gap_annulus_clearance(primal(q_m3_s), primal(dp_pa), primal(mu_pa_s), primal(bore_diameter_m),
+                                         primal(length_m), primal(eccentricity_ratio));
+    if (is_error(v.st)) return detail::fail<T>(v.st);
+    return {detail::implicit_root<T>(v.value, residual, q_m3_s, dp_pa, mu_pa_s, bore_diameter_m, length_m,
+                                     eccentricity_ratio),
+            v.st};
+  } else {
+    const T a = bore_diameter_m / 2;
+    const T hmax = detail::constant<T>(0.99L, "0.99") * a;
+    auto f = [&](T x) {
+      return residual(T(exp(x)), q_m3_s, dp_pa, mu_pa_s, bore_diameter_m, length_m, eccentricity_ratio);
+    };
+    const T xmax = log(hmax);
+    const T e2 = eccentricity_ratio * eccentricity_ratio;
+    T h0 = cbrt(T(12) * mu_pa_s * length_m * ratio / (detail::pi<T>() * T(2) * a * (T(1) + T(3) * e2 / 2)));
+    if (!(h0 < hmax)) h0 = hmax / 2;
+    const T x0 = log(h0), f0 = f(x0);
+    const int cap = scalar_traits<T>::max_iterations;
+    const T tol = 4 * scalar_traits<T>::epsilon();
+    // bracket from the estimate: F grows like 3 log h, so step by -F/3 (a sixteenth more, to
+    // cross the root at once), doubling the step until F changes sign; the last step stops at
+    // hmax, and F < 0 there means no clearance explains the leakage (NaN ends the search)
+    T step = -f0 / 3 * detail::constant<T>(1.0625L, "1.0625");
+    const auto br = detail::expand_bracket(
+        f, x0, f0,
+        [&](T x) {
+          if (x == xmax) return scalar_traits<T>::nan();
+          const T next = x + step;
+          step *= 2;
+          return next < xmax ? next : xmax;
+        },
+        cap);
+    if (br.st != status::ok) return detail::fail<T>(br.st == status::nonfinite ? status::domain : br.st);
+    const auto r = detail::brent(f, br.a, br.b, br.fa, br.fb, tol, T(0), cap);
+    if (r.st != status::ok) return detail::fail<T>(r.st == status::nonfinite ? status::domain : r.st);
+    return {exp(r.x), status::ok};
   }
-  return detail::fail<T>(status::no_convergence);
 }
 /// @}
 
@@ -740,7 +530,7 @@ inline status radial_check(T mu, T ri, T ro, T h) {
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
-/// Standard lubrication result (methods.md 6.4).
+/// Standard lubrication result (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_radial_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T outer_radius_m, T height_m) {
   using std::log1p;
@@ -770,7 +560,7 @@ inline result<T> gap_radial_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T outer_r
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation.
 /// @par Source
-/// methods.md 6.4 (sector fraction of the disc flow).
+/// docs/pages/theory_gap.md (sector fraction of the disc flow).
 template <class T>
 inline result<T> gap_radial_sector_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T outer_radius_m, T height_m,
                                         T angle_rad) {
@@ -800,7 +590,7 @@ inline result<T> gap_radial_sector_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T 
 /// @par Accuracy
 /// Within a few ulp (log1p forms).
 /// @par Source
-/// methods.md 6.4.
+/// Standard lubrication result (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_radial_pressure(T inner_pressure_pa, T outer_pressure_pa, T inner_radius_m, T outer_radius_m,
                                      T radius_m) {
@@ -836,7 +626,7 @@ inline result<T> gap_radial_pressure(T inner_pressure_pa, T outer_pressure_pa, T
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
-/// Integration of methods.md 6.4 p(r).
+/// Integration of the logarithmic land pressure p(r) of gap_radial_flow() (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_radial_land_force(T inner_pressure_pa, T outer_pressure_pa, T inner_radius_m,
                                        T outer_radius_m, T angle_rad) {
@@ -868,7 +658,7 @@ inline result<T> gap_radial_land_force(T inner_pressure_pa, T outer_pressure_pa,
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation.
 /// @par Source
-/// methods.md 6.7.
+/// Inverse of the laminar gap flow, derived here (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_radial_height(T q_m3_s, T dp_pa, T mu_pa_s, T inner_radius_m, T outer_radius_m) {
   using std::cbrt;
@@ -890,13 +680,17 @@ inline result<T> gap_radial_height(T q_m3_s, T dp_pa, T mu_pa_s, T inner_radius_
 /// State of a hydrostatic circular pad (recess inside r_i, land r_i..r_o) fed from a supply
 /// pressure through a restrictor.
 template <class T>
-struct pad_state {
+struct [[nodiscard]] pad_state {
   T pocket_pressure_pa;  ///< recess (pocket) pressure p_r, Pa (gauge, outside at 0)
   T q_m3_s;              ///< leakage through restrictor and land, m^3/s
   T force_n;             ///< hydrostatic separating force W = p_r A_eff, N
   T pressure_ratio;      ///< p_r / p_s (restrictor design ratio)
   T balance_ratio;       ///< W / (p_s pi d_piston^2 / 4): pad force over piston force
   pumploss::status st;   ///< status of the calculation
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 namespace detail {
@@ -949,7 +743,7 @@ inline pad_state<T> pad_finish(T ps, T pr, T q, T ri, T ro, T piston_d) {
 /// @par Source
 /// Rowe, Hydrostatic, Aerostatic and Hybrid Bearing Design, 2012; Stachowiak and Batchelor,
 /// Engineering Tribology, chapter on hydrostatic lubrication (citations from memory);
-/// algebra methods.md 6.5.
+/// algebra in docs/pages/theory_gap.md.
 template <class T>
 inline pad_state<T> gap_pad_capillary(T supply_pressure_pa, T mu_pa_s, T capillary_diameter_m, T capillary_length_m,
                                       T inner_radius_m, T outer_radius_m, T height_m, T piston_diameter_m) {
@@ -987,7 +781,7 @@ inline pad_state<T> gap_pad_capillary(T supply_pressure_pa, T mu_pa_s, T capilla
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
-/// As gap_pad_capillary(); methods.md 6.5.
+/// As gap_pad_capillary().
 template <class T>
 inline pad_state<T> gap_pad_orifice(T supply_pressure_pa, T rho_kg_m3, T mu_pa_s, T orifice_diameter_m, T cd,
                                     T inner_radius_m, T outer_radius_m, T height_m, T piston_diameter_m) {
@@ -1024,7 +818,7 @@ inline pad_state<T> gap_pad_orifice(T supply_pressure_pa, T rho_kg_m3, T mu_pa_s
 /// @par Accuracy
 /// Round trip with gap_pad_capillary() within 1e-14 relative.
 /// @par Source
-/// methods.md 6.5 (inverted here).
+/// W. B. Rowe, Hydrostatic, Aerostatic and Hybrid Bearing Design, 2012 (from memory), inverted here; docs/pages/theory_gap.md.
 template <class T>
 inline result<T> gap_pad_capillary_height(T supply_pressure_pa, T mu_pa_s, T capillary_diameter_m,
                                           T capillary_length_m, T inner_radius_m, T outer_radius_m, T load_n) {
@@ -1065,7 +859,7 @@ inline result<T> gap_pad_capillary_height(T supply_pressure_pa, T mu_pa_s, T cap
 /// @par Accuracy
 /// Round trip with gap_pad_orifice() within 1e-14 relative.
 /// @par Source
-/// methods.md 6.5 (inverted here).
+/// W. B. Rowe, Hydrostatic, Aerostatic and Hybrid Bearing Design, 2012 (from memory), inverted here; docs/pages/theory_gap.md.
 template <class T>
 inline result<T> gap_pad_orifice_height(T supply_pressure_pa, T rho_kg_m3, T mu_pa_s, T orifice_diameter_m, T cd,
                                         T inner_radius_m, T outer_radius_m, T load_n) {
@@ -1102,13 +896,13 @@ inline result<T> gap_pad_orifice_height(T supply_pressure_pa, T rho_kg_m3, T mu_
 /// @param rho_kg_m3 \f$\rho\f$ density, kg/m^3, > 0
 /// @param mu_pa_s   \f$\mu\f$ dynamic viscosity, Pa s, > 0
 /// @return Re (dimensionless); status::regime when Re > 2000 (laminar gap formulas no longer
-///         apply; threshold from memory, methods.md 6.6).
+///         apply; threshold from memory).
 /// @par Validity
 /// Also check the reduced number Re h/L << 1 for inertia-free flow (see gap_reduced_reynolds()).
 /// @par Accuracy
 /// A few ulp.
 /// @par Source
-/// methods.md 6.6.
+/// Definition of the Reynolds number with D_h = 2h (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_reynolds(T q_m3_s, T width_m, T rho_kg_m3, T mu_pa_s) {
   using std::fabs;
@@ -1130,11 +924,11 @@ inline result<T> gap_reynolds(T q_m3_s, T width_m, T rho_kg_m3, T mu_pa_s) {
 /// @param mu_pa_s   \f$\mu\f$, Pa s, > 0
 /// @return Re* ; status::regime when Re* > 1 or Re > 2000.
 /// @par Validity
-/// Threshold 1 is a convention here (methods.md 6.6: "inertia-free when Re h/L << 1").
+/// Threshold 1 is a convention of this library for "inertia-free when Re h/L << 1".
 /// @par Accuracy
 /// A few ulp.
 /// @par Source
-/// methods.md 6.6.
+/// Definition of the Reynolds number with D_h = 2h (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_reduced_reynolds(T q_m3_s, T width_m, T height_m, T length_m, T rho_kg_m3, T mu_pa_s) {
   const result<T> re = gap_reynolds(q_m3_s, width_m, rho_kg_m3, mu_pa_s);
@@ -1156,7 +950,7 @@ inline result<T> gap_reduced_reynolds(T q_m3_s, T width_m, T height_m, T length_
 /// @par Accuracy
 /// Exact up to one rounding.
 /// @par Source
-/// methods.md 6.2.
+/// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19 (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> gap_narrow_ratio(T bore_diameter_m, T piston_diameter_m) {
   if (!detail::all_finite(bore_diameter_m, piston_diameter_m)) return detail::fail<T>(status::nonfinite);
@@ -1165,6 +959,32 @@ inline result<T> gap_narrow_ratio(T bore_diameter_m, T piston_diameter_m) {
   return {t, t > detail::constant<T>(0.05L, "0.05") ? status::regime : status::ok};
 }
 /// @}
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(gap_annulus_clearance)
+PUMPLOSS_PROMOTE(gap_annulus_drag_flow)
+PUMPLOSS_PROMOTE(gap_annulus_flow)
+PUMPLOSS_PROMOTE(gap_annulus_narrow_flow)
+PUMPLOSS_PROMOTE(gap_narrow_ratio)
+PUMPLOSS_PROMOTE(gap_pad_capillary)
+PUMPLOSS_PROMOTE(gap_pad_capillary_height)
+PUMPLOSS_PROMOTE(gap_pad_orifice)
+PUMPLOSS_PROMOTE(gap_pad_orifice_height)
+PUMPLOSS_PROMOTE(gap_piston_leakage)
+PUMPLOSS_PROMOTE(gap_plates_flow)
+PUMPLOSS_PROMOTE(gap_plates_height)
+PUMPLOSS_PROMOTE(gap_plates_height_couette)
+PUMPLOSS_PROMOTE(gap_plates_power_loss)
+PUMPLOSS_PROMOTE(gap_plates_shear_force)
+PUMPLOSS_PROMOTE(gap_plates_velocity)
+PUMPLOSS_PROMOTE(gap_radial_flow)
+PUMPLOSS_PROMOTE(gap_radial_height)
+PUMPLOSS_PROMOTE(gap_radial_land_force)
+PUMPLOSS_PROMOTE(gap_radial_pressure)
+PUMPLOSS_PROMOTE(gap_radial_sector_flow)
+PUMPLOSS_PROMOTE(gap_reduced_reynolds)
+PUMPLOSS_PROMOTE(gap_reynolds)
 
 }  // namespace pumploss
 

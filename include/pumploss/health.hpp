@@ -121,7 +121,7 @@ struct health_reading {
 
 /// A verdict with its reasons and figures.
 template <class T>
-struct health_assessment {
+struct [[nodiscard]] health_assessment {
   health_level level;               ///< the verdict
   unsigned reasons;                 ///< health_reason bits
   T fraction;                       ///< drain fraction as read
@@ -131,6 +131,10 @@ struct health_assessment {
   T drain_rise_k;                   ///< drain minus inlet temperature, K (NaN if not measured)
   T throttling_rise_k;              ///< dp/(rho cp): rise of oil throttled from outlet to case, K
   pumploss::status st;              ///< status of the assessment
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Normalise a drain reading to the reference state with the power law
@@ -140,7 +144,7 @@ struct health_assessment {
 /// @param r the reading
 /// @return the drain flow at the reference state, m^3/s
 /// @par Source
-/// Laminar leakage scaling q ~ dp/mu (methods.md 5); exponents configurable; computed by
+/// Laminar leakage scaling q ~ dp/mu (docs/pages/theory_efficiency.md, leakage scaling); exponents configurable; computed by
 /// leakage_scale_power_law().
 template <class T>
 inline result<T> health_normalise(const health_reference<T>& ref, const health_reading<T>& r) {
@@ -199,7 +203,7 @@ inline health_level max_level(health_level a, health_level b) {
 ///         (figures NaN), status::implausible when the drain fraction exceeds 1.
 /// @par Source
 /// Bands: common practice, no source (see health.hpp). Throttling rise: first law for an
-/// adiabatic throttle of a liquid with constant rho and cp (methods.md 10).
+/// adiabatic throttle of a liquid with constant rho and cp (docs/pages/theory_efficiency.md, Heat).
 template <class T>
 inline health_assessment<T> assess_health(const health_reference<T>& ref, const health_bands<T>& bands,
                                           const health_reading<T>& r) {
@@ -260,11 +264,15 @@ inline health_assessment<T> assess_health(const health_reference<T>& ref, const 
 
 /// Linear trend of normalised drain flow over time, by least squares.
 template <class T>
-struct health_trend {
+struct [[nodiscard]] health_trend {
   T slope_per_day;     ///< growth of the normalised drain fraction per day (1/day)
   T intercept;         ///< fitted fraction at day 0
   T days_to_worn;      ///< days from the last reading until the fit crosses the worn band (inf if not rising, 0 if there)
   pumploss::status st; ///< status::insufficient_data for fewer than 2 readings or one single day
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Fit a straight line to (day, normalised drain fraction) and project it to the worn band.
@@ -320,6 +328,10 @@ inline health_trend<T> fit_health_trend(const T* days, const T* fractions, std::
   }
   return out;
 }
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(drain_fraction)
 
 }  // namespace pumploss
 

@@ -33,7 +33,7 @@ namespace pumploss {
 /// @par Accuracy
 /// Within 3 ulp of the 50-digit evaluation (tests/leakage_test.cpp).
 /// @par Source
-/// Laminar gap flow q = G h^3 dp / mu, methods.md 5.
+/// Laminar gap flow q = G h^3 dp / mu (docs/pages/theory_efficiency.md, leakage scaling).
 template <class T>
 inline result<T> leakage_scale(T q_ref_m3_s, T dp_ref_pa, T mu_ref_pa_s, T dp_pa, T mu_pa_s) {
   if (!detail::all_finite(q_ref_m3_s, dp_ref_pa, mu_ref_pa_s, dp_pa, mu_pa_s)) return detail::fail<T>(status::nonfinite);
@@ -60,7 +60,7 @@ inline result<T> leakage_scale(T q_ref_m3_s, T dp_ref_pa, T mu_ref_pa_s, T dp_pa
 /// @par Accuracy
 /// Within 8 ulp of the 50-digit evaluation.
 /// @par Source
-/// Empirical power law, methods.md 5.
+/// Empirical power law (docs/pages/theory_efficiency.md, leakage scaling).
 template <class T>
 inline result<T> leakage_scale_power_law(T q_ref_m3_s, T dp_ref_pa, T mu_ref_pa_s, T dp_pa, T mu_pa_s, T a, T b) {
   using std::pow;
@@ -99,7 +99,7 @@ inline result<T> leakage_scale_power_law(T q_ref_m3_s, T dp_ref_pa, T mu_ref_pa_
 /// Readings generated at 20-80 degC from one laminar leakage collapse to 1e-14 relative
 /// (tests/leakage_test.cpp).
 /// @par Source
-/// methods.md 5 (normalisation) with ASTM D341 (methods.md 9.1) and the density of 9.5.
+/// docs/pages/theory_efficiency.md (normalisation) with ASTM D341 and the density model of docs/pages/theory_fluid.md.
 template <class T>
 inline result<T> leakage_normalise(T q_m3_s, T dp_pa, T t_k, T dp_ref_pa, T t_ref_k, const oil<T>& o, T a, T b) {
   if (!detail::all_finite(q_m3_s, dp_pa, t_k, dp_ref_pa, t_ref_k)) return detail::fail<T>(status::nonfinite);
@@ -126,7 +126,7 @@ inline result<T> leakage_normalise(T q_m3_s, T dp_pa, T t_k, T dp_ref_pa, T t_re
 /// @par Accuracy
 /// Within 4 ulp of the 50-digit evaluation, also where R_t dp << R_lam^2.
 /// @par Source
-/// Quadratic of methods.md 5 (rearranged to avoid cancellation).
+/// Quadratic of laminar and square-law resistances in series (docs/pages/theory_efficiency.md), rearranged to avoid cancellation.
 template <class T>
 inline result<T> leakage_series(T r_lam_pa_s_m3, T r_t_pa_s2_m6, T dp_pa) {
   using std::sqrt;
@@ -141,7 +141,7 @@ inline result<T> leakage_series(T r_lam_pa_s_m3, T r_t_pa_s2_m6, T dp_pa) {
 
 /// A fitted leakage power law \f$ q = k\,\Delta p^a \mu^{-b} \f$ with its diagnostics.
 template <class T>
-struct leakage_power_law {
+struct [[nodiscard]] leakage_power_law {
   T k;        ///< coefficient k, m^3/s / (Pa^a (Pa s)^-b)
   T a;        ///< pressure exponent
   T b;        ///< viscosity exponent
@@ -151,6 +151,10 @@ struct leakage_power_law {
   T rms_log;  ///< RMS residual of ln q (about the relative RMS error)
   T cond;     ///< condition number of the column-scaled design matrix (1-norm of R)
   status st;  ///< ok, ill_conditioned (report), or an error (insufficient_data, domain, ...)
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Workspace (number of T values) that leakage_fit_power_law() and leakage_split() need for
@@ -179,7 +183,7 @@ constexpr std::size_t leakage_fit_workspace(std::size_t count) noexcept { return
 /// Exact synthetic data recovered to 1e-12 (tests/leakage_test.cpp); agrees with
 /// numpy.linalg.lstsq (tests/python/test_efficiency_lsq.py).
 /// @par Source
-/// methods.md 5 (empirical power law fitted in logarithms).
+/// docs/pages/theory_efficiency.md (empirical power law fitted in logarithms).
 template <class T>
 inline leakage_power_law<T> leakage_fit_power_law(const T* q_m3_s, const T* dp_pa, const T* mu_pa_s, std::size_t count,
                                                   T* work) {
@@ -230,13 +234,17 @@ inline leakage_power_law<T> leakage_fit_power_law(const T* q_m3_s, const T* dp_p
 
 /// Drain readings split into a viscous, an orifice-like and a constant part.
 template <class T>
-struct leakage_split_result {
+struct [[nodiscard]] leakage_split_result {
   T c_viscous;   ///< coefficient of dp/mu, m^3 (q_visc = c dp / mu)
   T c_orifice;   ///< coefficient of sqrt(dp), m^3/(s Pa^0.5)
   T c_constant;  ///< constant part, m^3/s
   T rms;         ///< RMS residual, m^3/s
   int iterations;///< active-set iterations used
   status st;     ///< ok or an error (no_convergence, insufficient_data, domain, misuse, nonfinite)
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Split drain readings into a viscous part (laminar gaps, dp/mu), an orifice-like part
@@ -260,7 +268,7 @@ struct leakage_split_result {
 /// Agrees with scipy.optimize.nnls to 1e-9 relative (tests/python/test_efficiency_lsq.py).
 /// @par Source
 /// C. L. Lawson, R. J. Hanson, Solving Least Squares Problems, Prentice-Hall 1974, ch. 23
-/// (algorithm NNLS); model terms of methods.md 5.
+/// (algorithm NNLS); model terms of docs/pages/theory_efficiency.md.
 template <class T>
 inline leakage_split_result<T> leakage_split(const T* q_m3_s, const T* dp_pa, const T* mu_pa_s, std::size_t count,
                                              T* work) {
@@ -301,6 +309,12 @@ inline leakage_split_result<T> leakage_split(const T* q_m3_s, const T* dp_pa, co
   r.st = f.st;
   return r;
 }
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(leakage_scale)
+PUMPLOSS_PROMOTE(leakage_scale_power_law)
+PUMPLOSS_PROMOTE(leakage_series)
 
 }  // namespace pumploss
 

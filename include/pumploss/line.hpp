@@ -14,6 +14,7 @@
 #include <cstddef>
 #include <vector>
 
+#include "detail/roots.hpp"
 #include "fluid.hpp"
 #include "friction.hpp"
 #include "scalar_traits.hpp"
@@ -360,10 +361,14 @@ struct line {
 
 /// Total pressure drop of a line.
 template <class T>
-struct line_drop {
+struct [[nodiscard]] line_drop {
   T dp_pa;          ///< total: friction, fittings and components plus the static part, Pa
   T dp_static_pa;   ///< static part rho g dz, Pa
   pumploss::status st;  ///< worst status of the elements
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Pressure drop of a line at a flow, density and viscosity.
@@ -386,7 +391,7 @@ struct line_drop {
 /// @par Accuracy
 /// As the element methods (pipe_pressure_drop(), k_hooper(), k_darby(), crane_ft()).
 /// @par Source
-/// methods.md 8 (case drain back pressure); elements as cited at each method.
+/// docs/pages/theory_friction.md (case drain back pressure); elements as cited at each method.
 template <class T>
 inline line_drop<T> line_pressure_drop(const line_element<T>* elements, std::size_t count, T height_m, T q_m3_s,
                                        T rho_kg_m3, T mu_pa_s, T* element_dp_pa = nullptr, T d_override_m = T(0)) {
@@ -449,8 +454,8 @@ inline line_drop<T> line_pressure_drop_at(const line<T>& l, T q_m3_s, const oil<
 ///
 /// The drop rises monotonically with flow (friction_factor()'s transition bridge keeps
 /// \f$ f\,Re^2 \f$ rising), so the root is unique: it is bracketed by doubling from 1e-9 m^3/s
-/// (at most 200 doublings) and found by the Illinois variant of regula falsi with a bisection
-/// step every third iteration (at most 200 iterations) to 4 machine epsilons.
+/// (at most scalar_traits<T>::max_iterations doublings) and found by Brent's method
+/// (detail/roots.hpp) to 4 machine epsilons.
 /// @param elements the elements
 /// @param count number of elements
 /// @param height_m height of the outlet above the inlet, m
@@ -462,7 +467,8 @@ inline line_drop<T> line_pressure_drop_at(const line<T>& l, T q_m3_s, const oil<
 /// @par Accuracy
 /// Round trip q -> dp -> q within 1e-12 relative (tests/line_test.cpp).
 /// @par Source
-/// Illinois method: M. Dowell, P. Jarratt, BIT 11 (1971) 168-174.
+/// Brent's method: R. P. Brent, Algorithms for Minimization without Derivatives, Prentice-Hall
+/// 1973, ch. 4.
 template <class T>
 inline result<T> line_flow_for_pressure(const line_element<T>* elements, std::size_t count, T height_m, T dp_pa,
                                         T rho_kg_m3, T mu_pa_s) {
@@ -481,35 +487,24 @@ inline result<T> line_flow_for_pressure(const line_element<T>* elements, std::si
   if (err) return detail::fail<T>(st);
   if (glo == T(0)) return {T(0), status::ok};
   if (glo > T(0)) return detail::fail<T>(status::out_of_validity);
-  T hi = detail::constant<T>(1e-9L, "0.000000001"), ghi = g(hi, err);
-  for (int i = 0; i < 200 && !err && ghi < T(0); ++i) {
-    lo = hi; glo = ghi;
-    hi *= 2;
-    ghi = g(hi, err);
-  }
+  const int cap = scalar_traits<T>::max_iterations;
+  auto f = [&](T q) {
+    const T v = err ? T(0) : g(q, err);
+    return err ? scalar_traits<T>::nan() : v;
+  };
+  // bracket: double the flow from 1e-9 m^3/s until the drop exceeds dp
+  const T q1 = detail::constant<T>(1e-9L, "0.000000001");
+  const T g1 = f(q1);
+  detail::bracket<T> br{lo, glo, q1, g1, 0, status::ok};
+  if (!err && g1 < T(0)) br = detail::expand_bracket(f, q1, g1, [](T q) { return q * 2; }, cap);
   if (err) return detail::fail<T>(st);
-  if (ghi < T(0)) return detail::fail<T>(status::no_convergence);
+  if (br.st != status::ok) return detail::fail<T>(status::no_convergence);
   st = status::ok;
   const T tol = 4 * scalar_traits<T>::epsilon();
-  int side = 0;
-  for (int it = 0; it < 200; ++it) {
-    if (ghi == T(0)) return {hi, st};
-    if (hi - lo <= tol * hi) return {lo + (hi - lo) / 2, st};
-    T x = (it % 3 == 2) ? lo + (hi - lo) / 2 : (lo * ghi - hi * glo) / (ghi - glo);
-    if (!(x > lo && x < hi)) x = lo + (hi - lo) / 2;
-    const T gx = g(x, err);
-    if (err) return detail::fail<T>(st);
-    if (gx < T(0)) {
-      lo = x; glo = gx;
-      if (side == -1) ghi /= 2;
-      side = -1;
-    } else {
-      hi = x; ghi = gx;
-      if (side == 1) glo /= 2;
-      side = 1;
-    }
-  }
-  return detail::fail<T>(status::no_convergence);
+  const auto r = detail::brent(f, br.a, br.b, br.fa, br.fb, tol, T(0), cap);
+  if (err) return detail::fail<T>(st);
+  if (r.st != status::ok) return detail::fail<T>(status::no_convergence);
+  return {r.x, st};
 }
 /// @}
 
@@ -518,22 +513,30 @@ inline result<T> line_flow_for_pressure(const line_element<T>* elements, std::si
 
 /// Result of the case drain check at one temperature.
 template <class T>
-struct drain_point {
+struct [[nodiscard]] drain_point {
   T t_k;               ///< oil temperature, K
   T nu_m2_s;           ///< kinematic viscosity at t_k, m^2/s
   T case_pressure_pa;  ///< case pressure p_tank + line drop, Pa
   T margin_pa;         ///< allowed case pressure minus case pressure, Pa (>= 0 passes)
   bool pass;           ///< margin >= 0
   pumploss::status st; ///< status of the calculation at this temperature
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Summary of a case drain check over a temperature range.
 template <class T>
-struct drain_summary {
+struct [[nodiscard]] drain_summary {
   bool pass;               ///< passes at every temperature checked
   T worst_margin_pa;       ///< smallest margin, Pa
   T worst_t_k;             ///< temperature of the smallest margin, K
   pumploss::status st;     ///< worst status
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Case drain check: case pressure at the pump for a drain flow over an oil temperature range.
@@ -558,7 +561,7 @@ struct drain_summary {
 /// @par Accuracy
 /// As line_pressure_drop() and d341_viscosity().
 /// @par Source
-/// methods.md 8 (case drain back pressure) and 12 (common practice).
+/// docs/pages/theory_friction.md (case drain back pressure; limits common practice, no source).
 template <class T>
 inline drain_summary<T> drain_check(const line<T>& l, const oil<T>& o, T q_drain_m3_s, T t_cold_k, T t_max_k,
                                     int n_temps, T p_tank_pa, T p_allowed_pa, drain_point<T>* points) {
@@ -644,7 +647,7 @@ struct velocity_range {
 /// @param s the service
 /// @return the range in m/s
 /// @par Source
-/// Common practice, no source (methods.md 12).
+/// Common practice, no source.
 constexpr velocity_range recommended_velocity(line_service s) noexcept {
   switch (s) {
     case line_service::suction: return {0.6, 1.2};
@@ -657,13 +660,17 @@ constexpr velocity_range recommended_velocity(line_service s) noexcept {
 
 /// Result of drain line sizing.
 template <class T>
-struct drain_sizing {
+struct [[nodiscard]] drain_sizing {
   int bore_index;          ///< index into standard_bores, -1 when none passes
   T diameter_m;            ///< the chosen inside diameter, m
   T velocity_m_s;          ///< mean velocity at the drain flow, m/s
   T worst_margin_pa;       ///< smallest case pressure margin over the temperature range, Pa
   T worst_t_k;             ///< temperature of the smallest margin, K
   pumploss::status st;     ///< status; status::out_of_validity when no standard bore passes
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Smallest standard bore for a case drain line that passes the drain check over the whole
@@ -689,7 +696,7 @@ struct drain_sizing {
 /// @par Accuracy
 /// As drain_check().
 /// @par Source
-/// methods.md 8 and 12; bore table: hose dash sizes (trade convention), tube sizes common
+/// docs/pages/theory_friction.md (common practice, no source); bore table: hose dash sizes (trade convention), tube sizes common
 /// practice, no source.
 template <class T>
 inline drain_sizing<T> size_drain_line(const line<T>& l, const oil<T>& o, T q_drain_m3_s, T t_cold_k, T t_max_k,
@@ -733,6 +740,19 @@ inline drain_sizing<T> size_drain_line(const line<T>& l, const oil<T>& o, T q_dr
   return fail(status::out_of_validity);
 }
 /// @}
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(crane_ft)
+PUMPLOSS_PROMOTE(equivalent_length)
+PUMPLOSS_PROMOTE(k_darby)
+PUMPLOSS_PROMOTE(k_hooper)
+PUMPLOSS_PROMOTE(line_component_power)
+PUMPLOSS_PROMOTE(line_fitting_crane)
+PUMPLOSS_PROMOTE(line_fitting_darby)
+PUMPLOSS_PROMOTE(line_fitting_hooper)
+PUMPLOSS_PROMOTE(line_fitting_k)
+PUMPLOSS_PROMOTE(line_pipe)
 
 }  // namespace pumploss
 

@@ -26,7 +26,7 @@ enum class loss_model_kind : int {
 
 /// A fitted loss model with its diagnostics.
 template <class T>
-struct loss_model {
+struct [[nodiscard]] loss_model {
   machine kind;                 ///< pump or motor (the signs of the losses differ)
   loss_model_kind model;        ///< wilson or schloesser
   T displacement_m3_rev;        ///< V_i used (state the estimator that gave it)
@@ -57,6 +57,10 @@ struct loss_model {
   T mu_max;                     ///< highest viscosity of the data, Pa s
   std::size_t points;           ///< number of test points
   status st;                    ///< ok, ill_conditioned (report), or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Fit options.
@@ -72,13 +76,17 @@ constexpr std::size_t loss_fit_workspace(std::size_t count) noexcept { return 5 
 
 /// A prediction of flow, torque and efficiencies from a fitted model.
 template <class T>
-struct loss_prediction {
+struct [[nodiscard]] loss_prediction {
   T flow_m3_s;   ///< pump outlet flow or motor inlet flow, m^3/s
   T torque_n_m;  ///< pump input torque or motor output torque, N m
   T eta_v;       ///< volumetric efficiency
   T eta_hm;      ///< hydromechanical efficiency
   T eta_t;       ///< overall efficiency
   status st;     ///< ok, extrapolated (outside the data's ranges), or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 namespace detail {
@@ -86,7 +94,7 @@ template <class T>
 struct loss_terms {
   T omega, d, flow_slip, flow_turb, tq_visc, tq_coul, tq_hydro;
 };
-// Regressor columns of methods.md 4.2 at one point.
+// Regressor columns of the linear loss-model fit at one point (docs/pages/theory_efficiency.md).
 template <class T>
 inline loss_terms<T> loss_columns(T d, T rho, T dp, T n, T mu) {
   using std::cbrt;
@@ -148,7 +156,7 @@ inline loss_model<T> loss_model_fail(machine kind, loss_model_kind model, T v, T
 ///         nonfinite / misuse for bad input.
 /// @par Validity
 /// Wilson's form assumes laminar slip and linear friction laws; at low Stribeck number
-/// mu n / dp (mixed lubrication) real machines depart from it (methods.md 4.1).
+/// mu n / dp (mixed lubrication) real machines depart from it (equations as in Merritt 1967).
 /// @par Accuracy
 /// Exact synthetic data are recovered to 1e-10 relative; on noisy data the coefficients lie within
 /// their reported standard errors (tests/loss_model_test.cpp); agrees with numpy.linalg.lstsq
@@ -156,7 +164,7 @@ inline loss_model<T> loss_model_fail(machine kind, loss_model_kind model, T v, T
 /// @par Source
 /// W. E. Wilson, Trans. ASME 71 (1949) and Positive-Displacement Pumps and Fluid Motors (1950), as
 /// in H. E. Merritt, Hydraulic Control Systems, Wiley 1967; W. M. J. Schlösser, Hydraulic Pneumatic
-/// Power (1961) (both citations from memory, methods.md 4.1-4.3); Householder QR as in Golub & Van
+/// Power (1961) (both citations from memory); Householder QR as in Golub & Van
 /// Loan, Matrix Computations, 4th ed. 2013, 5.3.
 template <class T>
 inline loss_model<T> fit_loss_model(machine kind, loss_model_kind model, T displacement_m3_rev, T rho_kg_m3,
@@ -277,7 +285,7 @@ inline loss_model<T> fit_loss_model(machine kind, loss_model_kind model, T displ
 /// @par Accuracy
 /// As the fitted coefficients; the evaluation itself within a few ulp.
 /// @par Source
-/// Wilson's model as in Merritt 1967 (methods.md 4.1); Schlösser 1961 (methods.md 4.3).
+/// Wilson's model as in H. E. Merritt, Hydraulic Control Systems, Wiley 1967; Schlösser 1961.
 template <class T>
 inline loss_prediction<T> loss_model_predict(const loss_model<T>& m, T dp_pa, T speed_rev_s, T mu_pa_s) {
   const T nan = scalar_traits<T>::nan();

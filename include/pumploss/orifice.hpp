@@ -47,7 +47,7 @@ inline T signed_sqrt(T x) {
 /// Within 2 ulp of the 50-digit evaluation (tests/orifice_test.cpp).
 /// @par Source
 /// Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39 (citing Merritt 1967);
-/// methods.md 7.
+/// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39; docs/pages/theory_gap.md.
 template <class T>
 inline result<T> orifice_flow(T dp_pa, T rho_kg_m3, T diameter_m, T cd) {
   if (!detail::all_finite(dp_pa, rho_kg_m3, diameter_m, cd)) return detail::fail<T>(status::nonfinite);
@@ -72,7 +72,7 @@ inline result<T> orifice_flow(T dp_pa, T rho_kg_m3, T diameter_m, T cd) {
 /// @par Accuracy
 /// Within 3 ulp of the 50-digit evaluation.
 /// @par Source
-/// methods.md 7.
+/// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39; docs/pages/theory_gap.md.
 template <class T>
 inline result<T> orifice_dp(T q_m3_s, T rho_kg_m3, T diameter_m, T cd) {
   if (!detail::all_finite(q_m3_s, rho_kg_m3, diameter_m, cd)) return detail::fail<T>(status::nonfinite);
@@ -98,7 +98,7 @@ inline result<T> orifice_dp(T q_m3_s, T rho_kg_m3, T diameter_m, T cd) {
 /// @par Accuracy
 /// Within 3 ulp of the 50-digit evaluation.
 /// @par Source
-/// methods.md 7.
+/// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39; docs/pages/theory_gap.md.
 template <class T>
 inline result<T> orifice_diameter(T q_m3_s, T dp_pa, T rho_kg_m3, T cd) {
   using std::fabs;
@@ -126,7 +126,7 @@ inline result<T> orifice_diameter(T q_m3_s, T dp_pa, T rho_kg_m3, T cd) {
 /// @par Accuracy
 /// A few ulp.
 /// @par Source
-/// methods.md 7.
+/// Definition of the orifice Reynolds number (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> orifice_reynolds(T q_m3_s, T diameter_m, T rho_kg_m3, T mu_pa_s) {
   using std::fabs;
@@ -141,7 +141,7 @@ inline result<T> orifice_reynolds(T q_m3_s, T diameter_m, T rho_kg_m3, T mu_pa_s
 /// @return delta (dimensionless)
 /// @par Source
 /// Sampson's flow through a circular hole in a thin plate, q = d^3 dp/(24 mu) (from memory);
-/// delta derived in methods.md 7 (section 13 row 22, self-calculated).
+/// delta = 1/sqrt(12 pi) derived from Sampson's flow (self-calculated, docs/pages/theory_gap.md).
 template <class T>
 inline T orifice_sampson_delta() {
   using std::sqrt;
@@ -159,12 +159,12 @@ inline T orifice_sampson_delta() {
 ///                 Merritt gives about 0.2, from memory)
 /// @return Cd; status::domain for bad arguments. Cd = 0 at Re = 0.
 /// @par Validity
-/// The blend is a modelling choice of this library (methods.md 7), exact in both limits.
+/// The blend is a modelling choice of this library, exact in both limits.
 /// @par Accuracy
 /// Within 3 ulp of the 50-digit evaluation.
 /// @par Source
 /// Low-Re law: Merritt, Hydraulic Control Systems, Wiley 1967 (delta about 0.2, from memory);
-/// Sampson's creeping flow (delta = 1/sqrt(12 pi)); blend: methods.md 7.
+/// Sampson's creeping flow (delta = 1/sqrt(12 pi)); blend: this library's choice (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> orifice_cd_low_re(T re, T cd_inf, T delta) {
   using std::sqrt;
@@ -196,7 +196,7 @@ inline result<T> orifice_cd_low_re(T re, T cd_inf, T delta) {
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/orifice_test.cpp).
 /// @par Source
-/// methods.md 7.
+/// H. E. Merritt, Hydraulic Control Systems, Wiley 1967 (low-Re Cd, from memory); docs/pages/theory_gap.md.
 template <class T>
 inline result<T> orifice_flow_viscous(T dp_pa, T rho_kg_m3, T mu_pa_s, T diameter_m, T cd_inf, T delta) {
   using std::fabs;
@@ -246,7 +246,7 @@ inline status capillary_check(T rho, T mu, T d, T l, T k) {
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation.
 /// @par Source
-/// Hagen-Poiseuille law; methods.md 7 (K range from memory).
+/// Hagen-Poiseuille law; K range from memory (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> capillary_dp(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diameter_m, T length_m, T loss_coefficient) {
   using std::fabs;
@@ -279,7 +279,7 @@ inline result<T> capillary_dp(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diameter_m, T 
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation (tests/orifice_test.cpp).
 /// @par Source
-/// methods.md 7 (quadratic solved here in its stable form).
+/// docs/pages/theory_gap.md (quadratic solved here in its stable form).
 template <class T>
 inline result<T> capillary_flow(T dp_pa, T rho_kg_m3, T mu_pa_s, T diameter_m, T length_m, T loss_coefficient) {
   using std::fabs;
@@ -316,7 +316,7 @@ inline result<T> capillary_flow(T dp_pa, T rho_kg_m3, T mu_pa_s, T diameter_m, T
 /// @par Accuracy
 /// Within 3 ulp of the 50-digit evaluation.
 /// @par Source
-/// methods.md 7.
+/// Series combination of square-law restrictions, derived here (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> orifice_series_cda(T cda1_m2, T cda2_m2) {
   using std::sqrt;
@@ -339,7 +339,7 @@ inline result<T> orifice_series_cda(T cda1_m2, T cda2_m2) {
 /// @par Accuracy
 /// One rounding.
 /// @par Source
-/// methods.md 7.
+/// Parallel combination of square-law restrictions, derived here (docs/pages/theory_gap.md).
 template <class T>
 inline result<T> orifice_parallel_cda(T cda1_m2, T cda2_m2) {
   if (!detail::all_finite(cda1_m2, cda2_m2)) return detail::fail<T>(status::nonfinite);
@@ -359,7 +359,7 @@ inline result<T> orifice_parallel_cda(T cda1_m2, T cda2_m2) {
 /// @par Accuracy
 /// Within 2 ulp.
 /// @par Source
-/// methods.md 7.
+/// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39; docs/pages/theory_gap.md.
 template <class T>
 inline result<T> orifice_flow_cda(T dp_pa, T rho_kg_m3, T cda_m2) {
   if (!detail::all_finite(dp_pa, rho_kg_m3, cda_m2)) return detail::fail<T>(status::nonfinite);
@@ -367,6 +367,20 @@ inline result<T> orifice_flow_cda(T dp_pa, T rho_kg_m3, T cda_m2) {
   return {cda_m2 * detail::signed_sqrt(T(2) * dp_pa / rho_kg_m3), status::ok};
 }
 /// @}
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(capillary_dp)
+PUMPLOSS_PROMOTE(capillary_flow)
+PUMPLOSS_PROMOTE(orifice_cd_low_re)
+PUMPLOSS_PROMOTE(orifice_diameter)
+PUMPLOSS_PROMOTE(orifice_dp)
+PUMPLOSS_PROMOTE(orifice_flow)
+PUMPLOSS_PROMOTE(orifice_flow_cda)
+PUMPLOSS_PROMOTE(orifice_flow_viscous)
+PUMPLOSS_PROMOTE(orifice_parallel_cda)
+PUMPLOSS_PROMOTE(orifice_reynolds)
+PUMPLOSS_PROMOTE(orifice_series_cda)
 
 }  // namespace pumploss
 

@@ -10,6 +10,7 @@
 #include <cstddef>
 
 #include "export.hpp"
+#include "detail/roots.hpp"
 #include "dual.hpp"
 #include "fluid.hpp"
 #include "gap.hpp"
@@ -78,10 +79,14 @@ inline result<T> piston_pump_displacement(const piston_pump<T>& p) {
 
 /// What validate_piston_pump() found.
 template <class T>
-struct piston_pump_check {
+struct [[nodiscard]] piston_pump_check {
   T displacement_m3_rev;   ///< geometric maximum displacement, m^3/rev
   T displacement_mismatch; ///< geometric / stated - 1 (NaN without a stated value)
   pumploss::status st;     ///< ok; domain / nonfinite for an impossible description;
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
                            ///< implausible when geometric and stated displacement differ by more than 5 %
 };
 
@@ -217,7 +222,7 @@ struct pump_operating_point {
 
 /// The leakage budget at one operating point.
 template <class T>
-struct leakage_budget {
+struct [[nodiscard]] leakage_budget {
   T flow_m3_s[leakage_path_count];  ///< flow of each path to the case, m^3/s
   T share[leakage_path_count];      ///< each path's share of the total (NaN when the total is 0)
   T total_m3_s;                     ///< predicted case drain flow, m^3/s
@@ -227,6 +232,10 @@ struct leakage_budget {
   T slipper_pocket_pa;              ///< slipper pocket pressure, Pa (NaN without slipper path)
   T max_gap_reynolds;               ///< largest gap Reynolds number of the laminar paths
   pumploss::status st;              ///< status (regime when a laminar path is not laminar)
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 namespace detail {
@@ -270,7 +279,7 @@ inline leakage_budget<T> budget_fail(status s) {
 /// @par Accuracy
 /// Each path as its gap model (1e-12 relative or better); the sum within a few ulp.
 /// @par Source
-/// Gap and orifice models of gap.hpp and orifice.hpp (methods.md 6-7); the path list follows
+/// Gap and orifice models of gap.hpp and orifice.hpp (docs/pages/theory_gap.md); the path list follows
 /// the usual breakdown of swashplate pump leakage (e.g. Ivantysyn & Ivantysynova, Hydrostatic
 /// Pumps and Motors, 2001, ch. 5 (from memory)).
 template <class T>
@@ -403,10 +412,14 @@ inline piston_pump<U> piston_pump_cast(const piston_pump<T>& p) {
 
 /// Sensitivity of the predicted drain flow to each gap height.
 template <class T>
-struct budget_sensitivity {
+struct [[nodiscard]] budget_sensitivity {
   T d_total_d_gap[pump_gap_count];  ///< dQ_total/dh for each pump_gap, m^3/s per m (0 when the path is absent)
   T elasticity[pump_gap_count];     ///< (h / Q_total) dQ_total/dh: the share-weighted power of h (3 for a pure laminar path)
   pumploss::status st;              ///< status of the budget
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Sensitivity of the budget's total to the four gap heights, by forward-mode dual numbers
@@ -505,7 +518,7 @@ struct drain_measurement {
 };
 
 /// Result of calibrate_piston_pump().
-struct pump_calibration {
+struct [[nodiscard]] pump_calibration {
   double scale[path_group_count];        ///< fitted factor on each group's flow (1: as described; NaN: group absent)
   double std_error[path_group_count];    ///< standard error of each factor (unconstrained fit of the same columns)
   double gap_growth[path_group_count];   ///< equivalent gap change h_fit/h - 1 of the group (NaN: no gap or not reachable)
@@ -514,6 +527,10 @@ struct pump_calibration {
   double condition_number;               ///< condition number of the scaled design (distinct groups)
   std::size_t points;                    ///< measurements used
   pumploss::status st;                   ///< status of the calibration
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Calibrate the budget to measured drain flows: one non-negative scale factor per path group
@@ -552,7 +569,8 @@ PUMPLOSS_CXX_API pump_calibration calibrate_piston_pump(const piston_pump<double
 ///         exceed it, or the gap's path cannot carry enough), status::domain when the pump has
 ///         no such path.
 /// @par Source
-/// Monotone one-dimensional root of the budget in log k, bisection with a fixed step count (80).
+/// Monotone one-dimensional root of the budget in log k on [ln(1/20), ln 20], found by Brent's
+/// method (detail/roots.hpp).
 template <class T>
 inline result<T> gap_growth_for_drain(const piston_pump<T>& p, const oil<T>& o, const pump_operating_point<T>& op,
                                       pump_gap gap, T measured_drain_m3_s) {
@@ -576,14 +594,18 @@ inline result<T> gap_growth_for_drain(const piston_pump<T>& p, const oil<T>& o, 
       !(bhi.total_m3_s >= measured_drain_m3_s))
     return detail::fail<T>(status::out_of_validity);
   status st = nominal.st;
-  for (int i = 0; i < 80; ++i) {
-    const T mid = (lo + hi) / 2;
-    const auto b = total(exp(mid));
-    if (is_error(b.st)) return detail::fail<T>(b.st);
+  auto f = [&](T x) {
+    const auto b = total(exp(x));
     st = worst(st, b.st);
-    if (b.total_m3_s < measured_drain_m3_s) lo = mid; else hi = mid;
-  }
-  return {exp((lo + hi) / 2) - T(1), st};
+    return is_error(b.st) ? scalar_traits<T>::nan() : T(b.total_m3_s - measured_drain_m3_s);
+  };
+  const T tol = 4 * scalar_traits<T>::epsilon();
+  const auto r = detail::brent(f, lo, hi, T(blo.total_m3_s - measured_drain_m3_s),
+                               T(bhi.total_m3_s - measured_drain_m3_s), tol, tol, scalar_traits<T>::max_iterations);
+  if (is_error(st)) return detail::fail<T>(st);
+  if (r.st != status::ok) return detail::fail<T>(r.st);
+  using std::expm1;
+  return {expm1(r.x), st};
 }
 
 }  // namespace pumploss

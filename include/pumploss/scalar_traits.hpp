@@ -11,6 +11,7 @@
 #include <limits>
 #include <type_traits>
 
+#include "promote.hpp"
 #include "status.hpp"
 
 namespace pumploss {

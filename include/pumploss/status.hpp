@@ -71,13 +71,23 @@ constexpr status worst(status a, status b) noexcept {
 /// @return the sentence (static storage, never null); unknown codes give a sentence saying so.
 PUMPLOSS_CXX_API const char* status_message(int code) noexcept;
 
-/// A value together with the status of the calculation that produced it.
+/// A one-sentence English description of a status (the same sentence the C API's
+/// pumploss_status_message() returns).
+/// @param s a status
+/// @return the sentence (static storage, never null)
+inline const char* status_message(status s) noexcept { return status_message(static_cast<int>(s)); }
+
+/// A value together with the status of the calculation that produced it. [[nodiscard]]: a
+/// result that is thrown away is a status nobody looked at.
+///
+/// Every struct result of the library follows the same convention: a `pumploss::status st`
+/// member (NaN fields on an error), `ok()` and `usable()`; see DEVELOPERS.md.
 ///
 /// On an error status the value is a quiet NaN (where T has one). C++ callers test ok() or
 /// usable(); value_or_throw() throws std::domain_error at the caller's own site (when
 /// exceptions are enabled; otherwise it aborts).
 template <class T>
-struct result {
+struct [[nodiscard]] result {
   T value{};                  ///< The computed value (NaN on error).
   pumploss::status st = pumploss::status::ok;  ///< How the value was obtained.
 

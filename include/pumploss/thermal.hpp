@@ -29,9 +29,9 @@ namespace pumploss {
 /// throttle_temperature_rise_isenthalpic(), about 0.79 of this value at 50 degC).
 /// @par Accuracy
 /// Within 2 ulp of the 50-digit evaluation; check 10 bar, 880 kg/m^3, 2030 J/(kg K) -> 0.560 K
-/// (methods.md 13 row 18, self-calculated).
+/// (self-calculated, tests/reference/SOURCES.md methods13_row18).
 /// @par Source
-/// Energy balance of an adiabatic throttle, methods.md 10.
+/// Energy balance of an adiabatic throttle (docs/pages/theory_efficiency.md, Heat).
 template <class T>
 inline result<T> throttle_temperature_rise(T dp_pa, T rho_kg_m3, T cp_j_kg_k) {
   if (!detail::all_finite(dp_pa, rho_kg_m3, cp_j_kg_k)) return detail::fail<T>(status::nonfinite);
@@ -56,7 +56,7 @@ inline result<T> throttle_temperature_rise(T dp_pa, T rho_kg_m3, T cp_j_kg_k) {
 /// Within 4 ulp of the 50-digit evaluation.
 /// @par Source
 /// Standard thermodynamics of the Joule-Thomson coefficient (citation from memory),
-/// methods.md 10.
+/// Energy balance (docs/pages/theory_efficiency.md, Heat).
 template <class T>
 inline result<T> throttle_temperature_rise_isenthalpic(T dp_pa, T rho_kg_m3, T cp_j_kg_k, T alpha_per_k, T t_k) {
   if (!detail::all_finite(dp_pa, rho_kg_m3, cp_j_kg_k, alpha_per_k, t_k)) return detail::fail<T>(status::nonfinite);
@@ -79,7 +79,7 @@ inline result<T> throttle_temperature_rise_isenthalpic(T dp_pa, T rho_kg_m3, T c
 /// @par Accuracy
 /// Within 2 ulp.
 /// @par Source
-/// Energy balance, methods.md 2.1 and 10.
+/// Energy balance (docs/pages/theory_efficiency.md, Heat); efficiency definitions of ISO 4409:2019.
 template <class T>
 inline result<T> heat_load(T input_power_w, T eta_t) {
   if (!detail::all_finite(input_power_w, eta_t)) return detail::fail<T>(status::nonfinite);
@@ -102,7 +102,7 @@ inline result<T> heat_load(T input_power_w, T eta_t) {
 /// @par Accuracy
 /// Within a few ulp of P_in - P_out (one subtraction of the two powers).
 /// @par Source
-/// Energy balance, methods.md 2.1.
+/// Energy balance (docs/pages/theory_efficiency.md, Heat).
 template <class T>
 inline result<T> machine_heat_load(machine kind, T displacement_m3_rev, T speed_rev_s, T dp_pa, T flow_m3_s,
                                    T torque_n_m) {
@@ -117,7 +117,7 @@ inline result<T> machine_heat_load(machine kind, T displacement_m3_rev, T speed_
 ///
 /// With P the leakage power (dp times the leakage flow that leaves through the case) this is the
 /// expected drain temperature; with P the whole heat load it is the upper bound reached when all
-/// losses leave with the drain (methods.md 10).
+/// losses leave with the drain (docs/pages/theory_efficiency.md, Heat).
 ///
 /// @param t_inlet_k temperature of the oil entering the machine, K, > 0
 /// @param power_w power dissipated into the drain flow, W, >= 0
@@ -131,7 +131,7 @@ inline result<T> machine_heat_load(machine kind, T displacement_m3_rev, T speed_
 /// @par Accuracy
 /// Within 3 ulp of the 50-digit evaluation.
 /// @par Source
-/// Energy balance, methods.md 10.
+/// Energy balance (docs/pages/theory_efficiency.md, Heat).
 template <class T>
 inline result<T> case_drain_temperature(T t_inlet_k, T power_w, T drain_flow_m3_s, T rho_kg_m3, T cp_j_kg_k) {
   if (!detail::all_finite(t_inlet_k, power_w, drain_flow_m3_s, rho_kg_m3, cp_j_kg_k))
@@ -160,7 +160,7 @@ inline result<T> case_drain_temperature(T t_inlet_k, T power_w, T drain_flow_m3_
 /// @par Accuracy
 /// Within 4 ulp of the 50-digit evaluation.
 /// @par Source
-/// Energy balance, methods.md 10.
+/// Energy balance (docs/pages/theory_efficiency.md, Heat).
 template <class T>
 inline result<T> case_drain_temperature_from_leakage(T t_inlet_k, T dp_pa, T drain_flow_m3_s, T extra_power_w,
                                                      T rho_kg_m3, T cp_j_kg_k) {
@@ -169,6 +169,14 @@ inline result<T> case_drain_temperature_from_leakage(T t_inlet_k, T dp_pa, T dra
   return case_drain_temperature(t_inlet_k, dp_pa * drain_flow_m3_s + extra_power_w, drain_flow_m3_s, rho_kg_m3,
                                 cp_j_kg_k);
 }
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(case_drain_temperature)
+PUMPLOSS_PROMOTE(case_drain_temperature_from_leakage)
+PUMPLOSS_PROMOTE(heat_load)
+PUMPLOSS_PROMOTE(throttle_temperature_rise)
+PUMPLOSS_PROMOTE(throttle_temperature_rise_isenthalpic)
 
 }  // namespace pumploss
 

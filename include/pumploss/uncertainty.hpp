@@ -4,7 +4,7 @@
 ///
 /// The user states each instrument's uncertainty (absolute or per cent of reading; rectangular
 /// limits, a standard uncertainty or an expanded one). No accuracy-class presets are shipped: the
-/// ISO 4409 class table is not confirmed from a source at hand (methods.md 2.2).
+/// ISO 4409 class table is not confirmed from a source at hand (so none is shipped).
 #ifndef PUMPLOSS_UNCERTAINTY_HPP
 #define PUMPLOSS_UNCERTAINTY_HPP
 
@@ -69,7 +69,7 @@ inline result<T> standard_uncertainty(T figure, uncertainty_basis basis, uncerta
 /// @par Accuracy
 /// Within a few ulp (cancellation only when r = 1 and u_p1 = u_p2, where the result is 0).
 /// @par Source
-/// JCGM 100:2008, 5.2.2 Eq. (13), methods.md 11.
+/// JCGM 100:2008, 5.2.2 Eq. (13).
 template <class T>
 inline result<T> pressure_difference_uncertainty(T u_p1_pa, T u_p2_pa, T r12) {
   using std::sqrt;
@@ -92,13 +92,17 @@ struct gum_value {
 
 /// Efficiencies and powers of one operating point with their GUM uncertainties.
 template <class T>
-struct efficiency_uncertainty {
+struct [[nodiscard]] efficiency_uncertainty {
   gum_value<T> eta_v;   ///< volumetric efficiency
   gum_value<T> eta_hm;  ///< hydromechanical efficiency
   gum_value<T> eta_t;   ///< overall efficiency
   gum_value<T> p_hyd;   ///< hydraulic power, W
   gum_value<T> p_mech;  ///< shaft power, W
   status st;            ///< the efficiency status (ok, implausible) or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Inputs of efficiency_gum(): the five readings and their standard uncertainties.
@@ -138,7 +142,7 @@ struct efficiency_inputs {
 /// Equals the analytic propagation to 1e-15 relative; agrees with a 20 000-draw Monte Carlo
 /// within its sampling error (tests/uncertainty_test.cpp).
 /// @par Source
-/// JCGM 100:2008, 5.1.2 Eq. (10) and 5.2.2 Eq. (13); methods.md 11 and 13 row 19.
+/// JCGM 100:2008, 5.1.2 Eq. (10) and 5.2.2 Eq. (13); check value: tests/reference/SOURCES.md methods13_row19 (self-calculated).
 template <class T>
 inline efficiency_uncertainty<T> efficiency_gum(machine kind, const efficiency_inputs<T>& x) {
   using std::sqrt;
@@ -188,6 +192,10 @@ inline efficiency_uncertainty<T> efficiency_gum(machine kind, const efficiency_i
   fill(r.p_mech, e.p_mech);
   return r;
 }
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(pressure_difference_uncertainty)
 
 }  // namespace pumploss
 

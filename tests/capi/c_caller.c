@@ -89,7 +89,7 @@ static void test_gap(void) {
   int st[3];
   int i;
   nan = nan / nan;
-  /* self-calculated (methods.md 13 row 15): piston 20 mm, h 10 um, L 30 mm, 250 bar, 0.040 Pa s */
+  /* self-calculated (selfcalc_methods13, tests/reference/SOURCES.md): piston 20 mm, h 10 um, L 30 mm, 250 bar, 0.040 Pa s */
   CHECK(pumploss_gap_annulus_flow(250e5, 0.040, 0.02002, 0.02, 0.03, 0.0, &q) == PUMPLOSS_OK &&
         near_rel(q * 60000.0, 6.548257296354804e-3, 1e-12));
   CHECK(pumploss_gap_annulus_flow(250e5, 0.040, 0.02, 0.02002, 0.03, 0.0, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
@@ -126,7 +126,7 @@ static void test_gap(void) {
   CHECK(pumploss_gap_plates_power_loss(1e6, 0.04, 0.01, 1e-5, 0.02, 0.0, &p) == PUMPLOSS_OK &&
         near_rel(p, 1e6 * 0.01 * 1e-15 * 1e6 / (12.0 * 0.04 * 0.02), 1e-14));
   CHECK(pumploss_gap_plates_power_loss(1e6, 0.04, 0.01, 1e-5, nan, 0.0, &p) == PUMPLOSS_ENONFINITE && is_nan(p));
-  /* radial (methods.md 13 row 16, self-calculated): 0.16344 L/min, W = 48.43 kN */
+  /* radial (selfcalc_methods13, self-calculated): 0.16344 L/min, W = 48.43 kN */
   CHECK(pumploss_gap_radial_flow(250e5, 0.040, 0.02, 0.03, 15e-6, &q) == PUMPLOSS_OK &&
         near_rel(q * 60000.0, 0.16343692394607145, 1e-13));
   CHECK(pumploss_gap_radial_flow(250e5, 0.040, 0.03, 0.02, 15e-6, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
@@ -161,7 +161,7 @@ static void test_gap(void) {
   CHECK(pumploss_gap_reynolds(1e-6, 0.0628, 870.0, 0.04, &re) == PUMPLOSS_OK && near_rel(re, 2.0 * 870.0 * 1e-6 / (0.04 * 0.0628), 1e-14));
   CHECK(pumploss_gap_reynolds(1.0, 0.0628, 870.0, 0.04, &re) == PUMPLOSS_WREGIME && re > 2000.0);
   CHECK(pumploss_gap_reynolds(1e-6, 0.0, 870.0, 0.04, &re) == PUMPLOSS_EDOMAIN && is_nan(re));
-  /* orifice (methods.md 13 row 17, self-calculated): d 1 mm, Cd 0.61, 100 bar, 870 kg/m3 -> 4.3584 L/min */
+  /* orifice (selfcalc_methods13, self-calculated): d 1 mm, Cd 0.61, 100 bar, 870 kg/m3 -> 4.3584 L/min */
   CHECK(pumploss_orifice_flow(100e5, 870.0, 1e-3, 0.61, &q) == PUMPLOSS_OK && near_rel(q * 60000.0, 4.358392497267148, 1e-14));
   CHECK(pumploss_orifice_flow(100e5, 870.0, 1e-3, 1.2, &q) == PUMPLOSS_EDOMAIN && is_nan(q));
   CHECK(pumploss_orifice_dp(4.358392497267148 / 60000.0, 870.0, 1e-3, 0.61, &p) == PUMPLOSS_OK && near_rel(p, 100e5, 1e-14));
@@ -212,7 +212,7 @@ static void test_friction(void) {
   double res[3], rrs[3], fs[3];
   double q[2], rho[2], mu[2], d[2], len[2], eps[2], dps[2];
   int sts[3];
-  /* methods.md 13 row 1 (fluids documentation): Colebrook, Re = 1e5, eps/D = 1e-4 */
+  /* fluids_doc_friction (fluids documentation): Colebrook, Re = 1e5, eps/D = 1e-4 */
   CHECK(pumploss_friction_factor(1e5, 1e-4, &f) == PUMPLOSS_OK && fabs(f - 0.018513866077) < 1e-12);
   CHECK(pumploss_friction_factor(3000.0, 1e-4, &f) == PUMPLOSS_WTRANSITION && !is_nan(f));
   CHECK(pumploss_friction_factor(-1.0, 1e-4, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
@@ -223,7 +223,7 @@ static void test_friction(void) {
   CHECK(pumploss_friction_laminar(0.0, 64.0, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
   CHECK(pumploss_friction_colebrook(1e4, 0.0, &f) == PUMPLOSS_OK && fabs(f - 0.030882950) < 1e-9);
   CHECK(pumploss_friction_colebrook(1e4, 2.0, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
-  /* methods.md 13 rows 3-5 (fluids documentation) */
+  /* fluids_doc_friction (fluids documentation) */
   CHECK(pumploss_friction_haaland(1e5, 1e-4, &f) == PUMPLOSS_OK && fabs(f - 0.018265053015) < 1e-12);
   CHECK(pumploss_friction_haaland(1e5, -1e-4, &f) == PUMPLOSS_EDOMAIN && is_nan(f));
   CHECK(pumploss_friction_swamee_jain(1e5, 1e-4, &f) == PUMPLOSS_OK && fabs(f - 0.018452424432) < 1e-7);
@@ -234,7 +234,7 @@ static void test_friction(void) {
   CHECK(pumploss_pipe_velocity(1e-3, 0.0, &v) == PUMPLOSS_EDOMAIN && is_nan(v));
   CHECK(pumploss_pipe_reynolds(1e-3, 1000.0, 1e-3, 0.02, &re) == PUMPLOSS_OK && near_rel(re, 63661.97723675813, 1e-14));
   CHECK(pumploss_pipe_reynolds(1e-3, 1000.0, 0.0, 0.02, &re) == PUMPLOSS_EDOMAIN && is_nan(re));
-  /* methods.md 13 row 20 (self-calculated): 10 L/min, 1/2 in, 5 m, VG 46 at 20 degC: 1.52 bar */
+  /* methods_row20 (self-calculated): 10 L/min, 1/2 in, 5 m, VG 46 at 20 degC: 1.52 bar */
   CHECK(pumploss_pipe_pressure_drop(10e-3 / 60, 870.0, 133.8e-6 * 870.0, 0.0127, 5.0, 0.0, &dp) == PUMPLOSS_OK &&
         fabs(dp - 1.52e5) < 0.006e5);
   CHECK(pumploss_pipe_pressure_drop(1e-4, 870.0, 0.04, 0.012, -1.0, 0.0, &dp) == PUMPLOSS_EDOMAIN && is_nan(dp));
@@ -282,7 +282,7 @@ static void test_line(void) {
   CHECK(pumploss_line_element_count(h, &n) == PUMPLOSS_OK && n == 7);
   CHECK(pumploss_line_set_height(h, 0.0) == PUMPLOSS_OK);
   CHECK(pumploss_line_height(h, &height) == PUMPLOSS_OK && height == 0.0);
-  /* methods.md 13 row 20 (self-calculated): 1.52 bar in the pipe at 20 degC */
+  /* methods_row20 (self-calculated): 1.52 bar in the pipe at 20 degC */
   CHECK(pumploss_line_element_pressure_drop(h, 0, 10e-3 / 60, 870.0, 133.8e-6 * 870.0, &dp, &share) ==
             PUMPLOSS_WREGIME && fabs(dp - 1.52e5) < 0.006e5 && share > 0.9 && share < 1.0);
   CHECK(pumploss_line_pressure_drop(h, 10e-3 / 60, 870.0, 0.0, &dp) == PUMPLOSS_EDOMAIN && is_nan(dp));
@@ -304,7 +304,7 @@ static void test_line(void) {
   CHECK(pumploss_standard_bore_count() > 10);
   CHECK(pumploss_standard_bore(0, &d, &kind) == PUMPLOSS_OK && d > 0.0 && (kind == 1 || kind == 2));
   CHECK(pumploss_standard_bore(-1, &d, &kind) == PUMPLOSS_EDOMAIN && is_nan(d));
-  /* methods.md 13 rows 8-10 (fluids documentation) */
+  /* fluids_fittings (fluids documentation) */
   CHECK(pumploss_crane_ft(0.1, &k) == PUMPLOSS_OK && fabs(k - 0.0162885) < 1e-7);
   CHECK(pumploss_crane_ft(-0.1, &k) == PUMPLOSS_EDOMAIN && is_nan(k));
   CHECK(pumploss_k_hooper(1500.0, 4.0, 0.0508, 1e4, &k) == PUMPLOSS_OK && fabs(k - 6.15) < 1e-12);
@@ -322,7 +322,7 @@ static void test_efficiency(void) {
   double lq[8], ldp[8], lmu[8];
   int st[3];
   int i, j;
-  /* methods.md 13 row 19 (self-calculated): eta_v 0.94704, eta_hm 0.94609, eta_t 0.89598 */
+  /* methods13_row19 (self-calculated): eta_v 0.94704, eta_hm 0.94609, eta_t 0.89598 */
   CHECK(pumploss_pump_efficiency(107e-6, 25.0, 2.5e7, 152.0 / 60000.0, 450.0, &ev, &eh, &et) == PUMPLOSS_OK &&
         fabs(ev - 0.94704) < 5e-6 && fabs(eh - 0.94609) < 5e-6 && fabs(et - 0.89598) < 5e-6);
   CHECK(pumploss_pump_efficiency(0.0, 25.0, 2.5e7, 2.5e-3, 450.0, &ev, &eh, &et) == PUMPLOSS_EDOMAIN && is_nan(ev));
@@ -349,7 +349,7 @@ static void test_efficiency(void) {
   CHECK(pumploss_pump_powers(1e-4, 25.0, 2e7, 2.4e-3, 0.0, &a, &b, &c, &d) == PUMPLOSS_EDOMAIN && is_nan(d));
   CHECK(pumploss_motor_powers(1e-4, 20.0, 2e7, 2.1e-3, 300.0, &a, &b, &c, &d) == PUMPLOSS_OK && near_rel(c, 42000.0, 1e-14));
   CHECK(pumploss_motor_powers(1e-4, 20.0, 2e7, 0.0, 300.0, &a, &b, &c, &d) == PUMPLOSS_EDOMAIN && is_nan(a));
-  /* methods.md 2.3 example (self-calculated): 250 bar, 13 K, K = 1.6 GPa, alpha 6.5e-4: factor 0.975925 */
+  /* methods_2_3_example (self-calculated): 250 bar, 13 K, K = 1.6 GPa, alpha 6.5e-4: factor 0.975925 */
   CHECK(pumploss_flow_at_port_linear(1.0, 0.0, 333.15, 2.5e7, 320.15, 6.5e-4, 1.6e9, &out) == PUMPLOSS_OK &&
         fabs(out - 0.975925) < 1e-14);
   CHECK(pumploss_flow_at_port_linear(1.0, 0.0, 333.15, 2.5e7, 320.15, 6.5e-4, 0.0, &out) == PUMPLOSS_EDOMAIN && is_nan(out));
@@ -372,7 +372,7 @@ static void test_efficiency(void) {
         PUMPLOSS_EDOMAIN && is_nan(out));
   CHECK(pumploss_leakage_series(1e12, 0.0, 2e7, &out) == PUMPLOSS_OK && near_rel(out, 2e-5, 1e-15));
   CHECK(pumploss_leakage_series(0.0, 0.0, 2e7, &out) == PUMPLOSS_EDOMAIN);
-  /* methods.md 13 row 18 (self-calculated): 10 bar, 880 kg/m3, 2030 J/(kg K) -> 0.560 K */
+  /* methods13_row18 (self-calculated): 10 bar, 880 kg/m3, 2030 J/(kg K) -> 0.560 K */
   CHECK(pumploss_throttle_temperature_rise(1e6, 880.0, 2030.0, &out) == PUMPLOSS_OK && fabs(out - 0.560) < 5e-4);
   CHECK(pumploss_throttle_temperature_rise(1e6, 880.0, -1.0, &out) == PUMPLOSS_EDOMAIN && is_nan(out));
   CHECK(pumploss_throttle_temperature_rise_isenthalpic(1e6, 880.0, 2030.0, 6.5e-4, 323.15, &out) == PUMPLOSS_OK &&
@@ -468,7 +468,7 @@ static void test_loss_model(void) {
   pumploss_model_destroy(h);
   CHECK(pumploss_model_create(PUMPLOSS_PUMP, PUMPLOSS_MODEL_WILSON, 107e-6, 870.0, 24, dp, sp, mu, q, tq, NULL) ==
         PUMPLOSS_EMISUSE);
-  /* uncertainty: methods.md 13 row 19 (self-calculated), u_rel(eta_t) = 1.472 % */
+  /* uncertainty: methods13_row19 (self-calculated), u_rel(eta_t) = 1.472 % */
   CHECK(pumploss_standard_uncertainty(1.5, 1, 1, 2.5e7, &u[0]) == PUMPLOSS_OK && near_rel(u[0], 3.75e5 / sqrt(3.0), 1e-14));
   CHECK(pumploss_standard_uncertainty(-1.5, 1, 1, 2.5e7, &u[0]) == PUMPLOSS_EDOMAIN && is_nan(u[0]));
   CHECK(pumploss_pressure_difference_uncertainty(3e4, 4e4, 0.0, &u[0]) == PUMPLOSS_OK && fabs(u[0] - 5e4) < 1e-9);

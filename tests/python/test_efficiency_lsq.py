@@ -47,7 +47,7 @@ def test_loss_model_matches_numpy_lstsq(lib, seed, schloesser):
         status, c_s, c_st, c_v, c_f, t_c, c_h = lib.raw("pumploss_model_coefficients", h)
         assert status == 0
         status, u_s, u_st, u_v, u_f, u_tc, u_h = lib.raw("pumploss_model_standard_errors", h)
-        # numpy on the same design matrices (methods.md 4.2)
+        # numpy on the same design matrices (loss-model regressors, docs/pages/theory_efficiency.md)
         af = [d * dp / mu] + ([d ** (2 / 3) * np.sqrt(2 * dp / rho)] if schloesser else [])
         at = [d * mu * w, d * dp, np.ones_like(dp)] + ([rho * w ** 2 * d ** (5 / 3)] if schloesser else [])
         for cols, y, got, ses in ((af, d * w - q, [c_s] + ([c_st] if schloesser else []),

@@ -1,5 +1,5 @@
 """Cross-checks of the efficiency and uncertainty C API against independent mpmath evaluations
-written here from the definitions (methods.md 2.1, 11): pump and motor hand cases, methods.md
+written here from the definitions (docs/pages/theory_efficiency.md: ISO 4409 / ISO 4391 efficiencies, JCGM 100:2008): pump and motor hand cases, tests/reference/SOURCES.md
 13 row 19 (self-calculated there) and its GUM uncertainty, row 18 (throttle heating)."""
 import ctypes
 import math

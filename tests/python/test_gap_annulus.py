@@ -50,7 +50,7 @@ def test_touching_limit_matches_series_near_one(lib, t):
 
 
 def test_methods_row15_self_calculated(lib):
-    # methods.md 13 row 15: exact 6.5483e-3 L/min, narrow (D_m = 2 r_i) x 2.5 at eps = 1: 1.6362e-2
+    # selfcalc_methods13 (tests/reference/SOURCES.md): exact 6.5483e-3 L/min, narrow (D_m = 2 r_i) x 2.5 at eps = 1: 1.6362e-2
     q = lib.gap_annulus_flow(250e5, 0.040, 0.02002, 0.02, 0.03, 0.0) * 60000
     assert q == pytest.approx(6.5483e-3, rel=1e-4)
     ref = float(textbook_q(250e5, 0.040, 0.02002, 0.02, 0.03, 0.0))

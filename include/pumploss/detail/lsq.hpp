@@ -17,13 +17,17 @@ inline constexpr std::size_t lsq_max_cols = 8;
 
 /// Straight line y = intercept + slope x with the standard uncertainties of both.
 template <class T>
-struct line_fit_result {
+struct [[nodiscard]] line_fit_result {
   T slope, intercept;
   T u_slope, u_intercept;  // standard errors (residual-based)
   T cov;                   // covariance of slope and intercept
   T s_r;                   // residual standard deviation
   std::size_t n;
   status st;
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 // Least-squares straight line through n points given by accessors x(i), y(i).
@@ -70,7 +74,7 @@ inline line_fit_result<T> line_fit(std::size_t n, X&& x, Y&& y) {
 
 /// Result of a small dense least-squares solve.
 template <class T>
-struct lsq_result {
+struct [[nodiscard]] lsq_result {
   T x[lsq_max_cols];                  // coefficients
   T se[lsq_max_cols];                 // standard errors sigma sqrt(diag((A^T A)^-1))
   T cov[lsq_max_cols][lsq_max_cols];  // covariance sigma^2 (A^T A)^-1
@@ -78,6 +82,10 @@ struct lsq_result {
   T cond;                             // 1-norm condition number of R of the column-scaled matrix
   std::size_t m, p;
   status st;
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 // Minimise ||A x - b||_2 for an m x p column-major A (leading dimension m), m > p, p <= 8.
@@ -189,12 +197,16 @@ inline lsq_result<T> householder_lsq(T* a, std::size_t m, std::size_t p, T* b, T
 
 /// Result of a non-negative least-squares solve.
 template <class T>
-struct nnls_result {
+struct [[nodiscard]] nnls_result {
   T x[lsq_max_cols];
   bool active[lsq_max_cols];  // true: x_j > 0 (passive set of Lawson-Hanson), false: clamped at 0
   T rss;
   int iterations;
   status st;
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 // Non-negative least squares min ||A x - b|| subject to x >= 0 (Lawson & Hanson, Solving Least

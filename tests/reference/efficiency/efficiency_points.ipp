@@ -1,7 +1,7 @@
 // Efficiency check rows. Columns: source key (tests/reference/SOURCES.md), machine (0 pump,
 // 1 motor), V_i m3/rev, n rev/s, dp Pa, q m3/s, torque N m, expected eta_v, eta_hm, eta_t,
 // absolute tolerance.
-// methods13_row19: methods.md section 13 row 19 (self-calculated there, printed to 5 decimals,
+// methods13_row19 (tests/reference/SOURCES.md; self-calculated, printed to 5 decimals,
 //   tolerance half a unit in the last digit): 107 cm3, 1500 rpm, 152 L/min, 250 bar, 450 N m.
 // hand_pump / hand_motor: arithmetic written out in tests/efficiency_test.cpp, confirmed with
 //   mpmath at 30 digits (tests/python/test_efficiency_reference.py repeats it).

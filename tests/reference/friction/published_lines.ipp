@@ -7,7 +7,7 @@
 // cengel_cimbala_turbulent (from memory): water at 15 degC (rho 999.1, mu 1.138e-3), 5 cm
 //   stainless steel pipe (epsilon 0.002 mm), 6 L/s, 60 m: dp = 96,540 Pa (f = 0.0172 read
 //   from Colebrook). Tolerance 0.5 % (f printed to 3 digits).
-// methods_row20 (self-calculated, methods.md section 13 row 20): VG 46 oil, 10 L/min, 1/2 in
+// methods_row20 (self-calculated, tests/reference/SOURCES.md): VG 46 oil, 10 L/min, 1/2 in
 //   bore, 5 m, rho 870, nu 133.8 mm2/s (20 degC) -> 1.52 bar; 577.3 mm2/s (0 degC) -> 6.56 bar.
 {"cengel_cimbala_laminar", 3.0 * 0.3048 * 3.14159265358979323846 / 4 * (0.01 * 0.3048) * (0.01 * 0.3048),
  62.42 * 16.018463, 1.038e-3 * 1.4881639, 0.01 * 0.3048, 30 * 0.3048, 0.0, 929 * 47.880259, 0.0015},

@@ -1,6 +1,6 @@
 // Check rows of the gap and orifice models. Columns: source key (tests/reference/SOURCES.md),
 // model, six inputs (SI, unused = 0), expected value (SI), relative tolerance.
-// selfcalc_methods13: rows 15-17 and 22 of the design's check-value table, recomputed here with
+// selfcalc_methods13: check values computed here with
 //   mpmath at 30 digits from the formulas (self-consistency values, not published).
 // Models: "annulus" (dp, mu, bore, piston, L, eps) -> q; "narrow" same -> q; "radial" (dp, mu,
 // ri, ro, h, -) -> q; "padforce" (p_r, 0, ri, ro, 2 pi, -) land force + p_r pi ri^2 -> W;
@@ -12,7 +12,7 @@
 {"selfcalc_methods13", "radial", {250e5, 0.040, 0.02, 0.03, 15e-6, 0.0}, 0.163436923946071451 / 60000.0, 1e-13},
 {"selfcalc_methods13", "padforce", {250e5, 0.0, 0.02, 0.03, 6.283185307179586477, 0.0}, 48425.7552432804301, 1e-13},
 {"selfcalc_methods13", "orifice", {100e5, 870.0, 1e-3, 0.61, 0.0, 0.0}, 4.35839249726714846 / 60000.0, 1e-14},
-// methods13_rounded: the same rows as printed (5 significant digits) in the design's table.
+// methods13_rounded: the same values rounded to 5 significant digits.
 {"methods13_rounded", "annulus", {250e5, 0.040, 0.02002, 0.02, 0.03, 0.0}, 6.5483e-3 / 60000.0, 1e-4},
 {"methods13_rounded", "radial", {250e5, 0.040, 0.02, 0.03, 15e-6, 0.0}, 0.16344 / 60000.0, 1e-4},
 {"methods13_rounded", "padforce", {250e5, 0.0, 0.02, 0.03, 6.283185307179586477, 0.0}, 48430.0, 2e-4},
