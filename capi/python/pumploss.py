@@ -37,6 +37,7 @@ _SIGNATURES = {
     "pumploss_iso_vg": ([ctypes.c_int, _PD, _PD, _PD], 3),
     "pumploss_typical_mineral_oil": ([_PD] * 6, 6),
     # pumploss:py-signatures-gap
+    "pumploss_k_fitting": ([ctypes.c_int, ctypes.c_int, _D, _D, _PD], 1),
     # pumploss:py-signatures-friction
     "pumploss_standard_uncertainty": ([_D, ctypes.c_int, ctypes.c_int, _D, _PD], 1),
     # pumploss:py-signatures-efficiency
@@ -96,10 +97,13 @@ _SCALAR = {
     "pumploss_pipe_reynolds": (4, 1),
     "pumploss_pipe_pressure_drop": (6, 1),
     "pumploss_pipe_flow": (7, 4),
-    "pumploss_crane_ft": (1, 1),
+    "pumploss_friction_factor_ft": (1, 1),
     "pumploss_k_hooper": (4, 1),
     "pumploss_k_darby": (5, 1),
     "pumploss_equivalent_length": (3, 1),
+    # drain line (h5)
+    "pumploss_k_exit_kinetic": (1, 1),
+    "pumploss_d341_temperature": (3, 1),
     # pumploss:py-scalar-friction
     "pumploss_pump_efficiency": (5, 3),
     "pumploss_motor_efficiency": (5, 3),

@@ -12,7 +12,9 @@
 #include "orifice.hpp"
 // pumploss:umbrella-gap
 #include "friction.hpp"
+#include "fittings.hpp"
 #include "line.hpp"
+#include "drain_check.hpp"
 // pumploss:umbrella-friction
 #include "dual.hpp"
 #include "efficiency.hpp"

@@ -27,10 +27,10 @@ def test_darby_table_matches_fluids(lib, name):
 
 
 @pytest.mark.parametrize("d", [0.006, 0.0127, 0.025, 0.1, 0.5])
-def test_crane_ft_and_valves_match_fluids(lib, d):
+def test_friction_factor_ft_and_valves_match_fluids(lib, d):
     # ft_Crane takes one Clamond iteration for D >= 10 mm (documented 5-8 digits).
     tol = 5e-6 if d >= 1e-2 else 1e-12
-    f_t = lib.crane_ft(d)
+    f_t = lib.friction_factor_ft(d)
     assert f_t == pytest.approx(ft.ft_Crane(d), rel=tol)
     assert 8 * f_t == pytest.approx(ft.K_gate_valve_Crane(d, d, 0), rel=tol)
     assert 3 * f_t == pytest.approx(ft.K_ball_valve_Crane(d, d, 0), rel=tol)
