@@ -273,7 +273,7 @@ TEST(LineCapi, HandleLifecycleAndCalls) {
   EXPECT_EQ(pumploss_line_add_pipe(h, 0.0127, -5.0, 0.0), PUMPLOSS_EDOMAIN);
   EXPECT_NE(std::string(pumploss_line_last_message(h)).find("add_pipe"), std::string::npos);
   EXPECT_EQ(pumploss_line_add_pipe(h, 0.0127, 5.0, 0.0), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_line_add_fitting_k(h, 0.0127, 1.0), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_add_exit(h, 0.0127), PUMPLOSS_OK);  // a constant K would be reported in laminar oil
   int n = 0;
   EXPECT_EQ(pumploss_line_element_count(h, &n), PUMPLOSS_OK);
   EXPECT_EQ(n, 2);
@@ -453,7 +453,7 @@ TEST(FluidD341Temperature, InverseOfTheForwardLineTo50Digits) {
   EXPECT_NEAR(t80.value, 353.15, 0.05);
   // Round trip through the forward function, and the 50-digit evaluation.
   const auto line50 = pumploss::d341_fit(mp50("313.15"), mp50("0.000032"), mp50("373.15"), mp50("0.0000054")).value;
-  for (double nu : {2.0e-6, 5.4e-6, 46e-6, 400e-6, 1000e-6, 1e-2}) {
+  for (double nu : {2.5e-6, 5.4e-6, 46e-6, 400e-6, 1000e-6, 1e-2}) {  // away from the 2 mm2/s branch
     const auto t = pumploss::d341_temperature(line, nu);
     ASSERT_EQ(t.st, status::ok) << nu;
     EXPECT_LE(std::fabs(pumploss::d341_viscosity(line, t.value).value / nu - 1), 1e-12) << nu;
@@ -624,7 +624,7 @@ TEST(DrainSizing, DominantElementAndFixedElementsThatNoBoreCanBeat) {
   EXPECT_EQ(z.dominant_element, static_cast<int>(std::max_element(parts.begin(), parts.end()) - parts.begin()));
   EXPECT_NEAR(z.dominant_dp_pa, parts[static_cast<std::size_t>(z.dominant_element)], 1e-9 * z.dominant_dp_pa);
   // a filter in the line that alone exceeds 1 bar cold: no bore can pass, and it is named
-  const double qf[1] = {8.0 / 60000}, pf[1] = {0.6e5};
+  const double qf[1] = {8.0 / 60000}, pf[1] = {1.2e5};
   l.elements.push_back(pumploss::line_component_points(1, qf, pf, 46e-6, 1.0).value);  // laminar media
   const auto n = pumploss::size_drain_line(l, o, f, lim, 273.15, 343.15, 8, 1.5, 3);
   EXPECT_EQ(n.st, status::out_of_validity);
@@ -682,7 +682,7 @@ TEST(DrainStart, LowestStartTemperatureFromTheLineAndTheViscosityLimit) {
   EXPECT_EQ(std::string(tiny), "FAIL: c");  // cut to fit, terminated
   double d = 0, fixed = 0;
   int dom = 0, exceeds = 1;
-  const int zc = pumploss_line_size_drain_flow(h, 0.5 / 60000, 7.5 / 60000, 323.15, 25e-6, 0.1, 253.15,
+  const int zc = pumploss_line_size_drain_flow(h, 0.5 / 60000, 7.5 / 60000, 323.15, 25e-6, 0.1, 273.15,
                                                                343.15, 10, 0.0, 1e5, 2e5, 1.5, 3, &d, &fixed, &dom,
                                                                &exceeds);
   EXPECT_TRUE(zc == PUMPLOSS_OK || zc >= 100) << zc;

@@ -1226,7 +1226,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
  *  @param nu_max_start_m2_s the maker's largest start viscosity, m^2/s (0: none)
  *  @param t_start_k receives the lowest start temperature, K
  *  @param t_line_k receives the lowest temperature from which the line passes, K
- *  @param t_viscosity_k receives the temperature of the start viscosity (t_cold without one), K
+ *  @param t_viscosity_k receives the temperature of the start viscosity (may lie below t_cold; t_cold
+ *         without one), K
  *  @return PUMPLOSS_OK or a report; PUMPLOSS_EVALIDITY when the line fails at t_max.
  *  @sa pumploss::drain_start_temperature */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_start(

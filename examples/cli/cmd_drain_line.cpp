@@ -38,6 +38,17 @@ const char* const drain_caution[] = {
     "shaft seal. Fit meters only with the machine stopped and the pressure relieved. A passing check is not a",
     "clearance to run: the maker's limits and instructions govern."};
 
+/// A short status for the table columns (the notes explain).
+std::string short_status(status st) {
+  switch (st) {
+    case status::ok: return "ok";
+    case status::regime: return "outside a method's range";
+    case status::transition: return "laminar-turbulent transition";
+    case status::extrapolated: return "extrapolated";
+    default: return status_text(st);
+  }
+}
+
 std::string caution_text() {
   std::string s;
   for (const char* l : drain_caution) s += (s.empty() ? "" : " ") + std::string(l);
@@ -145,7 +156,9 @@ std::string verdict_text(const pumploss::drain_summary<double>& s, double t0, do
                      show_quantity(s.worst_margin_peak_pa, D::pressure, du, 3),
                      show_quantity(s.worst_peak_t_k, D::temperature, du, 3));
   if (s.ranges_truncated) v += " (and further ranges)";
-  return v + fmt::format("; passes elsewhere from {} to {}", show_quantity(t0, D::temperature, du, 3),
+  if (s.pass) v += "; the continuous limit holds at every temperature";
+  if (s.pass_peak && s.peak_checked) v += "; the peak limit holds at every temperature";
+  return v + fmt::format(" (checked from {} to {})", show_quantity(t0, D::temperature, du, 3),
                          show_quantity(t1, D::temperature, du, 3));
 }
 
@@ -254,7 +267,7 @@ int run_drain_line(const drain_options& o) {
       row.push_back(lim.p_allowed_peak_pa);
       row.push_back(std::string(p.pass_peak ? "pass" : "FAIL"));
     }
-    row.push_back(status_text(p.st));
+    row.push_back(short_status(p.st));
     t.rows.push_back(std::move(row));
     described.x.push_back(du.show(p.t_k, D::temperature));
     described.y.push_back(du.show(p.case_pressure_pa, D::pressure));
@@ -280,7 +293,7 @@ int run_drain_line(const drain_options& o) {
              {"status", cell_kind::text, D::pressure, 0}};
   std::string constant_k_low;
   for (std::size_t k = 0; k < l.elements.size(); ++k) {
-    te.rows.push_back({names[k], edp[k], drop.dp_pa > 0 ? edp[k] / drop.dp_pa : 0.0, status_text(est[k])});
+    te.rows.push_back({names[k], edp[k], drop.dp_pa > 0 ? edp[k] / drop.dp_pa : 0.0, short_status(est[k])});
     if (est[k] == status::regime && l.elements[k].kind == pumploss::line_element_kind::fitting_k)
       constant_k_low += (constant_k_low.empty() ? "" : ", ") + names[k];
   }

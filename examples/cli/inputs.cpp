@@ -321,7 +321,7 @@ drain_line_spec read_drain_line(const std::string& path) {
       throw s.error_here("give a fitting one of 'type' (a named kind, or \"exit\"), 'k' or 'two_k' = [K1, K_inf]");
     if (s.has("type")) {
       std::vector<const char*> kinds;
-      for (const auto& c : pumploss::fitting_table) kinds.push_back(c.name);
+      for (const auto& fk : pumploss::fitting_table) kinds.push_back(fk.name);
       kinds.push_back("exit");
       const auto text = s.text("type");
       if (std::find(kinds.begin(), kinds.end(), text) == kinds.end()) {

@@ -434,7 +434,7 @@ struct drain_start {
   T t_line_k;       ///< lowest temperature from which the line passes (continuous and peak) at every
                     ///< temperature up to t_max, K
   T t_viscosity_k;  ///< temperature at which the oil reaches the maker's largest start viscosity, K
-                    ///< (t_cold when no viscosity limit is given)
+                    ///< (may lie below t_cold; t_cold when no viscosity limit is given)
   pumploss::status st;  ///< status; status::out_of_validity when the line fails at t_max itself
 };
 
@@ -471,7 +471,7 @@ inline drain_start<T> drain_start_temperature(const line<T>& l, const oil<T>& o,
   if (nu_max_start_m2_s > T(0)) {
     const auto tv = d341_temperature(o.viscosity, nu_max_start_m2_s);
     if (is_error(tv.st)) return {nan, nan, nan, tv.st};
-    t_visc = tv.value > t_cold_k ? tv.value : t_cold_k;
+    t_visc = tv.value;
   }
   T t_line = t_cold_k;
   if (s.n_fail_any > 0) {

@@ -154,7 +154,7 @@ enum class fitting_type : int {
   elbow_90_long_radius = 2,   ///< 90 degree elbow, long radius (r/D = 1.5)
   bend_90_r2 = 3,             ///< 90 degree tube bend, r/D = 2 (Darby only)
   bend_90_r4 = 4,             ///< 90 degree tube bend, r/D = 4 (Darby only)
-  elbow_45_threaded = 5,      ///< 45 degree elbow, threaded, standard (r/D = 1)
+  elbow_45_threaded = 5,      ///< 45 degree elbow, threaded, standard (r/D = 1); Hooper: standard, all types
   elbow_45_long_radius = 6,   ///< 45 degree elbow, long radius (r/D = 1.5)
   bend_180_r15 = 7,           ///< 180 degree return bend, r/D = 1.5
   tee_run_threaded = 8,       ///< tee, flow straight through the run, threaded
@@ -194,7 +194,7 @@ inline constexpr fitting_constants fitting_table[fitting_type_count] = {
     {"elbow_90_long_radius", 800.0, 0.2, 800.0, 0.071, 4.2},
     {"bend_90_r2", -1.0, -1.0, 800.0, 0.056, 3.9},
     {"bend_90_r4", -1.0, -1.0, 800.0, 0.066, 3.9},
-    {"elbow_45_threaded", 500.0, 0.7, 500.0, 0.071, 4.2},
+    {"elbow_45_threaded", 500.0, 0.2, 500.0, 0.071, 4.2},
     {"elbow_45_long_radius", 500.0, 0.15, 500.0, 0.052, 4.0},
     {"bend_180_r15", 1000.0, 0.3, 1000.0, 0.1, 4.0},
     {"tee_run_threaded", 200.0, 0.1, 200.0, 0.091, 4.0},

@@ -317,7 +317,11 @@ TEST(CliDemo, PumpFileGeometryGivesItsDisplacement) {
   const auto d = plcli::read_drain_line(kDemo + "/drain_line.toml");
   EXPECT_EQ(d.segments.size(), 2u);
   EXPECT_EQ(d.fittings[0].count, 3);
-  EXPECT_NEAR(d.fittings[0].inside_diameter_m, 0.013, 1e-12);  // from the segment before it
+  EXPECT_EQ(d.fittings[0].after_segment, 1u);                   // written under the steel tube
+  EXPECT_EQ(d.fittings[0].inside_diameter_m, 0.0);               // takes the bore of what it follows
+  EXPECT_EQ(d.fittings[0].type, "bend_90_r2");
+  EXPECT_NEAR(d.flow_laminar_m3_s, 7.5 / 60000, 1e-15);
+  EXPECT_NEAR(d.peak_volume_m3, 25e-6, 1e-18);
   EXPECT_NEAR(d.components[0].curve[0].second, 5000.0, 1e-9);   // the origin point is implied
 }
 
@@ -419,7 +423,7 @@ TEST(CliDrainLine, DemoMatchesLibrary) {
   const double qc[2] = {10.0 / 60000, 20.0 / 60000}, pc[2] = {0.05e5, 0.12e5};
   l.elements.push_back(pumploss::line_component_points(2, qc, pc, 32e-6, 1.0).value);
   const auto oil = demo_oil();
-  const auto f = pumploss::with_destroke_peak(pumploss::drain_flow_parts(0.5 / 60000, 7.5 / 60000, 323.15), 25e-6, 0.1);
+  const auto f = pumploss::with_destroke_peak(pumploss::drain_flow_parts(0.5 / 60000, 7.5 / 60000, 323.15), 25e-6, 0.25);
   const pumploss::drain_limits<double> lim{0.0, 1e5, 2e5};
   pumploss::drain_point<double> pts[8];
   const auto sum = pumploss::drain_check(l, oil, f, lim, 273.15, 343.15, 8, pts);
@@ -437,10 +441,20 @@ TEST(CliDrainLine, DemoMatchesLibrary) {
   EXPECT_EQ(r.out.find("FAIL from 0.00 degC to 70.0 degC"), std::string::npos) << r.out;
   const auto z = pumploss::size_drain_line(l, oil, f, lim, 273.15, 343.15, 8, 1.5, 3);
   ASSERT_GE(z.bore_index, 0);
-  EXPECT_NE(r.out.find(std::string("Smallest standard bore:  ") + pumploss::standard_bores[z.bore_index].name),
-            std::string::npos)
+  const auto at = r.out.find("Smallest standard bore:");
+  ASSERT_NE(at, std::string::npos) << r.out;
+  EXPECT_EQ(r.out.find(std::string(pumploss::standard_bores[z.bore_index].name) + " (", at),
+            r.out.find_first_not_of(' ', at + std::string("Smallest standard bore:").size()))
       << r.out;
-  EXPECT_NE(r.out.find("Lowest start temperature:"), std::string::npos) << r.out;
+  // the lowest start temperature: where the destroke peak stops failing (library figure)
+  const auto st = pumploss::drain_start_temperature(l, oil, f, lim, 273.15, 343.15, 8, 1000e-6);
+  char start_text[32];
+  std::snprintf(start_text, sizeof start_text, "%.1f degC (", st.t_start_k - 273.15);
+  const auto at_start = r.out.find("Lowest start temperature:");
+  ASSERT_NE(at_start, std::string::npos) << r.out;
+  EXPECT_EQ(r.out.find(start_text, at_start),
+            r.out.find_first_not_of(' ', at_start + std::string("Lowest start temperature:").size()))
+      << r.out;
   EXPECT_NE(r.out.find("never block, cap or valve a case drain"), std::string::npos) << r.out;
   EXPECT_NE(r.out.find("constant K is a turbulent value"), std::string::npos) << r.out;  // the bulkhead
   EXPECT_TRUE(has_cautions(r.out));
@@ -674,7 +688,8 @@ TEST(CliMalformed, EveryCommandNamesTheLineAndWritesNothing) {
       {"budget", "pump_p31.toml", "pistons = 9", "pistons = 99", ":11:11:", "between 3 and 15"},
       {"drain-line", "drain_line.toml", "length = \"4.5 m\"", "length = \"4.5 furlong\"", ":", "unknown unit 'furlong'"},
       {"drain-line", "drain_line.toml", "k = 0.5", "k = -0.5", ":", "must not be negative"},
-      {"drain-line", "drain_line.toml", "[[segment.fitting]]                 # fittings follow", "[[fitting]]", ":",
+      {"drain-line", "drain_line.toml",
+       "[[segment.fitting]]                 # fittings follow the segment they are written under", "[[fitting]]", ":",
        "say which segment this fitting follows"},
       {"drain-line", "drain_line.toml", "type = \"bend_90_r2\"", "type = \"bend_90_r3\"", ":", "unknown fitting kind"},
       {"test-stand", "test_stand.toml", "reading_percent = 0.3", "reading_percent = 0,3", ":", "expected"},

@@ -72,7 +72,7 @@ def main(out):
         ("Elbow, 90°, Long-radius (R/D = 1.5), All types", "Elbow, 90°, threaded, long radius, (r/D = 1.5)"),
         (None, "Elbow, 90°, (r/D = 2)"),
         (None, "Elbow, 90°, (r/D = 4)"),
-        ("Elbow, 45°, Standard (R/D = 1), Screwed", "Elbow, 45°, threaded standard, (r/D = 1)"),
+        ("Elbow, 45°, Standard (R/D = 1), All types", "Elbow, 45°, threaded standard, (r/D = 1)"),
         ("Elbow, 45°, Long-radius (R/D 1.5), All types", "Elbow, 45°, long radius, (r/D = 1.5)"),
         ("Elbow, 180°, Long-radius (R/D = 1.5), All types", "Elbow, 180°, all, (r/D = 1.5)"),
         ("Tee, Run, Screwed", "Tee, Run-through, threaded, (r/D = 1)"),
