@@ -48,7 +48,8 @@ def test_entrance_exit_line_through_handle(lib):
     assert create(ctypes.byref(handle)) == 0
     h = handle.value
     try:
-        d, q, rho, mu = 0.02, 1e-3, 870.0, 0.01
+        # Re = 27700: constant K values hold (below Re = 1e4 they are reported, status 100)
+        d, q, rho, mu = 0.02, 1e-3, 870.0, 0.002
         assert lib.raw("pumploss_line_add_fitting_k", h, d, ft.entrance_sharp())[0] == 0
         assert lib.raw("pumploss_line_add_fitting_k", h, d, ft.exit_normal())[0] == 0
         st, dp = lib.raw("pumploss_line_pressure_drop", h, q, rho, mu)
