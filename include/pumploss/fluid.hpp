@@ -168,7 +168,7 @@ inline result<T> d341_viscosity(const d341_line<T>& line, T t_k) {
 ///         overflows.
 /// @par Accuracy
 /// Within 1e-14 relative of the 50-digit evaluation; d341_viscosity() at the result returns nu
-/// within 1e-12 relative (viscosities of 2 mm^2/s and above; tests/fluid_test.cpp).
+/// within 1e-12 relative (viscosities from 2.5 mm^2/s; tests/line_test.cpp, FluidD341Temperature).
 /// @par Source
 /// ASTM D341-20, Standard Practice for Viscosity-Temperature Equations and Charts for Liquid
 /// Petroleum or Hydrocarbon Products, Eq. (1) solved for T.
