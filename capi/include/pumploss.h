@@ -1208,6 +1208,35 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
     double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
     double p_allowed_pa, double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
     double case_pressure_peak_pa[], int pass[], char *verdict, size_t verdict_capacity);
+/** Case drain check as pumploss_line_drain_check_flow(), with the drain flow given at temperatures
+ *  (e.g. from a normalisation model), interpolated linearly, the end values held outside (then
+ *  PUMPLOSS_WEXTRAPOLATED).
+ *  @param line the drain line (oil set)
+ *  @param n_points number of table points, 1 to 16 (a count of the table, not of the outputs)
+ *  @param flow_t_k n_points temperatures, K, increasing
+ *  @param flow_q_m3_s n_points drain flows, m^3/s, >= 0
+ *  @param peak_volume_m3 control volume dumped into the case on destroke, m^3 (0: no peak)
+ *  @param peak_time_s time over which it is dumped, s
+ *  @param t_cold_k cold-start temperature, K
+ *  @param t_max_k maximum temperature, K, >= t_cold_k
+ *  @param n_temps number of temperatures, 1 to 1000 (the length of the output arrays)
+ *  @param p_tank_pa tank pressure at the outlet, Pa
+ *  @param p_allowed_pa allowed continuous case pressure, Pa
+ *  @param p_allowed_peak_pa allowed peak case pressure, Pa (used with a peak)
+ *  @param t_k receives n_temps temperatures, K
+ *  @param q_m3_s receives n_temps continuous drain flows, m^3/s
+ *  @param case_pressure_pa receives n_temps continuous case pressures, Pa
+ *  @param case_pressure_peak_pa receives n_temps peak case pressures, Pa
+ *  @param pass receives n_temps flags: bit 0 continuous passes, bit 1 peak passes
+ *  @param verdict receives the verdict naming the failing temperature ranges (degC), or "" on error
+ *  @param verdict_capacity size of verdict in bytes
+ *  @return as pumploss_line_drain_check_flow(); PUMPLOSS_EDOMAIN for a bad table.
+ *  @sa pumploss::drain_flow_table */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_table(
+    const pumploss_line *line, int n_points, const double flow_t_k[], const double flow_q_m3_s[],
+    double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
+    double p_allowed_pa, double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
+    double case_pressure_peak_pa[], int pass[], char *verdict, size_t verdict_capacity);
 /** Lowest start temperature: the line passes the continuous and peak limits from there up to
  *  t_max, and the oil is no thicker than the maker's largest start viscosity (inverse ASTM D341).
  *  Drain flow and limits as pumploss_line_drain_check_flow().

@@ -388,11 +388,17 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_exit(pumploss_line* h, double d
   return add_element(h, pumploss::line_exit(diameter_m), "add_exit");
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
-    const pumploss_line* h, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k, double peak_volume_m3,
-    double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
-    double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
-    double case_pressure_peak_pa[], int pass[], char* verdict, size_t verdict_capacity) {
+}  // extern "C"
+
+namespace {
+
+/// The drain check into caller arrays and a caller verdict buffer (shared by the parts and the
+/// table form); make_flow() gives the drain flow model (or its error).
+template <class MakeFlow>
+int drain_check_into(const pumploss_line* h, MakeFlow&& make_flow, double t_cold_k, double t_max_k, size_t n_temps,
+                     double p_tank_pa, double p_allowed_pa, double p_allowed_peak_pa, double t_k[], double q_m3_s[],
+                     double case_pressure_pa[], double case_pressure_peak_pa[], int pass[], char* verdict,
+                     size_t verdict_capacity) {
   if (verdict != nullptr && verdict_capacity > 0) verdict[0] = '\0';
   double* const arrays[] = {t_k, q_m3_s, case_pressure_pa, case_pressure_peak_pa};
   const size_t n_fill = n_temps <= 1000 ? n_temps : 0;
@@ -407,15 +413,16 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
   const int code = call(outs, [&] {
     if (!h->has_oil) return status::misuse;
     if (n_temps < 1 || n_temps > 1000) return status::domain;
-    const auto f = flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
+    const pumploss::result<pumploss::drain_flow<double>> f = make_flow();
+    if (is_error(f.st)) return f.st;
     const pumploss::drain_limits<double> lim{p_tank_pa, p_allowed_pa, p_allowed_peak_pa};
     const int n = static_cast<int>(n_temps);
-    const auto s = pumploss::drain_check(h->line, h->oil, f, lim, t_cold_k, t_max_k, n,
+    const auto s = pumploss::drain_check(h->line, h->oil, f.value, lim, t_cold_k, t_max_k, n,
                                          static_cast<pumploss::drain_point<double>*>(nullptr));
     if (is_error(s.st)) return s.st;
     for (int i = 0; i < n; ++i) {  // the grid of drain_check(), evaluated point by point (no allocation)
       const double t = n == 1 ? t_cold_k : t_cold_k + (t_max_k - t_cold_k) * i / (n - 1);
-      const auto p = pumploss::detail::drain_eval(h->line, h->oil, f, lim, t, 0.0);
+      const auto p = pumploss::detail::drain_eval(h->line, h->oil, f.value, lim, t, 0.0);
       if (is_error(p.st)) return p.st;
       const auto k = static_cast<size_t>(i);
       t_k[k] = t;
@@ -434,6 +441,39 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
     if (verdict != nullptr && verdict_capacity > 0) verdict[0] = '\0';
   }
   return code;
+}
+
+}  // namespace
+
+extern "C" {
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
+    const pumploss_line* h, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k, double peak_volume_m3,
+    double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
+    double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
+    double case_pressure_peak_pa[], int pass[], char* verdict, size_t verdict_capacity) {
+  auto make_flow = [&] {
+    return pumploss::result<pumploss::drain_flow<double>>{
+        flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s), status::ok};
+  };
+  return drain_check_into(h, make_flow, t_cold_k, t_max_k, n_temps, p_tank_pa, p_allowed_pa, p_allowed_peak_pa, t_k,
+                          q_m3_s, case_pressure_pa, case_pressure_peak_pa, pass, verdict, verdict_capacity);
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_table(
+    const pumploss_line* h, int n_points, const double flow_t_k[], const double flow_q_m3_s[], double peak_volume_m3,
+    double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
+    double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
+    double case_pressure_peak_pa[], int pass[], char* verdict, size_t verdict_capacity) {
+  auto make_flow = [&] {
+    if (flow_t_k == nullptr || flow_q_m3_s == nullptr)
+      return pumploss::result<pumploss::drain_flow<double>>{{}, status::misuse};
+    auto f = pumploss::drain_flow_table(n_points, flow_t_k, flow_q_m3_s);
+    f.value = pumploss::with_destroke_peak(f.value, peak_volume_m3, peak_time_s);
+    return f;
+  };
+  return drain_check_into(h, make_flow, t_cold_k, t_max_k, n_temps, p_tank_pa, p_allowed_pa, p_allowed_peak_pa, t_k,
+                          q_m3_s, case_pressure_pa, case_pressure_peak_pa, pass, verdict, verdict_capacity);
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_start(

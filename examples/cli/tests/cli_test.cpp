@@ -692,6 +692,10 @@ TEST(CliMalformed, EveryCommandNamesTheLineAndWritesNothing) {
        "[[segment.fitting]]                 # fittings follow the segment they are written under", "[[fitting]]", ":",
        "say which segment this fitting follows"},
       {"drain-line", "drain_line.toml", "type = \"bend_90_r2\"", "type = \"bend_90_r3\"", ":", "unknown fitting kind"},
+      {"drain-line", "drain_line.toml", "max_peak_case_pressure = \"2.0 bar\"", "", ":",
+       "needs the maker's 'max_peak_case_pressure'"},
+      {"drain-line", "drain_line.toml", "reference_temperature = \"50 degC\"", "", ":",
+       "needs 'reference_temperature'"},
       {"test-stand", "test_stand.toml", "reading_percent = 0.3", "reading_percent = 0,3", ":", "expected"},
   };
   for (const auto& k : cases) {
