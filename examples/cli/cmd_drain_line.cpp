@@ -151,7 +151,7 @@ std::string verdict_text(const pumploss::drain_summary<double>& s, double t0, do
                      show_quantity(s.worst_margin_pa, D::pressure, du, 3),
                      show_quantity(s.worst_t_k, D::temperature, du, 3));
   if (!s.pass_peak)
-    v += fmt::format("{} at {} (peak limit, on destroke; smallest margin {} at {})", s.pass ? "" : ";",
+    v += fmt::format("{} on destroke at {} (peak limit; smallest margin {} at {})", s.pass ? "" : ";",
                      ranges_text(s.n_fail_peak, s.fail_peak, du),
                      show_quantity(s.worst_margin_peak_pa, D::pressure, du, 3),
                      show_quantity(s.worst_peak_t_k, D::temperature, du, 3));
@@ -330,7 +330,8 @@ int run_drain_line(const drain_options& o) {
       r.facts.emplace_back(
           "Smallest standard bore",
           fmt::format("none can pass: the elements the bore does not change alone cause {} at {} (above the limit); "
-                      "the largest of them is {}. Change that element or raise the line's outlet side first",
+                      "the largest of them is {}: resize or replace it first (as its maker allows); no pipe or fitting "
+                      "bore can make up for it",
                       show_quantity(z.fixed_dp_pa, D::pressure, du, 3), show_quantity(z.fixed_t_k, D::temperature, du, 3),
                       element_name(z.fixed_dominant_element)));
     } else if (z.st == status::out_of_validity) {

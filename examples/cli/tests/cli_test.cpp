@@ -437,7 +437,9 @@ TEST(CliDrainLine, DemoMatchesLibrary) {
     EXPECT_EQ(t.text(i, "peak verdict"), pts[i].pass_peak ? "pass" : "FAIL") << i;
   }
   // the verdict names the failing range, not the whole span
-  EXPECT_NE(r.out.find(sum.pass && sum.pass_peak ? "PASS" : "FAIL at"), std::string::npos) << r.out;
+  EXPECT_NE(r.out.find(sum.pass && sum.pass_peak ? "PASS" : (sum.pass ? "FAIL on destroke at" : "FAIL at")),
+            std::string::npos)
+      << r.out;
   EXPECT_EQ(r.out.find("FAIL from 0.00 degC to 70.0 degC"), std::string::npos) << r.out;
   const auto z = pumploss::size_drain_line(l, oil, f, lim, 273.15, 343.15, 8, 1.5, 3);
   ASSERT_GE(z.bore_index, 0);
