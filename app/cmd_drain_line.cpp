@@ -1,7 +1,9 @@
-// pumploss drain-line: the case pressure a drain line causes from cold start to hot, against the
-// maker's allowed case pressure (pass or fail with margin per temperature), the share of each
-// element, and with --size the smallest standard bore that passes; SVG of case pressure over
-// temperature with the allowed value drawn.
+// pumploss drain-line: the case pressure a drain line causes from cold start to hot, with the
+// drain flow over temperature and an optional destroke peak, against the maker's continuous and
+// peak case pressure limits (the failing temperature ranges named), the share of each element,
+// the lowest start temperature, and with --size the smallest standard bore that passes (or why
+// none can); SVG of case pressure over temperature with the limits drawn and the case-drain
+// caution at its foot.
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
 
@@ -11,6 +13,7 @@
 #include "commands.hpp"
 #include "common.hpp"
 #include "inputs.hpp"
+#include "pumploss/drain_check.hpp"
 #include "pumploss/line.hpp"
 #include "pumploss/version.hpp"
 #include "svg.hpp"
@@ -28,56 +31,70 @@ struct drain_options {
   output_options out;
 };
 
-// Case pressure at every temperature of the range for a line (drain flow constant, or scaled as
-// 1/viscosity from the reference temperature).
-std::vector<pumploss::drain_point<double>> check_line(const pumploss::line<double>& l, const drain_line_spec& d,
-                                                      const std::vector<double>& temps,
-                                                      const std::vector<double>& flows,
-                                                      pumploss::drain_summary<double>& sum) {
-  std::vector<pumploss::drain_point<double>> pts(temps.size());
-  const auto& oil = d.oil.props;
-  if (d.flow_with_temperature == "constant") {
-    sum = pumploss::drain_check(l, oil, flows.front(), temps.front(), temps.back(), static_cast<int>(temps.size()),
-                                d.tank_pressure_pa, d.max_case_pressure_pa, pts.data());
-    return pts;
+/// The case-drain caution, in every drain-line report and at the foot of its plot.
+const char* const drain_caution[] = {
+    "CASE DRAIN: never block, cap or valve a case drain. Filters, coolers, check valves or meters belong in it only",
+    "where the pump maker allows them, sized for the cold-start flow. Case pressure over the maker's limit blows the",
+    "shaft seal. Fit meters only with the machine stopped and the pressure relieved. A passing check is not a",
+    "clearance to run: the maker's limits and instructions govern."};
+
+/// A short status for the table columns (the notes explain).
+std::string short_status(status st) {
+  switch (st) {
+    case status::ok: return "ok";
+    case status::regime: return "outside a method's range";
+    case status::transition: return "laminar-turbulent transition";
+    case status::extrapolated: return "extrapolated";
+    default: return status_text(st);
   }
-  sum = {true, 0.0, 0.0, status::ok};
-  for (std::size_t i = 0; i < temps.size(); ++i) {
-    const auto s = pumploss::drain_check(l, oil, flows[i], temps[i], temps[i], 1, d.tank_pressure_pa,
-                                         d.max_case_pressure_pa, &pts[i]);
-    if (pumploss::is_error(s.st)) {
-      sum = s;
-      return pts;
-    }
-    sum.pass = sum.pass && s.pass;
-    if (i == 0 || s.worst_margin_pa < sum.worst_margin_pa) {
-      sum.worst_margin_pa = s.worst_margin_pa;
-      sum.worst_t_k = s.worst_t_k;
-    }
-    sum.st = pumploss::worst(sum.st, s.st);
-  }
-  return pts;
 }
 
-int run_drain_line(const drain_options& o) {
-  const display_units du = make_units(o.out);
-  const auto d = read_drain_line(o.file);
-  const auto& oil = d.oil.props;
+std::string caution_text() {
+  std::string s;
+  for (const char* l : drain_caution) s += (s.empty() ? "" : " ") + std::string(l);
+  return s;
+}
 
-  // the line, element by element, with a name for each
+/// The line in flow order: each segment followed by the fittings that follow it, then the
+/// components. A fitting without its own bore takes the bore of the element it follows.
+pumploss::line<double> build_line(const drain_line_spec& d, const std::string& file, std::vector<std::string>& names) {
   pumploss::line<double> l;
   l.height_m = d.outlet_height_m;
-  std::vector<std::string> names;
-  for (const auto& s : d.segments) {
+  for (std::size_t i = 0; i < d.segments.size(); ++i) {
+    const auto& s = d.segments[i];
     l.elements.push_back(pumploss::line_pipe(s.inside_diameter_m, s.length_m, s.roughness_m));
     names.push_back(s.name + " (" + s.kind + ")");
-  }
-  for (const auto& f : d.fittings)
-    for (long k = 0; k < f.count; ++k) {
-      l.elements.push_back(f.k1 ? pumploss::line_fitting_hooper(f.inside_diameter_m, *f.k1, *f.k_inf)
-                                : pumploss::line_fitting_k(f.inside_diameter_m, f.k));
-      names.push_back(f.count > 1 ? fmt::format("{} ({} of {})", f.name, k + 1, f.count) : f.name);
+    for (const auto& f : d.fittings) {
+      if (f.after_segment != i) continue;
+      pumploss::line_element<double> e;
+      std::string how;
+      if (f.type == "exit") {
+        e = pumploss::line_exit(f.inside_diameter_m);
+        how = "exit, K = 2 laminar / 1 turbulent";
+      } else if (!f.type.empty()) {
+        const int k = static_cast<int>(std::find_if(std::begin(pumploss::fitting_table), std::end(pumploss::fitting_table),
+                                                    [&](const auto& c) { return f.type == c.name; }) -
+                                       std::begin(pumploss::fitting_table));
+        const auto m = f.method == "hooper" ? pumploss::fitting_method::hooper_2k : pumploss::fitting_method::darby_3k;
+        const auto r = pumploss::line_fitting_named(f.inside_diameter_m, static_cast<pumploss::fitting_type>(k), m);
+        if (!r.usable())
+          throw std::runtime_error(file + ": fitting '" + f.name + "': no " + f.method + " constants for " + f.type);
+        e = r.value;
+        how = f.type + (f.method == "hooper" ? ", Hooper 2-K" : ", Darby 3-K");
+      } else if (f.k1) {
+        e = pumploss::line_fitting_hooper(f.inside_diameter_m, *f.k1, *f.k_inf);
+        how = "2-K";
+      } else {
+        e = pumploss::line_fitting_k(f.inside_diameter_m, f.k);
+        how = fmt::format("constant K = {}", f.k);
+      }
+      for (long c = 0; c < f.count; ++c) {
+        l.elements.push_back(e);
+        names.push_back((f.count > 1 ? fmt::format("{} ({} of {})", f.name, c + 1, f.count) : f.name) + " [" + how +
+                        "]");
+      }
     }
+  }
   for (const auto& c : d.components) {
     std::vector<double> qs, ps;
     for (const auto& [qq, pp] : c.curve) {
@@ -87,27 +104,80 @@ int run_drain_line(const drain_options& o) {
     const auto e = pumploss::line_component_points(static_cast<int>(qs.size()), qs.data(), ps.data(), c.curve_nu_m2_s,
                                                    c.scaling == "laminar" ? 1.0 : 0.0);
     if (!e.usable())
-      throw std::runtime_error(o.file + ": component '" + c.name +
+      throw std::runtime_error(file + ": component '" + c.name +
                                "': " + pumploss::status_message(static_cast<int>(e.st)));
     l.elements.push_back(e.value);
-    names.push_back(c.name);
+    names.push_back(c.name + " [component]");
   }
+  return l;
+}
 
-  // temperatures and the drain flow at each
-  const auto temps = d.temperatures.values();
-  std::vector<double> flows(temps.size(), d.drain_flow_m3_s);
-  if (d.flow_with_temperature == "laminar") {
-    const auto nu_ref = pumploss::oil_kinematic_viscosity(oil, *d.flow_reference_k);
-    for (std::size_t i = 0; i < temps.size(); ++i) {
-      const auto nu = pumploss::oil_kinematic_viscosity(oil, temps[i]);
-      if (!nu.usable() || !nu_ref.usable())
-        throw std::runtime_error(o.file + ": no oil viscosity at " + show_quantity(temps[i], D::temperature, du));
-      flows[i] = d.drain_flow_m3_s * nu_ref.value / nu.value;
+pumploss::drain_flow<double> flow_model(const drain_line_spec& d, const std::string& file) {
+  pumploss::drain_flow<double> f;
+  if (d.flow_with_temperature == "table") {
+    std::vector<double> ts, qs;
+    for (const auto& [t, q] : d.flow_table) {
+      ts.push_back(t);
+      qs.push_back(q);
     }
+    const auto r = pumploss::drain_flow_table(static_cast<int>(ts.size()), ts.data(), qs.data());
+    if (!r.usable()) throw std::runtime_error(file + ": [flow] table: " + pumploss::status_message(static_cast<int>(r.st)));
+    f = r.value;
+  } else {
+    f = pumploss::drain_flow_parts(d.flow_constant_m3_s, d.flow_laminar_m3_s, d.flow_reference_k.value_or(0.0));
   }
+  return pumploss::with_destroke_peak(f, d.peak_volume_m3, d.peak_time_s);
+}
 
-  pumploss::drain_summary<double> sum{};
-  const auto pts = check_line(l, d, temps, flows, sum);
+/// "0.00 degC to 23.4 degC, 61.0 degC to 70.0 degC"
+template <std::size_t N>
+std::string ranges_text(int n, const std::array<pumploss::drain_range<double>, N>& r, const display_units& du) {
+  std::string s;
+  for (int i = 0; i < n; ++i)
+    s += (i == 0 ? "" : ", ") + show_quantity(r[static_cast<std::size_t>(i)].from_k, D::temperature, du, 3) + " to " +
+         show_quantity(r[static_cast<std::size_t>(i)].to_k, D::temperature, du, 3);
+  return s;
+}
+
+std::string verdict_text(const pumploss::drain_summary<double>& s, double t0, double t1, const display_units& du) {
+  if (s.pass && s.pass_peak)
+    return fmt::format("PASS at every temperature from {} to {}; smallest margin {} at {}",
+                       show_quantity(t0, D::temperature, du, 3), show_quantity(t1, D::temperature, du, 3),
+                       show_quantity(s.worst_margin_pa, D::pressure, du, 3),
+                       show_quantity(s.worst_t_k, D::temperature, du, 3));
+  std::string v = "FAIL";
+  if (!s.pass)
+    v += fmt::format(" at {} (continuous limit; smallest margin {} at {})", ranges_text(s.n_fail, s.fail, du),
+                     show_quantity(s.worst_margin_pa, D::pressure, du, 3),
+                     show_quantity(s.worst_t_k, D::temperature, du, 3));
+  if (!s.pass_peak)
+    v += fmt::format("{} on destroke at {} (peak limit; smallest margin {} at {})", s.pass ? "" : ";",
+                     ranges_text(s.n_fail_peak, s.fail_peak, du),
+                     show_quantity(s.worst_margin_peak_pa, D::pressure, du, 3),
+                     show_quantity(s.worst_peak_t_k, D::temperature, du, 3));
+  if (s.ranges_truncated) v += " (and further ranges)";
+  if (s.pass) v += "; the continuous limit holds at every temperature";
+  if (s.pass_peak && s.peak_checked) v += "; the peak limit holds at every temperature";
+  return v + fmt::format(" (checked from {} to {})", show_quantity(t0, D::temperature, du, 3),
+                         show_quantity(t1, D::temperature, du, 3));
+}
+
+int run_drain_line(const drain_options& o) {
+  const display_units du = make_units(o.out);
+  const auto d = read_drain_line(o.file);
+  const auto& oil = d.oil.props;
+  std::vector<std::string> names;
+  const auto l = build_line(d, o.file, names);
+  const auto flow = flow_model(d, o.file);
+  const bool peak = d.peak_volume_m3 > 0;
+  const pumploss::drain_limits<double> lim{d.tank_pressure_pa, d.max_case_pressure_pa,
+                                           d.max_peak_case_pressure_pa.value_or(d.max_case_pressure_pa)};
+  const auto temps = d.temperatures.values();
+  const double t0 = temps.front(), t1 = temps.back();
+  const int n = static_cast<int>(temps.size());
+
+  std::vector<pumploss::drain_point<double>> pts(temps.size());
+  const auto sum = pumploss::drain_check(l, oil, flow, lim, t0, t1, n, pts.data());
   if (pumploss::is_error(sum.st))
     throw std::runtime_error(o.file + ": the drain line cannot be evaluated: " +
                              pumploss::status_message(static_cast<int>(sum.st)));
@@ -122,27 +192,54 @@ int run_drain_line(const drain_options& o) {
                                            l.elements.size() - d.segments.size(),
                                            show_quantity(d.outlet_height_m, D::length, du, 3)));
   r.facts.emplace_back("Oil", d.oil.name);
-  r.facts.emplace_back("Drain flow",
-                       show_quantity(d.drain_flow_m3_s, D::volume_flow, du) +
-                           (d.flow_with_temperature == "constant"
-                                ? std::string(", the same at every temperature")
-                                : " at " + show_quantity(*d.flow_reference_k, D::temperature, du, 3) +
-                                      ", scaled as 1/viscosity (laminar leakage)"));
-  r.facts.emplace_back("Allowed case pressure", show_quantity(d.max_case_pressure_pa, D::pressure, du, 3) +
-                                                    " (tank " + show_quantity(d.tank_pressure_pa, D::pressure, du, 3) +
-                                                    ")");
-  r.facts.emplace_back("Verdict",
-                       fmt::format("{} from {} to {}; smallest margin {} at {}", sum.pass ? "PASS" : "FAIL",
-                                   show_quantity(temps.front(), D::temperature, du, 3),
-                                   show_quantity(temps.back(), D::temperature, du, 3),
-                                   show_quantity(sum.worst_margin_pa, D::pressure, du, 3),
-                                   show_quantity(sum.worst_t_k, D::temperature, du, 3)));
+  std::string flow_text;
+  if (d.flow_with_temperature == "table")
+    flow_text = fmt::format("given at {} temperatures (linear between; the end values held outside)",
+                            d.flow_table.size());
+  else if (d.flow_laminar_m3_s > 0)
+    flow_text = fmt::format("{} constant (controller) + {} laminar at {}, scaled by mu({})/mu(T)",
+                            show_quantity(d.flow_constant_m3_s, D::volume_flow, du, 3),
+                            show_quantity(d.flow_laminar_m3_s, D::volume_flow, du, 3),
+                            show_quantity(*d.flow_reference_k, D::temperature, du, 3),
+                            show_quantity(*d.flow_reference_k, D::temperature, du, 3));
+  else
+    flow_text = show_quantity(d.flow_constant_m3_s, D::volume_flow, du) + ", the same at every temperature";
+  r.facts.emplace_back("Drain flow", flow_text);
+  if (peak)
+    r.facts.emplace_back("Destroke peak",
+                         fmt::format("{} dumped in {} s: {} on top of the drain flow",
+                                     show_quantity(d.peak_volume_m3, D::volume, du, 3), format_sig(d.peak_time_s, 3),
+                                     show_quantity(d.peak_volume_m3 / d.peak_time_s, D::volume_flow, du, 3)));
+  r.facts.emplace_back("Allowed case pressure",
+                       show_quantity(d.max_case_pressure_pa, D::pressure, du, 3) + " continuous" +
+                           (peak ? ", " + show_quantity(lim.p_allowed_peak_pa, D::pressure, du, 3) + " peak" : "") +
+                           " (tank " + show_quantity(d.tank_pressure_pa, D::pressure, du, 3) + ")");
+  r.facts.emplace_back("Verdict", verdict_text(sum, t0, t1, du));
+
+  // lowest start temperature: the line passes from there up, and the oil meets the start limit
+  const auto start = pumploss::drain_start_temperature(l, oil, flow, lim, t0, t1, std::max(2, n),
+                                                       d.max_start_viscosity_m2_s.value_or(0.0));
+  if (start.st == status::out_of_validity) {
+    r.facts.emplace_back("Lowest start temperature",
+                         "none up to " + show_quantity(t1, D::temperature, du, 3) + ": the line fails at the top");
+  } else if (!pumploss::is_error(start.st)) {
+    std::string why = start.t_line_k > t0 ? "the line passes from " + show_quantity(start.t_line_k, D::temperature, du, 3)
+                                          : "the line passes from " + show_quantity(t0, D::temperature, du, 3) + " up";
+    if (d.max_start_viscosity_m2_s)
+      why += "; the oil reaches the maker's start limit " +
+             show_quantity(*d.max_start_viscosity_m2_s, D::kinematic_viscosity, du, 4) + " at " +
+             show_quantity(start.t_viscosity_k, D::temperature, du, 3) + " (" + d.start_viscosity_source + ")";
+    r.facts.emplace_back("Lowest start temperature",
+                         show_quantity(start.t_start_k, D::temperature, du, 3) + " (" + why + ")");
+  }
   std::string vel;
+  double q_max = 0;
+  for (const auto& p : pts) q_max = std::max(q_max, p.q_m3_s);
   for (const auto& s : d.segments) {
-    const auto v = pumploss::pipe_velocity(*std::max_element(flows.begin(), flows.end()), s.inside_diameter_m);
+    const auto v = pumploss::pipe_velocity(q_max, s.inside_diameter_m);
     vel += (vel.empty() ? "" : "; ") + s.name + " " + show_quantity(v.value, D::velocity, du, 3);
   }
-  r.facts.emplace_back("Mean velocity", vel);
+  r.facts.emplace_back("Mean velocity", vel + " (largest continuous drain flow)");
 
   table t;
   t.name = "check";
@@ -153,92 +250,141 @@ int run_drain_line(const drain_options& o) {
             {"case pressure", cell_kind::quantity, D::pressure, 3},
             {"allowed", cell_kind::quantity, D::pressure, 3},
             {"margin", cell_kind::quantity, D::pressure, 3},
-            {"verdict", cell_kind::text, D::pressure, 0},
-            {"status", cell_kind::text, D::pressure, 0}};
-  svg::series described{"line as described", {}, {}, true, true, false};
-  for (std::size_t i = 0; i < pts.size(); ++i) {
-    t.rows.push_back({pts[i].t_k, pts[i].nu_m2_s, flows[i], pts[i].case_pressure_pa, d.max_case_pressure_pa,
-                      pts[i].margin_pa, std::string(pts[i].pass ? "pass" : "FAIL"), status_text(pts[i].st)});
-    described.x.push_back(du.show(pts[i].t_k, D::temperature));
-    described.y.push_back(du.show(pts[i].case_pressure_pa, D::pressure));
+            {"verdict", cell_kind::text, D::pressure, 0}};
+  if (peak) {
+    t.cols.push_back({"peak case pressure", cell_kind::quantity, D::pressure, 3});
+    t.cols.push_back({"peak allowed", cell_kind::quantity, D::pressure, 3});
+    t.cols.push_back({"peak verdict", cell_kind::text, D::pressure, 0});
+  }
+  t.cols.push_back({"status", cell_kind::text, D::pressure, 0});
+  svg::series described{"continuous, line as described", {}, {}, true, true, false};
+  svg::series described_peak{"on destroke, line as described", {}, {}, true, true, true};
+  for (const auto& p : pts) {
+    std::vector<cell> row{p.t_k, p.nu_m2_s, p.q_m3_s, p.case_pressure_pa, d.max_case_pressure_pa, p.margin_pa,
+                          std::string(p.pass ? "pass" : "FAIL")};
+    if (peak) {
+      row.push_back(p.case_pressure_peak_pa);
+      row.push_back(lim.p_allowed_peak_pa);
+      row.push_back(std::string(p.pass_peak ? "pass" : "FAIL"));
+    }
+    row.push_back(short_status(p.st));
+    t.rows.push_back(std::move(row));
+    described.x.push_back(du.show(p.t_k, D::temperature));
+    described.y.push_back(du.show(p.case_pressure_pa, D::pressure));
+    described_peak.x.push_back(du.show(p.t_k, D::temperature));
+    described_peak.y.push_back(du.show(p.case_pressure_peak_pa, D::pressure));
   }
 
   // share of each element at the coldest temperature (the worst case for a laminar line)
   std::vector<double> edp(l.elements.size());
-  const auto drop = pumploss::line_pressure_drop_at(l, flows.front(), oil, temps.front(), edp.data());
+  std::vector<status> est(l.elements.size(), status::ok);
+  const auto rho0 = pumploss::oil_density_at(oil, t0, 0.0);
+  const auto mu0 = pumploss::oil_dynamic_viscosity(oil, t0, 0.0);
+  const double q0 = pts.front().q_m3_s + pts.front().q_peak_m3_s;
+  const auto drop = pumploss::line_pressure_drop(l.elements.data(), l.elements.size(), l.height_m, q0, rho0.value,
+                                                 mu0.value, edp.data(), 0.0, est.data());
   table te;
   te.name = "elements";
-  te.title = "Pressure drop of each element at " + show_quantity(temps.front(), D::temperature, du, 3);
+  te.title = "Pressure drop of each element at " + show_quantity(t0, D::temperature, du, 3) + " and " +
+             show_quantity(q0, D::volume_flow, du, 3) + (peak ? " (with the destroke peak)" : "");
   te.cols = {{"element", cell_kind::text, D::pressure, 0},
              {"pressure drop", cell_kind::quantity, D::pressure, 3},
-             {"share", cell_kind::percent, D::pressure, 3}};
-  const double friction = drop.dp_pa - drop.dp_static_pa;
-  for (std::size_t k = 0; k < l.elements.size(); ++k)
-    te.rows.push_back({names[k], edp[k], friction > 0 ? edp[k] / drop.dp_pa : 0.0});
-  te.rows.push_back({std::string("static height"), drop.dp_static_pa, drop.dp_pa > 0 ? drop.dp_static_pa / drop.dp_pa : 0.0});
+             {"share", cell_kind::percent, D::pressure, 3},
+             {"status", cell_kind::text, D::pressure, 0}};
+  std::string constant_k_low;
+  for (std::size_t k = 0; k < l.elements.size(); ++k) {
+    te.rows.push_back({names[k], edp[k], drop.dp_pa > 0 ? edp[k] / drop.dp_pa : 0.0, short_status(est[k])});
+    if (est[k] == status::regime && l.elements[k].kind == pumploss::line_element_kind::fitting_k)
+      constant_k_low += (constant_k_low.empty() ? "" : ", ") + names[k];
+  }
+  te.rows.push_back({std::string("static height"), drop.dp_static_pa,
+                     drop.dp_pa > 0 ? drop.dp_static_pa / drop.dp_pa : 0.0, std::string("ok")});
 
   svg::plot p;
   p.title = "Case pressure of " + d.pump_name + " over oil temperature";
-  p.subtitle = fmt::format("drain flow {}; pumploss {}", show_quantity(d.drain_flow_m3_s, D::volume_flow, du, 3),
+  p.subtitle = fmt::format("drain flow {} to {}{}; pumploss {}",
+                           show_quantity(std::min_element(pts.begin(), pts.end(), [](auto& a, auto& b) { return a.q_m3_s < b.q_m3_s; })->q_m3_s, D::volume_flow, du, 3),
+                           show_quantity(q_max, D::volume_flow, du, 3),
+                           peak ? ", destroke peak " + show_quantity(d.peak_volume_m3 / d.peak_time_s, D::volume_flow, du, 3) : "",
                            pumploss::version_string);
   p.x.label = std::string("oil temperature [") + du.of(D::temperature).symbol + "]";
   p.y.label = std::string("case pressure [") + du.of(D::pressure).symbol + "]";
   p.lines.push_back(described);
+  if (peak) p.lines.push_back(described_peak);
   p.limits.push_back({du.show(d.max_case_pressure_pa, D::pressure),
                       "allowed " + show_quantity(d.max_case_pressure_pa, D::pressure, du, 3)});
+  if (peak && lim.p_allowed_peak_pa != d.max_case_pressure_pa)
+    p.limits.push_back({du.show(lim.p_allowed_peak_pa, D::pressure),
+                        "peak allowed " + show_quantity(lim.p_allowed_peak_pa, D::pressure, du, 3)});
+  for (const char* line : drain_caution) p.footer.emplace_back(line);
 
   if (o.size) {
-    const double q_size = *std::max_element(flows.begin(), flows.end());
     const double v_max =
         d.max_velocity_m_s.value_or(pumploss::recommended_velocity(pumploss::line_service::drain).max_m_s);
-    const auto z = pumploss::size_drain_line(l, oil, q_size, temps.front(), temps.back(),
-                                             std::max(2, static_cast<int>(temps.size())), d.tank_pressure_pa,
-                                             d.max_case_pressure_pa, v_max, d.sizing_kinds);
+    const auto z = pumploss::size_drain_line(l, oil, flow, lim, t0, t1, std::max(2, n), v_max, d.sizing_kinds);
     const char* kinds = d.sizing_kinds == 1 ? "tubes" : (d.sizing_kinds == 2 ? "hoses" : "tubes and hoses");
-    if (z.st == status::out_of_validity) {
-      r.facts.emplace_back("Smallest standard bore",
-                           fmt::format("none of the standard {} passes at {} and at most {}", kinds,
-                                       show_quantity(q_size, D::volume_flow, du, 3),
-                                       show_quantity(v_max, D::velocity, du, 3)));
-    } else if (pumploss::is_error(z.st)) {
+    if (pumploss::is_error(z.st) && z.st != status::out_of_validity)
       throw std::runtime_error(o.file + ": sizing failed: " + pumploss::status_message(static_cast<int>(z.st)));
+    auto element_name = [&](int k) { return k < 0 ? std::string("the static height") : names[static_cast<std::size_t>(k)]; };
+    if (z.fixed_exceeds) {
+      r.facts.emplace_back(
+          "Smallest standard bore",
+          fmt::format("none can pass: the elements the bore does not change alone cause {} at {} (above the limit); "
+                      "the largest of them is {}: resize or replace it first (as its maker allows); no pipe or fitting "
+                      "bore can make up for it",
+                      show_quantity(z.fixed_dp_pa, D::pressure, du, 3), show_quantity(z.fixed_t_k, D::temperature, du, 3),
+                      element_name(z.fixed_dominant_element)));
+    } else if (z.st == status::out_of_validity) {
+      r.facts.emplace_back("Smallest standard bore",
+                           fmt::format("none of the standard {} passes at most {}{}", kinds,
+                                       show_quantity(v_max, D::velocity, du, 3),
+                                       z.dominant_element >= 0
+                                           ? "; with the largest bore tried, " + element_name(z.dominant_element) +
+                                                 " dominates (" + show_quantity(z.dominant_dp_pa, D::pressure, du, 3) + ")"
+                                           : std::string()));
     } else {
       const auto& b = pumploss::standard_bores[z.bore_index];
       r.facts.emplace_back(
           "Smallest standard bore",
-          fmt::format("{} ({} inside) for every pipe and fitting: velocity {}, smallest margin {} at {} (of the "
-                      "standard {}, at most {}; components keep their curves)",
+          fmt::format("{} ({} inside) for every pipe and fitting: velocity {}, smallest margin {} at {}{} (of the "
+                      "standard {}, at most {}; components keep their curves); largest drop then: {} ({} at {})",
                       b.name, show_quantity(z.diameter_m, D::length, du, 3),
                       show_quantity(z.velocity_m_s, D::velocity, du, 3),
                       show_quantity(z.worst_margin_pa, D::pressure, du, 3),
-                      show_quantity(z.worst_t_k, D::temperature, du, 3), kinds,
-                      show_quantity(v_max, D::velocity, du, 3)));
+                      show_quantity(z.worst_t_k, D::temperature, du, 3),
+                      peak ? ", peak margin " + show_quantity(z.worst_margin_peak_pa, D::pressure, du, 3) : "", kinds,
+                      show_quantity(v_max, D::velocity, du, 3), element_name(z.dominant_element),
+                      show_quantity(z.dominant_dp_pa, D::pressure, du, 3),
+                      show_quantity(z.worst_t_k, D::temperature, du, 3)));
       auto l2 = l;
       for (auto& e : l2.elements)
-        if (e.kind != pumploss::line_element_kind::component_points &&
-            e.kind != pumploss::line_element_kind::component_power)
-          e.diameter_m = z.diameter_m;
-      pumploss::drain_summary<double> s2{};
-      const auto p2 = check_line(l2, d, temps, flows, s2);
-      svg::series sized{std::string("with ") + b.name, {}, {}, true, true, true};
-      t.cols.push_back({std::string("case pressure ") + b.name, cell_kind::quantity, D::pressure, 3});
+        if (pumploss::detail::has_bore(e)) e.diameter_m = z.diameter_m;
+      std::vector<pumploss::drain_point<double>> p2(pts.size());
+      pumploss::drain_check(l2, oil, flow, lim, t0, t1, n, p2.data());
+      svg::series sized{std::string("continuous with ") + b.name, {}, {}, true, true, false};
+      t.cols.insert(t.cols.end() - 1, {std::string("case pressure ") + b.name, cell_kind::quantity, D::pressure, 3});
       for (std::size_t i = 0; i < p2.size(); ++i) {
         sized.x.push_back(du.show(p2[i].t_k, D::temperature));
         sized.y.push_back(du.show(p2[i].case_pressure_pa, D::pressure));
-        t.rows[i].push_back(p2[i].case_pressure_pa);
+        t.rows[i].insert(t.rows[i].end() - 1, p2[i].case_pressure_pa);
       }
       p.lines.push_back(sized);
     }
-    if (d.flow_with_temperature == "laminar")
-      r.notes.push_back("sizing used the largest drain flow of the range at every temperature (conservative)");
   }
   r.tables.push_back(std::move(t));
   r.tables.push_back(std::move(te));
-  if (sum.st != status::ok)
+  if (!constant_k_low.empty())
+    r.notes.push_back("a constant K is a turbulent value, used here below Re = 10000 (status 'regime') for: " +
+                      constant_k_low +
+                      "; it understates the loss in laminar oil: give the fitting's kind (type = ...) for a "
+                      "Reynolds-dependent K (Darby 3-K, Hooper 2-K)");
+  else if (sum.st != status::ok)
     r.notes.push_back("some elements were evaluated outside their method's assumptions (see the status column)");
   r.notes.push_back("case pressure = tank pressure + static height + friction of pipes, fittings and components "
-                    "(Darcy-Weisbach with the library's friction factor); the drain flow is taken as independent of "
-                    "the case pressure");
+                    "(Darcy-Weisbach with the library's friction factor; fittings by Darby 3-K or Hooper 2-K; exit "
+                    "with the kinetic energy factor); each fitting takes the bore of the element it follows unless "
+                    "given its own; the drain flow is taken as independent of the case pressure");
+  r.notes.push_back(caution_text());
 
   output_set files;
   files.add("drain_line.svg", p.render());
@@ -251,8 +397,9 @@ int run_drain_line(const drain_options& o) {
 void add_drain_line(CLI::App& app, int& rc) {
   auto o = std::make_shared<drain_options>();
   auto* sub = app.add_subcommand("drain-line",
-                                 "Check a case drain line against the allowed case pressure from cold start to "
-                                 "hot, and size it");
+                                 "Check a case drain line against the allowed continuous and peak case pressures "
+                                 "from cold start to hot, find the lowest start temperature, and size the line. "
+                                 "Never block, cap or valve a case drain.");
   sub->add_option("file", o->file, "Drain-line description (TOML)")->required()->check(CLI::ExistingFile);
   sub->add_flag("--size", o->size,
                 "Also find the smallest standard tube or hose bore that passes over the whole temperature range");

@@ -1,5 +1,6 @@
 #include "inputs.hpp"
 
+#include "pumploss/drain_check.hpp"
 #include "pumploss/line.hpp"
 
 #include <algorithm>
@@ -262,37 +263,85 @@ drain_line_spec read_drain_line(const std::string& path) {
   d.max_case_pressure_pa = positive(c, "max_case_pressure", D::pressure);
   d.tank_pressure_pa = c.quantity_opt("tank_pressure", D::pressure).value_or(0.0);
   d.outlet_height_m = c.quantity_opt("outlet_height", D::length).value_or(0.0);
+  d.max_peak_case_pressure_pa = c.quantity_opt("max_peak_case_pressure", D::pressure);
+  d.max_start_viscosity_m2_s = c.quantity_opt("max_start_viscosity", D::kinematic_viscosity);
+  if (d.max_start_viscosity_m2_s && !(*d.max_start_viscosity_m2_s > 0))
+    throw c.error("max_start_viscosity", "must be above zero");
+  if (d.max_start_viscosity_m2_s) {
+    d.start_viscosity_source = "[case] of " + path;
+  } else if (root.is_text("oil")) {  // the maker's limit from the oil file's [limits]
+    const std::string ref = root.text("oil");
+    const auto lim = read_oil_file(ref.size() > 0 && ref[0] == '/' ? ref : directory_of(root.file()) + ref);
+    d.max_start_viscosity_m2_s = lim.max_start_nu_m2_s;
+    d.start_viscosity_source = lim.limits_source.empty() ? ref : lim.limits_source;
+  }
   c.finish();
   auto f = root.table("flow");
-  d.drain_flow_m3_s = positive(f, "drain_flow", D::volume_flow);
-  d.flow_with_temperature = f.choice("with_temperature", {"constant", "laminar"}, "constant");
+  // the drain flow over temperature: constant, laminar (scaled from a reference temperature),
+  // a constant part plus a laminar part, or a table of (temperature, flow)
+  d.flow_with_temperature = f.choice("with_temperature", {"constant", "laminar", "parts", "table"},
+                                     f.has("table") ? "table" : (f.has("laminar_part") ? "parts" : "constant"));
   d.flow_reference_k = f.quantity_opt("reference_temperature", D::temperature);
-  if (d.flow_with_temperature == "laminar" && !d.flow_reference_k)
-    throw f.error_here("with_temperature = \"laminar\" needs 'reference_temperature' (where drain_flow was taken)");
+  if (d.flow_with_temperature == "table") {
+    d.flow_table = f.pair_list("table", D::temperature, D::volume_flow);
+    if (d.flow_table.empty() || d.flow_table.size() > static_cast<std::size_t>(pumploss::drain_flow_max_points))
+      throw f.error("table", "needs 1 to " + std::to_string(pumploss::drain_flow_max_points) + " points");
+    for (std::size_t k = 0; k < d.flow_table.size(); ++k) {
+      if (!(d.flow_table[k].second >= 0)) throw f.error("table", "drain flows must not be negative");
+      if (k > 0 && !(d.flow_table[k].first > d.flow_table[k - 1].first))
+        throw f.error("table", "temperatures must rise from point to point");
+      d.drain_flow_m3_s = std::max(d.drain_flow_m3_s, d.flow_table[k].second);
+    }
+  } else if (d.flow_with_temperature == "parts") {
+    d.flow_constant_m3_s = f.quantity_opt("constant_part", D::volume_flow).value_or(0.0);
+    d.flow_laminar_m3_s = positive(f, "laminar_part", D::volume_flow);
+    if (!(d.flow_constant_m3_s >= 0)) throw f.error("constant_part", "must not be negative");
+    if (!d.flow_reference_k)
+      throw f.error_here("laminar_part needs 'reference_temperature' (where the laminar part was taken)");
+    d.drain_flow_m3_s = d.flow_constant_m3_s + d.flow_laminar_m3_s;
+  } else {
+    d.drain_flow_m3_s = positive(f, "drain_flow", D::volume_flow);
+    if (d.flow_with_temperature == "laminar") {
+      if (!d.flow_reference_k)
+        throw f.error_here("with_temperature = \"laminar\" needs 'reference_temperature' (where drain_flow was taken)");
+      d.flow_laminar_m3_s = d.drain_flow_m3_s;
+    } else {
+      d.flow_constant_m3_s = d.drain_flow_m3_s;
+    }
+  }
   f.finish();
+  if (auto z = root.table_opt("destroke")) {
+    d.peak_volume_m3 = positive(*z, "control_volume", D::volume);
+    d.peak_time_s = z->number("dump_time_s");  // seconds (the unit tables have no time dimension)
+    if (!(d.peak_time_s > 0)) throw z->error("dump_time_s", "must be above zero (seconds)");
+    z->finish();
+    if (!d.max_peak_case_pressure_pa)
+      throw z->error_here("a destroke peak needs the maker's 'max_peak_case_pressure' in [case]");
+  }
   auto t = root.table("temperatures");
   d.temperatures = read_range(t);
-  double last_d = 0;
-  for (auto& s : root.tables("segment")) {
-    line_segment seg;
-    seg.line = 0;
-    seg.name = s.text("name");
-    seg.kind = s.choice("kind", {"tube", "hose", "pipe"});
-    seg.inside_diameter_m = positive(s, "inside_diameter", D::length);
-    seg.length_m = positive(s, "length", D::length);
-    seg.roughness_m = s.quantity_opt("roughness", D::length).value_or(seg.kind == "hose" ? 5e-6 : 1.5e-6);
-    if (!(seg.roughness_m >= 0) || !(seg.roughness_m < seg.inside_diameter_m / 2))
-      throw s.error("roughness", "must lie between 0 and half the inside diameter");
-    s.finish();
-    last_d = seg.inside_diameter_m;
-    d.segments.push_back(seg);
-  }
-  if (d.segments.empty()) throw root.error_here("the drain line needs at least one [[segment]]");
-  for (auto& s : root.tables("fitting")) {
+  // a fitting follows the segment it is nested in ([[segment.fitting]]) or names with 'after';
+  // without its own inside_diameter it takes the bore of the element it follows
+  auto read_fitting = [](section& s, std::size_t after) {
     line_fitting fit;
     fit.name = s.text("name");
-    if (s.has("k") == s.has("two_k")) throw s.error_here("give a fitting either 'k' or 'two_k' = [K1, K_inf]");
-    if (s.has("k")) {
+    fit.after_segment = after;
+    const int given = (s.has("type") ? 1 : 0) + (s.has("k") ? 1 : 0) + (s.has("two_k") ? 1 : 0);
+    if (given != 1)
+      throw s.error_here("give a fitting one of 'type' (a named kind, or \"exit\"), 'k' or 'two_k' = [K1, K_inf]");
+    if (s.has("type")) {
+      std::vector<const char*> kinds;
+      for (const auto& fk : pumploss::fitting_table) kinds.push_back(fk.name);
+      kinds.push_back("exit");
+      const auto text = s.text("type");
+      if (std::find(kinds.begin(), kinds.end(), text) == kinds.end()) {
+        std::string list;
+        for (const char* k : kinds) list += (list.empty() ? "" : ", ") + std::string(k);
+        throw s.error("type", "unknown fitting kind '" + text + "'; known: " + list);
+      }
+      fit.type = text;
+      fit.method = s.choice("method", {"darby", "hooper"}, "darby");
+    } else if (s.has("k")) {
       fit.k = s.number("k");
       if (!(fit.k >= 0)) throw s.error("k", "must not be negative");
     } else {
@@ -303,10 +352,42 @@ drain_line_spec read_drain_line(const std::string& path) {
     }
     fit.count = s.integer_opt("count").value_or(1);
     if (fit.count < 1) throw s.error("count", "must be 1 or more");
-    fit.inside_diameter_m = s.quantity_opt("inside_diameter", D::length).value_or(last_d);
-    if (!(fit.inside_diameter_m > 0)) throw s.error("inside_diameter", "must be above zero");
+    fit.inside_diameter_m = s.quantity_opt("inside_diameter", D::length).value_or(0.0);
+    if (s.has("inside_diameter") && !(fit.inside_diameter_m > 0)) throw s.error("inside_diameter", "must be above zero");
+    return fit;
+  };
+  for (auto& s : root.tables("segment")) {
+    line_segment seg;
+    seg.line = 0;
+    seg.name = s.text("name");
+    seg.kind = s.choice("kind", {"tube", "hose", "pipe"});
+    seg.inside_diameter_m = positive(s, "inside_diameter", D::length);
+    seg.length_m = positive(s, "length", D::length);
+    seg.roughness_m = s.quantity_opt("roughness", D::length).value_or(seg.kind == "hose" ? 5e-6 : 1.5e-6);
+    if (!(seg.roughness_m >= 0) || !(seg.roughness_m < seg.inside_diameter_m / 2))
+      throw s.error("roughness", "must lie between 0 and half the inside diameter");
+    for (auto& fs : s.tables("fitting")) {
+      d.fittings.push_back(read_fitting(fs, d.segments.size()));
+      fs.finish();
+    }
     s.finish();
-    d.fittings.push_back(fit);
+    d.segments.push_back(seg);
+  }
+  if (d.segments.empty()) throw root.error_here("the drain line needs at least one [[segment]]");
+  for (auto& s : root.tables("fitting")) {
+    // a top-level fitting names the segment it follows, unless the line has one segment only
+    std::size_t after = d.segments.size() - 1;
+    if (const auto name = s.text_opt("after")) {
+      const auto it = std::find_if(d.segments.begin(), d.segments.end(),
+                                   [&](const line_segment& g) { return g.name == *name; });
+      if (it == d.segments.end()) throw s.error("after", "no [[segment]] is named '" + *name + "'");
+      after = static_cast<std::size_t>(it - d.segments.begin());
+    } else if (d.segments.size() > 1 && !s.has("inside_diameter")) {
+      throw s.error_here("say which segment this fitting follows: after = \"<segment name>\", or write it as "
+                         "[[segment.fitting]] under that segment (it takes that segment's bore)");
+    }
+    d.fittings.push_back(read_fitting(s, after));
+    s.finish();
   }
   for (auto& s : root.tables("component")) {
     line_component comp;

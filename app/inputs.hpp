@@ -69,10 +69,13 @@ struct line_segment {
 };
 struct line_fitting {
   std::string name;
-  double k = 0;                         ///< constant K (when no 2-K data)
+  std::string type;                     ///< a named kind (pumploss::fitting_table), "exit", or "" (k / two_k)
+  std::string method = "darby";         ///< for a named kind: "darby" (3-K) or "hooper" (2-K)
+  double k = 0;                         ///< constant K (when no kind and no 2-K data)
   std::optional<double> k1, k_inf;      ///< Hooper 2-K
   long count = 1;
-  double inside_diameter_m = 0;         ///< from the fitting or the segment before it
+  std::size_t after_segment = 0;        ///< index of the segment it follows (it sits after it in the line)
+  double inside_diameter_m = 0;         ///< its own bore, or 0: the bore of the element it follows
   int line = 0;
 };
 struct line_component {
@@ -88,9 +91,17 @@ struct drain_line_spec {
   double max_case_pressure_pa = 0;      ///< gauge
   double tank_pressure_pa = 0;          ///< gauge
   double outlet_height_m = 0;           ///< discharge above the case port
-  double drain_flow_m3_s = 0;
-  std::string flow_with_temperature;    ///< "constant" or "laminar"
+  double drain_flow_m3_s = 0;           ///< largest continuous drain flow given (for the facts line)
+  std::string flow_with_temperature;    ///< "constant", "laminar", "parts" or "table"
   std::optional<double> flow_reference_k;
+  double flow_constant_m3_s = 0;        ///< constant part (controller consumption)
+  double flow_laminar_m3_s = 0;         ///< laminar part at flow_reference_k
+  std::vector<std::pair<double, double>> flow_table;  ///< (T K, q m^3/s) when "table"
+  double peak_volume_m3 = 0;            ///< destroke: control volume dumped into the case
+  double peak_time_s = 0;               ///< over this time
+  std::optional<double> max_peak_case_pressure_pa;   ///< the maker's peak limit (needed with a peak)
+  std::optional<double> max_start_viscosity_m2_s;    ///< the maker's largest start viscosity
+  std::string start_viscosity_source;                ///< where that limit came from
   temperature_range temperatures;
   std::vector<line_segment> segments;
   std::vector<line_fitting> fittings;

@@ -58,6 +58,7 @@ struct plot {
   std::vector<limit_line> limits;
   std::optional<stack> areas;
   std::optional<contour> contours;
+  std::vector<std::string> footer;  ///< lines below the plot (cautions), the drawing grows to hold them
 
   /// The SVG document (UTF-8). Throws std::invalid_argument when there is nothing to draw or a
   /// log axis has a value <= 0.

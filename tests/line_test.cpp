@@ -1,4 +1,5 @@
-// Tests of line.hpp (fittings, lines, case drain check, sizing) and the line C API.
+// Tests of fittings.hpp, line.hpp and drain_check.hpp (fittings, lines, case drain check, sizing)
+// and the line C API.
 // Sources: tests/reference/SOURCES.md.
 #include <gtest/gtest.h>
 
@@ -7,6 +8,8 @@
 #include <vector>
 
 #include "pumploss.h"
+#include "pumploss/drain_check.hpp"
+#include "pumploss/fittings.hpp"
 #include "pumploss/line.hpp"
 #include "test_support.hpp"
 
@@ -66,15 +69,15 @@ TEST(LineFittings, MatchFluidsHooperDarbyCrane) {
   EXPECT_NEAR(pumploss::k_hooper(1500.0, 4.0, 2 * 0.0254, 1e4).value, 6.15, 1e-12);
   EXPECT_NEAR(pumploss::k_darby(950.0, 0.25, 4.0, 12.0, 1e4).value, 0.8195103, 0.5e-7);
   for (const auto& r : kCraneRows) {
-    const auto ft = pumploss::crane_ft(r.d);
+    const auto ft = pumploss::friction_factor_ft(r.d);
     ASSERT_EQ(ft.st, status::ok);
     const double got = r.l_over_d == 0 ? ft.value : ft.value * r.l_over_d;
     // ft_Crane solves the same Colebrook equation with one Clamond iteration (fast=True) for
     // D >= 10 mm, accurate to about 5-8 digits by its own documentation: 5e-6 relative.
     EXPECT_NEAR(got / r.expected, 1, 5e-6) << r.source << " D " << r.d;
   }
-  EXPECT_EQ(pumploss::crane_ft(0.0).st, status::domain);
-  EXPECT_EQ(pumploss::crane_ft(2.0).st, status::regime);
+  EXPECT_EQ(pumploss::friction_factor_ft(0.0).st, status::domain);
+  EXPECT_EQ(pumploss::friction_factor_ft(2.0).st, status::regime);
   EXPECT_EQ(pumploss::k_hooper(-1.0, 4.0, 0.05, 1e4).st, status::domain);
   EXPECT_EQ(pumploss::k_darby(950.0, 0.25, 4.0, 12.0, kNaN).st, status::nonfinite);
   EXPECT_NEAR(pumploss::equivalent_length(0.5, 0.02, 0.025).value, 0.4, 1e-15);
@@ -174,11 +177,11 @@ TEST(LineBadInput, NegativeLengthZeroDiameterRoughnessNaN) {
   EXPECT_EQ(dp(pumploss::line_pipe(kNaN, 1.0, 0.0)), status::nonfinite);
   EXPECT_EQ(dp(pumploss::line_fitting_k(0.0, 0.5)), status::domain);
   EXPECT_EQ(dp(pumploss::line_fitting_k(0.012, -0.5)), status::domain);
-  EXPECT_EQ(dp(pumploss::line_fitting_crane(0.012, kInf)), status::nonfinite);
+  EXPECT_EQ(dp(pumploss::line_fitting_l_over_d(0.012, kInf)), status::nonfinite);
   EXPECT_EQ(dp(pumploss::line_component_power(0.0, 1e5, 1.0, 46e-6, 1.0)), status::domain);
   EXPECT_EQ(dp(pumploss::line_component_power(1e-4, 1e5, 1.0, kNaN, 1.0)), status::nonfinite);
   // Crane's constant K in laminar flow is reported.
-  EXPECT_EQ(dp(pumploss::line_fitting_crane(0.012, 8.0)), status::regime);
+  EXPECT_EQ(dp(pumploss::line_fitting_l_over_d(0.012, 8.0)), status::regime);
   const auto l = row20_line();
   EXPECT_EQ(pumploss::line_pressure_drop(l, 1e-4, 0.0, 0.04).st, status::domain);
   EXPECT_EQ(pumploss::line_pressure_drop(l, kNaN, 870.0, 0.04).st, status::nonfinite);
@@ -270,7 +273,7 @@ TEST(LineCapi, HandleLifecycleAndCalls) {
   EXPECT_EQ(pumploss_line_add_pipe(h, 0.0127, -5.0, 0.0), PUMPLOSS_EDOMAIN);
   EXPECT_NE(std::string(pumploss_line_last_message(h)).find("add_pipe"), std::string::npos);
   EXPECT_EQ(pumploss_line_add_pipe(h, 0.0127, 5.0, 0.0), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_line_add_fitting_k(h, 0.0127, 1.0), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_add_exit(h, 0.0127), PUMPLOSS_OK);  // a constant K would be reported in laminar oil
   size_t n = 0;
   EXPECT_EQ(pumploss_line_element_count(h, &n), PUMPLOSS_OK);
   EXPECT_EQ(n, 2u);
@@ -317,4 +320,384 @@ TEST(LineCapi, HandleLifecycleAndCalls) {
   EXPECT_EQ(pumploss_standard_bore(pumploss_standard_bore_count(), &d, &kind), PUMPLOSS_EDOMAIN);
   EXPECT_EQ(pumploss_standard_bore(0, &d, &kind), PUMPLOSS_OK);
   EXPECT_EQ(d, 0.004);
+}
+
+// ---- fittings that follow a segment, Reynolds-dependent K, laminar exit, drain flow over
+// temperature, destroke peak, failing ranges, sizing diagnosis, start temperature ----
+
+namespace {
+struct named_row {
+  const char* source;
+  int type;
+  char method;
+  double d, re, k;
+};
+const named_row kNamedRows[] = {
+#include "reference/friction/fluids_named_fittings.ipp"
+};
+
+/// Darby 3-K K of a long-radius elbow by hand (Darby 2001 Table 7-3: 800, 0.071, 4.2).
+double darby_lr_elbow(double d, double re) { return 800.0 / re + 0.071 * (1 + 4.2 / std::pow(d / 0.0254, 0.3)); }
+}  // namespace
+
+TEST(LineFittings, NamedKindsMatchPublishedTablesAtLowReynolds) {
+  ASSERT_EQ(sizeof(kNamedRows) / sizeof(kNamedRows[0]), 184u);
+  for (const auto& r : kNamedRows) {
+    const auto m = r.method == 'h' ? pumploss::fitting_method::hooper_2k : pumploss::fitting_method::darby_3k;
+    const auto k = pumploss::k_fitting(static_cast<pumploss::fitting_type>(r.type), m, r.d, r.re);
+    ASSERT_EQ(k.st, status::ok) << r.type << r.method;
+    EXPECT_LE(std::fabs(k.value / r.k - 1), 1e-14) << pumploss::fitting_table[r.type].name << " " << r.method
+                                                    << " Re " << r.re;
+    // the line element built from the same kind gives the same K at that Reynolds number
+    const auto e = pumploss::line_fitting_named(r.d, static_cast<pumploss::fitting_type>(r.type), m);
+    ASSERT_EQ(e.st, status::ok);
+    const double rho = 870.0, mu = 0.05, v = r.re * mu / (rho * r.d), q = v * kPi * r.d * r.d / 4;
+    const auto dp = pumploss::detail::element_dp(e.value, q, rho, mu, 0.0);
+    EXPECT_LE(std::fabs(dp.value / (r.k * rho * v * v / 2) - 1), 1e-12);
+  }
+  // kinds the source did not tabulate, unknown kinds
+  EXPECT_EQ(pumploss::k_fitting(pumploss::fitting_type::bend_90_r2, pumploss::fitting_method::hooper_2k, 0.01, 100.0).st,
+            status::domain);
+  EXPECT_EQ(pumploss::k_fitting(static_cast<pumploss::fitting_type>(99), pumploss::fitting_method::darby_3k, 0.01, 100.0).st,
+            status::domain);
+  EXPECT_EQ(pumploss::k_fitting(pumploss::fitting_type::swing_check, pumploss::fitting_method::darby_3k, kNaN, 100.0).st,
+            status::nonfinite);
+  EXPECT_TRUE(std::isnan(
+      pumploss::k_fitting(pumploss::fitting_type::swing_check, pumploss::fitting_method::darby_3k, 0.0, 100.0).value));
+  EXPECT_EQ(pumploss::line_fitting_named(0.01, pumploss::fitting_type::ball_valve_full_bore,
+                                         pumploss::fitting_method::hooper_2k).st,
+            status::domain);
+  // 50 digits: the formula in cpp_bin_float_50 against double
+  const auto k50 = pumploss::k_fitting(pumploss::fitting_type::elbow_90_long_radius, pumploss::fitting_method::darby_3k,
+                                       mp50("0.0127"), mp50(37));
+  const auto kd = pumploss::k_fitting(pumploss::fitting_type::elbow_90_long_radius, pumploss::fitting_method::darby_3k,
+                                      0.0127, 37.0);
+  EXPECT_LE(pltest::rel_err(kd.value, k50.value), 1e-15);
+}
+
+TEST(LineFittings, ConstantKReportedBelowItsRangeAndLaminarExit) {
+  const double d = 0.013, rho = 870.0, mu = 0.05;
+  auto at_re = [&](const pumploss::line_element<double>& e, double re) {
+    const double q = re * mu / (rho * d) * kPi * d * d / 4;
+    return pumploss::detail::element_dp(e, q, rho, mu, 0.0);
+  };
+  const auto k = pumploss::line_fitting_k(d, 0.3);
+  EXPECT_EQ(at_re(k, 100.0).st, status::regime);   // a constant K in laminar oil
+  EXPECT_EQ(at_re(k, 9000.0).st, status::regime);  // below 1e4 (constant_k_min_reynolds)
+  EXPECT_EQ(at_re(k, 2e4).st, status::ok);
+  // exit: K = 2 laminar (kinetic energy factor of the parabolic profile), 1 turbulent
+  const auto ex = pumploss::line_exit(d);
+  const double re = 300.0, v = re * mu / (rho * d);
+  EXPECT_NEAR(at_re(ex, re).value, 2.0 * rho * v * v / 2, 1e-12 * rho * v * v);
+  EXPECT_EQ(pumploss::k_exit_kinetic(1e5).value, 1.0);
+  const auto tr = pumploss::k_exit_kinetic(3000.0);
+  EXPECT_EQ(tr.st, status::transition);
+  EXPECT_NEAR(tr.value, 1.5, 1e-15);
+  EXPECT_EQ(pumploss::k_exit_kinetic(-1.0).st, status::domain);
+  EXPECT_EQ(pumploss::k_exit_kinetic(kNaN).st, status::nonfinite);
+}
+
+TEST(LineFittings, FittingAfterAWideSegmentTakesThatBore) {
+  // 2 m of 25.4 mm hose, three long-radius elbows given no bore, then a 0.5 m tail of 9.5 mm:
+  // the elbows sit after the hose and take its bore, not the tail's.
+  pumploss::line<double> l;
+  l.elements.push_back(pumploss::line_pipe(0.0254, 2.0, 5e-6));
+  for (int i = 0; i < 3; ++i)
+    l.elements.push_back(
+        pumploss::line_fitting_named(0.0, pumploss::fitting_type::elbow_90_long_radius).value);
+  l.elements.push_back(pumploss::line_pipe(0.0095, 0.5, 5e-6));
+  l.elements.push_back(pumploss::line_exit(0.0));
+  const double q = 8.0 / 60000, rho = 870.0, mu = 870.0 * 46e-6;
+  std::vector<double> parts(l.elements.size());
+  const auto r = pumploss::line_pressure_drop(l, q, rho, mu, parts.data());
+  ASSERT_TRUE(pumploss::is_usable(r.st));
+  auto by_hand = [&](double d) {  // Darby 3-K at the bore's velocity and Reynolds number
+    const double v = 4 * q / (kPi * d * d), re = rho * v * d / mu;
+    return darby_lr_elbow(d, re) * rho * v * v / 2;
+  };
+  for (int i = 1; i <= 3; ++i) EXPECT_NEAR(parts[static_cast<std::size_t>(i)], by_hand(0.0254), 1e-9 * by_hand(0.0254));
+  EXPECT_GT(by_hand(0.0095) / by_hand(0.0254), 20.0);  // what taking the tail's bore would have given
+  // the exit follows the tail: 9.5 mm, Re = 1180 laminar, K = 2
+  const double v9 = 4 * q / (kPi * 0.0095 * 0.0095);
+  EXPECT_NEAR(parts[5], 2.0 * rho * v9 * v9 / 2, 1e-9 * rho * v9 * v9);
+  // a fitting at the start of the line takes the bore of the first element after it
+  pumploss::line<double> s;
+  s.elements.push_back(pumploss::line_fitting_named(0.0, pumploss::fitting_type::elbow_90_long_radius).value);
+  s.elements.push_back(pumploss::line_pipe(0.0254, 2.0, 5e-6));
+  double p2[2];
+  pumploss::line_pressure_drop(s, q, rho, mu, p2);
+  EXPECT_NEAR(p2[0], by_hand(0.0254), 1e-9 * by_hand(0.0254));
+  // nothing to follow: a domain error, NaN
+  pumploss::line<double> lone;
+  lone.elements.push_back(pumploss::line_exit(0.0));
+  const auto bad = pumploss::line_pressure_drop(lone, q, rho, mu);
+  EXPECT_EQ(bad.st, status::domain);
+  EXPECT_TRUE(std::isnan(bad.dp_pa));
+  // the same through the C API: a fitting added with bore 0
+  pumploss_line* h = nullptr;
+  ASSERT_EQ(pumploss_line_create(&h), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_add_pipe(h, 0.0254, 2.0, 5e-6), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_add_fitting_named(h, 0.0, PUMPLOSS_FITTING_ELBOW_90_LONG_RADIUS,
+                                            PUMPLOSS_FITTING_METHOD_DARBY_3K),
+            PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_add_pipe(h, 0.0095, 0.5, 5e-6), PUMPLOSS_OK);
+  double dp = 0, share = 0;
+  pumploss_line_element_pressure_drop(h, 1, q, rho, mu, &dp, &share);
+  EXPECT_NEAR(dp, by_hand(0.0254), 1e-9 * by_hand(0.0254));
+  pumploss_line_destroy(h);
+}
+
+TEST(FluidD341Temperature, InverseOfTheForwardLineTo50Digits) {
+  // ASTM D341 worked example (as d341_fit's check): 32 mm2/s at 40 degC, 5.4 at 100 degC gives
+  // 8.53 mm2/s at 80 degC (published, quoted as 8.5): the inverse returns 80 degC within the
+  // rounding of 8.53 (d nu/dT is about -0.2 mm2/s per K there: 0.03 K).
+  const auto line = pumploss::d341_fit(313.15, 32e-6, 373.15, 5.4e-6).value;
+  const auto t80 = pumploss::d341_temperature(line, 8.53e-6);
+  ASSERT_EQ(t80.st, status::ok);
+  EXPECT_NEAR(t80.value, 353.15, 0.05);
+  // Round trip through the forward function, and the 50-digit evaluation.
+  const auto line50 = pumploss::d341_fit(mp50("313.15"), mp50("0.000032"), mp50("373.15"), mp50("0.0000054")).value;
+  for (double nu : {2.5e-6, 5.4e-6, 46e-6, 400e-6, 1000e-6, 1e-2}) {  // away from the 2 mm2/s branch
+    const auto t = pumploss::d341_temperature(line, nu);
+    ASSERT_EQ(t.st, status::ok) << nu;
+    EXPECT_LE(std::fabs(pumploss::d341_viscosity(line, t.value).value / nu - 1), 1e-12) << nu;
+    const auto t50 = pumploss::d341_temperature(line50, mp50(nu));
+    EXPECT_LE(pltest::rel_err(t.value, t50.value), 1e-14) << nu;
+  }
+  // the C wrapper
+  double a = 0, b = 0, tk = 0;
+  ASSERT_EQ(pumploss_d341_coefficients(313.15, 32e-6, 373.15, 5.4e-6, &a, &b), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_d341_temperature(a, b, 8.53e-6, &tk), PUMPLOSS_OK);
+  EXPECT_EQ(tk, t80.value);
+  // bad input
+  EXPECT_EQ(pumploss::d341_temperature(line, 0.0).st, status::domain);
+  EXPECT_EQ(pumploss::d341_temperature(line, -1e-6).st, status::domain);
+  EXPECT_EQ(pumploss::d341_temperature(line, 1e-9).st, status::domain);  // Z <= 1
+  EXPECT_EQ(pumploss::d341_temperature(line, kNaN).st, status::nonfinite);
+  EXPECT_EQ(pumploss::d341_temperature(pumploss::d341_line<double>{line.a, -1.0}, 46e-6).st, status::domain);
+  EXPECT_EQ(pumploss_d341_temperature(a, b, kInf, &tk), PUMPLOSS_ENONFINITE);
+  EXPECT_TRUE(std::isnan(tk));
+}
+
+namespace {
+/// The demo-like drain line: 12.7 mm hose, 13 mm tube with three r/D = 2 bends, laminar exit,
+/// a diffuser curve at 32 mm2/s.
+pumploss::line<double> drain_demo_line() {
+  pumploss::line<double> l;
+  l.height_m = 0.6;
+  l.elements.push_back(pumploss::line_pipe(0.0127, 1.8, 5e-6));
+  l.elements.push_back(pumploss::line_pipe(0.013, 4.5, 1.5e-6));
+  for (int i = 0; i < 3; ++i)
+    l.elements.push_back(pumploss::line_fitting_named(0.0, pumploss::fitting_type::bend_90_r2).value);
+  l.elements.push_back(pumploss::line_exit(0.0));
+  const double qc[2] = {10.0 / 60000, 20.0 / 60000}, pc[2] = {0.05e5, 0.12e5};
+  l.elements.push_back(pumploss::line_component_points(2, qc, pc, 32e-6, 1.0).value);
+  return l;
+}
+pumploss::oil<double> vg46() {
+  return pumploss::typical_mineral_oil(pumploss::d341_fit(313.15, 46e-6, 373.15, 6.9e-6).value);
+}
+/// Case pressure of the truth model at t: constant + laminar flow (+ peak) through the line.
+double case_pressure_truth(const pumploss::line<double>& l, const pumploss::oil<double>& o, double qc, double ql,
+                           double t_ref, double q_peak, double t) {
+  const double mu = pumploss::oil_dynamic_viscosity(o, t, 0.0).value;
+  const double mu_ref = pumploss::oil_dynamic_viscosity(o, t_ref, 0.0).value;
+  return pumploss::line_pressure_drop_at(l, qc + ql * mu_ref / mu + q_peak, o, t).dp_pa;
+}
+}  // namespace
+
+TEST(DrainCheck, FlowOverTemperaturePeakAndFailingRangesFromATruthModel) {
+  const auto l = drain_demo_line();
+  const auto o = vg46();
+  const double qc = 0.5 / 60000, ql = 7.5 / 60000, t_ref = 323.15, vol = 25e-6, dt = 0.1;
+  const auto f = pumploss::with_destroke_peak(pumploss::drain_flow_parts(qc, ql, t_ref), vol, dt);
+  // the flow model: constant part + laminar part scaled with dynamic viscosity (self-calculated)
+  for (double t : {273.15, 293.15, 323.15, 343.15}) {
+    const double want = qc + ql * pumploss::oil_dynamic_viscosity(o, t_ref, 0.0).value /
+                                 pumploss::oil_dynamic_viscosity(o, t, 0.0).value;
+    EXPECT_NEAR(pumploss::drain_flow_at(f, o, t).value, want, 1e-15);
+  }
+  EXPECT_NEAR(pumploss::drain_peak_flow(f).value, 25e-5, 1e-18);
+  const pumploss::drain_limits<double> lim{0.0, 1e5, 2e5};
+  pumploss::drain_point<double> pts[8];
+  const auto s = pumploss::drain_check(l, o, f, lim, 273.15, 343.15, 8, pts);
+  ASSERT_TRUE(pumploss::is_usable(s.st));
+  EXPECT_TRUE(s.peak_checked);
+  // every point against the truth model evaluated directly
+  for (const auto& p : pts) {
+    EXPECT_NEAR(p.case_pressure_pa, case_pressure_truth(l, o, qc, ql, t_ref, 0.0, p.t_k), 1e-6);
+    EXPECT_NEAR(p.case_pressure_peak_pa, case_pressure_truth(l, o, qc, ql, t_ref, 25e-5, p.t_k), 1e-6);
+    EXPECT_EQ(p.pass, p.case_pressure_pa <= 1e5);
+    EXPECT_EQ(p.pass_peak, p.case_pressure_peak_pa <= 2e5);
+  }
+  // the ranges: each end where the truth crosses its limit (a fine scan, 0.001 K)
+  auto crossing = [&](double q_peak, double limit, double lo, double hi) {
+    const bool below = case_pressure_truth(l, o, qc, ql, t_ref, q_peak, lo) <= limit;
+    for (double t = lo; t <= hi; t += 0.001)
+      if ((case_pressure_truth(l, o, qc, ql, t_ref, q_peak, t) <= limit) != below) return t;
+    return hi;
+  };
+  std::printf("[drain] continuous %s (%d ranges), peak %s (%d ranges)\n", s.pass ? "pass" : "FAIL", s.n_fail,
+              s.pass_peak ? "pass" : "FAIL", s.n_fail_peak);
+  for (int i = 0; i < s.n_fail; ++i) {
+    const auto& r = s.fail[static_cast<std::size_t>(i)];
+    std::printf("[drain]   continuous fails %.3f to %.3f degC\n", r.from_k - 273.15, r.to_k - 273.15);
+    if (r.to_k < 343.15) {
+      EXPECT_NEAR(r.to_k, crossing(0.0, 1e5, r.from_k, 343.15), 0.0011);
+    }
+  }
+  for (int i = 0; i < s.n_fail_peak; ++i) {
+    const auto& r = s.fail_peak[static_cast<std::size_t>(i)];
+    std::printf("[drain]   peak fails %.3f to %.3f degC\n", r.from_k - 273.15, r.to_k - 273.15);
+    if (r.to_k < 343.15) {
+      EXPECT_NEAR(r.to_k, crossing(25e-5, 2e5, r.from_k, 343.15), 0.0011);
+    }
+  }
+  EXPECT_GE(s.n_fail_any, 1);
+  // a constant flow overstates the cold case pressure of laminar leakage: the old verdict
+  const auto c = pumploss::drain_check(l, o, 8.0 / 60000, 273.15, 343.15, 8, 0.0, 1e5, pts);
+  EXPECT_GT(c.fail[0].to_k, s.n_fail > 0 ? s.fail[0].to_k : 273.15);
+  // a table from the same truth at five temperatures reproduces it between its points
+  double tt[5], qq[5];
+  for (int i = 0; i < 5; ++i) {
+    tt[i] = 273.15 + 17.5 * i;
+    qq[i] = pumploss::drain_flow_at(f, o, tt[i]).value;
+  }
+  const auto tab = pumploss::drain_flow_table(5, tt, qq);
+  ASSERT_EQ(tab.st, status::ok);
+  EXPECT_EQ(pumploss::drain_flow_at(tab.value, o, tt[2]).value, qq[2]);
+  EXPECT_NEAR(pumploss::drain_flow_at(tab.value, o, 300.0).value, pumploss::drain_flow_at(f, o, 300.0).value,
+              0.15 * pumploss::drain_flow_at(f, o, 300.0).value);
+  EXPECT_EQ(pumploss::drain_flow_at(tab.value, o, 350.0).st, status::extrapolated);
+  // bad input: NaN outputs, clear status, no crash
+  EXPECT_EQ(pumploss::drain_flow_table(0, tt, qq).st, status::domain);
+  const double tbad[2] = {300.0, 290.0}, qbad[2] = {1e-4, 1e-4};
+  EXPECT_EQ(pumploss::drain_flow_table(2, tbad, qbad).st, status::domain);
+  EXPECT_EQ(pumploss::drain_flow_table(2, tt, static_cast<const double*>(nullptr)).st, status::domain);
+  EXPECT_EQ(pumploss::drain_flow_at(pumploss::drain_flow_parts(-1e-4, 0.0, 300.0), o, 300.0).st, status::domain);
+  EXPECT_EQ(pumploss::drain_flow_at(pumploss::drain_flow_parts(0.0, 1e-4, 0.0), o, 300.0).st, status::domain);
+  EXPECT_EQ(pumploss::drain_peak_flow(pumploss::with_destroke_peak(f, 25e-6, 0.0)).st, status::domain);
+  const auto bad = pumploss::drain_check(l, o, pumploss::with_destroke_peak(f, 25e-6, -1.0), lim, 273.15, 343.15, 8, pts);
+  EXPECT_EQ(bad.st, status::domain);
+  EXPECT_TRUE(std::isnan(pts[3].case_pressure_pa));
+  EXPECT_EQ(pumploss::drain_check(l, o, f, pumploss::drain_limits<double>{0.0, 1e5, kNaN}, 273.15, 343.15, 8, pts).st,
+            status::nonfinite);
+}
+
+TEST(DrainCheck, FailsColdAndHotNamesBothRanges) {
+  // A line that fails cold (viscous) and hot (a table flow that grows steeply when the oil thins,
+  // turbulent in a narrow bore): two ranges, each end against a fine scan of the same model.
+  pumploss::line<double> l;
+  l.elements.push_back(pumploss::line_pipe(0.008, 3.0, 1.5e-6));
+  const auto o = vg46();
+  const double tt[3] = {273.15, 313.15, 343.15}, qq[3] = {3.0 / 60000, 3.0 / 60000, 30.0 / 60000};
+  const auto f = pumploss::drain_flow_table(3, tt, qq).value;
+  const pumploss::drain_limits<double> lim{0.0, 1.5e5, 1.5e5};
+  const auto s = pumploss::drain_check(l, o, f, lim, 273.15, 343.15, 15, static_cast<pumploss::drain_point<double>*>(nullptr));
+  ASSERT_TRUE(pumploss::is_usable(s.st));
+  ASSERT_EQ(s.n_fail, 2);
+  EXPECT_EQ(s.fail[0].from_k, 273.15);
+  EXPECT_EQ(s.fail[1].to_k, 343.15);
+  auto cp = [&](double t) {
+    return pumploss::line_pressure_drop_at(l, pumploss::drain_flow_at(f, o, t).value, o, t).dp_pa;
+  };
+  EXPECT_GT(cp(s.fail[0].to_k - 0.01), 1.5e5);
+  EXPECT_LT(cp(s.fail[0].to_k + 0.01), 1.5e5);
+  EXPECT_LT(cp(s.fail[1].from_k - 0.01), 1.5e5);
+  EXPECT_GT(cp(s.fail[1].from_k + 0.01), 1.5e5);
+  // no start temperature: the line fails at the top of the range
+  EXPECT_EQ(pumploss::drain_start_temperature(l, o, f, lim, 273.15, 343.15, 15, 0.0).st, status::out_of_validity);
+}
+
+TEST(DrainSizing, DominantElementAndFixedElementsThatNoBoreCanBeat) {
+  const auto o = vg46();
+  const auto f = pumploss::drain_flow_parts(0.5 / 60000, 7.5 / 60000, 323.15);
+  const pumploss::drain_limits<double> lim{0.0, 1e5, 1e5};
+  auto l = drain_demo_line();
+  const auto z = pumploss::size_drain_line(l, o, f, lim, 273.15, 343.15, 8, 1.5, 3);
+  ASSERT_TRUE(pumploss::is_usable(z.st));
+  ASSERT_GE(z.bore_index, 0);
+  EXPECT_FALSE(z.fixed_exceeds);
+  ASSERT_GE(z.dominant_element, 0);
+  // the dominant element is the largest per-element drop with the chosen bore at the worst temperature
+  auto l2 = l;
+  for (auto& e : l2.elements)
+    if (pumploss::detail::has_bore(e)) e.diameter_m = z.diameter_m;
+  std::vector<double> parts(l2.elements.size());
+  pumploss::line_pressure_drop_at(l2, pumploss::drain_flow_at(f, o, z.worst_t_k).value, o, z.worst_t_k, parts.data());
+  EXPECT_EQ(z.dominant_element, static_cast<int>(std::max_element(parts.begin(), parts.end()) - parts.begin()));
+  EXPECT_NEAR(z.dominant_dp_pa, parts[static_cast<std::size_t>(z.dominant_element)], 1e-9 * z.dominant_dp_pa);
+  // a filter in the line that alone exceeds 1 bar cold: no bore can pass, and it is named
+  const double qf[1] = {8.0 / 60000}, pf[1] = {1.2e5};
+  l.elements.push_back(pumploss::line_component_points(1, qf, pf, 46e-6, 1.0).value);  // laminar media
+  const auto n = pumploss::size_drain_line(l, o, f, lim, 273.15, 343.15, 8, 1.5, 3);
+  EXPECT_EQ(n.st, status::out_of_validity);
+  EXPECT_TRUE(n.fixed_exceeds);
+  EXPECT_EQ(n.fixed_dominant_element, static_cast<int>(l.elements.size()) - 1);
+  EXPECT_NEAR(n.fixed_t_k, 273.15, 1e-9);
+  EXPECT_GT(n.fixed_dp_pa, 1e5);
+  EXPECT_TRUE(std::isnan(n.diameter_m));
+}
+
+TEST(DrainStart, LowestStartTemperatureFromTheLineAndTheViscosityLimit) {
+  const auto l = drain_demo_line();
+  const auto o = vg46();
+  const auto f = pumploss::with_destroke_peak(pumploss::drain_flow_parts(0.5 / 60000, 7.5 / 60000, 323.15), 25e-6, 0.1);
+  const pumploss::drain_limits<double> lim{0.0, 1e5, 2e5};
+  const auto s = pumploss::drain_check(l, o, f, lim, 253.15, 343.15, 10, static_cast<pumploss::drain_point<double>*>(nullptr));
+  const auto st = pumploss::drain_start_temperature(l, o, f, lim, 253.15, 343.15, 10, 1000e-6);
+  ASSERT_TRUE(pumploss::is_usable(st.st));
+  EXPECT_NEAR(st.t_viscosity_k, pumploss::d341_temperature(o.viscosity, 1000e-6).value, 1e-9);
+  EXPECT_NEAR(pumploss::oil_kinematic_viscosity(o, st.t_viscosity_k).value, 1000e-6, 1e-12);
+  ASSERT_GE(s.n_fail_any, 1);
+  EXPECT_EQ(st.t_line_k, s.fail_any[static_cast<std::size_t>(s.n_fail_any - 1)].to_k);
+  EXPECT_EQ(st.t_start_k, std::max(st.t_line_k, st.t_viscosity_k));
+  std::printf("[start] line passes from %.2f degC, oil at 1000 cSt at %.2f degC: start from %.2f degC\n",
+              st.t_line_k - 273.15, st.t_viscosity_k - 273.15, st.t_start_k - 273.15);
+  // C API: the same figures
+  pumploss_line* h = nullptr;
+  ASSERT_EQ(pumploss_line_create(&h), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_add_pipe(h, 0.0127, 1.8, 5e-6), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_add_pipe(h, 0.013, 4.5, 1.5e-6), PUMPLOSS_OK);
+  for (int i = 0; i < 3; ++i)
+    EXPECT_EQ(pumploss_line_add_fitting_named(h, 0.0, PUMPLOSS_FITTING_BEND_90_R2, PUMPLOSS_FITTING_METHOD_DARBY_3K),
+              PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_add_exit(h, 0.0), PUMPLOSS_OK);
+  const double qc[2] = {10.0 / 60000, 20.0 / 60000}, pc[2] = {0.05e5, 0.12e5};
+  EXPECT_EQ(pumploss_line_add_component_points(h, 2, qc, pc, 32e-6, 1.0), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_set_height(h, 0.6), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_line_set_oil(h, 313.15, 46e-6, 373.15, 6.9e-6, o.rho_ref_kg_m3, o.t_ref_k), PUMPLOSS_OK);
+  double ts = 0, tl = 0, tv = 0;
+  const int code = pumploss_line_drain_start(h, 0.5 / 60000, 7.5 / 60000, 323.15, 25e-6, 0.1, 253.15, 343.15, 10, 0.0,
+                                             1e5, 2e5, 1000e-6, &ts, &tl, &tv);
+  EXPECT_EQ(code, static_cast<int>(st.st));
+  EXPECT_NEAR(ts, st.t_start_k, 1e-9);
+  double t[10], q[10], p[10], pp[10];
+  int pass[10];
+  char verdict[200];
+  EXPECT_EQ(pumploss_line_drain_check_flow(h, 0.5 / 60000, 7.5 / 60000, 323.15, 25e-6, 0.1, 253.15, 343.15, 10, 0.0,
+                                           1e5, 2e5, t, q, p, pp, pass, verdict, sizeof verdict),
+            static_cast<int>(s.st));
+  EXPECT_EQ(std::string(verdict).rfind("FAIL", 0), 0u) << verdict;
+  std::printf("[start] C verdict: %s\n", verdict);
+  char tiny[8];
+  pumploss_line_drain_check_flow(h, 0.5 / 60000, 7.5 / 60000, 323.15, 25e-6, 0.1, 253.15, 343.15, 10, 0.0, 1e5, 2e5, t,
+                                 q, p, pp, pass, tiny, sizeof tiny);
+  EXPECT_EQ(std::string(tiny), "FAIL: c");  // cut to fit, terminated
+  double d = 0, fixed = 0;
+  int dom = 0, exceeds = 1;
+  const int zc = pumploss_line_size_drain_flow(h, 0.5 / 60000, 7.5 / 60000, 323.15, 25e-6, 0.1, 273.15,
+                                                               343.15, 10, 0.0, 1e5, 2e5, 1.5, 3, &d, &fixed, &dom,
+                                                               &exceeds);
+  EXPECT_TRUE(zc == PUMPLOSS_OK || zc >= 100) << zc;
+  EXPECT_GT(d, 0.0);
+  EXPECT_EQ(exceeds, 0);
+  pumploss_line_destroy(h);
+  // bad input
+  EXPECT_EQ(pumploss::drain_start_temperature(l, o, f, lim, 253.15, 343.15, 1, 0.0).st, status::domain);
+  EXPECT_EQ(pumploss::drain_start_temperature(l, o, f, lim, 253.15, 343.15, 10, kNaN).st, status::nonfinite);
+  EXPECT_EQ(pumploss_line_drain_start(nullptr, 0.5 / 60000, 7.5 / 60000, 323.15, 0, 0, 253.15, 343.15, 10, 0.0, 1e5,
+                                      2e5, 0.0, &ts, &tl, &tv),
+            PUMPLOSS_EMISUSE);
+  EXPECT_TRUE(std::isnan(ts));
 }

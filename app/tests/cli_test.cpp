@@ -445,31 +445,55 @@ TEST(CliDrainLine, DemoMatchesLibrary) {
   const std::string out = tmp / "out";
   const auto r = run({"drain-line", kDemo + "/drain_line.toml", "--size", "--out", out}, tmp);
   ASSERT_EQ(r.code, 0) << r.err;
-  // the line of drain_line.toml, built here from the library
+  // the line of drain_line.toml, built here from the library: the bends, bulkhead and exit follow
+  // the steel tube and take its bore
   pumploss::line<double> l;
   l.height_m = 0.6;
   l.elements.push_back(pumploss::line_pipe(0.0127, 1.8, 5e-6));
   l.elements.push_back(pumploss::line_pipe(0.013, 4.5, 0.0015e-3));
-  for (int k = 0; k < 3; ++k) l.elements.push_back(pumploss::line_fitting_k(0.013, 0.3));
-  l.elements.push_back(pumploss::line_fitting_k(0.013, 0.5));
-  l.elements.push_back(pumploss::line_fitting_k(0.013, 1.0));
+  for (int k = 0; k < 3; ++k)
+    l.elements.push_back(pumploss::line_fitting_named(0.0, pumploss::fitting_type::bend_90_r2).value);
+  l.elements.push_back(pumploss::line_fitting_k(0.0, 0.5));
+  l.elements.push_back(pumploss::line_exit(0.0));
   const double qc[2] = {10.0 / 60000, 20.0 / 60000}, pc[2] = {0.05e5, 0.12e5};
   l.elements.push_back(pumploss::line_component_points(2, qc, pc, 32e-6, 1.0).value);
   const auto oil = demo_oil();
+  const auto f = pumploss::with_destroke_peak(pumploss::drain_flow_parts(0.5 / 60000, 7.5 / 60000, 323.15), 25e-6, 0.25);
+  const pumploss::drain_limits<double> lim{0.0, 1e5, 2e5};
   pumploss::drain_point<double> pts[8];
-  const auto sum = pumploss::drain_check(l, oil, 8.0 / 60000, 273.15, 343.15, 8, 0.0, 1e5, pts);
+  const auto sum = pumploss::drain_check(l, oil, f, lim, 273.15, 343.15, 8, pts);
   const auto t = read_out(out + "/drain_line_check.csv");
   ASSERT_EQ(t.rows.size(), 8u);
   for (std::size_t i = 0; i < 8; ++i) {
     EXPECT_LT(rel(t.num(i, "case pressure [bar]") * 1e5, pts[i].case_pressure_pa), 1e-8) << i;
+    EXPECT_LT(rel(t.num(i, "peak case pressure [bar]") * 1e5, pts[i].case_pressure_peak_pa), 1e-8) << i;
+    EXPECT_LT(rel(t.num(i, "drain flow [L/min]") / 60000, pts[i].q_m3_s), 1e-8) << i;
     EXPECT_EQ(t.text(i, "verdict"), pts[i].pass ? "pass" : "FAIL") << i;
+    EXPECT_EQ(t.text(i, "peak verdict"), pts[i].pass_peak ? "pass" : "FAIL") << i;
   }
-  EXPECT_NE(r.out.find(sum.pass ? "PASS" : "FAIL"), std::string::npos);
-  const auto z = pumploss::size_drain_line(l, oil, 8.0 / 60000, 273.15, 343.15, 8, 0.0, 1e5, 1.5, 3);
-  ASSERT_GE(z.bore_index, 0);
-  EXPECT_NE(r.out.find(std::string("Smallest standard bore:  ") + pumploss::standard_bores[z.bore_index].name),
+  // the verdict names the failing range, not the whole span
+  EXPECT_NE(r.out.find(sum.pass && sum.pass_peak ? "PASS" : (sum.pass ? "FAIL on destroke at" : "FAIL at")),
             std::string::npos)
       << r.out;
+  EXPECT_EQ(r.out.find("FAIL from 0.00 degC to 70.0 degC"), std::string::npos) << r.out;
+  const auto z = pumploss::size_drain_line(l, oil, f, lim, 273.15, 343.15, 8, 1.5, 3);
+  ASSERT_GE(z.bore_index, 0);
+  const auto at = r.out.find("Smallest standard bore:");
+  ASSERT_NE(at, std::string::npos) << r.out;
+  EXPECT_EQ(r.out.find(std::string(pumploss::standard_bores[z.bore_index].name) + " (", at),
+            r.out.find_first_not_of(' ', at + std::string("Smallest standard bore:").size()))
+      << r.out;
+  // the lowest start temperature: where the destroke peak stops failing (library figure)
+  const auto st = pumploss::drain_start_temperature(l, oil, f, lim, 273.15, 343.15, 8, 1000e-6);
+  char start_text[32];
+  std::snprintf(start_text, sizeof start_text, "%.1f degC (", st.t_start_k - 273.15);
+  const auto at_start = r.out.find("Lowest start temperature:");
+  ASSERT_NE(at_start, std::string::npos) << r.out;
+  EXPECT_EQ(r.out.find(start_text, at_start),
+            r.out.find_first_not_of(' ', at_start + std::string("Lowest start temperature:").size()))
+      << r.out;
+  EXPECT_NE(r.out.find("never block, cap or valve a case drain"), std::string::npos) << r.out;
+  EXPECT_NE(r.out.find("constant K is a turbulent value"), std::string::npos) << r.out;  // the bulkhead
   EXPECT_TRUE(has_cautions(r.out));
 }
 
@@ -701,6 +725,14 @@ TEST(CliMalformed, EveryCommandNamesTheLineAndWritesNothing) {
       {"budget", "pump_p31.toml", "pistons = 9", "pistons = 99", ":11:11:", "between 3 and 15"},
       {"drain-line", "drain_line.toml", "length = \"4.5 m\"", "length = \"4.5 furlong\"", ":", "unknown unit 'furlong'"},
       {"drain-line", "drain_line.toml", "k = 0.5", "k = -0.5", ":", "must not be negative"},
+      {"drain-line", "drain_line.toml",
+       "[[segment.fitting]]                 # fittings follow the segment they are written under", "[[fitting]]", ":",
+       "say which segment this fitting follows"},
+      {"drain-line", "drain_line.toml", "type = \"bend_90_r2\"", "type = \"bend_90_r3\"", ":", "unknown fitting kind"},
+      {"drain-line", "drain_line.toml", "max_peak_case_pressure = \"2.0 bar\"", "", ":",
+       "needs the maker's 'max_peak_case_pressure'"},
+      {"drain-line", "drain_line.toml", "reference_temperature = \"50 degC\"", "", ":",
+       "needs 'reference_temperature'"},
       {"test-stand", "test_stand.toml", "reading_percent = 0.3", "reading_percent = 0,3", ":", "expected"},
   };
   for (const auto& k : cases) {

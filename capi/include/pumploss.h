@@ -205,6 +205,17 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_viscosity_d341(double t1_k, double nu1_m
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_d341_coefficients(double t1_k, double nu1_m2_s, double t2_k,
                                                           double nu2_m2_s, double *a, double *b);
 /**
+ * Temperature at which an oil on the ASTM D341 line (A, B) reaches a kinematic viscosity: the
+ * closed-form inverse of the D341 relation (e.g. the lowest start temperature for a maker's
+ * largest start viscosity).
+ * @param a A of pumploss_d341_coefficients()
+ * @param b B, > 0
+ * @param nu_m2_s kinematic viscosity, m^2/s, > 0 (above about 0.2 mm^2/s)
+ * @param t_k receives the temperature, K
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE. @sa pumploss::d341_temperature
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_d341_temperature(double a, double b, double nu_m2_s, double *t_k);
+/**
  * ISO 3448 viscosity grade: mid-point and +/-10 % limits of kinematic viscosity at 40 degC.
  * @param grade VG number (2, 3, 5, 7, 10, 15, 22, 32, 46, 68, 100, 150, 220, 320, 460, 680,
  *        1000, 1500)
@@ -955,22 +966,27 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_line_last_message(const pumploss
  *  @sa pumploss::line_pipe */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_pipe(pumploss_line *line, double diameter_m, double length_m,
                                                       double roughness_m);
-/** Append a fitting with a constant loss coefficient (sharp entrance 0.57, exit 1.0).
+/** Append a fitting with a constant loss coefficient (sharp entrance 0.57, exit 1.0). A constant K
+ *  is a turbulent value: evaluations below Re = 1e4 return PUMPLOSS_WREGIME; prefer
+ *  pumploss_line_add_fitting_named() and pumploss_line_add_exit().
  *  @param line the handle
- *  @param diameter_m bore the K refers to, m, > 0
+ *  @param diameter_m bore the K refers to, m, > 0; 0 for a fitting: the bore of the element it
+ *         follows (at the start of the line, of the first element after it)
  *  @param k loss coefficient, >= 0
  *  @return PUMPLOSS_OK or an error (element not added). @sa pumploss::line_fitting_k */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_k(pumploss_line *line, double diameter_m, double k);
-/** Append a fitting by Crane TP-410, K = f_T (L/D)_eq (reported PUMPLOSS_WREGIME in laminar flow).
+/** Append a fitting by the equivalent-length method, K = f_T (L/D)_eq (f_T of
+ *  pumploss_friction_factor_ft(); (L/D)_eq of Crane Technical Paper 410, 2009; reported
+ *  PUMPLOSS_WREGIME below Re = 4000).
  *  @param line the handle
- *  @param diameter_m bore, m, > 0
+ *  @param diameter_m bore, m, > 0 (0: the bore of the element it follows)
  *  @param l_over_d equivalent length in diameters, >= 0 (gate valve 8, ball valve 3, globe 340)
- *  @return PUMPLOSS_OK or an error. @sa pumploss::line_fitting_crane */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_crane(pumploss_line *line, double diameter_m,
-                                                               double l_over_d);
+ *  @return PUMPLOSS_OK or an error. @sa pumploss::line_fitting_l_over_d */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_l_over_d(pumploss_line *line, double diameter_m,
+                                                                  double l_over_d);
 /** Append a fitting by Hooper's 2-K method.
  *  @param line the handle
- *  @param diameter_m bore, m, > 0
+ *  @param diameter_m bore, m, > 0 (0: the bore of the element it follows)
  *  @param k1 K_1, >= 0
  *  @param k_inf K_infinity, >= 0
  *  @return PUMPLOSS_OK or an error. @sa pumploss::k_hooper */
@@ -978,7 +994,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_hooper(pumploss_line *l
                                                                 double k_inf);
 /** Append a fitting by Darby's 3-K method (nominal size = inside diameter in inches).
  *  @param line the handle
- *  @param diameter_m bore, m, > 0
+ *  @param diameter_m bore, m, > 0 (0: the bore of the element it follows)
  *  @param k1 K_1, >= 0
  *  @param k_i K_i, >= 0
  *  @param k_d K_d, >= 0
@@ -1127,11 +1143,13 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(void);
  *         size = ID in sixteenths of an inch)
  *  @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for a bad index; PUMPLOSS_EMISUSE for NULL. */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(int index, double *inside_diameter_m, int *kind);
-/** Crane's fully turbulent friction factor f_T of commercial steel.
+/** Fully turbulent friction factor f_T of clean commercial steel, used by the equivalent-length
+ *  fitting method K = f_T (L/D)_eq (f_T table of Crane Technical Paper 410, 2009).
  *  @param diameter_m inside diameter, m, > 0
  *  @param f_t receives f_T
- *  @return PUMPLOSS_OK; PUMPLOSS_WREGIME outside 5 mm to 1 m; errors. @sa pumploss::crane_ft */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_crane_ft(double diameter_m, double *f_t);
+ *  @return PUMPLOSS_OK; PUMPLOSS_WREGIME outside 5 mm to 1 m; errors.
+ *  @sa pumploss::friction_factor_ft */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_factor_ft(double diameter_m, double *f_t);
 /** Hooper 2-K loss coefficient.
  *  @param k1 K_1
  *  @param k_inf K_infinity
@@ -1160,6 +1178,170 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_darby(double k1, double k_i, double k_
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_equivalent_length(double k, double diameter_m, double f_darcy,
                                                           double *length_m);
 /** @} */
+/* ---- drain line: named fittings, laminar exit, drain flow over temperature, peak, start ---- */
+/** @name Named fittings, drain flow over temperature, destroke peak, start temperature
+ *  Functions of this block that read a line handle take it const, never write it and keep no
+ *  message in it: a verdict text goes to the caller's buffer. @{ */
+#define PUMPLOSS_FITTING_ELBOW_90_THREADED 0     /**< 90 degree elbow, threaded, r/D = 1 */
+#define PUMPLOSS_FITTING_ELBOW_90_FLANGED 1      /**< 90 degree elbow, flanged/welded or bend, r/D = 1 */
+#define PUMPLOSS_FITTING_ELBOW_90_LONG_RADIUS 2  /**< 90 degree elbow, long radius, r/D = 1.5 */
+#define PUMPLOSS_FITTING_BEND_90_R2 3            /**< 90 degree tube bend, r/D = 2 (Darby only) */
+#define PUMPLOSS_FITTING_BEND_90_R4 4            /**< 90 degree tube bend, r/D = 4 (Darby only) */
+#define PUMPLOSS_FITTING_ELBOW_45_THREADED 5     /**< 45 degree elbow, threaded, r/D = 1 */
+#define PUMPLOSS_FITTING_ELBOW_45_LONG_RADIUS 6  /**< 45 degree elbow, long radius, r/D = 1.5 */
+#define PUMPLOSS_FITTING_BEND_180_R15 7          /**< 180 degree return bend, r/D = 1.5 */
+#define PUMPLOSS_FITTING_TEE_RUN_THREADED 8      /**< tee, flow through the run, threaded */
+#define PUMPLOSS_FITTING_TEE_BRANCH_THREADED 9   /**< tee, flow through the branch, threaded */
+#define PUMPLOSS_FITTING_BALL_VALVE_FULL_BORE 10 /**< ball valve, full bore (Darby only) */
+#define PUMPLOSS_FITTING_SWING_CHECK 11          /**< swing check valve */
+#define PUMPLOSS_FITTING_LIFT_CHECK 12           /**< lift check valve */
+#define PUMPLOSS_FITTING_METHOD_DARBY_3K 0       /**< Darby's 3-K method (the default) */
+#define PUMPLOSS_FITTING_METHOD_HOOPER_2K 1      /**< Hooper's 2-K method */
+/** Loss coefficient of a named fitting kind at a Reynolds number (Darby 2001 or Hooper 1981
+ *  constants).
+ *  @param type PUMPLOSS_FITTING_*
+ *  @param method PUMPLOSS_FITTING_METHOD_*
+ *  @param diameter_m bore, m, > 0
+ *  @param reynolds Reynolds number, > 0
+ *  @param k receives K
+ *  @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for an unknown kind or a method not tabulated for it.
+ *  @sa pumploss::k_fitting */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_fitting(int type, int method, double diameter_m, double reynolds,
+                                                  double *k);
+/** Exit loss coefficient with the kinetic energy factor: 2 in laminar flow (Re <= 2000), 1 in
+ *  turbulent flow (Re >= 4000), linear between (PUMPLOSS_WTRANSITION).
+ *  @param reynolds Reynolds number, >= 0
+ *  @param k receives K
+ *  @return PUMPLOSS_OK, PUMPLOSS_WTRANSITION or an error. @sa pumploss::k_exit_kinetic */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_exit_kinetic(double reynolds, double *k);
+/** Append a named fitting kind with Reynolds-dependent K.
+ *  @param line the handle
+ *  @param diameter_m bore, m, > 0 (0: the bore of the element it follows)
+ *  @param type PUMPLOSS_FITTING_*
+ *  @param method PUMPLOSS_FITTING_METHOD_*
+ *  @return PUMPLOSS_OK or an error (element not added). @sa pumploss::line_fitting_named */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_named(pumploss_line *line, double diameter_m, int type,
+                                                               int method);
+/** Append the exit into the tank with the kinetic energy factor (K = 2 laminar, 1 turbulent).
+ *  @param line the handle
+ *  @param diameter_m bore, m, > 0 (0: the bore of the element it follows)
+ *  @return PUMPLOSS_OK or an error (element not added). @sa pumploss::line_exit */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_exit(pumploss_line *line, double diameter_m);
+/** Case drain check with the drain flow over temperature, q = q_constant + q_laminar_ref
+ *  mu(t_ref)/mu(T), plus an optional destroke peak V/t checked against a separate peak limit.
+ *  @param line the drain line (oil set)
+ *  @param q_constant_m3_s part independent of viscosity (controller consumption), m^3/s, >= 0
+ *  @param q_laminar_ref_m3_s laminar leakage at t_ref_k, m^3/s, >= 0
+ *  @param t_ref_k temperature of q_laminar_ref_m3_s, K
+ *  @param peak_volume_m3 control volume dumped into the case on destroke, m^3 (0: no peak)
+ *  @param peak_time_s time over which it is dumped, s
+ *  @param t_cold_k cold-start temperature, K
+ *  @param t_max_k maximum temperature, K, >= t_cold_k
+ *  @param n_temps number of temperatures, 1 to 1000 (the length of the output arrays)
+ *  @param p_tank_pa tank pressure at the outlet, Pa
+ *  @param p_allowed_pa allowed continuous case pressure, Pa (same reference)
+ *  @param p_allowed_peak_pa allowed peak case pressure, Pa (used with a peak)
+ *  @param t_k receives n_temps temperatures, K
+ *  @param q_m3_s receives n_temps continuous drain flows, m^3/s
+ *  @param case_pressure_pa receives n_temps continuous case pressures, Pa
+ *  @param case_pressure_peak_pa receives n_temps peak case pressures, Pa (continuous without a peak)
+ *  @param pass receives n_temps flags: bit 0 continuous passes, bit 1 peak passes
+ *  @param verdict receives the verdict naming the failing temperature ranges (degC), or "" on error
+ *  @param verdict_capacity size of verdict in bytes (the text is cut to fit, always terminated)
+ *  @return PUMPLOSS_OK or a report (e.g. PUMPLOSS_WREGIME for a constant K in laminar flow);
+ *          errors with NaN outputs. @sa pumploss::drain_check */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
+    const pumploss_line *line, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k,
+    double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
+    double p_allowed_pa, double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
+    double case_pressure_peak_pa[], int pass[], char *verdict, size_t verdict_capacity);
+/** Case drain check as pumploss_line_drain_check_flow(), with the drain flow given at temperatures
+ *  (e.g. from a normalisation model), interpolated linearly, the end values held outside (then
+ *  PUMPLOSS_WEXTRAPOLATED).
+ *  @param line the drain line (oil set)
+ *  @param n_points number of table points, 1 to 16 (a count of the table, not of the outputs)
+ *  @param flow_t_k n_points temperatures, K, increasing
+ *  @param flow_q_m3_s n_points drain flows, m^3/s, >= 0
+ *  @param peak_volume_m3 control volume dumped into the case on destroke, m^3 (0: no peak)
+ *  @param peak_time_s time over which it is dumped, s
+ *  @param t_cold_k cold-start temperature, K
+ *  @param t_max_k maximum temperature, K, >= t_cold_k
+ *  @param n_temps number of temperatures, 1 to 1000 (the length of the output arrays)
+ *  @param p_tank_pa tank pressure at the outlet, Pa
+ *  @param p_allowed_pa allowed continuous case pressure, Pa
+ *  @param p_allowed_peak_pa allowed peak case pressure, Pa (used with a peak)
+ *  @param t_k receives n_temps temperatures, K
+ *  @param q_m3_s receives n_temps continuous drain flows, m^3/s
+ *  @param case_pressure_pa receives n_temps continuous case pressures, Pa
+ *  @param case_pressure_peak_pa receives n_temps peak case pressures, Pa
+ *  @param pass receives n_temps flags: bit 0 continuous passes, bit 1 peak passes
+ *  @param verdict receives the verdict naming the failing temperature ranges (degC), or "" on error
+ *  @param verdict_capacity size of verdict in bytes
+ *  @return as pumploss_line_drain_check_flow(); PUMPLOSS_EDOMAIN for a bad table.
+ *  @sa pumploss::drain_flow_table */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_table(
+    const pumploss_line *line, int n_points, const double flow_t_k[], const double flow_q_m3_s[],
+    double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
+    double p_allowed_pa, double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
+    double case_pressure_peak_pa[], int pass[], char *verdict, size_t verdict_capacity);
+/** Lowest start temperature: the line passes the continuous and peak limits from there up to
+ *  t_max, and the oil is no thicker than the maker's largest start viscosity (inverse ASTM D341).
+ *  Drain flow and limits as pumploss_line_drain_check_flow().
+ *  @param line the drain line (oil set)
+ *  @param q_constant_m3_s constant part, m^3/s
+ *  @param q_laminar_ref_m3_s laminar part at t_ref_k, m^3/s
+ *  @param t_ref_k reference temperature, K
+ *  @param peak_volume_m3 destroke control volume, m^3 (0: none)
+ *  @param peak_time_s dump time, s
+ *  @param t_cold_k lowest temperature considered, K
+ *  @param t_max_k highest temperature, K
+ *  @param n_temps grid, 2 to 1000
+ *  @param p_tank_pa tank pressure, Pa
+ *  @param p_allowed_pa allowed continuous case pressure, Pa
+ *  @param p_allowed_peak_pa allowed peak case pressure, Pa
+ *  @param nu_max_start_m2_s the maker's largest start viscosity, m^2/s (0: none)
+ *  @param t_start_k receives the lowest start temperature, K
+ *  @param t_line_k receives the lowest temperature from which the line passes, K
+ *  @param t_viscosity_k receives the temperature of the start viscosity (may lie below t_cold; t_cold
+ *         without one), K
+ *  @return PUMPLOSS_OK or a report; PUMPLOSS_EVALIDITY when the line fails at t_max.
+ *  @sa pumploss::drain_start_temperature */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_start(
+    const pumploss_line *line, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k,
+    double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
+    double p_allowed_pa, double p_allowed_peak_pa, double nu_max_start_m2_s, double *t_start_k, double *t_line_k,
+    double *t_viscosity_k);
+/** Drain line sizing with the drain flow over temperature and the peak: the smallest standard
+ *  bore that passes, the dominant element, and whether the fixed elements (components, static
+ *  height) alone exceed a limit. Drain flow and limits as pumploss_line_drain_check_flow().
+ *  @param line the drain line (oil set)
+ *  @param q_constant_m3_s constant part, m^3/s
+ *  @param q_laminar_ref_m3_s laminar part at t_ref_k, m^3/s
+ *  @param t_ref_k reference temperature, K
+ *  @param peak_volume_m3 destroke control volume, m^3 (0: none)
+ *  @param peak_time_s dump time, s
+ *  @param t_cold_k cold-start temperature, K
+ *  @param t_max_k maximum temperature, K
+ *  @param n_temps grid, 2 to 1000
+ *  @param p_tank_pa tank pressure, Pa
+ *  @param p_allowed_pa allowed continuous case pressure, Pa
+ *  @param p_allowed_peak_pa allowed peak case pressure, Pa
+ *  @param v_max_m_s largest velocity, m/s
+ *  @param kinds_mask 1 tubes, 2 hoses, 3 both
+ *  @param diameter_m receives the inside diameter, m
+ *  @param fixed_dp_pa receives the largest drop of the fixed elements over the range (where they
+ *         exceed a limit, that drop), Pa
+ *  @param dominant_element receives the index of the element with the largest drop (-1 none)
+ *  @param fixed_exceeds receives 1 when the fixed elements alone exceed a limit (no bore can pass)
+ *  @return PUMPLOSS_OK or a report; PUMPLOSS_EVALIDITY when no standard bore passes (the two int
+ *          outputs are still set). @sa pumploss::size_drain_line */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain_flow(
+    const pumploss_line *line, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k,
+    double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
+    double p_allowed_pa, double p_allowed_peak_pa, double v_max_m_s, int kinds_mask, double *diameter_m,
+    double *fixed_dp_pa, int *dominant_element, int *fixed_exceeds);
+/** @} */
+/* pumploss:capi-friction (declarations of this subject go above this line) */
 
 /* ==== efficiency ==== */
 /** @name Efficiency, leakage scaling, heat

@@ -25,6 +25,14 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_d341_coefficients(double t1_k, double nu
   });
 }
 
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_d341_temperature(double a, double b, double nu_m2_s, double* t_k) {
+  return call({t_k}, [&] {
+    const auto r = pumploss::d341_temperature(pumploss::d341_line<double>{a, b}, nu_m2_s);
+    *t_k = r.value;
+    return r.st;
+  });
+}
+
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_iso_vg(int grade, double* mid_m2_s, double* min_m2_s,
                                                double* max_m2_s) {
   return call({mid_m2_s, min_m2_s, max_m2_s}, [&] {

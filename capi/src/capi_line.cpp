@@ -1,9 +1,13 @@
-// C API for line.hpp: the opaque line handle (elements, height, oil), its pressure drop, the
-// flow a pressure allows, the case drain check and drain line sizing; fitting coefficients.
+// C API for fittings.hpp, line.hpp and drain_check.hpp: the opaque line handle (elements,
+// height, oil), its pressure drop, the flow a pressure allows, the case drain check and drain
+// line sizing; fitting coefficients.
+#include <cstdio>
 #include <string>
 #include <vector>
 
 #include "capi_common.hpp"
+#include "pumploss/drain_check.hpp"
+#include "pumploss/fittings.hpp"
 #include "pumploss/line.hpp"
 
 using pumploss::status;
@@ -36,7 +40,10 @@ int add_element(pumploss_line* h, const pumploss::line_element<double>& e, const
   if (h == nullptr) return PUMPLOSS_EMISUSE;
   try {
     fp_guard guard;
-    const auto r = pumploss::detail::element_dp(e, 1e-6, 870.0, 0.04, 0.0);
+    // a fitting given bore 0 takes the bore of the element it follows: check it at a typical bore
+    const bool follows = pumploss::detail::has_bore(e) && e.kind != pumploss::line_element_kind::pipe &&
+                         e.diameter_m == 0.0;
+    const auto r = pumploss::detail::element_dp(e, 1e-6, 870.0, 0.04, follows ? 0.01 : 0.0);
     if (is_error(r.st)) return set_message(h, r.st, what);
     h->line.elements.push_back(e);
     h->message = "no error";
@@ -88,8 +95,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_k(pumploss_line* h, dou
   return add_element(h, pumploss::line_fitting_k(diameter_m, k), "add_fitting_k");
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_crane(pumploss_line* h, double diameter_m, double l_over_d) {
-  return add_element(h, pumploss::line_fitting_crane(diameter_m, l_over_d), "add_fitting_crane");
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_l_over_d(pumploss_line* h, double diameter_m,
+                                                                  double l_over_d) {
+  return add_element(h, pumploss::line_fitting_l_over_d(diameter_m, l_over_d), "add_fitting_l_over_d");
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_hooper(pumploss_line* h, double diameter_m, double k1,
@@ -277,9 +285,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(int index, double* inside_
   return PUMPLOSS_OK;
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_crane_ft(double diameter_m, double* f_t) {
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_friction_factor_ft(double diameter_m, double* f_t) {
   return call({f_t}, [&] {
-    const auto r = pumploss::crane_ft(diameter_m);
+    const auto r = pumploss::friction_factor_ft(diameter_m);
     *f_t = r.value;
     return r.st;
   });
@@ -309,6 +317,217 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_equivalent_length(double k, double diame
     const auto r = pumploss::equivalent_length(k, diameter_m, f_darcy);
     *length_m = r.value;
     return r.st;
+  });
+}
+
+// ---- drain line: named fittings, laminar exit, drain flow over temperature, peak, start ----
+
+}  // extern "C"
+
+namespace {
+
+pumploss::drain_flow<double> flow_of(double q_constant, double q_laminar_ref, double t_ref, double v_peak,
+                                     double t_peak) {
+  return pumploss::with_destroke_peak(pumploss::drain_flow_parts(q_constant, q_laminar_ref, t_ref), v_peak, t_peak);
+}
+
+/// "PASS ..." or "FAIL ..." naming the failing ranges in degC, into a caller buffer.
+void write_verdict(const pumploss::drain_summary<double>& s, char* out, size_t cap) {
+  if (out == nullptr || cap == 0) return;
+  int used = 0;
+  auto put = [&](const char* fmt, auto... args) {
+    if (used < 0 || static_cast<size_t>(used) >= cap) return;
+    const int n = std::snprintf(out + used, cap - static_cast<size_t>(used), fmt, args...);
+    used = n < 0 ? -1 : used + n;
+  };
+  auto ranges = [&](const char* what, int n, const auto& r) {
+    put("%s fails", what);
+    for (int i = 0; i < n; ++i)
+      put("%s %.1f to %.1f degC", i == 0 ? "" : ",", r[static_cast<size_t>(i)].from_k - 273.15,
+          r[static_cast<size_t>(i)].to_k - 273.15);
+  };
+  out[0] = '\0';
+  if (s.pass && s.pass_peak) {
+    put("PASS at every temperature checked");
+    return;
+  }
+  put("FAIL: ");
+  if (!s.pass) ranges("continuous", s.n_fail, s.fail);
+  if (!s.pass && !s.pass_peak) put("; ");
+  if (!s.pass_peak) ranges("peak", s.n_fail_peak, s.fail_peak);
+  if (s.ranges_truncated) put(" (and more)");
+}
+
+}  // namespace
+
+extern "C" {
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_fitting(int type, int method, double diameter_m, double reynolds,
+                                                  double* k) {
+  return call({k}, [&] {
+    const auto r = pumploss::k_fitting(static_cast<pumploss::fitting_type>(type),
+                                       static_cast<pumploss::fitting_method>(method), diameter_m, reynolds);
+    *k = r.value;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_k_exit_kinetic(double reynolds, double* k) {
+  return call({k}, [&] {
+    const auto r = pumploss::k_exit_kinetic(reynolds);
+    *k = r.value;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_fitting_named(pumploss_line* h, double diameter_m, int type,
+                                                               int method) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  const auto e = pumploss::line_fitting_named(diameter_m, static_cast<pumploss::fitting_type>(type),
+                                              static_cast<pumploss::fitting_method>(method));
+  if (is_error(e.st)) return static_cast<int>(e.st);
+  return add_element(h, e.value, "add_fitting_named");
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_add_exit(pumploss_line* h, double diameter_m) {
+  return add_element(h, pumploss::line_exit(diameter_m), "add_exit");
+}
+
+}  // extern "C"
+
+namespace {
+
+/// The drain check into caller arrays and a caller verdict buffer (shared by the parts and the
+/// table form); make_flow() gives the drain flow model (or its error).
+template <class MakeFlow>
+int drain_check_into(const pumploss_line* h, MakeFlow&& make_flow, double t_cold_k, double t_max_k, size_t n_temps,
+                     double p_tank_pa, double p_allowed_pa, double p_allowed_peak_pa, double t_k[], double q_m3_s[],
+                     double case_pressure_pa[], double case_pressure_peak_pa[], int pass[], char* verdict,
+                     size_t verdict_capacity) {
+  if (verdict != nullptr && verdict_capacity > 0) verdict[0] = '\0';
+  double* const arrays[] = {t_k, q_m3_s, case_pressure_pa, case_pressure_peak_pa};
+  const size_t n_fill = n_temps <= 1000 ? n_temps : 0;
+  for (double* a : arrays)
+    if (a != nullptr) for (size_t i = 0; i < n_fill; ++i) a[i] = kNaN;
+  if (pass != nullptr) for (size_t i = 0; i < n_fill; ++i) pass[i] = 0;
+  if (h == nullptr || t_k == nullptr || q_m3_s == nullptr || case_pressure_pa == nullptr ||
+      case_pressure_peak_pa == nullptr || pass == nullptr || (verdict == nullptr && verdict_capacity > 0))
+    return PUMPLOSS_EMISUSE;
+  double worst = 0.0;  // the smallest margin: gives call() one scalar output to guard
+  double* const outs[] = {&worst};
+  const int code = call(outs, [&] {
+    if (!h->has_oil) return status::misuse;
+    if (n_temps < 1 || n_temps > 1000) return status::domain;
+    const pumploss::result<pumploss::drain_flow<double>> f = make_flow();
+    if (is_error(f.st)) return f.st;
+    const pumploss::drain_limits<double> lim{p_tank_pa, p_allowed_pa, p_allowed_peak_pa};
+    const int n = static_cast<int>(n_temps);
+    const auto s = pumploss::drain_check(h->line, h->oil, f.value, lim, t_cold_k, t_max_k, n,
+                                         static_cast<pumploss::drain_point<double>*>(nullptr));
+    if (is_error(s.st)) return s.st;
+    for (int i = 0; i < n; ++i) {  // the grid of drain_check(), evaluated point by point (no allocation)
+      const double t = n == 1 ? t_cold_k : t_cold_k + (t_max_k - t_cold_k) * i / (n - 1);
+      const auto p = pumploss::detail::drain_eval(h->line, h->oil, f.value, lim, t, 0.0);
+      if (is_error(p.st)) return p.st;
+      const auto k = static_cast<size_t>(i);
+      t_k[k] = t;
+      q_m3_s[k] = p.q_m3_s;
+      case_pressure_pa[k] = p.case_pressure_pa;
+      case_pressure_peak_pa[k] = p.case_pressure_peak_pa;
+      pass[k] = (p.pass ? 1 : 0) | (p.pass_peak ? 2 : 0);
+    }
+    write_verdict(s, verdict, verdict_capacity);
+    worst = s.worst_margin_pa < s.worst_margin_peak_pa ? s.worst_margin_pa : s.worst_margin_peak_pa;
+    return s.st;
+  });
+  if (code > 0 && code < 100) {  // an error: NaN everywhere, no verdict
+    for (double* a : arrays) for (size_t i = 0; i < n_fill; ++i) a[i] = kNaN;
+    for (size_t i = 0; i < n_fill; ++i) pass[i] = 0;
+    if (verdict != nullptr && verdict_capacity > 0) verdict[0] = '\0';
+  }
+  return code;
+}
+
+}  // namespace
+
+extern "C" {
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
+    const pumploss_line* h, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k, double peak_volume_m3,
+    double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
+    double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
+    double case_pressure_peak_pa[], int pass[], char* verdict, size_t verdict_capacity) {
+  auto make_flow = [&] {
+    return pumploss::result<pumploss::drain_flow<double>>{
+        flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s), status::ok};
+  };
+  return drain_check_into(h, make_flow, t_cold_k, t_max_k, n_temps, p_tank_pa, p_allowed_pa, p_allowed_peak_pa, t_k,
+                          q_m3_s, case_pressure_pa, case_pressure_peak_pa, pass, verdict, verdict_capacity);
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_table(
+    const pumploss_line* h, int n_points, const double flow_t_k[], const double flow_q_m3_s[], double peak_volume_m3,
+    double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
+    double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
+    double case_pressure_peak_pa[], int pass[], char* verdict, size_t verdict_capacity) {
+  auto make_flow = [&] {
+    if (flow_t_k == nullptr || flow_q_m3_s == nullptr)
+      return pumploss::result<pumploss::drain_flow<double>>{{}, status::misuse};
+    auto f = pumploss::drain_flow_table(n_points, flow_t_k, flow_q_m3_s);
+    f.value = pumploss::with_destroke_peak(f.value, peak_volume_m3, peak_time_s);
+    return f;
+  };
+  return drain_check_into(h, make_flow, t_cold_k, t_max_k, n_temps, p_tank_pa, p_allowed_pa, p_allowed_peak_pa, t_k,
+                          q_m3_s, case_pressure_pa, case_pressure_peak_pa, pass, verdict, verdict_capacity);
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_start(
+    const pumploss_line* h, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k, double peak_volume_m3,
+    double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
+    double p_allowed_peak_pa, double nu_max_start_m2_s, double* t_start_k, double* t_line_k, double* t_viscosity_k) {
+  double* const outs[] = {t_start_k, t_line_k, t_viscosity_k};
+  if (h == nullptr) {
+    for (double* p : outs) if (p != nullptr) *p = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  return call(outs, [&] {
+    if (!h->has_oil) return status::misuse;
+    if (n_temps < 2 || n_temps > 1000) return status::domain;
+    const auto r = pumploss::drain_start_temperature(
+        h->line, h->oil, flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s),
+        pumploss::drain_limits<double>{p_tank_pa, p_allowed_pa, p_allowed_peak_pa}, t_cold_k, t_max_k,
+        static_cast<int>(n_temps), nu_max_start_m2_s);
+    *t_start_k = r.t_start_k;
+    *t_line_k = r.t_line_k;
+    *t_viscosity_k = r.t_viscosity_k;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain_flow(
+    const pumploss_line* h, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k, double peak_volume_m3,
+    double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
+    double p_allowed_peak_pa, double v_max_m_s, int kinds_mask, double* diameter_m, double* fixed_dp_pa,
+    int* dominant_element, int* fixed_exceeds) {
+  double* const outs[] = {diameter_m, fixed_dp_pa};
+  if (dominant_element != nullptr) *dominant_element = -1;
+  if (fixed_exceeds != nullptr) *fixed_exceeds = 0;
+  if (h == nullptr || dominant_element == nullptr || fixed_exceeds == nullptr) {
+    for (double* p : outs) if (p != nullptr) *p = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  return call(outs, [&] {
+    if (!h->has_oil) return status::misuse;
+    if (n_temps < 2 || n_temps > 1000) return status::domain;
+    const auto z = pumploss::size_drain_line(
+        h->line, h->oil, flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s),
+        pumploss::drain_limits<double>{p_tank_pa, p_allowed_pa, p_allowed_peak_pa}, t_cold_k, t_max_k,
+        static_cast<int>(n_temps), v_max_m_s, kinds_mask);
+    *diameter_m = z.diameter_m;
+    *fixed_dp_pa = z.fixed_dp_pa;
+    *dominant_element = z.dominant_element;
+    *fixed_exceeds = z.fixed_exceeds ? 1 : 0;
+    return z.st;
   });
 }
 

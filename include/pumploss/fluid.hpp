@@ -157,6 +157,36 @@ inline result<T> d341_viscosity(const d341_line<T>& line, T t_k) {
   return {nu, status::ok};
 }
 
+/// Temperature at which an oil reaches a stated kinematic viscosity: the inverse of
+/// d341_viscosity() on the same D341 line, in closed form.
+///
+/// \f[ T = 10^{(A - \log_{10}\log_{10} Z(\nu))/B} \f] with Z from d341_z().
+///
+/// Used for the lowest start temperature at which an oil meets a maker's largest start
+/// viscosity.
+/// @param line A and B from d341_fit(), B > 0
+/// @param nu_m2_s kinematic viscosity, m^2/s, > 0 with Z > 1 (above about 0.2 mm^2/s)
+/// @return T in K; status::domain for B <= 0, nu <= 0 or Z <= 1; status::overflow when T
+///         overflows.
+/// @par Accuracy
+/// Within 1e-14 relative of the 50-digit evaluation; d341_viscosity() at the result returns nu
+/// within 1e-12 relative (viscosities from 2.5 mm^2/s; tests/line_test.cpp, FluidD341Temperature).
+/// @par Source
+/// ASTM D341-20, Standard Practice for Viscosity-Temperature Equations and Charts for Liquid
+/// Petroleum or Hydrocarbon Products, Eq. (1) solved for T.
+template <class T>
+inline result<T> d341_temperature(const d341_line<T>& line, T nu_m2_s) {
+  using std::log;
+  using std::pow;
+  if (!detail::all_finite(line.a, line.b, nu_m2_s)) return detail::fail<T>(status::nonfinite);
+  if (!(line.b > T(0)) || !(nu_m2_s > T(0))) return detail::fail<T>(status::domain);
+  const T z = d341_z(nu_m2_s * detail::constant<T>(1e6L, "1000000"));
+  if (!(z > T(1))) return detail::fail<T>(status::domain);
+  const T t = pow(T(10), (line.a - detail::log10_log10(z)) / line.b);
+  if (!detail::finite(t)) return detail::fail<T>(status::overflow);
+  return {t, status::ok};
+}
+
 /// Kinematic viscosity at t_k from two known points (ASTM D341).
 ///
 /// Combines d341_fit() and d341_viscosity(). Interpolation and extrapolation (cold start)

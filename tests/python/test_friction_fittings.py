@@ -27,10 +27,10 @@ def test_darby_table_matches_fluids(lib, name):
 
 
 @pytest.mark.parametrize("d", [0.006, 0.0127, 0.025, 0.1, 0.5])
-def test_crane_ft_and_valves_match_fluids(lib, d):
+def test_friction_factor_ft_and_valves_match_fluids(lib, d):
     # ft_Crane takes one Clamond iteration for D >= 10 mm (documented 5-8 digits).
     tol = 5e-6 if d >= 1e-2 else 1e-12
-    f_t = lib.crane_ft(d)
+    f_t = lib.friction_factor_ft(d)
     assert f_t == pytest.approx(ft.ft_Crane(d), rel=tol)
     assert 8 * f_t == pytest.approx(ft.K_gate_valve_Crane(d, d, 0), rel=tol)
     assert 3 * f_t == pytest.approx(ft.K_ball_valve_Crane(d, d, 0), rel=tol)
@@ -48,7 +48,8 @@ def test_entrance_exit_line_through_handle(lib):
     assert create(ctypes.byref(handle)) == 0
     h = handle.value
     try:
-        d, q, rho, mu = 0.02, 1e-3, 870.0, 0.01
+        # Re = 27700: constant K values hold (below Re = 1e4 they are reported, status 100)
+        d, q, rho, mu = 0.02, 1e-3, 870.0, 0.002
         assert lib.raw("pumploss_line_add_fitting_k", h, d, ft.entrance_sharp())[0] == 0
         assert lib.raw("pumploss_line_add_fitting_k", h, d, ft.exit_normal())[0] == 0
         st, dp = lib.raw("pumploss_line_pressure_drop", h, q, rho, mu)
