@@ -22,6 +22,7 @@
 #include "uncertainty.hpp"
 // pumploss:umbrella-efficiency
 #include "health.hpp"
+#include "health_monitor.hpp"
 #include "piston_pump.hpp"
 // pumploss:umbrella-pump
 // pumploss:umbrella-includes (new subject headers are added above this line)
