@@ -36,6 +36,15 @@ const char* health_refusal_text(unsigned refusal) noexcept {
   }
 }
 
+const char* health_case_drain_caution() noexcept {
+  return "CASE DRAIN: never block, cap or valve a case drain line; a blocked drain over-pressurises the case and\n"
+         "blows the shaft seal. Filters, coolers, check valves or flow meters in a drain only where the pump maker\n"
+         "allows them, sized for the cold-start flow; keep case pressure within the maker's limit. Fit or remove a\n"
+         "meter only with the machine stopped and the pressure relieved; drain oil runs hot enough to burn.\n"
+         "A \"sound\" verdict is an engineering estimate, not a clearance to run: the maker's limits, local codes\n"
+         "and licensed practice govern.";
+}
+
 const char* operating_state_name(operating_state s) noexcept {
   switch (s) {
     case operating_state::on_stroke: return "on stroke";

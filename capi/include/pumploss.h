@@ -1929,6 +1929,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_looks_fahrenheit(const double t_k
  *  @param refusal one PUMPLOSS_REFUSE_* bit
  *  @return the sentence (static storage, never NULL) */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_refusal_text(int refusal);
+/** The case-drain caution for reports and screens that show a health verdict: lines separated
+ *  by '\n' (never block, cap or valve a drain; a "sound" verdict is not a clearance to run).
+ *  @return the text (static storage, never NULL) */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_caution(void);
 
 /** Opaque streaming health monitor (constant memory, no allocation after creation). Feeding
  *  mutates it (one writer at a time); pumploss_health_monitor_state() and _save() only read it. */

@@ -305,6 +305,8 @@ PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_health_refusal_text(int refusal)
   return pumploss::health_refusal_text(static_cast<unsigned>(refusal));
 }
 
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_health_caution(void) { return pumploss::health_case_drain_caution(); }
+
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_create(const pumploss_health* h, size_t learn_count,
                                                               size_t debounce_count, double hysteresis,
                                                               pumploss_health_monitor** out) {

@@ -190,6 +190,12 @@ std::vector<double> nice_ticks(double lo, double hi, int target) {
   return out;
 }
 
+namespace {
+int footer_height(const std::vector<std::string>& footer) {
+  return footer.empty() ? 0 : 8 + 14 * static_cast<int>(footer.size());
+}
+}  // namespace
+
 std::string plot::render(int width, int height) const {
   const double W = width, H = height;
   const double left = 78, right = 210, top = subtitle.empty() ? 48 : 66, bottom = 62;
@@ -225,9 +231,10 @@ std::string plot::render(int width, int height) const {
       "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n"
       "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{0}\" height=\"{1}\" viewBox=\"0 0 {0} {1}\" "
       "font-family=\"DejaVu Sans, Arial, Helvetica, sans-serif\" font-size=\"12\">\n",
-      width, height);
+      width, height + footer_height(footer));
   o += "<title>" + xml_escape(title) + "</title>\n";
-  o += fmt::format("<rect x=\"0\" y=\"0\" width=\"{}\" height=\"{}\" fill=\"#ffffff\"/>\n", width, height);
+  o += fmt::format("<rect x=\"0\" y=\"0\" width=\"{}\" height=\"{}\" fill=\"#ffffff\"/>\n", width,
+                   height + footer_height(footer));
   o += fmt::format("<text x=\"{}\" y=\"24\" font-size=\"16\" font-weight=\"bold\">{}</text>\n", num(left),
                    xml_escape(title));
   if (!subtitle.empty())
@@ -365,7 +372,15 @@ std::string plot::render(int width, int height) const {
     o += fmt::format("<text x=\"{}\" y=\"{}\">{}</text>\n", num(lx + 24), num(ly + 4), xml_escape(e.name));
     ly += 18;
   }
-  o += "</g>\n</svg>\n";
+  o += "</g>\n";
+  if (!footer.empty()) {  // the cautions under the plot
+    o += "<g class=\"footer\" font-size=\"10\" fill=\"#333333\">\n";
+    for (std::size_t i = 0; i < footer.size(); ++i)
+      o += fmt::format("<text x=\"12\" y=\"{}\">{}</text>\n", num(H + 14.0 * static_cast<double>(i + 1)),
+                       xml_escape(footer[i]));
+    o += "</g>\n";
+  }
+  o += "</svg>\n";
   return o;
 }
 

@@ -58,6 +58,8 @@ struct plot {
   std::vector<limit_line> limits;
   std::optional<stack> areas;
   std::optional<contour> contours;
+  /// Lines of small text under the plot (cautions); the document grows to hold them.
+  std::vector<std::string> footer;
 
   /// The SVG document (UTF-8). Throws std::invalid_argument when there is nothing to draw or a
   /// log axis has a value <= 0.

@@ -124,6 +124,11 @@ const char* health_refusal_text(unsigned refusal) noexcept;
 /// @return the name (static storage)
 const char* health_level_name(health_level level) noexcept;
 
+/// The case-drain caution every health report, plot and page carries: lines of at most 110
+/// characters separated by '\n' (static storage, never null).
+/// @return the caution text
+const char* health_case_drain_caution() noexcept;
+
 /// A short name for an operating state ("on stroke", "deadhead", "unknown").
 /// @param s the state
 /// @return the name (static storage)
@@ -775,7 +780,8 @@ struct health_step {
 /// On a signal the shift is placed after the last reading at which the signalling sum was zero
 /// (N readings back), the new level is \f$ \mu_0 + K + C^+/N \f$ (or \f$ \mu_0 - K - C^-/N \f$),
 /// the sums restart and the new level becomes the target. When the largest jump between
-/// consecutive readings of the signalling run exceeds \f$ 3\sqrt2\,\sigma \f$ the shift is called
+/// consecutive readings of the signalling run, less the local drift (the median difference of
+/// the readings kept), exceeds \f$ 3\sqrt2\,\sigma \f$ the shift is called
 /// abrupt (a step, e.g. damage): it is placed at that jump and the new level is the mean of the
 /// readings from it on; a further jump the same way within `settle` readings is the same step
 /// settling and counts as gradual. Other shifts are gradual (wear faster than the target follows). The
@@ -837,10 +843,11 @@ class health_cusum {
     // (its first reading may sit before the jump by noise) beyond 3 sqrt(2) sigma
     using std::sqrt;
     const T limit = T(3) * sqrt(T(2)) * sigma;
+    const T drift = local_drift();  // a steady trend is not a step: judge the jump beyond it
     T best = limit;
     for (std::size_t j = step.index; j < count; ++j) {
       if (j < 1 || count - j >= history) continue;
-      const T jump = (hist[j % history] - hist[(j - 1) % history]) * T(dir);
+      const T jump = (hist[j % history] - hist[(j - 1) % history] - drift) * T(dir);
       if (jump > best) {
         best = jump;
         step.abrupt = true;
@@ -862,6 +869,22 @@ class health_cusum {
     c_hi = c_lo = T(0);
     n_hi = n_lo = 0;
     return true;
+  }
+  /// Median of the differences between consecutive readings kept (the local drift per reading).
+  /// @return the drift (0 with fewer than 3 readings kept)
+  T local_drift() const {
+    const std::size_t kept = count < history ? count : history;
+    if (kept < 3) return T(0);
+    T d[history];
+    std::size_t m = 0;
+    for (std::size_t j = count - kept + 1; j < count; ++j) d[m++] = hist[j % history] - hist[(j - 1) % history];
+    for (std::size_t i = 1; i < m; ++i)
+      for (std::size_t j = i; j > 0 && d[j] < d[j - 1]; --j) {
+        const T tmp = d[j];
+        d[j] = d[j - 1];
+        d[j - 1] = tmp;
+      }
+    return m % 2 ? d[m / 2] : (d[m / 2 - 1] + d[m / 2]) / 2;
   }
   T target = T(0);   ///< current target mu_0
   T sigma = T(1);    ///< noise sigma

@@ -514,6 +514,7 @@ static void test_pump_health_v2(void) {
                                   &level, &reasons, &refused, &qn, &fr, &g) == PUMPLOSS_EVALIDITY &&
         refused == PUMPLOSS_REFUSE_DRAIN_NOT_POSITIVE && is_nan(qn));
   CHECK(strlen(pumploss_health_refusal_text(PUMPLOSS_REFUSE_DRAIN_NOT_POSITIVE)) > 10);
+  CHECK(strstr(pumploss_health_caution(), "shaft seal") != NULL);
   CHECK(pumploss_health_looks_fahrenheit(degf, 3, &looks) == PUMPLOSS_OK && looks == 1);
   CHECK(pumploss_health_monitor_create(h, 4, 2, 0.05, &m) == PUMPLOSS_OK);
   for (i = 0; i < 10; ++i)
