@@ -76,9 +76,6 @@ int run_health(const health_options& o) {
       if (i > 0 && !(d.si("operating hours")[i] >= d.si("operating hours")[i - 1]))
         throw d.error(i, "operating hours", "operating hours must not go back");
     }
-  if (p.clearance_from_drain && !d.has("drain temperature"))
-    throw input_error(o.pump, 0, 0,
-                      "[health] clearance_temperature = \"drain\" needs a 'drain temperature' column in " + o.readings);
 
   pumploss::health_bands<double> bands;
   bands.sound_max = p.fraction_bands[0];
@@ -99,6 +96,10 @@ int run_health(const health_options& o) {
       throw d.error(0, col, "the values look like degF under a degC header (median above 85 degC, plausible oil "
                             "temperatures when read as degF): fix the header's unit or the values");
   }
+
+  if (p.clearance_from_drain && !d.has("drain temperature"))
+    throw input_error(o.pump, 0, 0,
+                      "[health] clearance_temperature = \"drain\" needs a 'drain temperature' column in " + o.readings);
 
   pumploss::health_reference<double> ref{};
   ref.max_displacement_m3_rev = p.max_displacement_m3_rev;
