@@ -126,7 +126,7 @@ TEST(HealthVerdict, NormalisationCollapsesReadingsFromOneLaminarLeak) {
 }
 
 TEST(HealthVerdict, ConstantPlusLaminarReadAtOtherStatesNormalisesBackToBaseline) {
-  // Issue 14: a new pump with 0.3 L/min controller consumption and 4.0 L/min baseline at
+  // SOURCES.md key health_generated_truth. Issue 14: a new pump with 0.3 L/min controller consumption and 4.0 L/min baseline at
   // 250 bar and 50 degC, read at 100 bar and 20 degC (and elsewhere, at other speeds).
   // Generated from the model's own law (truth): q = q_c + (q_base - q_c) (dp/dp_ref)(mu_ref/mu).
   auto ref = reference();
@@ -423,7 +423,7 @@ TEST(HealthVerdict, HotDrainAgainstThePumpsOwnBaselineRise) {
 }
 
 TEST(HealthSteps, TabularCusumMontgomeryExample91) {
-  // D. C. Montgomery, Introduction to Statistical Quality Control, 6th ed., Wiley 2009,
+  // SOURCES.md key montgomery_2009_ex91. D. C. Montgomery, Introduction to Statistical Quality Control, 6th ed., Wiley 2009,
   // Example 9.1, Table 9.1 (from memory): 30 observations, the first 20 from N(10, 1), the last
   // 10 from N(11, 1); mu0 = 10, sigma = 1, K = 0.5, H = 5. The upper CUSUM first exceeds H at
   // observation 29 with C+ = 5.28 and N+ = 7: the shift began after observation 22 and the new
