@@ -673,6 +673,10 @@ TEST(HealthMonitor, StateSavedAndRestoredAcrossARestart) {
   other.constant_m3_s = 1e-6;
   ASSERT_EQ(c.init(other, bands, {}), status::ok);
   EXPECT_EQ(c.restore(buf, pumploss::health_monitor<double>::state_count), status::out_of_validity);
+  double damaged[pumploss::health_monitor<double>::state_count];
+  ASSERT_EQ(a.save(damaged, pumploss::health_monitor<double>::state_count), status::ok);
+  damaged[18] = 1e9;  // a CUSUM run longer than the readings
+  EXPECT_EQ(b.restore(damaged, pumploss::health_monitor<double>::state_count), status::out_of_validity);
   buf[1] = 2;
   EXPECT_EQ(b.restore(buf, pumploss::health_monitor<double>::state_count), status::out_of_validity);
   EXPECT_EQ(a.save(buf, 10), status::buffer_too_small);

@@ -337,6 +337,10 @@ class health_monitor {
     if (!detail::all_finite(m.learn_sum_, m.learn_mr_sum_, m.learn_prev_, m.cusum_.target, m.cusum_.sigma,
                             m.cusum_.c_hi, m.cusum_.c_lo))
       return status::out_of_validity;
+    // counts that cannot belong together mean a damaged buffer
+    if (m.cusum_.n_hi > m.cusum_.count || m.cusum_.n_lo > m.cusum_.count || m.cusum_.count > m.accepted_ ||
+        m.cusum_start_ > m.accepted_ || m.pending_n_ >= settings_.debounce_count || m.steps_ > m.accepted_)
+      return status::out_of_validity;
     *this = m;
     return status::ok;
   }
