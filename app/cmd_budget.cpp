@@ -30,6 +30,8 @@ struct budget_options {
 int run_budget(const budget_options& o) {
   const display_units du = make_units(o.out);
   auto p = read_pump(o.pump);
+  if (!p.has_geometry || !(p.sweep_step_pa > 0))
+    throw input_error(o.pump, 0, 0, "the budget needs the pump's [geometry] and [sweep] (health needs neither)");
   auto q = [&](const std::string& opt, const std::string& text, double& field) {
     if (text.empty()) return;
     try {

@@ -424,19 +424,9 @@ double pump_spec::geometric_displacement_m3_rev() const {
   return pumploss::piston_pump_displacement(geometry).value;
 }
 
-pump_spec read_pump(const std::string& path) {
-  auto root = load_config(path);
-  pump_spec p;
-  p.oil = read_oil_ref(root);
-  auto pu = root.table("pump");
-  p.name = pu.text("name");
-  const long z = pu.integer("pistons");
-  if (z < 3 || z > 15) throw pu.error("pistons", "must lie between 3 and 15");
-  p.max_displacement_m3_rev = positive(pu, "max_displacement", D::displacement);
-  p.rated_speed_rev_s = positive(pu, "rated_speed", D::rotational_speed);
-  p.max_pressure_pa = positive(pu, "max_pressure", D::pressure);
-  pu.finish();
-
+namespace {
+// [geometry] of a pump file (only the budget and diagnosis need it).
+void read_pump_geometry(section& root, section& pu, pump_spec& p, long z) {
   auto& q = p.geometry;
   q.pistons = static_cast<int>(z);
   q.stated_displacement_m3_rev = p.max_displacement_m3_rev;
@@ -511,8 +501,33 @@ pump_spec read_pump(const std::string& path) {
                                            std::to_string(check.displacement_m3_rev * 1e6).substr(0, 6) +
                                            " cm3/rev)");
 
+  if (!(p.controller_consumption_m3_s >= 0)) p.controller_consumption_m3_s = q.controller_flow_m3_s;
+}
+
+// [health] of a pump file: baseline, reference state, bands.
+void read_pump_health(section& root, pump_spec& p) {
   auto h = root.table("health");
-  p.baseline_drain_m3_s = positive(h, "baseline_drain_flow", D::volume_flow);
+  // the constant part: [health] constant_drain_flow, else [pump] controller_consumption or the
+  // geometry's controller consumption, else zero
+  if (const auto c = h.quantity_opt("constant_drain_flow", D::volume_flow)) {
+    if (!(*c >= 0)) throw h.error("constant_drain_flow", "must not be negative");
+    p.controller_consumption_m3_s = *c;
+  }
+  if (!(p.controller_consumption_m3_s >= 0)) p.controller_consumption_m3_s = 0.0;
+  p.baseline_drain_m3_s = h.quantity_opt("baseline_drain_flow", D::volume_flow).value_or(0.0);
+  if (h.has("baseline_fit_pressures")) {
+    p.fit_pressures_pa = h.quantity_list("baseline_fit_pressures", D::pressure);
+    p.fit_temperatures_k = h.quantity_list("baseline_fit_temperatures", D::temperature);
+    p.fit_drain_m3_s = h.quantity_list("baseline_fit_drain_flows", D::volume_flow);
+    if (p.fit_pressures_pa.size() < 2 || p.fit_temperatures_k.size() != p.fit_pressures_pa.size() ||
+        p.fit_drain_m3_s.size() != p.fit_pressures_pa.size())
+      throw h.error("baseline_fit_pressures", "needs two or more readings: pressures, temperatures and drain flows "
+                                              "of the same length");
+  } else if (!(p.baseline_drain_m3_s > 0)) {
+    throw h.error("baseline_drain_flow", "is needed (or baseline_fit_pressures, _temperatures, _drain_flows to fit it)");
+  }
+  if (h.has("baseline_drain_rise")) p.baseline_rise_k = h.temperature_step("baseline_drain_rise");
+  p.baseline_deadhead = h.choice("baseline_state", {"on stroke", "deadhead"}, "on stroke") == "deadhead";
   p.reference_dp_pa = positive(h, "reference_pressure", D::pressure);
   p.reference_temperature_k = h.quantity("reference_temperature", D::temperature);
   p.reference_speed_rev_s = positive(h, "reference_speed", D::rotational_speed);
@@ -529,9 +544,41 @@ pump_spec read_pump(const std::string& path) {
     if (!(*m > 0)) throw h.error("hot_margin", "must be above zero");
     p.hot_margin = *m;
   }
+  if (const auto m = h.number_opt("hot_baseline_factor")) {
+    if (!(*m > 0)) throw h.error("hot_baseline_factor", "must be above zero");
+    p.hot_baseline_factor = *m;
+  }
   p.clearance_from_drain = h.choice("clearance_temperature", {"oil", "drain"}, "oil") == "drain";
   p.bands_source = h.text("bands_source");
   h.finish();
+}
+}  // namespace
+
+pump_spec read_pump(const std::string& path) {
+  auto root = load_config(path);
+  pump_spec p;
+  p.oil = read_oil_ref(root);
+  auto pu = root.table("pump");
+  p.name = pu.text("name");
+  // health needs no geometry: a pump file may stop at [pump] and [health] (pistons then optional)
+  p.has_geometry = root.has("geometry");
+  const long z = p.has_geometry ? pu.integer("pistons") : pu.integer_opt("pistons").value_or(9);
+  if (z < 3 || z > 15) throw pu.error("pistons", "must lie between 3 and 15");
+  p.max_displacement_m3_rev = positive(pu, "max_displacement", D::displacement);
+  p.rated_speed_rev_s = positive(pu, "rated_speed", D::rotational_speed);
+  p.max_pressure_pa = positive(pu, "max_pressure", D::pressure);
+
+  if (const auto c = pu.quantity_opt("controller_consumption", D::volume_flow)) {
+    if (!(*c >= 0)) throw pu.error("controller_consumption", "must not be negative");
+    p.controller_consumption_m3_s = *c;
+  }
+  pu.finish();
+  if (p.has_geometry) read_pump_geometry(root, pu, p, z);
+  read_pump_health(root, p);
+  if (!root.has("sweep")) {
+    root.finish();
+    return p;
+  }
 
   auto sw = root.table("sweep");
   p.sweep_from_pa = positive(sw, "from", D::pressure);
@@ -561,6 +608,9 @@ std::vector<column_spec> field_columns() {
       {"drain temperature", column_kind::quantity, D::temperature, false},
       {"case pressure", column_kind::quantity, D::pressure, false},
       {"note", column_kind::text, D::pressure, false},
+      {"operating hours", column_kind::number, D::pressure, false},
+      {"state", column_kind::text, D::pressure, false},
+      {"event", column_kind::text, D::pressure, false},
   };
 }
 

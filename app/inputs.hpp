@@ -5,6 +5,7 @@
 #define PUMPLOSS_CLI_INPUTS_HPP
 
 #include <optional>
+#include <limits>
 #include <string>
 #include <vector>
 
@@ -122,6 +123,13 @@ struct pump_spec {
   std::vector<double> fraction_bands;   ///< drain / (V_max n) edges, ascending (3 values)
   std::vector<double> growth_bands;     ///< growth over baseline: moderate, large (2 values)
   double hot_margin = 1.0;              ///< drain rise flagged above this times the throttling rise
+  // health, version 2 (no geometry needed)
+  bool has_geometry = false;            ///< [geometry] given (the budget needs it, health does not)
+  double controller_consumption_m3_s = -1;  ///< constant drain part (negative until read)
+  std::vector<double> fit_pressures_pa, fit_temperatures_k, fit_drain_m3_s;  ///< baseline readings to fit
+  double baseline_rise_k = std::numeric_limits<double>::quiet_NaN();  ///< drain minus inlet at the reference state
+  bool baseline_deadhead = false;       ///< the baseline was read at deadhead
+  double hot_baseline_factor = 1.5;     ///< drain rise flagged above this times the baseline rise
   bool clearance_from_drain = false;    ///< viscosity at the drain temperature (else the oil temperature)
   std::string bands_source;
   // sweep

@@ -7,6 +7,7 @@
 
 #include "pumploss.h"
 #include "pumploss/health.hpp"
+#include "pumploss/health_monitor.hpp"
 #include "test_support.hpp"
 
 using pltest::kInf;
@@ -27,9 +28,9 @@ pumploss::health_reference<double> reference() {
   r.max_displacement_m3_rev = kV;
   r.reference_dp_pa = kDpRef;
   r.reference_t_k = kTRef;
-  r.viscosity = pumploss::d341_fit(313.15, 46e-6, 373.15, 6.8e-6).value;
-  r.rho_kg_m3 = 870.0;
-  r.cp_j_kg_k = 1900.0;
+  r.fluid = pumploss::typical_mineral_oil(pumploss::d341_fit(313.15, 46e-6, 373.15, 6.8e-6).value);
+  r.fluid.cp_j_kg_k = 1900.0;
+  r.reference_speed_rev_s = kN;
   return r;
 }
 pumploss::health_reading<double> at_reference(double fraction) {
@@ -94,14 +95,22 @@ TEST(HealthVerdict, CommonPracticeBandsAtAndAroundEachEdge) {
 
 TEST(HealthVerdict, NormalisationCollapsesReadingsFromOneLaminarLeak) {
   // Invented truth: a laminar drain of 4 % at the reference state. Readings at other pressures
-  // and temperatures follow q = q_ref (dp/dp_ref) (nu_ref/nu); normalising must undo it.
+  // and temperatures follow q = q_ref (dp/dp_ref) (mu_ref/mu), mu = rho nu (dynamic viscosity);
+  // normalising must undo it.
   const auto ref = reference();
   const double q_ref = 0.04 * kV * kN;
-  const double nu_ref = pumploss::d341_viscosity(ref.viscosity, kTRef).value;
+  const double mu_ref = pumploss::oil_dynamic_viscosity(ref.fluid, kTRef, 0.0).value;
+  auto ref50 = pumploss::health_reference<mp50>{};
+  ref50.max_displacement_m3_rev = kV;
+  ref50.reference_dp_pa = kDpRef;
+  ref50.reference_t_k = kTRef;
+  ref50.reference_speed_rev_s = kN;
+  ref50.fluid = pumploss::typical_mineral_oil(
+      pumploss::d341_fit<mp50>(mp50(313.15), mp50(46e-6), mp50(373.15), mp50(6.8e-6)).value);
   for (double dp : {60e5, 120e5, 250e5, 300e5}) {
     for (double t : {293.15, 313.15, 333.15, 353.15}) {
-      const double nu = pumploss::d341_viscosity(ref.viscosity, t).value;
-      const double q = q_ref * (dp / kDpRef) * (nu_ref / nu);
+      const double mu = pumploss::oil_dynamic_viscosity(ref.fluid, t, 0.0).value;
+      const double q = q_ref * (dp / kDpRef) * (mu_ref / mu);
       const pumploss::health_reading<double> r{q, dp + 1e5, 1e5, t, kN};
       const auto n = pumploss::health_normalise(ref, r);
       ASSERT_EQ(n.st, status::ok);
@@ -109,13 +118,81 @@ TEST(HealthVerdict, NormalisationCollapsesReadingsFromOneLaminarLeak) {
       const auto a = pumploss::assess_health(ref, pumploss::health_bands<double>{}, r);
       EXPECT_EQ(a.level, health_level::sound);
       EXPECT_EQ(static_cast<bool>(a.reasons & pumploss::reason_low_pressure_reading), dp < kDpRef / 2);
-      const auto n50 = pumploss::health_normalise<mp50>(
-          {mp50(kV), mp50(kDpRef), mp50(kTRef), pumploss::d341_fit<mp50>(mp50(313.15), mp50(46e-6), mp50(373.15), mp50(6.8e-6)).value,
-           mp50(870), mp50(1900)},
-          {mp50(q), mp50(dp + 1e5), mp50(1e5), mp50(t), mp50(kN)});
+      pumploss::health_reading<mp50> r50{mp50(q), mp50(dp + 1e5), mp50(1e5), mp50(t), mp50(kN)};
+      const auto n50 = pumploss::health_normalise<mp50>(ref50, r50);
       EXPECT_LE(pltest::rel_err(n.value, n50.value), 1e-13);
     }
   }
+}
+
+TEST(HealthVerdict, ConstantPlusLaminarReadAtOtherStatesNormalisesBackToBaseline) {
+  // SOURCES.md key health_generated_truth. Issue 14: a new pump with 0.3 L/min controller consumption and 4.0 L/min baseline at
+  // 250 bar and 50 degC, read at 100 bar and 20 degC (and elsewhere, at other speeds).
+  // Generated from the model's own law (truth): q = q_c + (q_base - q_c) (dp/dp_ref)(mu_ref/mu).
+  auto ref = reference();
+  ref.constant_m3_s = 0.3e-3 / 60;
+  ref.baseline_m3_s = 4.0e-3 / 60;
+  ref.rated_speed_rev_s = kN;
+  const double mu_ref = pumploss::oil_dynamic_viscosity(ref.fluid, kTRef, 0.0).value;
+  const pumploss::health_bands<double> bands{};
+  for (double dp : {80e5, 100e5, 180e5, 250e5, 280e5})
+    for (double t : {293.15, 303.15, 323.15, 343.15})
+      for (double n : {0.9 * kN, kN, 1.08 * kN}) {
+        const double mu = pumploss::oil_dynamic_viscosity(ref.fluid, t, 0.0).value;
+        const double q = ref.constant_m3_s + (ref.baseline_m3_s - ref.constant_m3_s) * (dp / kDpRef) * (mu_ref / mu);
+        const auto a = pumploss::assess_health(ref, bands, {q, dp, 0.0, t, n});
+        ASSERT_TRUE(pumploss::is_usable(a.st)) << dp << " " << t;
+        EXPECT_NEAR(a.drain_at_reference_m3_s / ref.baseline_m3_s, 1.0, 1e-12) << dp << " " << t << " " << n;
+        EXPECT_NEAR(a.growth, 0.0, 1e-12);
+        // the drain fraction is taken at the reference speed: 4.0 / 106.5 = 3.756 % at every speed
+        EXPECT_NEAR(a.fraction_at_reference, 4.0 / 106.5, 1e-12);
+        EXPECT_EQ(a.level, health_level::sound);
+      }
+  // The old treatment (everything laminar) called this pump worn: at 100 bar and 20 degC the
+  // reading is well below the baseline and the whole of it was scaled by about 11.
+  const double mu20 = pumploss::oil_dynamic_viscosity(ref.fluid, 293.15, 0.0).value;
+  const double q = ref.constant_m3_s + (ref.baseline_m3_s - ref.constant_m3_s) * (100e5 / kDpRef) * (mu_ref / mu20);
+  auto all_laminar = ref;
+  all_laminar.constant_m3_s = 0.0;
+  const auto wrong = pumploss::assess_health(all_laminar, bands, {q, 100e5, 0.0, 293.15, kN});
+  EXPECT_GT(wrong.drain_at_reference_m3_s, 1.5 * ref.baseline_m3_s);
+  // orifice share: a variable part that is half sqrt(dp) normalises back too
+  ref.orifice_share = 0.5;
+  for (double dp : {80e5, 160e5, 300e5}) {
+    const double mu = pumploss::oil_dynamic_viscosity(ref.fluid, 303.15, 0.0).value;
+    const double f = 0.5 * (dp / kDpRef) * (mu_ref / mu) + 0.5 * std::sqrt(dp / kDpRef);
+    const double qq = ref.constant_m3_s + (ref.baseline_m3_s - ref.constant_m3_s) * f;
+    EXPECT_NEAR(pumploss::health_normalise(ref, {qq, dp, 0.0, 303.15, kN}).value / ref.baseline_m3_s, 1.0, 1e-12);
+  }
+}
+
+TEST(HealthVerdict, FitsTheConstantPartFromBaselineReadingsAtTwoOrMorePressures) {
+  auto ref = reference();
+  const double mu_ref = pumploss::oil_dynamic_viscosity(ref.fluid, kTRef, 0.0).value;
+  const double qc = 0.3e-3 / 60, qlam = 3.7e-3 / 60;  // truth
+  std::vector<pumploss::health_reading<double>> rs;
+  for (double dp : {100e5, 175e5, 250e5})
+    for (double t : {318.15, 328.15}) {
+      const double mu = pumploss::oil_dynamic_viscosity(ref.fluid, t, 0.0).value;
+      rs.push_back({qc + qlam * (dp / kDpRef) * (mu_ref / mu), dp, 0.0, t, kN});
+    }
+  const auto f = pumploss::health_fit_constant(ref, rs.data(), rs.size());
+  ASSERT_EQ(f.st, status::ok);
+  EXPECT_NEAR(f.constant_m3_s / qc, 1.0, 1e-10);
+  EXPECT_NEAR(f.baseline_m3_s / (qc + qlam), 1.0, 1e-12);
+  EXPECT_LT(f.rms_m3_s, 1e-18);
+  // two pressures suffice
+  const pumploss::health_reading<double> same[] = {rs[0], rs[0]};
+  EXPECT_EQ(pumploss::health_fit_constant(ref, same, 2).st, status::insufficient_data);  // one value of dp/mu
+  const pumploss::health_reading<double> two[] = {rs[0], rs[4]};
+  EXPECT_NEAR(pumploss::health_fit_constant(ref, two, 2).constant_m3_s / qc, 1.0, 1e-10);
+  // a negative intercept is not physical: refitted through zero and reported
+  const pumploss::health_reading<double> neg[] = {{1e-5, 100e5, 0.0, kTRef, kN}, {4e-5, 250e5, 0.0, kTRef, kN}};
+  const auto fn = pumploss::health_fit_constant(ref, neg, 2);
+  EXPECT_EQ(fn.st, status::implausible);
+  EXPECT_EQ(fn.constant_m3_s, 0.0);
+  EXPECT_EQ(pumploss::health_fit_constant(ref, rs.data(), 1).st, status::insufficient_data);
+  EXPECT_EQ(pumploss::health_fit_constant<double>(ref, nullptr, 3).st, status::misuse);
 }
 
 TEST(HealthVerdict, GrowthOverBaselineAndHotDrain) {
@@ -132,12 +209,13 @@ TEST(HealthVerdict, GrowthOverBaselineAndHotDrain) {
   EXPECT_EQ(a.level, health_level::worn);
   EXPECT_TRUE(a.reasons & pumploss::reason_growth_large);
   EXPECT_TRUE(a.reasons & pumploss::reason_fraction_sound);
-  // Throttling 250 bar: 25e6 / (870 * 1900) = 15.124 K (hand). A 20 K rise is flagged, 12 K not.
+  // Throttling 250 bar: 25e6 / (rho(45 degC) * 1900) (hand). A 20 K rise is flagged, 12 K not.
   auto r = at_reference(0.03);
   r.inlet_t_k = 318.15;
   r.drain_t_k = 338.15;
   a = pumploss::assess_health(ref, bands, r);
-  EXPECT_NEAR(a.throttling_rise_k, 25e6 / (870.0 * 1900.0), 1e-12);
+  const double rho45 = pumploss::oil_density_at(ref.fluid, 318.15, 0.0).value;
+  EXPECT_NEAR(a.throttling_rise_k, 25e6 / (rho45 * 1900.0), 1e-12);
   EXPECT_EQ(a.level, health_level::elevated);
   EXPECT_TRUE(a.reasons & pumploss::reason_drain_hot);
   r.drain_t_k = 330.15;
@@ -156,14 +234,15 @@ TEST(HealthVerdict, BadReadings) {
   EXPECT_EQ(a.st, status::nonfinite);
   EXPECT_TRUE(std::isnan(a.fraction) && std::isnan(a.fraction_at_reference));
   r = at_reference(0.05);
-  r.outlet_pa = 0.0;  // no pressure difference: cannot normalise
-  EXPECT_EQ(pumploss::assess_health(ref, bands, r).st, status::domain);
+  r.outlet_pa = 0.0;  // no pressure difference: refused, too low to judge
+  EXPECT_EQ(pumploss::assess_health(ref, bands, r).st, status::out_of_validity);
+  EXPECT_EQ(pumploss::assess_health(ref, bands, r).refused, pumploss::refuse_pressure_too_low);
   r = at_reference(0.05);
   r.speed_rev_s = -1.0;
-  EXPECT_EQ(pumploss::assess_health(ref, bands, r).st, status::domain);
+  EXPECT_EQ(pumploss::assess_health(ref, bands, r).refused, pumploss::refuse_speed_far_from_rated);
   r = at_reference(0.05);
   r.oil_t_k = -5.0;
-  EXPECT_EQ(pumploss::assess_health(ref, bands, r).st, status::domain);
+  EXPECT_EQ(pumploss::assess_health(ref, bands, r).st, status::out_of_validity);
   pumploss::health_bands<double> crossed{};
   crossed.worn_min = 0.01;  // worn band below the acceptable band
   EXPECT_EQ(pumploss::assess_health(ref, crossed, at_reference(0.05)).st, status::domain);
@@ -245,4 +324,435 @@ TEST(HealthCapi, HandleLifecycleAndAssessment) {
   EXPECT_EQ(pumploss_drain_fraction(5.325e-3 / 60, 71e-6, 25.0, &frac), PUMPLOSS_OK);
   EXPECT_NEAR(frac, 0.05, 1e-15);
   EXPECT_EQ(pumploss_drain_fraction(5.325e-3 / 60, 71e-6, 25.0, nullptr), PUMPLOSS_EMISUSE);
+}
+
+TEST(HealthPlausibility, EveryRefusalAndFlag) {
+  auto ref = reference();
+  ref.constant_m3_s = 0.3e-3 / 60;
+  ref.rated_speed_rev_s = kN;
+  const pumploss::health_bands<double> bands{};
+  struct refusal_case {
+    const char* what;
+    pumploss::health_reading<double> r;
+    unsigned want;
+  };
+  const double q = 0.04 * kV * kN;
+  pumploss::health_reading<double> hot_drain{q, kDpRef, 0.0, kTRef, kN};
+  hot_drain.drain_t_k = 273.15 + 160;  // 160 degC: no oil in service
+  hot_drain.inlet_t_k = kTRef;
+  const refusal_case cases[] = {
+      {"zero drain (meter not connected)", {0.0, kDpRef, 0.0, kTRef, kN}, pumploss::refuse_drain_not_positive},
+      {"negative drain", {-q, kDpRef, 0.0, kTRef, kN}, pumploss::refuse_drain_not_positive},
+      {"below the constant part", {0.1e-3 / 60, kDpRef, 0.0, kTRef, kN}, pumploss::refuse_drain_below_constant},
+      {"oil at 140 degC", {q, kDpRef, 0.0, 413.15, kN}, pumploss::refuse_oil_temperature},
+      {"oil at -45 degC", {q, kDpRef, 0.0, 228.15, kN}, pumploss::refuse_oil_temperature},
+      {"drain at 160 degC", hot_drain, pumploss::refuse_drain_temperature},
+      {"speed 600 rpm", {q, kDpRef, 0.0, kTRef, 10.0}, pumploss::refuse_speed_far_from_rated},
+      {"pressure 30 bar", {q, 30e5, 0.0, kTRef, kN}, pumploss::refuse_pressure_too_low},
+      {"fraction above one", {1.2 * kV * kN, kDpRef, 0.0, kTRef, kN}, pumploss::refuse_fraction_above_one},
+  };
+  for (const auto& c : cases) {
+    const auto a = pumploss::assess_health(ref, bands, c.r);
+    EXPECT_EQ(a.st, status::out_of_validity) << c.what;
+    EXPECT_EQ(a.refused, c.want) << c.what;
+    EXPECT_TRUE(std::isnan(a.fraction_at_reference)) << c.what;
+    EXPECT_STRNE(pumploss::health_refusal_text(c.want), pumploss::health_refusal_text(0)) << c.what;
+  }
+  // flags: scored, with the reason
+  auto a = pumploss::assess_health(ref, bands, {q, kDpRef, 0.0, kTRef, 1.2 * kN});
+  EXPECT_EQ(a.st, status::ok);
+  EXPECT_TRUE(a.reasons & pumploss::reason_speed_off_rated);
+  a = pumploss::assess_health(ref, bands, {q, 100e5, 0.0, kTRef, kN});
+  EXPECT_TRUE(a.reasons & pumploss::reason_low_pressure_reading);
+  pumploss::health_reading<double> swapped{q, kDpRef, 0.0, kTRef, kN};
+  swapped.inlet_t_k = kTRef + 10;
+  swapped.drain_t_k = kTRef;
+  EXPECT_TRUE(pumploss::assess_health(ref, bands, swapped).reasons & pumploss::reason_drain_colder);
+}
+
+TEST(HealthPlausibility, TemperatureColumnThatLooksLikeFahrenheit) {
+  const pumploss::health_bands<double> bands{};
+  // 40-55 degC oil written in degF (104-131) under a degC header, read as degC then K
+  std::vector<double> f_as_c, c;
+  for (double tc : {40.0, 42.5, 45.0, 48.0, 50.0, 52.0, 55.0}) {
+    f_as_c.push_back(tc * 9 / 5 + 32 + 273.15);
+    c.push_back(tc + 273.15);
+  }
+  std::vector<double> work(f_as_c.size());
+  EXPECT_TRUE(pumploss::health_temperatures_look_fahrenheit(f_as_c.data(), f_as_c.size(), bands, work.data()));
+  EXPECT_FALSE(pumploss::health_temperatures_look_fahrenheit(c.data(), c.size(), bands, work.data()));
+  int looks = 0;
+  EXPECT_EQ(pumploss_health_looks_fahrenheit(f_as_c.data(), f_as_c.size(), &looks), PUMPLOSS_OK);
+  EXPECT_EQ(looks, 1);
+  EXPECT_EQ(pumploss_health_looks_fahrenheit(c.data(), c.size(), &looks), PUMPLOSS_OK);
+  EXPECT_EQ(looks, 0);
+}
+
+TEST(HealthVerdict, HotDrainAgainstThePumpsOwnBaselineRise) {
+  auto ref = reference();
+  ref.baseline_m3_s = 0.04 * kV * kN;
+  ref.baseline_rise_k = 4.0;  // measured at 250 bar, on stroke
+  const pumploss::health_bands<double> bands{};
+  auto r = at_reference(0.04);
+  r.inlet_t_k = 318.15;
+  r.drain_t_k = 318.15 + 4.5;  // normal
+  auto a = pumploss::assess_health(ref, bands, r);
+  EXPECT_NEAR(a.throttling_rise_k, 4.0, 1e-12);
+  EXPECT_FALSE(a.reasons & pumploss::reason_drain_hot);
+  r.drain_t_k = 318.15 + 6.5;  // above 1.5 x 4 K: trips on stroke (throttling, 14 K, would not)
+  a = pumploss::assess_health(ref, bands, r);
+  EXPECT_TRUE(a.reasons & pumploss::reason_drain_hot);
+  EXPECT_EQ(a.level, health_level::elevated);
+  // at half pressure the expected rise halves
+  r = {0.04 * kV * kN * 0.5, kDpRef / 2, 0.0, kTRef, kN};
+  r.inlet_t_k = 318.15;
+  r.drain_t_k = 318.15 + 3.5;
+  EXPECT_TRUE(pumploss::assess_health(ref, bands, r).reasons & pumploss::reason_drain_hot);
+  // deadhead: churning heat, a 12 K rise of a healthy pump is not compared with an on-stroke baseline
+  r = at_reference(0.04);
+  r.state = pumploss::operating_state::deadhead;
+  r.inlet_t_k = 318.15;
+  r.drain_t_k = 330.15;
+  a = pumploss::assess_health(ref, bands, r);
+  EXPECT_FALSE(a.reasons & pumploss::reason_drain_hot);
+  EXPECT_TRUE(a.reasons & pumploss::reason_state_differs);
+  EXPECT_EQ(a.level, health_level::sound);
+  // without a baseline rise, deadhead is not assessed either
+  ref.baseline_rise_k = kNaN;
+  EXPECT_FALSE(pumploss::assess_health(ref, bands, r).reasons & pumploss::reason_drain_hot);
+}
+
+TEST(HealthSteps, TabularCusumMontgomeryExample91) {
+  // SOURCES.md key montgomery_2009_ex91. D. C. Montgomery, Introduction to Statistical Quality Control, 6th ed., Wiley 2009,
+  // Example 9.1, Table 9.1 (from memory): 30 observations, the first 20 from N(10, 1), the last
+  // 10 from N(11, 1); mu0 = 10, sigma = 1, K = 0.5, H = 5. The upper CUSUM first exceeds H at
+  // observation 29 with C+ = 5.28 and N+ = 7: the shift began after observation 22 and the new
+  // mean is estimated as 10 + 0.5 + 5.28/7 = 11.25.
+  const double x[] = {9.45, 7.99, 9.29,  11.66, 12.16, 10.18, 8.04,  11.46, 9.20,  10.34,
+                      9.03, 11.47, 10.51, 9.40, 10.08, 9.37,  10.62, 10.31, 8.52,  10.84,
+                      10.90, 9.33, 12.29, 11.50, 10.60, 11.08, 10.38, 11.62, 11.31, 10.52};
+  pumploss::health_step<double> s[4];
+  std::size_t found = 0;
+  ASSERT_EQ(pumploss::health_detect_steps(x, 30, 10.0, 1.0, 0.5, 5.0, s, 4, static_cast<double*>(nullptr), found),
+            status::ok);
+  ASSERT_EQ(found, 1u);
+  EXPECT_EQ(s[0].signal_index + 1, 29u);  // observation 29 (1-based)
+  EXPECT_EQ(s[0].index + 1, 23u);         // first observation of the new level: 23
+  EXPECT_NEAR(s[0].after, 11.25, 0.005);
+  EXPECT_EQ(s[0].direction, 1);
+}
+
+namespace {
+// A pump's normalised drain series (truth): a slow wear trend, noise, and a step at `at`.
+std::vector<double> stepped_series(std::size_t n, std::size_t at, double jump, unsigned seed) {
+  std::vector<double> x(n);
+  unsigned long long st = seed;
+  auto unit = [&] {  // LCG -> approximately normal by the sum of 12 uniforms
+    double s = 0;
+    for (int k = 0; k < 12; ++k) {
+      st = st * 6364136223846793005ull + 1442695040888963407ull;
+      s += static_cast<double>(st >> 11) / 9007199254740992.0;
+    }
+    return s - 6.0;
+  };
+  for (std::size_t i = 0; i < n; ++i) x[i] = 4.0 + 0.002 * i + (i >= at ? jump : 0.0) + 0.05 * unit();
+  return x;
+}
+}  // namespace
+
+TEST(HealthSteps, FindsAKnownJumpAndFitsTheTrendAfterIt) {
+  for (unsigned seed = 1; seed <= 20; ++seed) {
+    const auto x = stepped_series(48, 30, 0.8, seed);  // 0.8 L/min jump = 16 sigma
+    std::vector<double> work(x.size());
+    pumploss::health_step<double> s[8];
+    std::size_t found = 0;
+    ASSERT_EQ(pumploss::health_detect_steps(x.data(), x.size(), kNaN, kNaN, 0.5, 5.0, s, 8, work.data(), found),
+              status::ok);
+    std::size_t abrupt = 0, at = 0;
+    for (std::size_t k = 0; k < found && k < 8; ++k)
+      if (s[k].abrupt) {
+        ++abrupt;
+        at = s[k].index;
+      }
+    ASSERT_EQ(abrupt, 1u) << seed;
+    EXPECT_EQ(at, 30u) << seed;
+    // the trend after the step recovers the wear slope 0.002 per reading within its noise
+    std::vector<double> t;
+    for (std::size_t i = at; i < x.size(); ++i) t.push_back(static_cast<double>(i));
+    const auto tr = pumploss::fit_health_trend(t.data(), x.data() + at, t.size(), 10.0);
+    EXPECT_NEAR(tr.slope_per_day, 0.002, 0.007) << seed;  // 3 standard errors of the slope (0.05/sqrt(484.5))
+  }
+  // no step: no abrupt signal on a pure trend with noise
+  const auto y = stepped_series(48, 1000, 0.0, 7);
+  std::vector<double> work(y.size());
+  pumploss::health_step<double> s[8];
+  std::size_t found = 0;
+  ASSERT_EQ(pumploss::health_detect_steps(y.data(), y.size(), kNaN, kNaN, 0.5, 5.0, s, 8, work.data(), found),
+            status::ok);
+  for (std::size_t k = 0; k < found && k < 8; ++k) EXPECT_FALSE(s[k].abrupt);
+  // bad input
+  EXPECT_EQ(pumploss::health_detect_steps(y.data(), 2, kNaN, kNaN, 0.5, 5.0, s, 8, work.data(), found),
+            status::insufficient_data);
+  EXPECT_EQ(pumploss::health_detect_steps<double>(nullptr, 2, kNaN, 1.0, 0.5, 5.0, s, 8, work.data(), found),
+            status::misuse);
+  const double flat[] = {1.0, 1.0, 1.0, 1.0};
+  EXPECT_EQ(pumploss::health_detect_steps(flat, 4, kNaN, kNaN, 0.5, 5.0, s, 8, work.data(), found),
+            status::insufficient_data);
+}
+
+TEST(HealthTrend, ProjectionStaysWithinTheDataSpanAndAgreesWithTheVerdict) {
+  std::vector<double> days, f;
+  for (int i = 0; i < 10; ++i) {
+    days.push_back(30.0 * i);
+    f.push_back(0.04 + 1e-4 * 30.0 * i);
+  }
+  auto t = pumploss::fit_health_trend(days.data(), f.data(), days.size(), 0.15);
+  EXPECT_EQ(t.span, 270.0);
+  // 830 days ahead, the data span 270 days: not projected
+  EXPECT_EQ(pumploss::health_projection(t, health_level::sound).kind, pumploss::projection_kind::beyond_span);
+  t = pumploss::fit_health_trend(days.data(), f.data(), days.size(), 0.09);  // 0.067 -> 0.09: 230 days
+  auto p = pumploss::health_projection(t, health_level::acceptable);
+  EXPECT_EQ(p.kind, pumploss::projection_kind::projected);
+  EXPECT_NEAR(p.time_to_worn, 230.0, 1e-8);
+  // a worn verdict is never "worn in N days"
+  EXPECT_EQ(pumploss::health_projection(t, health_level::worn).kind, pumploss::projection_kind::already_worn);
+  const double flat[] = {0.05, 0.05, 0.05};
+  const double d3[] = {0.0, 1.0, 2.0};
+  EXPECT_EQ(pumploss::health_projection(pumploss::fit_health_trend(d3, flat, 3, 0.15), health_level::sound).kind,
+            pumploss::projection_kind::not_rising);
+  EXPECT_EQ(pumploss::health_projection(pumploss::fit_health_trend(d3, flat, 1, 0.15), health_level::sound).kind,
+            pumploss::projection_kind::unavailable);
+}
+
+namespace {
+// A long series of field readings from a known truth: constant part + laminar part that grows
+// with wear, read at varying pressure, temperature and speed, with noise and a step.
+struct series_gen {
+  pumploss::health_reference<double> ref;
+  double mu_ref;
+  unsigned long long st = 12345;
+  double uniform() {
+    st = st * 6364136223846793005ull + 1442695040888963407ull;
+    return static_cast<double>(st >> 11) / 9007199254740992.0;
+  }
+  pumploss::health_reading<double> at(std::size_t i, std::size_t n) {
+    const double wear = 1.0 + 2.5 * static_cast<double>(i) / static_cast<double>(n) + (i > n / 2 ? 0.4 : 0.0);
+    const double lam_ref = (4.0e-3 / 60 - ref.constant_m3_s) * wear * (1 + 0.01 * (uniform() - 0.5));
+    const double dp = 150e5 + 120e5 * uniform();
+    const double t = 308.15 + 25 * uniform();
+    const double mu = pumploss::oil_dynamic_viscosity(ref.fluid, t, 0.0).value;
+    pumploss::health_reading<double> r{ref.constant_m3_s + lam_ref * (dp / ref.reference_dp_pa) * (mu_ref / mu), dp, 0.0,
+                                       t, kN * (0.95 + 0.1 * uniform())};
+    if (i % 97 == 50) r.drain_flow_m3_s = 0.0;  // meter disconnected: refused
+    return r;
+  }
+};
+}  // namespace
+
+TEST(HealthMonitor, LongSeriesGivesTheBatchVerdicts) {
+  series_gen g;
+  g.ref = reference();
+  g.ref.constant_m3_s = 0.3e-3 / 60;
+  g.ref.rated_speed_rev_s = kN;
+  g.mu_ref = pumploss::oil_dynamic_viscosity(g.ref.fluid, kTRef, 0.0).value;
+  const pumploss::health_bands<double> bands{};
+  pumploss::health_monitor_settings<double> set;
+  pumploss::health_monitor<double> m;
+  ASSERT_EQ(m.init(g.ref, bands, set), status::ok);  // no baseline: learned
+  const std::size_t n = 3000;
+  std::vector<pumploss::health_reading<double>> rs;
+  for (std::size_t i = 0; i < n; ++i) rs.push_back(g.at(i, n));
+  // learned baseline = the mean of the first 8 accepted normalised readings
+  double learned = 0;
+  std::size_t k = 0;
+  for (std::size_t i = 0; k < set.learn_count; ++i) {
+    const auto a = pumploss::assess_health(g.ref, bands, rs[i]);
+    if (!pumploss::is_error(a.st)) {
+      learned += a.drain_at_reference_m3_s;
+      ++k;
+    }
+  }
+  learned /= static_cast<double>(set.learn_count);
+  auto batch_ref = g.ref;
+  std::size_t accepted = 0, refused = 0, level_changes = 0, abrupt_up = 0, agree = 0, compared = 0;
+  std::vector<health_level> batch_levels;
+  health_level prev = health_level::sound;
+  for (std::size_t i = 0; i < n; ++i) {
+    batch_ref.baseline_m3_s = accepted >= set.learn_count ? learned : kNaN;
+    const auto b = pumploss::assess_health(batch_ref, bands, rs[i]);
+    const auto o = m.feed(static_cast<double>(i), rs[i]);
+    ASSERT_EQ(o.assessment.st, b.st) << i;
+    if (pumploss::is_error(b.st)) {
+      ++refused;
+      EXPECT_TRUE(o.events & pumploss::monitor_refused);
+      EXPECT_EQ(o.level, prev);
+      continue;
+    }
+    ++accepted;
+    EXPECT_EQ(o.raw_level, b.level) << i;  // every reading: the batch verdict
+    EXPECT_DOUBLE_EQ(o.assessment.drain_at_reference_m3_s, b.drain_at_reference_m3_s);
+    batch_levels.push_back(b.level);
+    // the confirmed verdict equals the batch verdict once it has held for the debounce count
+    const std::size_t L = batch_levels.size();
+    if (L >= set.debounce_count + 1) {
+      bool held = true;
+      for (std::size_t j = L - set.debounce_count - 1; j < L; ++j) held = held && batch_levels[j] == b.level;
+      if (held) {
+        ++compared;
+        if (o.level == b.level) ++agree;
+      }
+    }
+    if (o.events & pumploss::monitor_level_changed) ++level_changes;
+    if (o.events & pumploss::monitor_step_up) {
+      ++abrupt_up;
+      EXPECT_NEAR(o.step_time, static_cast<double>(n / 2 + 1), 2.0);  // the step of the truth
+    }
+    prev = o.level;
+  }
+  EXPECT_EQ(refused, m.refused());
+  EXPECT_EQ(accepted, m.accepted());
+  EXPECT_NEAR(m.baseline_m3_s(), learned, 1e-18);
+  // hysteresis may hold a worse level near a band edge; on rising wear the two agree nearly always
+  EXPECT_GE(static_cast<double>(agree), 0.99 * static_cast<double>(compared));
+  EXPECT_GE(abrupt_up, 1u);
+  EXPECT_EQ(m.level(), health_level::worn);
+  // no flicker: the level climbs sound -> ... -> worn with few changes
+  EXPECT_LE(level_changes, 6u);
+}
+
+TEST(HealthMonitor, DebounceAndHysteresisStopFlicker) {
+  auto ref = reference();
+  ref.baseline_m3_s = 0.04 * kV * kN;
+  ref.rated_speed_rev_s = kN;
+  const pumploss::health_bands<double> bands{};
+  pumploss::health_monitor<double> m;
+  ASSERT_EQ(m.init(ref, bands, {}), status::ok);
+  // readings that alternate across the sound edge (5 %): the batch verdict flickers, the monitor not
+  std::size_t changes = 0;
+  for (int i = 0; i < 40; ++i) {
+    const auto o = m.feed(i, at_reference(i % 2 ? 0.0505 : 0.0495));
+    if (o.events & pumploss::monitor_level_changed) ++changes;
+  }
+  EXPECT_LE(changes, 1u);
+  // a lasting rise needs debounce_count readings to be confirmed
+  int confirmed_after = -1;
+  for (int i = 0; i < 10; ++i) {
+    const auto o = m.feed(40 + i, at_reference(0.12));
+    if (o.level == health_level::worn && confirmed_after < 0) confirmed_after = i + 1;  // 12 %, growth +200 %
+  }
+  EXPECT_EQ(confirmed_after, 3);
+}
+
+TEST(HealthMonitor, StateSavedAndRestoredAcrossARestart) {
+  series_gen g;
+  g.ref = reference();
+  g.ref.rated_speed_rev_s = kN;
+  g.mu_ref = pumploss::oil_dynamic_viscosity(g.ref.fluid, kTRef, 0.0).value;
+  const pumploss::health_bands<double> bands{};
+  pumploss::health_monitor<double> a, b, c;
+  ASSERT_EQ(a.init(g.ref, bands, {}), status::ok);
+  ASSERT_EQ(b.init(g.ref, bands, {}), status::ok);
+  const std::size_t n = 600;
+  std::vector<pumploss::health_reading<double>> rs;
+  for (std::size_t i = 0; i < n; ++i) rs.push_back(g.at(i, n));
+  double buf[pumploss::health_monitor<double>::state_count];
+  for (std::size_t i = 0; i < n; ++i) {
+    const auto oa = a.feed(static_cast<double>(i), rs[i]);
+    if (i == 250) {  // restart: save, make a new monitor, restore
+      ASSERT_EQ(a.save(buf, pumploss::health_monitor<double>::state_count), status::ok);
+      ASSERT_EQ(b.restore(buf, pumploss::health_monitor<double>::state_count), status::ok);
+    }
+    if (i > 250) {
+      const auto ob = b.feed(static_cast<double>(i), rs[i]);
+      EXPECT_EQ(oa.level, ob.level) << i;
+      EXPECT_EQ(oa.events, ob.events) << i;
+    }
+  }
+  // a state of another description, another version or a damaged buffer is refused
+  auto other = g.ref;
+  other.constant_m3_s = 1e-6;
+  ASSERT_EQ(c.init(other, bands, {}), status::ok);
+  EXPECT_EQ(c.restore(buf, pumploss::health_monitor<double>::state_count), status::out_of_validity);
+  double damaged[pumploss::health_monitor<double>::state_count];
+  ASSERT_EQ(a.save(damaged, pumploss::health_monitor<double>::state_count), status::ok);
+  damaged[18] = 1e9;  // a CUSUM run longer than the readings
+  EXPECT_EQ(b.restore(damaged, pumploss::health_monitor<double>::state_count), status::out_of_validity);
+  buf[1] = 2;
+  EXPECT_EQ(b.restore(buf, pumploss::health_monitor<double>::state_count), status::out_of_validity);
+  EXPECT_EQ(a.save(buf, 10), status::buffer_too_small);
+  EXPECT_EQ(b.restore(buf, 10), status::buffer_too_small);
+}
+
+TEST(HealthCapi, MonitorAndVersion2Functions) {
+  pumploss_health* h = nullptr;
+  ASSERT_EQ(pumploss_health_create(kV, kDpRef, kTRef, 313.15, 46e-6, 373.15, 6.8e-6, 870.0, 1900.0, &h), PUMPLOSS_OK);
+  pumploss_health_monitor* m = nullptr;
+  EXPECT_EQ(pumploss_health_monitor_create(h, 8, 3, 0.05, &m), PUMPLOSS_EMISUSE);  // no description yet
+  EXPECT_EQ(m, nullptr);
+  ASSERT_EQ(pumploss_health_set_description(h, 0.3e-3 / 60, 0.0, kN, kN), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_health_set_description(h, 0.3e-3 / 60, 1.5, kN, kN), PUMPLOSS_EDOMAIN);
+  ASSERT_EQ(pumploss_health_set_baseline(h, 4.0e-3 / 60), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_health_set_baseline_rise(h, 4.0, PUMPLOSS_STATE_ON_STROKE), PUMPLOSS_OK);
+  int level, reasons, refused;
+  double qn, fr, g;
+  // the issue's new pump at 100 bar, 20 degC reads back its baseline
+  const auto ref = [&] {
+    auto r = reference();
+    r.fluid.rho_ref_kg_m3 = 870.0;
+    r.fluid.t_ref_k = kTRef;
+    return r;
+  }();
+  const double mu_ref = pumploss::oil_dynamic_viscosity(ref.fluid, kTRef, 0.0).value;
+  const double mu20 = pumploss::oil_dynamic_viscosity(ref.fluid, 293.15, 0.0).value;
+  const double q = 0.3e-3 / 60 + 3.7e-3 / 60 * (100e5 / kDpRef) * (mu_ref / mu20);
+  ASSERT_EQ(pumploss_health_assess_v2(h, q, 100e5, 0.0, 293.15, kN * 2 / 3 * 1.1, kNaN, kNaN, PUMPLOSS_STATE_ON_STROKE,
+                                      &level, &reasons, &refused, &qn, &fr, &g),
+            PUMPLOSS_OK);
+  EXPECT_NEAR(qn / (4.0e-3 / 60), 1.0, 1e-12);
+  EXPECT_NEAR(fr, 4.0 / 106.5, 1e-12);
+  EXPECT_EQ(level, PUMPLOSS_HEALTH_SOUND);
+  EXPECT_TRUE(reasons & PUMPLOSS_REASON_SPEED_OFF_RATED);
+  EXPECT_EQ(pumploss_health_assess_v2(h, 0.0, 250e5, 0.0, 323.15, kN, kNaN, kNaN, PUMPLOSS_STATE_ON_STROKE, &level,
+                                      &reasons, &refused, &qn, &fr, &g),
+            PUMPLOSS_EVALIDITY);
+  EXPECT_EQ(refused, PUMPLOSS_REFUSE_DRAIN_NOT_POSITIVE);
+  EXPECT_TRUE(std::isnan(qn));
+  EXPECT_EQ(level, -1);
+  // fitted constant part
+  const double dps[] = {100e5, 250e5};
+  const double ts[] = {kTRef, kTRef};
+  const double qs[] = {0.3e-3 / 60 + 3.7e-3 / 60 * 0.4, 4.0e-3 / 60};
+  double qc, qb;
+  ASSERT_EQ(pumploss_health_fit_constant(h, qs, dps, ts, 2, &qc, &qb), PUMPLOSS_OK);
+  EXPECT_NEAR(qc / (0.3e-3 / 60), 1.0, 1e-10);
+  EXPECT_NEAR(qb / (4.0e-3 / 60), 1.0, 1e-12);
+  // the monitor
+  ASSERT_EQ(pumploss_health_monitor_create(h, 4, 2, 0.05, &m), PUMPLOSS_OK);
+  int raw, events;
+  double b, s, l, t;
+  EXPECT_EQ(pumploss_health_monitor_state(m, &level, &b, &s, &l, &t), PUMPLOSS_EDATA);
+  for (int i = 0; i < 12; ++i) {
+    const double qq = (i < 8 ? 4.0e-3 : 9.0e-3) / 60 * (1 + 0.002 * (i % 3));
+    ASSERT_EQ(pumploss_health_monitor_feed(m, i, qq, 250e5, 0.0, kTRef, kN, kNaN, kNaN, PUMPLOSS_STATE_ON_STROKE,
+                                           &level, &raw, &events, &qn),
+              PUMPLOSS_OK);
+  }
+  EXPECT_EQ(level, PUMPLOSS_HEALTH_WORN);  // growth +125 %
+  ASSERT_EQ(pumploss_health_monitor_state(m, &level, &b, &s, &l, &t), PUMPLOSS_OK);
+  EXPECT_NEAR(b, 4.0e-3 / 60, 1e-15);  // the given baseline
+  EXPECT_EQ(t, 8.0);                   // the step at reading 8
+  double st[PUMPLOSS_HEALTH_MONITOR_STATE_COUNT];
+  EXPECT_EQ(pumploss_health_monitor_save(m, st, 3), PUMPLOSS_EBUFFER);
+  EXPECT_TRUE(std::isnan(st[0]));
+  ASSERT_EQ(pumploss_health_monitor_save(m, st, PUMPLOSS_HEALTH_MONITOR_STATE_COUNT), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_health_monitor_restore(m, st, PUMPLOSS_HEALTH_MONITOR_STATE_COUNT), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_health_monitor_feed(m, 13, 0.0, 250e5, 0.0, kTRef, kN, kNaN, kNaN, PUMPLOSS_STATE_ON_STROKE,
+                                         &level, &raw, &events, &qn),
+            PUMPLOSS_EVALIDITY);
+  EXPECT_EQ(level, PUMPLOSS_HEALTH_WORN);
+  EXPECT_EQ(raw, -1);
+  EXPECT_TRUE(events & PUMPLOSS_MONITOR_REFUSED);
+  pumploss_health_monitor_destroy(m);
+  pumploss_health_monitor_destroy(nullptr);
+  pumploss_health_destroy(h);
 }

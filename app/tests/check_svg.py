@@ -103,15 +103,19 @@ def main():
         texts = " ".join(t.text or "" for t in root.iter(SVG + "text"))
         check("never block, cap or valve a case drain" in texts, "drain-line: case-drain caution in the footer")
 
-        # health: normalised and raw drain flow of 42 readings, the trend, baseline and bands
+        # health: normalised and raw drain flow of the 41 scored readings (one refused), the trend
+        # since the last step, baseline and bands, the case-drain caution in the footer
         root = ET.parse(os.path.join(out, "health.svg")).getroot()
         series = groups(root, "series")
-        check(list(series) == ["normalised drain flow", "drain flow as read", "trend, all readings"],
-              "health: series %r" % list(series))
-        check(npoints(series["normalised drain flow"]) == 42, "health: 42 readings")
+        names = list(series)
+        check(names[:2] == ["normalised drain flow", "drain flow as read"] and len(names) == 3
+              and names[2].startswith("trend since "), "health: series %r" % names)
+        check(npoints(series["normalised drain flow"]) == 41, "health: 41 scored readings")
         lims = list(groups(root, "limit"))
         check(len(lims) == 4 and lims[0].startswith("baseline") and lims[3].startswith("worn"),
               "health: limits %r" % lims)
+        footer = " ".join(t.text or "" for t in root.iter(SVG + "text"))
+        check("blows the shaft seal" in footer and "not a clearance to run" in footer, "health: caution in the footer")
 
         # budget: one stacked area per leakage path of the pump file
         root = ET.parse(os.path.join(out, "budget.svg")).getroot()

@@ -2054,6 +2054,196 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_reason_text(int reason);
  *  @param level a PUMPLOSS_HEALTH_* value
  *  @return "sound", "acceptable", "elevated", "worn", or "unknown" (static storage) */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_level_name(int level);
+
+/* -- health, version 2: one normalisation model, plausibility, streaming monitor (h4) -- */
+#define PUMPLOSS_REASON_SPEED_OFF_RATED 0x400     /**< Speed away from rated (flag). */
+#define PUMPLOSS_REASON_DRAIN_COLDER 0x800        /**< Drain colder than inlet: sensors swapped? (flag) */
+#define PUMPLOSS_REASON_STATE_DIFFERS 0x1000      /**< Operating state differs from the baseline's: heat not assessed. */
+#define PUMPLOSS_REASON_BELOW_CONSTANT 0x2000     /**< Reading mostly the constant part: laminar part uncertain. */
+#define PUMPLOSS_REFUSE_DRAIN_NOT_POSITIVE 0x01   /**< Refused: zero or negative drain. */
+#define PUMPLOSS_REFUSE_DRAIN_BELOW_CONSTANT 0x02 /**< Refused: drain below the controller's constant consumption. */
+#define PUMPLOSS_REFUSE_OIL_TEMPERATURE 0x04      /**< Refused: oil temperature outside what oil can be at. */
+#define PUMPLOSS_REFUSE_DRAIN_TEMPERATURE 0x08    /**< Refused: drain temperature outside what oil can be at. */
+#define PUMPLOSS_REFUSE_SPEED 0x10                /**< Refused: speed far from rated. */
+#define PUMPLOSS_REFUSE_PRESSURE_TOO_LOW 0x20     /**< Refused: pressure too low to judge. */
+#define PUMPLOSS_REFUSE_FRACTION_ABOVE_ONE 0x40   /**< Refused: normalised drain above the displacement flow. */
+#define PUMPLOSS_STATE_UNKNOWN 0   /**< Operating state not recorded. */
+#define PUMPLOSS_STATE_ON_STROKE 1 /**< Operating state: delivering flow at the outlet pressure. */
+#define PUMPLOSS_STATE_DEADHEAD 2  /**< Operating state: compensated to zero flow (churning heat). */
+#define PUMPLOSS_MONITOR_LEARNING 0x01         /**< Monitor event: still learning. */
+#define PUMPLOSS_MONITOR_BASELINE_LEARNED 0x02 /**< Monitor event: learning completed with this reading. */
+#define PUMPLOSS_MONITOR_REFUSED 0x04          /**< Monitor event: reading refused (see the status). */
+#define PUMPLOSS_MONITOR_STEP_UP 0x08          /**< Monitor event: abrupt step up (tabular CUSUM). */
+#define PUMPLOSS_MONITOR_STEP_DOWN 0x10        /**< Monitor event: abrupt step down. */
+#define PUMPLOSS_MONITOR_SHIFT 0x20            /**< Monitor event: gradual level shift. */
+#define PUMPLOSS_MONITOR_LEVEL_CHANGED 0x40    /**< Monitor event: the confirmed verdict changed. */
+#define PUMPLOSS_MONITOR_PENDING 0x80          /**< Monitor event: another level pending (debounce). */
+/** Length (doubles) of a saved monitor state, layout version 1. */
+#define PUMPLOSS_HEALTH_MONITOR_STATE_COUNT 96
+
+/**
+ * Describe the pump for health without geometry (version 2 model).
+ * Normalisation: q_ref = q_c + (q - q_c) / F with F = (1 - s)(dp/dp_ref)(mu_ref/mu) + s sqrt(dp/dp_ref),
+ * mu the dynamic viscosity at the gap temperature; drain fraction against V_max n_ref.
+ * @param h the handle
+ * @param constant_m3_s constant part q_c (controller consumption), m^3/s (>= 0, below the baseline)
+ * @param orifice_share share s of the variable part that scales as sqrt(dp), 0..1 (0: laminar)
+ * @param reference_speed_rev_s speed of the displacement flow of the drain fraction, rev/s (> 0)
+ * @param rated_speed_rev_s rated speed for the speed check, rev/s (> 0)
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE.
+ * @sa pumploss::health_normalise
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_description(pumploss_health *h, double constant_m3_s,
+                                                               double orifice_share, double reference_speed_rev_s,
+                                                               double rated_speed_rev_s);
+/**
+ * Set the pump's own baseline drain temperature rise (drain minus inlet) at the reference state,
+ * against which the hot-drain indicator compares (scaled by dp/dp_ref, flagged above 1.5 x).
+ * @param h the handle
+ * @param rise_k baseline rise, K (>= 0)
+ * @param state PUMPLOSS_STATE_ON_STROKE or PUMPLOSS_STATE_DEADHEAD: the state it was read in
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_baseline_rise(pumploss_health *h, double rise_k, int state);
+/**
+ * Check and assess one reading with the version 2 model (after pumploss_health_set_description()).
+ * @param h the handle (read only)
+ * @param drain_flow_m3_s case drain flow, m^3/s
+ * @param outlet_pa outlet pressure (gauge), Pa
+ * @param case_pa case pressure (gauge), Pa
+ * @param oil_t_k oil temperature at the gaps, K
+ * @param speed_rev_s shaft speed, rev/s
+ * @param drain_t_k drain temperature, K; NaN when not measured
+ * @param inlet_t_k inlet temperature, K; NaN when not measured
+ * @param state PUMPLOSS_STATE_*
+ * @param level receives the level (-1 on error)
+ * @param reasons receives PUMPLOSS_REASON_* bits (0 on error)
+ * @param refused receives PUMPLOSS_REFUSE_* bits (set with PUMPLOSS_EVALIDITY)
+ * @param drain_at_reference_m3_s receives the normalised drain, m^3/s
+ * @param fraction_at_reference receives the normalised drain over V_max n_ref
+ * @param growth receives the growth over the baseline (0 without one; see PUMPLOSS_REASON_NO_BASELINE)
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE; PUMPLOSS_EVALIDITY for a refused reading;
+ *         PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE (also without a description).
+ * @sa pumploss::assess_health
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess_v2(const pumploss_health *h, double drain_flow_m3_s,
+                                                         double outlet_pa, double case_pa, double oil_t_k,
+                                                         double speed_rev_s, double drain_t_k, double inlet_t_k,
+                                                         int state, int *level, int *reasons, int *refused,
+                                                         double *drain_at_reference_m3_s,
+                                                         double *fraction_at_reference, double *growth);
+/**
+ * Fit the constant part and the baseline from baseline readings of a new pump at two or more
+ * pressures (laminar part scaled by dp/mu).
+ * @param h the handle (oil and reference state)
+ * @param drain_flow_m3_s readings, m^3/s (> 0)
+ * @param dp_pa their outlet-to-case pressures, Pa (> 0)
+ * @param oil_t_k their gap temperatures, K
+ * @param count number of readings, 2 to 64
+ * @param constant_m3_s receives the constant part, m^3/s
+ * @param baseline_m3_s receives the baseline at the reference state, m^3/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when the fitted constant was negative (refitted
+ *         through zero); PUMPLOSS_EDATA for one value of dp/mu; PUMPLOSS_EDOMAIN, ...
+ * @sa pumploss::health_fit_constant
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_fit_constant(const pumploss_health *h, const double drain_flow_m3_s[],
+                                                            const double dp_pa[], const double oil_t_k[],
+                                                            size_t count, double *constant_m3_s,
+                                                            double *baseline_m3_s);
+/**
+ * Whether a temperature column read as degC looks like degF values.
+ * @param t_k the temperatures as read, converted to K (NaN skipped)
+ * @param count number of values (<= 4096)
+ * @param looks receives 1 when it looks like degF, else 0
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN (too many values), PUMPLOSS_EMISUSE.
+ * @sa pumploss::health_temperatures_look_fahrenheit
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_looks_fahrenheit(const double t_k[], size_t count, int *looks);
+/** A sentence for one refusal bit.
+ *  @param refusal one PUMPLOSS_REFUSE_* bit
+ *  @return the sentence (static storage, never NULL) */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_refusal_text(int refusal);
+/** The case-drain caution for reports and screens that show a health verdict: lines separated
+ *  by '\n' (never block, cap or valve a drain; a "sound" verdict is not a clearance to run).
+ *  @return the text (static storage, never NULL) */
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_caution(void);
+
+/** Opaque streaming health monitor (constant memory, no allocation after creation). Feeding
+ *  mutates it (one writer at a time); pumploss_health_monitor_state() and _save() only read it. */
+typedef struct pumploss_health_monitor pumploss_health_monitor;
+/**
+ * Create a monitor from a described health handle (pumploss_health_set_description(); its
+ * baseline, or none to learn one, and its bands are copied).
+ * @param h the health handle
+ * @param learn_count readings that learn the noise and CUSUM target (and the baseline), 2 to 100000
+ * @param debounce_count readings a new level must hold, 1 to 100000
+ * @param hysteresis relative margin below a band edge to step down a level, 0 to 0.5
+ * @param out receives the monitor (NULL on error)
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE, PUMPLOSS_ENOMEM.
+ * @sa pumploss::health_monitor
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_create(const pumploss_health *h, size_t learn_count,
+                                                              size_t debounce_count, double hysteresis,
+                                                              pumploss_health_monitor **out);
+/** Destroy a monitor; NULL is a no-op.
+ *  @param m the monitor */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_health_monitor_destroy(pumploss_health_monitor *m);
+/**
+ * Feed one reading (a mutation: takes a non-const handle; never allocates).
+ * @param m the monitor
+ * @param time the reading's time (days or operating hours, >= 0), for step times
+ * @param drain_flow_m3_s case drain flow, m^3/s
+ * @param outlet_pa outlet pressure (gauge), Pa
+ * @param case_pa case pressure (gauge), Pa
+ * @param oil_t_k oil temperature at the gaps, K
+ * @param speed_rev_s shaft speed, rev/s
+ * @param drain_t_k drain temperature, K (NaN: not measured)
+ * @param inlet_t_k inlet temperature, K (NaN: not measured)
+ * @param state PUMPLOSS_STATE_*
+ * @param level receives the confirmed level (also for a refused reading; -1 on other errors)
+ * @param raw_level receives this reading's own level (-1 when refused)
+ * @param events receives PUMPLOSS_MONITOR_* bits
+ * @param drain_at_reference_m3_s receives the normalised drain, m^3/s
+ * @return as pumploss_health_assess_v2().
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_feed(pumploss_health_monitor *m, double time,
+                                                            double drain_flow_m3_s, double outlet_pa,
+                                                            double case_pa, double oil_t_k, double speed_rev_s,
+                                                            double drain_t_k, double inlet_t_k, int state,
+                                                            int *level, int *raw_level, int *events,
+                                                            double *drain_at_reference_m3_s);
+/**
+ * Read the monitor's state (read only).
+ * @param m the monitor
+ * @param level receives the confirmed level
+ * @param baseline_m3_s receives the baseline in use (given or learned), m^3/s
+ * @param sigma_m3_s receives the noise of the normalised drain, m^3/s
+ * @param level_m3_s receives the current CUSUM level, m^3/s
+ * @param last_step_time receives the time of the last abrupt step, -1 when none
+ * @return PUMPLOSS_OK; PUMPLOSS_EDATA while learning; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_state(const pumploss_health_monitor *m, int *level,
+                                                             double *baseline_m3_s, double *sigma_m3_s,
+                                                             double *level_m3_s, double *last_step_time);
+/**
+ * Save the monitor's dynamic state (versioned layout) to a caller buffer.
+ * @param m the monitor
+ * @param state receives PUMPLOSS_HEALTH_MONITOR_STATE_COUNT values (NaN on error)
+ * @param capacity length of state, >= PUMPLOSS_HEALTH_MONITOR_STATE_COUNT
+ * @return PUMPLOSS_OK, PUMPLOSS_EBUFFER, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_save(const pumploss_health_monitor *m, double state[],
+                                                            size_t capacity);
+/**
+ * Restore a saved state into a monitor created from the same description, bands and settings.
+ * @param m the monitor (unchanged on error)
+ * @param state the saved values
+ * @param count their number, >= PUMPLOSS_HEALTH_MONITOR_STATE_COUNT
+ * @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY for another version, description or a damaged buffer;
+ *         PUMPLOSS_EBUFFER; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_restore(pumploss_health_monitor *m, const double state[],
+                                                               size_t count);
 /** @} */
 /** @name Piston pump leakage budget
  *  A swashplate axial piston pump described by its geometry and clearances (an opaque handle):

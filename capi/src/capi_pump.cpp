@@ -5,6 +5,7 @@
 
 #include "capi_common.hpp"
 #include "pumploss/health.hpp"
+#include "pumploss/health_monitor.hpp"
 #include "pumploss/piston_pump.hpp"
 
 using pumploss::capi::call;
@@ -26,6 +27,14 @@ static_assert(PUMPLOSS_REASON_LOW_PRESSURE == pumploss::reason_low_pressure_read
 static_assert(PUMPLOSS_REASON_NO_BASELINE == pumploss::reason_no_baseline, "reason");
 static_assert(PUMPLOSS_REASON_NO_TEMPERATURES == pumploss::reason_no_temperatures, "reason");
 
+static_assert(PUMPLOSS_HEALTH_MONITOR_STATE_COUNT == pumploss::health_monitor<double>::state_count, "state");
+static_assert(PUMPLOSS_STATE_ON_STROKE == static_cast<int>(pumploss::operating_state::on_stroke), "state");
+static_assert(PUMPLOSS_STATE_DEADHEAD == static_cast<int>(pumploss::operating_state::deadhead), "state");
+static_assert(PUMPLOSS_STATE_UNKNOWN == static_cast<int>(pumploss::operating_state::unknown), "state");
+static_assert(PUMPLOSS_REASON_BELOW_CONSTANT == pumploss::reason_below_constant_part, "reason");
+static_assert(PUMPLOSS_REFUSE_FRACTION_ABOVE_ONE == pumploss::refuse_fraction_above_one, "refusal");
+static_assert(PUMPLOSS_MONITOR_PENDING == pumploss::monitor_pending, "event");
+
 static_assert(PUMPLOSS_PATH_COUNT == pumploss::leakage_path_count, "paths");
 static_assert(PUMPLOSS_PATH_BLEED == static_cast<int>(pumploss::leakage_path::bleed), "paths");
 static_assert(PUMPLOSS_PATH_EXTRA_ORIFICE == static_cast<int>(pumploss::leakage_path::extra_orifice), "paths");
@@ -46,6 +55,29 @@ struct pumploss_health {
   pumploss::health_reference<double> ref;
   pumploss::health_bands<double> bands;
 };
+
+struct pumploss_health_monitor {
+  pumploss::health_monitor<double> m;
+};
+
+namespace {
+// pumploss_health_assess() of version 1: without a reference speed the drain fraction is taken
+// at the reading's speed, and no reading is refused for its speed (there is no rated speed).
+pumploss::health_reference<double> legacy_reference(pumploss::health_reference<double> ref, double speed_rev_s) {
+  if (!std::isfinite(ref.reference_speed_rev_s)) {
+    ref.reference_speed_rev_s = speed_rev_s > 0 && std::isfinite(speed_rev_s) ? speed_rev_s : 1.0;
+    if (!std::isfinite(ref.rated_speed_rev_s)) ref.rated_speed_rev_s = ref.reference_speed_rev_s;
+  }
+  return ref;
+}
+pumploss::health_reading<double> make_reading(double drain_flow_m3_s, double outlet_pa, double case_pa, double oil_t_k,
+                                              double speed_rev_s, double drain_t_k, double inlet_t_k, int state) {
+  pumploss::health_reading<double> r{drain_flow_m3_s, outlet_pa, case_pa, oil_t_k, speed_rev_s, drain_t_k, inlet_t_k};
+  r.state = static_cast<pumploss::operating_state>(state);
+  return r;
+}
+bool state_ok(int state) { return state >= PUMPLOSS_STATE_UNKNOWN && state <= PUMPLOSS_STATE_DEADHEAD; }
+}  // namespace
 
 extern "C" {
 
@@ -78,9 +110,13 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_create(double max_displacement_m3
   h->ref.max_displacement_m3_rev = max_displacement_m3_rev;
   h->ref.reference_dp_pa = reference_dp_pa;
   h->ref.reference_t_k = reference_t_k;
-  h->ref.viscosity = line.value;
-  h->ref.rho_kg_m3 = rho_kg_m3;
-  h->ref.cp_j_kg_k = cp_j_kg_k;
+  // the oil: the given density at the reference temperature with a mineral oil's expansion, so
+  // that the normalisation uses dynamic viscosity (pumploss::typical_mineral_oil)
+  h->ref.fluid = pumploss::typical_mineral_oil(line.value);
+  h->ref.fluid.rho_ref_kg_m3 = rho_kg_m3;
+  h->ref.fluid.t_ref_k = reference_t_k;
+  h->ref.fluid.cp_j_kg_k = cp_j_kg_k;
+  h->ref.reference_speed_rev_s = kNaN;  // set by pumploss_health_set_description(); else the reading's
   *out = h;
   return PUMPLOSS_OK;
 }
@@ -96,14 +132,19 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_bands(pumploss_health* h, dou
   if (!(sound_max > 0) || !(acceptable_max >= sound_max) || !(worn_min >= acceptable_max) ||
       !(growth_moderate > 0) || !(growth_large >= growth_moderate) || !(hot_margin > 0))
     return PUMPLOSS_EDOMAIN;
-  h->bands = {sound_max, acceptable_max, worn_min, growth_moderate, growth_large, hot_margin};
+  h->bands.sound_max = sound_max;
+  h->bands.acceptable_max = acceptable_max;
+  h->bands.worn_min = worn_min;
+  h->bands.growth_moderate = growth_moderate;
+  h->bands.growth_large = growth_large;
+  h->bands.hot_margin = hot_margin;
   return PUMPLOSS_OK;
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_baseline(pumploss_health* h, double baseline_m3_s) {
   if (h == nullptr) return PUMPLOSS_EMISUSE;
   if (!pumploss::detail::finite(baseline_m3_s)) return PUMPLOSS_ENONFINITE;
-  if (!(baseline_m3_s > 0)) return PUMPLOSS_EDOMAIN;
+  if (!(baseline_m3_s > h->ref.constant_m3_s)) return PUMPLOSS_EDOMAIN;
   h->ref.baseline_m3_s = baseline_m3_s;
   return PUMPLOSS_OK;
 }
@@ -132,7 +173,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess(const pumploss_health* h, 
     // NaN means "not measured" for the two temperatures; infinity is an error.
     if (std::isinf(drain_t_k) || std::isinf(inlet_t_k)) return status::nonfinite;
     pumploss::health_reading<double> r{drain_flow_m3_s, outlet_pa, case_pa, oil_t_k, speed_rev_s, drain_t_k, inlet_t_k};
-    const auto a = pumploss::assess_health(h->ref, h->bands, r);
+    // version 1 answered these with EDOMAIN; a refused reading is now EVALIDITY
+    if (drain_flow_m3_s < 0 || !(outlet_pa - case_pa > 0) || !(speed_rev_s > 0) || !(oil_t_k > 0)) return status::domain;
+    const auto a = pumploss::assess_health(legacy_reference(h->ref, speed_rev_s), h->bands, r);
     if (pumploss::is_error(a.st)) return a.st;
     *level = static_cast<int>(a.level);
     *reasons = static_cast<int>(a.reasons);
@@ -154,7 +197,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_growth(const pumploss_health* h, 
     if (h == nullptr) return status::misuse;
     if (!pumploss::detail::finite(h->ref.baseline_m3_s)) return status::insufficient_data;
     const pumploss::health_reading<double> r{drain_flow_m3_s, outlet_pa, case_pa, oil_t_k, 1.0};
-    const auto q = pumploss::health_normalise(h->ref, r);
+    const auto q = pumploss::health_normalise(legacy_reference(h->ref, 1.0), r);
     if (is_error(q.st)) return q.st;
     *growth = q.value / h->ref.baseline_m3_s - 1.0;
     return q.st;
@@ -167,6 +210,189 @@ PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_health_reason_text(int reason) {
 
 PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_health_level_name(int level) {
   return pumploss::health_level_name(static_cast<pumploss::health_level>(level));
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_description(pumploss_health* h, double constant_m3_s,
+                                                               double orifice_share, double reference_speed_rev_s,
+                                                               double rated_speed_rev_s) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  if (!pumploss::detail::all_finite(constant_m3_s, orifice_share, reference_speed_rev_s, rated_speed_rev_s))
+    return PUMPLOSS_ENONFINITE;
+  pumploss::health_reference<double> r = h->ref;
+  r.constant_m3_s = constant_m3_s;
+  r.orifice_share = orifice_share;
+  r.reference_speed_rev_s = reference_speed_rev_s;
+  r.rated_speed_rev_s = rated_speed_rev_s;
+  const status st = pumploss::detail::health_reference_check(r);
+  if (pumploss::is_error(st)) return static_cast<int>(st);
+  h->ref = r;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_set_baseline_rise(pumploss_health* h, double rise_k, int state) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  if (!std::isfinite(rise_k)) return PUMPLOSS_ENONFINITE;
+  if (!(rise_k >= 0) || !state_ok(state) || state == PUMPLOSS_STATE_UNKNOWN) return PUMPLOSS_EDOMAIN;
+  h->ref.baseline_rise_k = rise_k;
+  h->ref.baseline_state = static_cast<pumploss::operating_state>(state);
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_assess_v2(const pumploss_health* h, double drain_flow_m3_s,
+                                                         double outlet_pa, double case_pa, double oil_t_k,
+                                                         double speed_rev_s, double drain_t_k, double inlet_t_k,
+                                                         int state, int* level, int* reasons, int* refused,
+                                                         double* drain_at_reference_m3_s,
+                                                         double* fraction_at_reference, double* growth) {
+  if (level != nullptr) *level = -1;
+  if (reasons != nullptr) *reasons = 0;
+  if (refused != nullptr) *refused = 0;
+  unsigned refused_bits = 0;
+  const int st = call({drain_at_reference_m3_s, fraction_at_reference, growth}, [&] {
+    if (h == nullptr || level == nullptr || reasons == nullptr || refused == nullptr) return status::misuse;
+    if (!std::isfinite(h->ref.reference_speed_rev_s)) return status::misuse;  // set_description() first
+    if (!state_ok(state)) return status::domain;
+    const auto a = pumploss::assess_health(
+        h->ref, h->bands, make_reading(drain_flow_m3_s, outlet_pa, case_pa, oil_t_k, speed_rev_s, drain_t_k, inlet_t_k, state));
+    refused_bits = a.refused;
+    if (pumploss::is_error(a.st)) return a.st;
+    *level = static_cast<int>(a.level);
+    *reasons = static_cast<int>(a.reasons);
+    *drain_at_reference_m3_s = a.drain_at_reference_m3_s;
+    *fraction_at_reference = a.fraction_at_reference;
+    // growth is 0 without a baseline (the reason bit PUMPLOSS_REASON_NO_BASELINE says so)
+    *growth = std::isfinite(a.growth) ? a.growth : 0.0;
+    return a.st;
+  });
+  if (st > 0 && st < 100) {
+    if (level != nullptr) *level = -1;
+    if (reasons != nullptr) *reasons = 0;
+  }
+  if (refused != nullptr) *refused = static_cast<int>(refused_bits);
+  return st;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_fit_constant(const pumploss_health* h, const double drain_flow_m3_s[],
+                                                            const double dp_pa[], const double oil_t_k[],
+                                                            size_t count, double* constant_m3_s,
+                                                            double* baseline_m3_s) {
+  return call({constant_m3_s, baseline_m3_s}, [&] {
+    if (h == nullptr || drain_flow_m3_s == nullptr || dp_pa == nullptr || oil_t_k == nullptr) return status::misuse;
+    if (count < 2) return status::insufficient_data;
+    pumploss::health_reading<double> rs[64];  // a stack copy: baseline sets are short
+    if (count > 64) return status::domain;
+    for (size_t i = 0; i < count; ++i) rs[i] = {drain_flow_m3_s[i], dp_pa[i], 0.0, oil_t_k[i], 1.0};
+    pumploss::health_reference<double> ref = h->ref;
+    if (!std::isfinite(ref.reference_speed_rev_s)) ref.reference_speed_rev_s = 1.0;
+    const auto f = pumploss::health_fit_constant(ref, rs, count);
+    if (pumploss::is_error(f.st)) return f.st;
+    *constant_m3_s = f.constant_m3_s;
+    *baseline_m3_s = f.baseline_m3_s;
+    return f.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_looks_fahrenheit(const double t_k[], size_t count, int* looks) {
+  if (looks != nullptr) *looks = 0;
+  if (t_k == nullptr || looks == nullptr) return PUMPLOSS_EMISUSE;
+  if (count > 4096) return PUMPLOSS_EDOMAIN;
+  double work[4096];
+  *looks = pumploss::health_temperatures_look_fahrenheit(t_k, count, pumploss::health_bands<double>{}, work) ? 1 : 0;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_health_refusal_text(int refusal) {
+  return pumploss::health_refusal_text(static_cast<unsigned>(refusal));
+}
+
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_health_caution(void) { return pumploss::health_case_drain_caution(); }
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_create(const pumploss_health* h, size_t learn_count,
+                                                              size_t debounce_count, double hysteresis,
+                                                              pumploss_health_monitor** out) {
+  if (out == nullptr) return PUMPLOSS_EMISUSE;
+  *out = nullptr;
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  if (!std::isfinite(h->ref.reference_speed_rev_s)) return PUMPLOSS_EMISUSE;  // set_description() first
+  pumploss::capi::fp_guard guard;
+  pumploss::health_monitor_settings<double> s;
+  s.learn_count = learn_count;
+  s.debounce_count = debounce_count;
+  s.hysteresis = hysteresis;
+  pumploss::health_monitor<double> m;
+  const status st = m.init(h->ref, h->bands, s);
+  if (pumploss::is_error(st)) return static_cast<int>(st);
+  auto* p = new (std::nothrow) pumploss_health_monitor{m};
+  if (p == nullptr) return PUMPLOSS_ENOMEM;
+  *out = p;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_health_monitor_destroy(pumploss_health_monitor* m) { delete m; }
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_feed(pumploss_health_monitor* m, double time,
+                                                            double drain_flow_m3_s, double outlet_pa,
+                                                            double case_pa, double oil_t_k, double speed_rev_s,
+                                                            double drain_t_k, double inlet_t_k, int state,
+                                                            int* level, int* raw_level, int* events,
+                                                            double* drain_at_reference_m3_s) {
+  if (level != nullptr) *level = -1;
+  if (raw_level != nullptr) *raw_level = -1;
+  if (events != nullptr) *events = 0;
+  int lv = -1, raw = -1, ev = 0;
+  const int st = call({drain_at_reference_m3_s}, [&] {
+    if (m == nullptr || level == nullptr || raw_level == nullptr || events == nullptr) return status::misuse;
+    if (!state_ok(state)) return status::domain;
+    if (std::isinf(time)) return status::nonfinite;
+    const auto o = m->m.feed(
+        time, make_reading(drain_flow_m3_s, outlet_pa, case_pa, oil_t_k, speed_rev_s, drain_t_k, inlet_t_k, state));
+    lv = static_cast<int>(o.level);
+    ev = static_cast<int>(o.events);
+    if (pumploss::is_error(o.assessment.st)) return o.assessment.st;
+    raw = static_cast<int>(o.raw_level);
+    *drain_at_reference_m3_s = o.assessment.drain_at_reference_m3_s;
+    return o.assessment.st;
+  });
+  // a refused reading still reports the confirmed level and the refusal event
+  if (level != nullptr) *level = lv;
+  if (raw_level != nullptr) *raw_level = raw;
+  if (events != nullptr) *events = ev;
+  return st;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_state(const pumploss_health_monitor* m, int* level,
+                                                             double* baseline_m3_s, double* sigma_m3_s,
+                                                             double* level_m3_s, double* last_step_time) {
+  if (level != nullptr) *level = -1;
+  const int st = call({baseline_m3_s, sigma_m3_s, level_m3_s, last_step_time}, [&] {
+    if (m == nullptr || level == nullptr) return status::misuse;
+    if (m->m.learning()) return status::insufficient_data;
+    *level = static_cast<int>(m->m.level());
+    *baseline_m3_s = m->m.baseline_m3_s();
+    *sigma_m3_s = m->m.sigma_m3_s();
+    *level_m3_s = m->m.level_m3_s();
+    // no step yet: -inf would break the finite-output rule; the time of the first reading is not
+    // kept, so say "none" with -1 (times are >= 0 by the documented contract)
+    *last_step_time = std::isfinite(m->m.last_step_time()) ? m->m.last_step_time() : -1.0;
+    return status::ok;
+  });
+  if (st > 0 && st < 100 && level != nullptr) *level = -1;
+  return st;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_save(const pumploss_health_monitor* m, double state[],
+                                                            size_t capacity) {
+  if (state == nullptr) return PUMPLOSS_EMISUSE;
+  const int st = m == nullptr ? PUMPLOSS_EMISUSE : static_cast<int>(m->m.save(state, capacity));
+  if (st != PUMPLOSS_OK)
+    for (size_t i = 0; i < capacity; ++i) state[i] = kNaN;
+  return st;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_restore(pumploss_health_monitor* m, const double state[],
+                                                               size_t count) {
+  if (m == nullptr || state == nullptr) return PUMPLOSS_EMISUSE;
+  return static_cast<int>(m->m.restore(state, count));
 }
 
 

@@ -21,6 +21,7 @@
 #include "loss_model.hpp"
 #include "uncertainty.hpp"
 #include "health.hpp"
+#include "health_monitor.hpp"
 #include "piston_pump.hpp"
 
 #endif

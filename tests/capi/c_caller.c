@@ -490,6 +490,47 @@ static void test_loss_model(void) {
 }
 
 
+/* health version 2 and the streaming monitor (h4) */
+static void test_pump_health_v2(void) {
+  pumploss_health *h = NULL;
+  pumploss_health_monitor *m = NULL;
+  double qn = 0.0, fr = 0.0, g = 0.0, qc = 0.0, qb = 0.0, b = 0.0, s = 0.0, l = 0.0, t = 0.0;
+  double state[PUMPLOSS_HEALTH_MONITOR_STATE_COUNT];
+  const double q2[2] = {0.3e-3 / 60.0 + 3.7e-3 / 60.0 * 0.4, 4.0e-3 / 60.0};
+  const double dp2[2] = {100e5, 250e5};
+  const double t2[2] = {323.15, 323.15};
+  const double degf[3] = {104.0 + 273.15, 113.0 + 273.15, 122.0 + 273.15};
+  int level = 0, reasons = 0, refused = 0, raw = 0, events = 0, looks = 0, i = 0;
+  double nv = 0.0; /* a NaN ("not measured") without C99: an error output of the library is NaN */
+  CHECK(pumploss_drain_fraction(1e-4, 71e-6, 0.0, &nv) == PUMPLOSS_EDOMAIN && is_nan(nv));
+  CHECK(pumploss_health_create(71e-6, 250e5, 323.15, 313.15, 46e-6, 373.15, 6.8e-6, 870.0, 1900.0, &h) == PUMPLOSS_OK);
+  CHECK(pumploss_health_set_description(h, 0.3e-3 / 60.0, 0.0, 25.0, 25.0) == PUMPLOSS_OK);
+  CHECK(pumploss_health_set_baseline_rise(h, 4.0, PUMPLOSS_STATE_ON_STROKE) == PUMPLOSS_OK);
+  CHECK(pumploss_health_fit_constant(h, q2, dp2, t2, 2, &qc, &qb) == PUMPLOSS_OK && fabs(qc / (0.3e-3 / 60.0) - 1) < 1e-10);
+  CHECK(pumploss_health_set_baseline(h, qb) == PUMPLOSS_OK);
+  /* at the reference state the baseline reads as itself: 4.0 / 106.5 L/min (hand) */
+  CHECK(pumploss_health_assess_v2(h, 4.0e-3 / 60.0, 250e5, 0.0, 323.15, 25.0, nv, nv,
+                                  PUMPLOSS_STATE_ON_STROKE, &level, &reasons, &refused, &qn, &fr, &g) == PUMPLOSS_OK &&
+        fabs(fr - 4.0 / 106.5) < 1e-12 && level == PUMPLOSS_HEALTH_SOUND);
+  CHECK(pumploss_health_assess_v2(h, 0.0, 250e5, 0.0, 323.15, 25.0, nv, nv, PUMPLOSS_STATE_ON_STROKE,
+                                  &level, &reasons, &refused, &qn, &fr, &g) == PUMPLOSS_EVALIDITY &&
+        refused == PUMPLOSS_REFUSE_DRAIN_NOT_POSITIVE && is_nan(qn));
+  CHECK(strlen(pumploss_health_refusal_text(PUMPLOSS_REFUSE_DRAIN_NOT_POSITIVE)) > 10);
+  CHECK(strstr(pumploss_health_caution(), "shaft seal") != NULL);
+  CHECK(pumploss_health_looks_fahrenheit(degf, 3, &looks) == PUMPLOSS_OK && looks == 1);
+  CHECK(pumploss_health_monitor_create(h, 4, 2, 0.05, &m) == PUMPLOSS_OK);
+  for (i = 0; i < 10; ++i)
+    CHECK(pumploss_health_monitor_feed(m, (double)i, 4.0e-3 / 60.0 * (1.0 + 0.001 * (i % 2)), 250e5, 0.0, 323.15, 25.0,
+                                       nv, nv, PUMPLOSS_STATE_ON_STROKE, &level, &raw, &events,
+                                       &qn) == PUMPLOSS_OK);
+  CHECK(pumploss_health_monitor_state(m, &level, &b, &s, &l, &t) == PUMPLOSS_OK && level == PUMPLOSS_HEALTH_SOUND);
+  CHECK(pumploss_health_monitor_save(m, state, PUMPLOSS_HEALTH_MONITOR_STATE_COUNT) == PUMPLOSS_OK);
+  CHECK(pumploss_health_monitor_restore(m, state, PUMPLOSS_HEALTH_MONITOR_STATE_COUNT) == PUMPLOSS_OK);
+  pumploss_health_monitor_destroy(m);
+  pumploss_health_monitor_destroy(NULL);
+  pumploss_health_destroy(h);
+}
+
 static void test_pump_health(void) {
   pumploss_health *h = NULL;
   double f = 0.0, fref = 0.0, g = 0.0;
@@ -513,6 +554,7 @@ static void test_pump_health(void) {
                                &level, &reasons, &f, &fref) == PUMPLOSS_EMISUSE && is_nan(f) && level == -1);
   pumploss_health_destroy(h);
   pumploss_health_destroy(NULL);
+  test_pump_health_v2();
 }
 
 static void test_pump_budget(void) {
