@@ -1834,7 +1834,8 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_level_name(int level);
 #define PUMPLOSS_PATH_BLEED 6         /**< Path: controller bleed orifice. */
 #define PUMPLOSS_PATH_EXTRA_LAMINAR 7 /**< Path: user laminar path. */
 #define PUMPLOSS_PATH_EXTRA_ORIFICE 8 /**< Path: user orifice path. */
-#define PUMPLOSS_PATH_COUNT 9         /**< Number of paths. */
+#define PUMPLOSS_PATH_CONTROL_PISTON 9 /**< Path: control piston clearance (compensating, at control pressure). */
+#define PUMPLOSS_PATH_COUNT 10        /**< Number of paths. */
 #define PUMPLOSS_GAP_BORE 0           /**< Gap: piston-bore clearance. */
 #define PUMPLOSS_GAP_SLIPPER 1        /**< Gap: slipper land gap. */
 #define PUMPLOSS_GAP_BALL 2           /**< Gap: ball-socket clearance. */
