@@ -173,7 +173,7 @@ pumploss::loss_model<double> fit_opt(const dataset& s, const pumploss::loss_fit_
                                      double* rq = nullptr) {
   std::vector<double> work(pumploss::loss_fit_workspace(s.dp.size()));
   return pumploss::fit_loss_model(machine::pump, loss_model_kind::wilson, v, kRho, s.dp.data(), s.n.data(),
-                                  s.mu.data(), s.q.data(), s.t.data(), s.dp.size(), work.data(), rq, nullptr, opt);
+                                  s.mu.data(), s.q.data(), s.t.data(), s.dp.size(), work.data(), rq, static_cast<double*>(nullptr), opt);
 }
 }  // namespace
 
@@ -189,19 +189,24 @@ TEST(LossModelFlowTerms, ConstantAndCompressionRecoverSlipWellUnderOnePercent) {
     EXPECT_LE(rel(m.q_c_m3_s, kQc), 1e-9);
     EXPECT_LE(rel(m.c_k, kCk), 1e-9);
   }
-  // noisy data (0.02 L/min on about 100 L/min): C_s within 0.3 %, both terms chosen by BIC and AIC
+  // noisy data (0.01 L/min on about 100 L/min): every C_s within 4 standard errors and within 1 %,
+  // their mean within 0.25 % (no bias); both terms chosen by BIC and by AIC
   for (auto ic : {pumploss::info_criterion::bic, pumploss::info_criterion::aic}) {
     opt.criterion = ic;
+    double mean_err = 0;
     for (unsigned seed = 1; seed <= 10; ++seed) {
-      std::vector<double> rq(60);
-      const auto m = fit_opt(make_loss_data(0.02 / 60000, seed), opt, kV, rq.data());
+      const auto m = fit_opt(make_loss_data(0.01 / 60000, seed), opt);
       ASSERT_EQ(m.st, status::ok);
       EXPECT_EQ(m.flow_terms, 3u) << seed;
-      EXPECT_LE(rel(m.c_s, kWilson.c_s), 3e-3) << seed;
+      EXPECT_LE(rel(m.c_s, kWilson.c_s), 1e-2) << seed;
       EXPECT_LT(std::fabs(m.c_s - kWilson.c_s), 4 * m.u_c_s);
       EXPECT_LT(std::fabs(m.resid_corr_dp), 0.3);
       EXPECT_LT(m.max_std_resid_flow, 4.0);
+      mean_err += (m.c_s / kWilson.c_s - 1) / 10;
     }
+    EXPECT_LT(std::fabs(mean_err), 2.5e-3);
+    RecordProperty(ic == pumploss::info_criterion::bic ? "mean_cs_error_bic" : "mean_cs_error_aic",
+                   std::to_string(mean_err));
   }
   // Wilson alone on the same data: C_s biased by several per cent, residuals systematic
   const auto w = fit_opt(make_loss_data(0.02 / 60000, 1), {});
@@ -226,9 +231,9 @@ TEST(LossModelFlowTerms, ConstantAndCompressionRecoverSlipWellUnderOnePercent) {
 
 TEST(LossModelFlowTerms, SlipUncertaintyWithDerivedDisplacementAgainstMonteCarlo) {
   // Raw readings with noise: flow 0.05 % of reading plus 0.02 L/min, pressure 0.1 bar, speed
-  // 0.5 rpm, temperature 0.3 K (viscosity through a 1.8 %/K slope); V_i by estimator A (slope of
-  // flow over speed at the lowest pressure) from the same readings, then the fit with u(V_i).
-  // 400 repetitions: the spread of C_s against the mean reported u(C_s).
+  // 0.5 rpm, temperature 0.3 K (viscosity through a 1.8 %/K slope). V_i by estimator A (slope of
+  // flow over speed at 20 bar, five speeds read separately as for a derived-capacity test), then
+  // the fit with u(V_i). 400 repetitions: the spread of C_s against the mean reported u(C_s).
   const double d = kV / (2 * kPi);
   std::mt19937_64 rng(2015);
   std::normal_distribution<double> n01(0.0, 1.0);
@@ -237,23 +242,27 @@ TEST(LossModelFlowTerms, SlipUncertaintyWithDerivedDisplacementAgainstMonteCarlo
   pumploss::loss_fit_options<double> opt;
   opt.flow_terms = pumploss::flow_term_constant | pumploss::flow_term_compression;
   opt.select_flow_terms = false;
+  auto reading = [&](double dp, double n, double mu) {
+    const double w = 2 * kPi * n;
+    const double q = d * w - (kWilson.c_s * d * dp / mu + kQc + kCk * d * w * dp / kK);
+    return q * (1 + 5e-4 * n01(rng)) + 0.02 / 60000 * n01(rng);
+  };
   for (int r = 0; r < reps; ++r) {
     dataset s;
     std::vector<double> n_low, q_low;
+    for (double n : {8.0, 12.5, 16.7, 20.8, 25.0}) {
+      n_low.push_back(n + 0.5 / 60 * n01(rng));
+      q_low.push_back(reading(2e6, n, 0.03));
+    }
     for (double dp : {2e6, 5e6, 1e7, 1.5e7, 2e7, 2.5e7})
       for (double n : {8.0, 12.5, 16.7, 20.8, 25.0})
         for (double mu : {0.02, 0.035}) {
           const double w = 2 * kPi * n;
-          const double q = d * w - (kWilson.c_s * d * dp / mu + kQc + kCk * d * w * dp / kK);
+          s.q.push_back(reading(dp, n, mu));
           s.dp.push_back(dp + 1e4 * n01(rng));
           s.n.push_back(n + 0.5 / 60 * n01(rng));
           s.mu.push_back(mu * (1 + 0.018 * 0.3 * n01(rng)));
-          s.q.push_back(q * (1 + 5e-4 * n01(rng)) + 0.02 / 60000 * n01(rng));
           s.t.push_back(d * dp + kWilson.c_v * d * mu * w + kWilson.c_f * d * dp + kWilson.t_c);
-          if (dp == 2e6) {
-            n_low.push_back(s.n.back());
-            q_low.push_back(s.q.back());
-          }
         }
     const auto v = pumploss::displacement_slope(n_low.data(), q_low.data(), n_low.size());
     ASSERT_EQ(v.st, status::ok);
