@@ -281,6 +281,44 @@ TEST(PistonPumpBalance, RatiosByHandAndWarnings) {
   EXPECT_GT(b.total_m3_s, 0.0);  // the flows stay valid
 }
 
+TEST(PistonPumpBudget, FiftyDigitTemplateAgrees) {
+  // The same templates in cpp_bin_float_50: kinematics, balance, budget and flow loss.
+  auto p = test_pump();
+  p.pivot_offset_m = 3e-3;
+  p.dead_volume_m3 = 2e-6;
+  p.cross_port_conductance_m3 = 3e-17;
+  const auto o = test_oil();
+  const auto pm = pumploss::piston_pump_cast<mp50>(p);
+  const pumploss::oil<mp50> om{{mp50(o.viscosity.a), mp50(o.viscosity.b)}, mp50(o.rho_ref_kg_m3), mp50(o.t_ref_k),
+                               mp50(o.alpha_per_k), mp50(o.bulk_modulus_pa), mp50(o.cp_j_kg_k), mp50(o.barus_per_pa)};
+  for (double x : {0.0, 0.5, 1.0}) {
+    pumploss::pump_operating_point<double> op{250e5, 1e5, 25.0, x, 323.15};
+    op.mode = pumploss::controller_mode::compensating;
+    op.inlet_pa = 0.5e5;
+    op.film_temperature_rise_k = 5.0;
+    pumploss::pump_operating_point<mp50> opm{mp50(250e5), mp50(1e5), mp50(25), mp50(x), mp50("323.15")};
+    opm.mode = op.mode;
+    opm.inlet_pa = mp50(0.5e5);
+    opm.film_temperature_rise_k = mp50(5);
+    const auto k = pumploss::piston_pump_kinematics(p, x);
+    const auto km = pumploss::piston_pump_kinematics(pm, mp50(x));
+    EXPECT_LE(pltest::rel_err(k.effective_length_m, km.effective_length_m), 1e-15);
+    EXPECT_LE(pltest::rel_err(k.dead_volume_m3, km.dead_volume_m3), 1e-14);
+    const auto b = pumploss::piston_pump_budget(p, o, op);
+    const auto bm = pumploss::piston_pump_budget(pm, om, opm);
+    ASSERT_EQ(b.st, bm.st);
+    EXPECT_LE(pltest::rel_err(b.total_m3_s, bm.total_m3_s), 1e-13) << x;
+    EXPECT_LE(pltest::rel_err(b.total_film_m3_s, bm.total_film_m3_s), 1e-13) << x;
+    EXPECT_LE(pltest::rel_err(b.slipper_balance, bm.slipper_balance), 1e-14) << x;
+    EXPECT_LE(pltest::rel_err(b.barrel_balance, bm.barrel_balance), 1e-14) << x;
+    EXPECT_LE(pltest::rel_err(b.slipper_film_m, bm.slipper_film_m), 1e-13) << x;
+    const auto f = pumploss::piston_pump_flow_loss(p, o, op);
+    const auto fm = pumploss::piston_pump_flow_loss(pm, om, opm);
+    // 1 - rho_s/rho_h cancels about 2 digits
+    EXPECT_LE(pltest::rel_err(f.total_m3_s, fm.total_m3_s), 1e-12) << x;
+  }
+}
+
 TEST(PistonPumpFilm, ViscosityBandPressureAndHeating) {
   const auto p = test_pump();
   const auto o = test_oil();

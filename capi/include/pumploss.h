@@ -2103,6 +2103,27 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump *h, size_t 
                                                        const double *speed_rev_s, const double *displacement_fraction,
                                                        const double *t_k, double *rms_residual_m3_s);
 /**
+ * Calibrate as pumploss_pump_calibrate(), each measurement with its controller mode (readings on
+ * stroke and at deadhead separate the pistons from the other laminar paths).
+ * @param h the handle (oil set)
+ * @param n number of measurements
+ * @param drain_m3_s measured drain flows, m^3/s (n values)
+ * @param outlet_pa outlet gauge pressures, Pa (n values)
+ * @param case_pa case gauge pressures, Pa (n values)
+ * @param speed_rev_s shaft speeds, rev/s (n values)
+ * @param displacement_fraction displacement settings, 0..1 (n values)
+ * @param t_k oil temperatures, K (n values)
+ * @param mode PUMPLOSS_MODE_* of each measurement (n values)
+ * @param rms_residual_m3_s receives the root-mean-square residual, m^3/s
+ * @return as pumploss_pump_calibrate(); PUMPLOSS_EDOMAIN for an unknown mode.
+ * @sa pumploss::calibrate_piston_pump
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate_modes(pumploss_pump *h, size_t n, const double *drain_m3_s,
+                                                             const double *outlet_pa, const double *case_pa,
+                                                             const double *speed_rev_s,
+                                                             const double *displacement_fraction, const double *t_k,
+                                                             const int *mode, double *rms_residual_m3_s);
+/**
  * Result of the last calibration for one group.
  * @param h the handle
  * @param group PUMPLOSS_GROUP_*
@@ -2128,11 +2149,11 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_group_name(int group);
 #define PUMPLOSS_MODE_ON_STROKE 0     /**< Controller mode: on stroke (control chamber vented). */
 #define PUMPLOSS_MODE_COMPENSATING 1  /**< Controller mode: compensating (control piston and bleed at control pressure). */
 #define PUMPLOSS_MODE_DEADHEAD 2      /**< Controller mode: deadhead (compensating at zero displacement). */
-#define PUMPLOSS_WARN_SLIPPER_OVERCLAMPED 1 /**< Balance warning: slipper balance below 0.90. */
-#define PUMPLOSS_WARN_SLIPPER_LIFTS 2       /**< Balance warning: slipper balance above 1.10. */
-#define PUMPLOSS_WARN_SLIPPER_NO_FILM 4     /**< Balance warning: the pocket cannot carry the piston force. */
-#define PUMPLOSS_WARN_BARREL_LIFTS 8        /**< Balance warning: barrel balance above 1.00 (lift-off). */
-#define PUMPLOSS_WARN_BARREL_OVERCLAMPED 16 /**< Balance warning: barrel balance below 0.85. */
+#define PUMPLOSS_BALANCE_SLIPPER_OVERCLAMPED 1 /**< Balance warning: slipper balance below 0.90. */
+#define PUMPLOSS_BALANCE_SLIPPER_LIFTS 2       /**< Balance warning: slipper balance above 1.10. */
+#define PUMPLOSS_BALANCE_SLIPPER_NO_FILM 4     /**< Balance warning: the pocket cannot carry the piston force. */
+#define PUMPLOSS_BALANCE_BARREL_LIFTS 8        /**< Balance warning: barrel balance above 1.00 (lift-off). */
+#define PUMPLOSS_BALANCE_BARREL_OVERCLAMPED 16 /**< Balance warning: barrel balance below 0.85. */
 
 /**
  * Swash-plate pivot and dead volume of the pump (both 0 by default).
@@ -2186,7 +2207,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_kinematics(const pumploss_pump *h, 
  * @param total_m3_s receives the isoviscous drain flow, m^3/s
  * @param total_film_m3_s receives the drain flow with the film viscosity, m^3/s
  * @param metering_flow_m3_s receives the spool's metering flow into the control chamber, m^3/s
- * @param warnings receives PUMPLOSS_WARN_* bits of the force balance
+ * @param warnings receives PUMPLOSS_BALANCE_* bits of the force balance
  * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when a balance ratio leaves its window;
  *         PUMPLOSS_WREGIME; errors; PUMPLOSS_EDOMAIN for an unknown mode.
  * @sa pumploss::piston_pump_budget
@@ -2203,7 +2224,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget_mode(const pumploss_pump *h,
  * @param slipper_balance receives hydrostatic slipper force / (piston force / cos beta) at the stated film
  * @param slipper_film_m receives the film at which the slipper balance is 1, m (0: none)
  * @param barrel_balance receives valve-plate separating force / barrel hold-down
- * @param warnings receives PUMPLOSS_WARN_* bits
+ * @param warnings receives PUMPLOSS_BALANCE_* bits
  * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE outside the design windows; PUMPLOSS_EDATA when the
  *         pump has no slipper or no valve-plate path; errors.
  * @sa pumploss::piston_pump_balance

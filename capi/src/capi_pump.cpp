@@ -35,11 +35,11 @@ static_assert(PUMPLOSS_GROUP_COUNT == pumploss::path_group_count, "groups");
 static_assert(PUMPLOSS_GROUP_EXTRA == static_cast<int>(pumploss::path_group::extra), "groups");
 static_assert(PUMPLOSS_PATH_CONTROL_PISTON == static_cast<int>(pumploss::leakage_path::control_piston), "paths");
 static_assert(PUMPLOSS_MODE_DEADHEAD == static_cast<int>(pumploss::controller_mode::deadhead), "modes");
-static_assert(PUMPLOSS_WARN_SLIPPER_OVERCLAMPED == pumploss::warn_slipper_overclamped, "warnings");
-static_assert(PUMPLOSS_WARN_SLIPPER_LIFTS == pumploss::warn_slipper_lifts, "warnings");
-static_assert(PUMPLOSS_WARN_SLIPPER_NO_FILM == pumploss::warn_slipper_no_film, "warnings");
-static_assert(PUMPLOSS_WARN_BARREL_LIFTS == pumploss::warn_barrel_lifts, "warnings");
-static_assert(PUMPLOSS_WARN_BARREL_OVERCLAMPED == pumploss::warn_barrel_overclamped, "warnings");
+static_assert(PUMPLOSS_BALANCE_SLIPPER_OVERCLAMPED == pumploss::warn_slipper_overclamped, "warnings");
+static_assert(PUMPLOSS_BALANCE_SLIPPER_LIFTS == pumploss::warn_slipper_lifts, "warnings");
+static_assert(PUMPLOSS_BALANCE_SLIPPER_NO_FILM == pumploss::warn_slipper_no_film, "warnings");
+static_assert(PUMPLOSS_BALANCE_BARREL_LIFTS == pumploss::warn_barrel_lifts, "warnings");
+static_assert(PUMPLOSS_BALANCE_BARREL_OVERCLAMPED == pumploss::warn_barrel_overclamped, "warnings");
 
 struct pumploss_pump {
   pumploss::piston_pump<double> pump;
@@ -201,6 +201,34 @@ bool finite_inputs(Ts... xs) {
 status operating_checks(const pumploss_pump* h) {
   if (h == nullptr || !h->has_oil) return status::misuse;
   return status::ok;
+}
+}  // namespace
+
+namespace {
+// Calibration shared by pumploss_pump_calibrate() (on stroke) and pumploss_pump_calibrate_modes().
+int calibrate(pumploss_pump* h, size_t n, const double* drain_m3_s, const double* outlet_pa, const double* case_pa,
+              const double* speed_rev_s, const double* displacement_fraction, const double* t_k, const int* mode,
+              double* rms_residual_m3_s) {
+  return call({rms_residual_m3_s}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s)) return s;
+    if (n > 0 && (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
+                  displacement_fraction == nullptr || t_k == nullptr))
+      return status::misuse;
+    std::vector<pumploss::drain_measurement> m(n);
+    for (size_t i = 0; i < n; ++i) {
+      if (mode != nullptr && (mode[i] < 0 || mode[i] >= pumploss::controller_mode_count)) return status::domain;
+      m[i] = {drain_m3_s[i], outlet_pa[i], case_pa[i], speed_rev_s[i], displacement_fraction[i], t_k[i],
+              mode != nullptr ? static_cast<pumploss::controller_mode>(mode[i]) : pumploss::controller_mode::on_stroke};
+    }
+    h->calibrated = false;
+    const auto c = pumploss::calibrate_piston_pump(h->pump, h->oil, m.data(), n);
+    if (is_error(c.st)) return c.st;
+    h->calibration = c;
+    h->calibrated = true;
+    *rms_residual_m3_s = c.rms_residual_m3_s;
+    return c.st;
+  });
 }
 }  // namespace
 
@@ -393,23 +421,21 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump* h, size_t 
                                                        const double* outlet_pa, const double* case_pa,
                                                        const double* speed_rev_s, const double* displacement_fraction,
                                                        const double* t_k, double* rms_residual_m3_s) {
-  return call({rms_residual_m3_s}, [&] {
-    const status s = operating_checks(h);
-    if (is_error(s)) return s;
-    if (n > 0 && (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
-                  displacement_fraction == nullptr || t_k == nullptr))
-      return status::misuse;
-    std::vector<pumploss::drain_measurement> m(n);
-    for (size_t i = 0; i < n; ++i)
-      m[i] = {drain_m3_s[i], outlet_pa[i], case_pa[i], speed_rev_s[i], displacement_fraction[i], t_k[i]};
-    h->calibrated = false;
-    const auto c = pumploss::calibrate_piston_pump(h->pump, h->oil, m.data(), n);
-    if (is_error(c.st)) return c.st;
-    h->calibration = c;
-    h->calibrated = true;
-    *rms_residual_m3_s = c.rms_residual_m3_s;
-    return c.st;
-  });
+  return calibrate(h, n, drain_m3_s, outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k, nullptr,
+                   rms_residual_m3_s);
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate_modes(pumploss_pump* h, size_t n, const double* drain_m3_s,
+                                                             const double* outlet_pa, const double* case_pa,
+                                                             const double* speed_rev_s,
+                                                             const double* displacement_fraction, const double* t_k,
+                                                             const int* mode, double* rms_residual_m3_s) {
+  if (n > 0 && mode == nullptr) {
+    if (rms_residual_m3_s != nullptr) *rms_residual_m3_s = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  return calibrate(h, n, drain_m3_s, outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k, mode,
+                   rms_residual_m3_s);
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pump* h, int group, double* scale,

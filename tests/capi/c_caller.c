@@ -580,6 +580,17 @@ static void test_pump_budget(void) {
   CHECK(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_OK &&
         fabs(sc - 1.0) < 1e-6);
   CHECK(pumploss_pump_calibrate(h, 6, drain, NULL, case_p, speed, disp, temp, &rms) == PUMPLOSS_EMISUSE && is_nan(rms));
+  {
+    const int modes[6] = {PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE,
+                          PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE};
+    const int bad_modes[6] = {0, 0, 5, 0, 0, 0};
+    const int st_m = pumploss_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, modes, &rms);
+    CHECK(st_m == PUMPLOSS_OK || st_m == PUMPLOSS_WILLCONDITIONED);
+    CHECK(pumploss_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, bad_modes, &rms) ==
+              PUMPLOSS_EDOMAIN && is_nan(rms));
+    CHECK(pumploss_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, NULL, &rms) ==
+              PUMPLOSS_EMISUSE && is_nan(rms));
+  }
   CHECK(strcmp(pumploss_pump_path_name(PUMPLOSS_PATH_SLIPPER), "slipper") == 0);
   CHECK(strcmp(pumploss_pump_group_name(PUMPLOSS_GROUP_VALVE_PLATE), "valve-plate") == 0);
   {
