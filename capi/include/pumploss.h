@@ -2218,7 +2218,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget_mode(const pumploss_pump *h,
                                                          double *total_m3_s, double *total_film_m3_s,
                                                          double *metering_flow_m3_s, int *warnings);
 /**
- * Force balance: slipper and barrel balance ratios (independent of pressure and viscosity).
+ * Force balance: slipper and barrel balance ratios (independent of pressure and viscosity; the
+ * barrel's hold-down of the pressurised bores alone, without the spring).
  * @param h the handle (slipper and valve plate set)
  * @param displacement_fraction displacement setting, 0..1
  * @param slipper_balance receives hydrostatic slipper force / (piston force / cos beta) at the stated film

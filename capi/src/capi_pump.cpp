@@ -546,7 +546,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_balance(const pumploss_pump* h, dou
     const auto k = pumploss::piston_pump_kinematics(h->pump, displacement_fraction);
     if (is_error(k.st)) return k.st;
     if (!(h->pump.slipper_gap_m > 0) || !(h->pump.valve_gap_m > 0)) return status::insufficient_data;
-    const auto b = pumploss::piston_pump_balance(h->pump, k.tan_beta, 1.0);
+    const auto b = pumploss::piston_pump_balance(h->pump, k.tan_beta, 0.0);  // the bores' hold-down alone
     *slipper_balance = b.slipper_balance;
     *slipper_film_m = b.slipper_film_m;
     *barrel_balance = b.barrel_balance;
