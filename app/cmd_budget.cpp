@@ -1,6 +1,6 @@
 // pumploss budget: the case drain leakage budget of a described piston pump over a pressure
-// sweep (pumploss::sweep_piston_pump): every path's flow and share, the sensitivity of the total
-// to each gap, a table and a stacked SVG.
+// sweep: every path's flow and share, the sensitivity of the total to each gap, a table and a
+// stacked SVG.
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
 
@@ -10,7 +10,6 @@
 #include "common.hpp"
 #include "inputs.hpp"
 #include "pumploss/piston_pump.hpp"
-#include "pumploss/workflows.hpp"
 #include "pumploss/version.hpp"
 #include "svg.hpp"
 
@@ -30,8 +29,6 @@ struct budget_options {
 int run_budget(const budget_options& o) {
   const display_units du = make_units(o.out);
   auto p = read_pump(o.pump);
-  if (!p.has_geometry || !(p.sweep_step_pa > 0))
-    throw input_error(o.pump, 0, 0, "the budget needs the pump's [geometry] and [sweep] (health needs neither)");
   auto q = [&](const std::string& opt, const std::string& text, double& field) {
     if (text.empty()) return;
     try {
@@ -64,6 +61,7 @@ int run_budget(const budget_options& o) {
       case leakage_path::bleed: return g.bleed_orifice_diameter_m > 0;
       case leakage_path::extra_laminar: return g.extra_conductance_m3 > 0;
       case leakage_path::extra_orifice: return g.extra_orifice_cda_m2 > 0;
+      case leakage_path::control_piston: return g.control_piston_conductance_m3 > 0;
     }
     return false;
   };
@@ -90,6 +88,7 @@ int run_budget(const budget_options& o) {
     ts.cols.push_back({nm, cell_kind::percent, D::pressure, 3});
   }
   tf.cols.push_back({"total", cell_kind::quantity, D::volume_flow, 3});
+  tf.cols.push_back({"total film viscosity", cell_kind::quantity, D::volume_flow, 3});
   tf.cols.push_back({"drain fraction", cell_kind::percent, D::pressure, 3});
   tf.cols.push_back({"status", cell_kind::text, D::pressure, 0});
   std::vector<int> gap_cols;
@@ -101,32 +100,38 @@ int run_budget(const budget_options& o) {
     tz.cols.push_back({std::string("dQ/dh ") + gap_names[k] + " [" + du.of(D::volume_flow).symbol + " per um]",
                        cell_kind::number, D::pressure, 3});
 
+  table tl;
+  tl.name = "flow_loss";
+  tl.title = "The test stand's flow loss: case drain plus the losses that never reach the case";
+  tl.cols = {{"outlet pressure", cell_kind::quantity, D::pressure, 3},
+             {"case drain", cell_kind::quantity, D::volume_flow, 3},
+             {"compression of delivered oil", cell_kind::quantity, D::volume_flow, 3},
+             {"dead volume", cell_kind::quantity, D::volume_flow, 3},
+             {"cross-port", cell_kind::quantity, D::volume_flow, 3},
+             {"flow loss", cell_kind::quantity, D::volume_flow, 3},
+             {"volumetric efficiency", cell_kind::percent, D::pressure, 3}};
+
   svg::stack st;
   for (const int k : paths) st.names.push_back(pumploss::leakage_path_name(static_cast<leakage_path>(k)));
   st.layers.resize(paths.size());
+  status worst_st = status::ok;
+  double max_re = 0;
   const double one_um_flow = du.show(1.0, D::volume_flow) * 1e-6;  // display flow per m^3/s, times 1 um
-  pumploss::pump_sweep sw;
-  sw.from_pa = p.sweep_from_pa;
-  sw.to_pa = p.sweep_to_pa;
-  sw.step_pa = p.sweep_step_pa;
-  sw.case_pa = p.sweep_case_pa;
-  sw.speed_rev_s = p.sweep_speed_rev_s;
-  sw.displacement_fraction = p.sweep_displacement_fraction;
-  sw.temperature_k = p.sweep_temperature_k;
-  // the budget at the health reference state, next to the measured baseline
-  sw.with_reference = true;
-  sw.reference = {p.reference_dp_pa + p.sweep_case_pa, p.sweep_case_pa, p.reference_speed_rev_s, 1.0,
-                  p.reference_temperature_k};
-  const auto res = pumploss::sweep_piston_pump(g, oil, sw);
-  if (pumploss::is_error(res.st)) {
-    const double pout = p.sweep_from_pa + static_cast<double>(res.failed_point) * p.sweep_step_pa;
-    throw std::runtime_error(o.pump + ": no leakage budget at " + show_quantity(pout, D::pressure, du) + ": " +
-                             pumploss::status_message(static_cast<int>(res.st)));
-  }
-  for (const auto& pt : res.points) {
-    const auto& b = pt.budget;
-    const auto& s = pt.sensitivity;
-    const double pout = pt.outlet_pa;
+  for (int i = 0;; ++i) {
+    const double pout = p.sweep_from_pa + i * p.sweep_step_pa;
+    if (pout > p.sweep_to_pa * (1 + 1e-12)) break;
+    pumploss::pump_operating_point<double> op{pout, p.sweep_case_pa, p.sweep_speed_rev_s,
+                                              p.sweep_displacement_fraction, p.sweep_temperature_k};
+    op.inlet_pa = p.sweep_inlet_pa;
+    op.film_temperature_rise_k = p.sweep_film_rise_k;
+    const auto b = pumploss::piston_pump_budget(g, oil, op);
+    const auto fl = pumploss::piston_pump_flow_loss(g, oil, op);
+    if (pumploss::is_error(b.st))
+      throw std::runtime_error(o.pump + ": no leakage budget at " + show_quantity(pout, D::pressure, du) + ": " +
+                               pumploss::status_message(static_cast<int>(b.st)));
+    const auto s = pumploss::piston_pump_sensitivity(g, oil, op);
+    worst_st = pumploss::worst(worst_st, b.st);
+    max_re = std::max(max_re, b.max_gap_reynolds);
     std::vector<cell> rf = {pout}, rs = {pout}, rz = {pout};
     for (std::size_t j = 0; j < paths.size(); ++j) {
       rf.emplace_back(b.flow_m3_s[paths[j]]);
@@ -134,7 +139,10 @@ int run_budget(const budget_options& o) {
       st.layers[j].push_back(du.show(b.flow_m3_s[paths[j]], D::volume_flow));
     }
     rf.emplace_back(b.total_m3_s);
+    rf.emplace_back(b.total_film_m3_s);
     rf.emplace_back(b.drain_fraction);
+    tl.rows.push_back({pout, fl.drain_m3_s, fl.compression_m3_s, fl.dead_volume_m3_s, fl.cross_port_m3_s, fl.total_m3_s,
+                       fl.theoretical_m3_s > 0 ? 1 - fl.total_m3_s / fl.theoretical_m3_s : 0.0});
     rf.emplace_back(status_text(b.st));
     for (const int k : gap_cols) rz.emplace_back(s.elasticity[k]);
     for (const int k : gap_cols) rz.emplace_back(s.d_total_d_gap[k] * one_um_flow);
@@ -143,8 +151,6 @@ int run_budget(const budget_options& o) {
     tz.rows.push_back(std::move(rz));
     st.x.push_back(du.show(pout, D::pressure));
   }
-  const status worst_st = res.st;
-  const double max_re = res.max_gap_reynolds;
 
   report r;
   r.title = "Leakage budget: " + p.name;
@@ -164,7 +170,10 @@ int run_budget(const budget_options& o) {
                                             show_quantity(p.sweep_speed_rev_s, D::rotational_speed, du),
                                             show_quantity(p.sweep_temperature_k, D::temperature, du, 3),
                                             100 * p.sweep_displacement_fraction));
-  const auto& br = res.reference;
+  // the budget at the health reference state, next to the measured baseline
+  const pumploss::pump_operating_point<double> ref_op{p.reference_dp_pa + p.sweep_case_pa, p.sweep_case_pa,
+                                                      p.reference_speed_rev_s, 1.0, p.reference_temperature_k};
+  const auto br = pumploss::piston_pump_budget(g, oil, ref_op);
   if (pumploss::is_usable(br.st))
     r.facts.emplace_back("At the health reference",
                          fmt::format("{} predicted at {}, {}, {}; measured baseline {} ({:+.0f} %)",
@@ -174,14 +183,95 @@ int run_budget(const budget_options& o) {
                                      show_quantity(p.reference_speed_rev_s, D::rotational_speed, du),
                                      show_quantity(p.baseline_drain_m3_s, D::volume_flow, du, 3),
                                      100 * (p.baseline_drain_m3_s / br.total_m3_s - 1)));
+  // force balance, viscosity band, deadhead and the reconciliation at the reference state
+  {
+    const auto full = pumploss::piston_pump_kinematics(g, 1.0);
+    const auto b1 = pumploss::piston_pump_balance(g, full.tan_beta, p.reference_dp_pa);
+    const auto b0 = pumploss::piston_pump_balance(g, 0.0, p.reference_dp_pa);
+    if (g.slipper_gap_m > 0)
+      r.facts.emplace_back(
+          "Slipper balance",
+          fmt::format("{:.3f} at full stroke, {:.3f} at zero stroke (window {:.2f} to {:.2f}, common practice); the "
+                      "film at which it carries the piston force: {} (stated {})",
+                      b1.slipper_balance, b0.slipper_balance, pumploss::slipper_balance_min,
+                      pumploss::slipper_balance_max, show_quantity(b1.slipper_film_m, D::length, du, 3),
+                      show_quantity(g.slipper_gap_m, D::length, du, 3)));
+    if (g.valve_gap_m > 0)
+      r.facts.emplace_back("Barrel balance",
+                           fmt::format("{:.3f}: valve-plate separating force / hold-down (window {:.2f} to {:.2f}, "
+                                       "common practice; above 1 the barrel lifts off)",
+                                       b1.barrel_balance, pumploss::barrel_balance_min, pumploss::barrel_balance_max));
+    if ((b1.warnings | b0.warnings) != 0u)
+      r.notes.push_back("FORCE BALANCE outside its design window: the stated films are not the ones this geometry "
+                        "would run at; the budget's shares are not credible until the geometry is corrected");
+    pumploss::pump_operating_point<double> op{p.reference_dp_pa + p.sweep_case_pa, p.sweep_case_pa,
+                                              p.reference_speed_rev_s, 1.0, p.reference_temperature_k};
+    op.inlet_pa = p.sweep_inlet_pa;
+    op.film_temperature_rise_k = p.sweep_film_rise_k;
+    const auto fl = pumploss::piston_pump_flow_loss(g, oil, op);
+    const auto bb = pumploss::piston_pump_budget(g, oil, op);
+    if (pumploss::is_usable(fl.st)) {
+      r.facts.emplace_back(
+          "Flow loss at the reference",
+          fmt::format("case drain {} + compression {} + dead volume {} + cross-port {} = {} of {} ({:.2f} %)",
+                      show_quantity(fl.drain_m3_s, D::volume_flow, du, 3),
+                      show_quantity(fl.compression_m3_s, D::volume_flow, du, 3),
+                      show_quantity(fl.dead_volume_m3_s, D::volume_flow, du, 3),
+                      show_quantity(fl.cross_port_m3_s, D::volume_flow, du, 3),
+                      show_quantity(fl.total_m3_s, D::volume_flow, du, 3),
+                      show_quantity(fl.theoretical_m3_s, D::volume_flow, du, 4),
+                      100 * fl.total_m3_s / fl.theoretical_m3_s));
+      r.facts.emplace_back(
+          "Viscosity band at the reference",
+          fmt::format("{} isoviscous (bulk temperature, case pressure) to {} with the film viscosity "
+                      "(pressure-viscosity over the film, film {:.1f} K warmer)",
+                      show_quantity(bb.total_m3_s, D::volume_flow, du, 3),
+                      show_quantity(bb.total_film_m3_s, D::volume_flow, du, 3), p.sweep_film_rise_k));
+    }
+    op.mode = pumploss::controller_mode::deadhead;
+    const auto dh = pumploss::piston_pump_budget(g, oil, op);
+    if (pumploss::is_usable(dh.st))
+      r.facts.emplace_back("Deadhead (compensating at zero stroke)",
+                           fmt::format("{} to the case, of which the controller {} (metering {} into the control "
+                                       "chamber); pistons {} (deeper in their bores than at full stroke)",
+                                       show_quantity(dh.total_m3_s, D::volume_flow, du, 3),
+                                       show_quantity(dh.flow_m3_s[5] + dh.flow_m3_s[6] + dh.flow_m3_s[9],
+                                                     D::volume_flow, du, 3),
+                                       show_quantity(dh.metering_flow_m3_s, D::volume_flow, du, 3),
+                                       show_quantity(dh.flow_m3_s[0], D::volume_flow, du, 3)));
+    bool any_tol = false;
+    for (double t : p.gap_tolerance) any_tol = any_tol || t > 0;
+    if (any_tol) {
+      op.mode = pumploss::controller_mode::on_stroke;
+      const auto u = pumploss::piston_pump_budget_uncertainty(g, oil, op, p.gap_tolerance);
+      if (pumploss::is_usable(u.st)) {
+        table tu;
+        tu.name = "share_uncertainty";
+        tu.title = "Shares at the reference with their standard uncertainty from the gap tolerances";
+        tu.cols = {{"path", cell_kind::text, D::pressure, 0},
+                   {"flow", cell_kind::quantity, D::volume_flow, 3},
+                   {"u(flow)", cell_kind::quantity, D::volume_flow, 2},
+                   {"share", cell_kind::percent, D::pressure, 3},
+                   {"u(share)", cell_kind::percent, D::pressure, 2}};
+        for (const int k : paths)
+          tu.rows.push_back({std::string(pumploss::leakage_path_name(static_cast<leakage_path>(k))), u.flow_m3_s[k],
+                             u.u_flow_m3_s[k], u.share[k], u.u_share[k]});
+        tu.rows.push_back({std::string("total"), u.total_m3_s, u.u_total_m3_s, 1.0, 0.0});
+        r.tables.push_back(std::move(tu));
+      }
+    }
+  }
   r.facts.emplace_back("Largest gap Reynolds number", fmt::format("{:.3g} (laminar below about 2000)", max_re));
   r.tables.push_back(std::move(tf));
   r.tables.push_back(std::move(ts));
   r.tables.push_back(std::move(tz));
+  r.tables.push_back(std::move(tl));
   if (worst_st != status::ok)
     r.notes.push_back("some paths were evaluated outside their model's assumptions (see the status column)");
-  r.notes.push_back("laminar clearance flows with one viscosity for every gap (the oil at the sweep temperature and "
-                    "case pressure); the controller's consumption is taken as constant; a model of the described "
+  r.notes.push_back("laminar clearance flows; 'total' with the oil at the sweep temperature and case pressure "
+                    "(isoviscous), 'total film viscosity' with the pressure-viscosity over the film and the stated "
+                    "film temperature rise: the two bound the drain; the sweep is on stroke (spool leakage only); "
+                    "swash plate pivoting on the shaft axis unless an offset is stated; a model of the described "
                     "geometry, not a measurement");
 
   svg::plot pl;

@@ -446,6 +446,11 @@ void read_pump_geometry(section& root, section& pu, pump_spec& p, long z) {
     if (!(*h > 0 && *h <= 1)) throw g.error("high_pressure_share", "must lie above 0 and at most 1");
     q.high_pressure_share = *h;
   }
+  q.pivot_offset_m = g.quantity_opt("pivot_offset", D::length).value_or(0.0);
+  q.dead_volume_m3 = g.quantity_opt("dead_volume", D::volume).value_or(0.0);
+  if (!(std::fabs(q.pivot_offset_m) < q.pitch_radius_m))
+    throw g.error("pivot_offset", "must lie inside the pitch circle (|e| < pitch radius)");
+  if (!(q.dead_volume_m3 >= 0)) throw g.error("dead_volume", "must not be negative");
   if (!(2 * q.pitch_radius_m * std::sin(kPi / static_cast<double>(z)) > q.piston_diameter_m + 2 * q.bore_clearance_m))
     throw g.error("piston_diameter", "the bores do not fit side by side on the pitch circle");
   if (auto sl = g.table_opt("slipper")) {
@@ -479,7 +484,14 @@ void read_pump_geometry(section& root, section& pu, pump_spec& p, long z) {
     if (!(arc > 0 && arc < 180)) throw vp->error("arc_deg", "must lie between 0 and 180 degrees");
     q.valve_kidney_arc_rad = arc * kPi / 180;
     q.valve_gap_m = positive(*vp, "gap", D::length);
+    q.barrel_spring_force_n = vp->quantity_opt("barrel_spring_force", D::force).value_or(0.0);
+    if (!(q.barrel_spring_force_n >= 0)) throw vp->error("barrel_spring_force", "must not be negative");
     vp->finish();
+  }
+  if (auto cp = g.table_opt("cross_port")) {  // a parallel-plate path between the kidneys: k = w h^3 / (12 l)
+    const double h = positive(*cp, "gap", D::length), w = positive(*cp, "width", D::length);
+    q.cross_port_conductance_m3 = w * h * h * h / (12 * positive(*cp, "length", D::length));
+    cp->finish();
   }
   if (auto ct = g.table_opt("controller")) {
     q.controller_flow_m3_s = non_negative(*ct, "consumption", D::volume_flow);
@@ -488,6 +500,13 @@ void read_pump_geometry(section& root, section& pu, pump_spec& p, long z) {
     if (const auto cd = ct->number_opt("bleed_cd")) {
       if (!(*cd > 0 && *cd <= 1)) throw ct->error("bleed_cd", "must lie above 0 and at most 1");
       q.bleed_cd = *cd;
+    }
+    q.control_pressure_pa = ct->quantity_opt("control_pressure", D::pressure).value_or(0.0);
+    if (!(q.control_pressure_pa >= 0)) throw ct->error("control_pressure", "must not be negative");
+    if (const auto cd = ct->quantity_opt("control_piston_diameter", D::length)) {
+      // narrow concentric annulus: k = pi d h^3 / (12 l)
+      const double h = positive(*ct, "control_piston_clearance", D::length);
+      q.control_piston_conductance_m3 = kPi * *cd * h * h * h / (12 * positive(*ct, "control_piston_length", D::length));
     }
     ct->finish();
   }
@@ -593,6 +612,19 @@ pump_spec read_pump(const std::string& path) {
   p.sweep_displacement_fraction = sw.number_opt("displacement_fraction").value_or(1.0);
   if (!(p.sweep_displacement_fraction >= 0 && p.sweep_displacement_fraction <= 1))
     throw sw.error("displacement_fraction", "must lie between 0 and 1");
+  p.sweep_inlet_pa = sw.quantity_opt("inlet_pressure", D::pressure).value_or(0.0);
+  if (!(p.sweep_inlet_pa < p.sweep_from_pa)) throw sw.error("inlet_pressure", "must lie below the sweep's first pressure");
+  p.sweep_film_rise_k = sw.has("film_temperature_rise") ? sw.temperature_step("film_temperature_rise") : 0.0;
+  if (!(p.sweep_film_rise_k >= 0 && p.sweep_film_rise_k <= 50))
+    throw sw.error("film_temperature_rise", "must lie between 0 and 50 K");
+  if (sw.has("gap_tolerances")) {  // standard uncertainties: bore, slipper, ball, valve plate
+    const auto t = sw.quantity_list("gap_tolerances", D::length);
+    if (t.size() != 4) throw sw.error("gap_tolerances", "needs four lengths: bore, slipper, ball, valve plate");
+    for (std::size_t k = 0; k < 4; ++k) {
+      if (!(t[k] >= 0)) throw sw.error("gap_tolerances", "must not be negative");
+      p.gap_tolerance[k] = t[k];
+    }
+  }
   sw.finish();
   root.finish();
   return p;

@@ -135,6 +135,9 @@ struct pump_spec {
   // sweep
   double sweep_from_pa = 0, sweep_to_pa = 0, sweep_step_pa = 0, sweep_speed_rev_s = 0, sweep_case_pa = 0,
          sweep_temperature_k = 0, sweep_displacement_fraction = 1;
+  double sweep_inlet_pa = 0;                ///< inlet pressure (compression and cross-port losses)
+  double sweep_film_rise_k = 0;             ///< film temperature rise of the heated bound of the band
+  double gap_tolerance[pumploss::pump_gap_count] = {0, 0, 0, 0};  ///< standard uncertainty of each gap, m
   /// Maximum displacement implied by the geometry (pumploss::piston_pump_displacement).
   double geometric_displacement_m3_rev() const;
 };

@@ -23,6 +23,16 @@ const char* leakage_path_name(leakage_path path) noexcept {
     case leakage_path::bleed: return "bleed-orifice";
     case leakage_path::extra_laminar: return "extra-laminar";
     case leakage_path::extra_orifice: return "extra-orifice";
+    case leakage_path::control_piston: return "control-piston";
+  }
+  return "unknown";
+}
+
+const char* controller_mode_name(controller_mode mode) noexcept {
+  switch (mode) {
+    case controller_mode::on_stroke: return "on-stroke";
+    case controller_mode::compensating: return "compensating";
+    case controller_mode::deadhead: return "deadhead";
   }
   return "unknown";
 }
@@ -68,7 +78,8 @@ pump_calibration empty_calibration(status st) {
 status group_flows(const piston_pump<double>& p, const oil<double>& o, const drain_measurement& m, double out[G]) {
   if (!detail::finite(m.drain_m3_s)) return status::nonfinite;
   if (!(m.drain_m3_s >= 0.0)) return status::domain;
-  const auto b = piston_pump_budget(p, o, {m.outlet_pa, m.case_pa, m.speed_rev_s, m.displacement_fraction, m.t_k});
+  const auto b =
+      piston_pump_budget(p, o, {m.outlet_pa, m.case_pa, m.speed_rev_s, m.displacement_fraction, m.t_k, m.mode});
   if (is_error(b.st)) return b.st;
   for (int g = 0; g < G; ++g) out[g] = 0.0;
   for (int i = 0; i < leakage_path_count; ++i) out[static_cast<int>(group_of(static_cast<leakage_path>(i)))] += b.flow_m3_s[i];

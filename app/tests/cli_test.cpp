@@ -341,11 +341,11 @@ TEST(CliDemo, TestStandGridIsFiveSpeedsBySixPressures) {
 
 TEST(CliDemo, PumpFileGeometryGivesItsDisplacement) {
   // The budget report states the displacement the pump file's geometry implies (9 pistons of
-  // 17 mm on a 56.8 mm pitch radius at 17 degrees) next to the stated 71 cm3/rev.
+  // 20 mm on a 40 mm pitch radius at 17.5 degrees) next to the stated 71 cm3/rev.
   temp_dir tmp;
   const auto r = run({"budget", kDemo + "/pump_p31.toml"}, tmp);
   ASSERT_EQ(r.code, 0) << r.err;
-  const double vg = 9 * M_PI / 4 * 0.017 * 0.017 * 2 * 0.0568 * std::tan(17 * M_PI / 180);
+  const double vg = 9 * M_PI / 4 * 0.020 * 0.020 * 2 * 0.040 * std::tan(17.5 * M_PI / 180);
   EXPECT_LT(std::fabs(vg / 71e-6 - 1), 0.01);
   char want[128];
   std::snprintf(want, sizeof want, "(9 pistons, 71.00 cm3/rev stated, %.2f cm3/rev from the geometry)", vg * 1e6);
@@ -510,7 +510,7 @@ TEST(CliHealth, DemoMatchesLibrary) {
   ref.reference_speed_rev_s = 25.0;
   ref.rated_speed_rev_s = 25.0;
   ref.constant_m3_s = 0.3 / 60000;
-  ref.baseline_m3_s = 4.0 / 60000;
+  ref.baseline_m3_s = 3.1 / 60000;
   ref.baseline_rise_k = 4.0;
   pumploss::health_bands<double> bands;
   bands.sound_max = 0.06;
@@ -585,43 +585,67 @@ TEST(CliBudget, DemoMatchesLibrary) {
   // pump_p31.toml, written out here
   pumploss::piston_pump<double> p;
   p.pistons = 9;
-  p.piston_diameter_m = 0.017;
-  p.bore_clearance_m = 15e-6;
-  p.piston_eccentricity = 0.3;
-  p.engaged_length_min_m = 0.021;
-  p.pitch_radius_m = 0.0568;
-  p.max_swash_angle_rad = 17 * M_PI / 180;
-  p.slipper_pocket_radius_m = 0.0055;
-  p.slipper_outer_radius_m = 0.010;
-  p.slipper_gap_m = 21e-6;
-  p.slipper_feed_diameter_m = 0.8e-3;
-  p.slipper_feed_length_m = 6e-3;
+  p.piston_diameter_m = 0.020;
+  p.bore_clearance_m = 22e-6;
+  p.piston_eccentricity = 0.7;
+  p.engaged_length_min_m = 0.024;
+  p.pitch_radius_m = 0.040;
+  p.max_swash_angle_rad = 17.5 * M_PI / 180;
+  p.dead_volume_m3 = 2.5e-6;
+  p.slipper_pocket_radius_m = 0.009;
+  p.slipper_outer_radius_m = 0.0125;
+  p.slipper_gap_m = 12e-6;
+  p.slipper_feed_diameter_m = 0.5e-3;
+  p.slipper_feed_length_m = 48e-3;
   p.ball_diameter_m = 0.013;
-  p.ball_clearance_m = 6e-6;
+  p.ball_clearance_m = 5e-6;
   p.ball_length_m = 0.003;
-  p.valve_inner_land_inner_radius_m = 0.038;
-  p.valve_inner_land_outer_radius_m = 0.042;
-  p.valve_outer_land_inner_radius_m = 0.058;
-  p.valve_outer_land_outer_radius_m = 0.062;
+  p.valve_inner_land_inner_radius_m = 0.027;
+  p.valve_inner_land_outer_radius_m = 0.031;
+  p.valve_outer_land_inner_radius_m = 0.041;
+  p.valve_outer_land_outer_radius_m = 0.045;
   p.valve_kidney_arc_rad = 150 * M_PI / 180;
-  p.valve_gap_m = 16e-6;
+  p.valve_gap_m = 18e-6;
+  p.cross_port_conductance_m3 = 0.016 * std::pow(18e-6, 3) / (12 * 0.006);
   p.controller_flow_m3_s = 0.3 / 60000;
+  p.control_pressure_pa = 25e5;
+  p.control_piston_conductance_m3 = M_PI * 0.016 * std::pow(10e-6, 3) / (12 * 0.020);
+  p.bleed_orifice_diameter_m = 0.5e-3;
+  p.bleed_cd = 0.7;
+  p.stated_displacement_m3_rev = 71e-6;
   const auto oil = demo_oil();
+  // the demo geometry is balanced: both ratios inside their design windows at full and zero stroke
+  for (double x : {0.0, 1.0}) {
+    const auto k = pumploss::piston_pump_kinematics(p, x);
+    const auto bal = pumploss::piston_pump_balance(p, k.tan_beta, 250e5);
+    EXPECT_EQ(bal.warnings, 0u) << x;
+  }
+  const auto read = plcli::read_pump(kDemo + "/pump_p31.toml").geometry;
+  EXPECT_LT(rel(read.cross_port_conductance_m3, p.cross_port_conductance_m3), 1e-12);
+  EXPECT_LT(rel(read.control_piston_conductance_m3, p.control_piston_conductance_m3), 1e-12);
+  const auto fl = read_out(out + "/budget_flow_loss.csv");
   const auto t = read_out(out + "/budget_flows.csv");
   const auto z = read_out(out + "/budget_sensitivity.csv");
   ASSERT_EQ(t.rows.size(), 13u);  // 20 to 260 bar in steps of 20
   for (std::size_t i = 0; i < 13; ++i) {
-    const pumploss::pump_operating_point<double> op{(20.0 + 20.0 * static_cast<double>(i)) * 1e5, 0.5e5, 25.0, 1.0,
-                                                    323.15};
+    pumploss::pump_operating_point<double> op{(20.0 + 20.0 * static_cast<double>(i)) * 1e5, 0.5e5, 25.0, 1.0,
+                                              323.15};
+    op.inlet_pa = 0.3e5;
+    op.film_temperature_rise_k = 7.0;
     const auto b = pumploss::piston_pump_budget(p, oil, op);
     ASSERT_EQ(b.st, pumploss::status::ok);
+    EXPECT_LT(rel(t.num(i, "total film viscosity [L/min]") / 60000, b.total_film_m3_s), 1e-8) << i;
+    const auto f = pumploss::piston_pump_flow_loss(p, oil, op);
+    EXPECT_LT(rel(fl.num(i, "flow loss [L/min]") / 60000, f.total_m3_s), 1e-8) << i;
+    EXPECT_LT(rel(fl.num(i, "case drain [L/min]") / 60000, b.total_m3_s), 1e-8) << i;
     EXPECT_LT(rel(t.num(i, "total [L/min]") / 60000, b.total_m3_s), 1e-8) << i;
     EXPECT_LT(rel(t.num(i, "slipper [L/min]") / 60000, b.flow_m3_s[1]), 1e-8) << i;
     EXPECT_LT(rel(t.num(i, "piston-bore [L/min]") / 60000, b.flow_m3_s[0]), 1e-8) << i;
     const auto s = pumploss::piston_pump_sensitivity(p, oil, op);
     EXPECT_LT(rel(z.num(i, "elasticity valve plate gap"), s.elasticity[3]), 1e-8) << i;
   }
-  EXPECT_EQ(t.head.size(), 10u);  // pressure, 6 paths (no bleed orifice, no user paths), total, fraction, status
+  // pressure, 8 paths (no user paths), total, total with the film viscosity, fraction, status
+  EXPECT_EQ(t.head.size(), 13u);
 }
 
 // ------------------------------------------------------------------------------ malformed inputs
@@ -758,9 +782,9 @@ TEST(CliMalformed, EveryCommandNamesTheLineAndWritesNothing) {
       {"health", "field_readings.csv", "2022-03-15,", "2022-13-15,", ":5:1:", "date"},
       {"health", "field_readings.csv", "on stroke,meter change,", "on stroke,overhual,", ":27:", "unknown event"},
       {"health", "field_readings.csv", ",speed [rpm],", ",", ":2:", "missing column 'speed'"},
-      {"budget", "pump_p31.toml", "gap = \"16 um\"", "gap = \"16\"", ":", "needs a unit"},
-      {"budget", "pump_p31.toml", "clearance = \"6 um\"", "clearance = \"6 um\"\nclearence = \"6 um\"", ":", "unknown key 'clearence'"},
-      {"budget", "pump_p31.toml", "pistons = 9", "pistons = 99", ":11:11:", "between 3 and 15"},
+      {"budget", "pump_p31.toml", "gap = \"12 um\"", "gap = \"12\"", ":", "needs a unit"},
+      {"budget", "pump_p31.toml", "clearance = \"5 um\"", "clearance = \"5 um\"\nclearence = \"5 um\"", ":", "unknown key 'clearence'"},
+      {"budget", "pump_p31.toml", "pistons = 9", "pistons = 99", ":12:11:", "between 3 and 15"},
       {"drain-line", "drain_line.toml", "length = \"4.5 m\"", "length = \"4.5 furlong\"", ":", "unknown unit 'furlong'"},
       {"drain-line", "drain_line.toml", "k = 0.5", "k = -0.5", ":", "must not be negative"},
       {"drain-line", "drain_line.toml",

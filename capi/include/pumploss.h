@@ -1921,6 +1921,67 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_uncertainty(
     double u_displacement_m3_rev, double u_speed_rev_s, double u_dp_pa, double u_flow_m3_s, double u_torque_n_m,
     double r_flow_displacement, double *u_eta_v, double *u_eta_hm, double *u_eta_t);
 /** @} */
+/* ---- loss models with constant and compression flow columns (h7) ---- */
+#define PUMPLOSS_FLOW_TERM_CONSTANT 1     /**< Extra flow column: constant flow loss Q_c. */
+#define PUMPLOSS_FLOW_TERM_COMPRESSION 2  /**< Extra flow column: compression C_k D omega dp / K. */
+#define PUMPLOSS_CRITERION_AIC 0          /**< Model choice by Akaike's information criterion. */
+#define PUMPLOSS_CRITERION_BIC 1          /**< Model choice by the Bayesian (Schwarz) criterion. */
+/**
+ * Fit a loss model with optional constant and compression flow columns, the subset chosen by an
+ * information criterion, and the displacement's uncertainty in every coefficient's error.
+ * @param machine_kind PUMPLOSS_PUMP or PUMPLOSS_MOTOR
+ * @param model_kind PUMPLOSS_MODEL_WILSON or PUMPLOSS_MODEL_SCHLOESSER
+ * @param displacement_m3_rev derived displacement V_i, m^3/rev (> 0)
+ * @param u_displacement_m3_rev its standard uncertainty, m^3/rev (>= 0; 0: not propagated)
+ * @param rho_kg_m3 oil density for the Schloesser terms, kg/m^3 (> 0)
+ * @param bulk_modulus_pa K of the compression column, Pa (> 0)
+ * @param flow_terms PUMPLOSS_FLOW_TERM_* bits offered to the criterion (0: plain model)
+ * @param criterion PUMPLOSS_CRITERION_AIC or PUMPLOSS_CRITERION_BIC
+ * @param count number of points
+ * @param dp_pa array of pressure differences, Pa (> 0)
+ * @param speed_rev_s array of speeds, rev/s (> 0)
+ * @param mu_pa_s array of dynamic viscosities at the gaps, Pa s (> 0)
+ * @param flow_m3_s array of flows, m^3/s (>= 0)
+ * @param torque_n_m array of torques, N m (>= 0)
+ * @param model receives the handle (NULL on every error)
+ * @return as pumploss_model_create(); PUMPLOSS_EDOMAIN for unknown bits or criterion.
+ * @sa pumploss::fit_loss_model
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create_terms(int machine_kind, int model_kind,
+                                                           double displacement_m3_rev, double u_displacement_m3_rev,
+                                                           double rho_kg_m3, double bulk_modulus_pa, int flow_terms,
+                                                           int criterion, size_t count, const double *dp_pa,
+                                                           const double *speed_rev_s, const double *mu_pa_s,
+                                                           const double *flow_m3_s, const double *torque_n_m,
+                                                           pumploss_model **model);
+/**
+ * The extra flow terms of a fitted model.
+ * @param model the handle
+ * @param flow_terms receives the PUMPLOSS_FLOW_TERM_* bits the criterion kept
+ * @param q_c_m3_s receives the constant flow loss, m^3/s (0 when not kept)
+ * @param u_q_c_m3_s receives its standard error, m^3/s
+ * @param c_k receives the compression coefficient (0 when not kept)
+ * @param u_c_k receives its standard error
+ * @return the model's status; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_flow_terms(const pumploss_model *model, int *flow_terms,
+                                                         double *q_c_m3_s, double *u_q_c_m3_s, double *c_k,
+                                                         double *u_c_k);
+/**
+ * Information criteria and residual diagnostics of the flow regression.
+ * @param model the handle
+ * @param aic receives Akaike's criterion of the kept flow model
+ * @param bic receives the Bayesian criterion
+ * @param corr_dp receives the correlation of the flow residuals with pressure
+ * @param corr_speed receives their correlation with speed
+ * @param corr_mu receives their correlation with viscosity
+ * @param max_std_residual receives the largest |residual| / s
+ * @return the model's status; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_flow_diagnostics(const pumploss_model *model, double *aic, double *bic,
+                                                               double *corr_dp, double *corr_speed, double *corr_mu,
+                                                               double *max_std_residual);
+/* pumploss:capi-efficiency (declarations of this subject go above this line) */
 
 /* ==== pump ==== */
 /** @name Pump health from field readings
@@ -2258,7 +2319,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_restore(pumploss_health_m
 #define PUMPLOSS_PATH_BLEED 6         /**< Path: controller bleed orifice. */
 #define PUMPLOSS_PATH_EXTRA_LAMINAR 7 /**< Path: user laminar path. */
 #define PUMPLOSS_PATH_EXTRA_ORIFICE 8 /**< Path: user orifice path. */
-#define PUMPLOSS_PATH_COUNT 9         /**< Number of paths. */
+#define PUMPLOSS_PATH_CONTROL_PISTON 9 /**< Path: control piston clearance (compensating, at control pressure). */
+#define PUMPLOSS_PATH_COUNT 10        /**< Number of paths. */
 #define PUMPLOSS_GAP_BORE 0           /**< Gap: piston-bore clearance. */
 #define PUMPLOSS_GAP_SLIPPER 1        /**< Gap: slipper land gap. */
 #define PUMPLOSS_GAP_BALL 2           /**< Gap: ball-socket clearance. */
@@ -2466,6 +2528,27 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump *h, size_t 
                                                        const double *speed_rev_s, const double *displacement_fraction,
                                                        const double *t_k, double *rms_residual_m3_s);
 /**
+ * Calibrate as pumploss_pump_calibrate(), each measurement with its controller mode (readings on
+ * stroke and at deadhead separate the pistons from the other laminar paths).
+ * @param h the handle (oil set)
+ * @param n number of measurements
+ * @param drain_m3_s measured drain flows, m^3/s (n values)
+ * @param outlet_pa outlet gauge pressures, Pa (n values)
+ * @param case_pa case gauge pressures, Pa (n values)
+ * @param speed_rev_s shaft speeds, rev/s (n values)
+ * @param displacement_fraction displacement settings, 0..1 (n values)
+ * @param t_k oil temperatures, K (n values)
+ * @param mode PUMPLOSS_MODE_* of each measurement (n values)
+ * @param rms_residual_m3_s receives the root-mean-square residual, m^3/s
+ * @return as pumploss_pump_calibrate(); PUMPLOSS_EDOMAIN for an unknown mode.
+ * @sa pumploss::calibrate_piston_pump
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate_modes(pumploss_pump *h, size_t n, const double *drain_m3_s,
+                                                             const double *outlet_pa, const double *case_pa,
+                                                             const double *speed_rev_s,
+                                                             const double *displacement_fraction, const double *t_k,
+                                                             const int *mode, double *rms_residual_m3_s);
+/**
  * Result of the last calibration for one group.
  * @param h the handle
  * @param group PUMPLOSS_GROUP_*
@@ -2491,6 +2574,139 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_path_name(int path);
  *  @param group PUMPLOSS_GROUP_*
  *  @return "piston", "slipper", ... or "unknown" (static storage) */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_group_name(int group);
+/* ---- piston pump: kinematics, controller modes, force balance, non-case losses (h7) ---- */
+#define PUMPLOSS_MODE_ON_STROKE 0     /**< Controller mode: on stroke (control chamber vented). */
+#define PUMPLOSS_MODE_COMPENSATING 1  /**< Controller mode: compensating (control piston and bleed at control pressure). */
+#define PUMPLOSS_MODE_DEADHEAD 2      /**< Controller mode: deadhead (compensating at zero displacement). */
+#define PUMPLOSS_BALANCE_SLIPPER_OVERCLAMPED 1 /**< Balance warning: slipper balance below 0.90. */
+#define PUMPLOSS_BALANCE_SLIPPER_LIFTS 2       /**< Balance warning: slipper balance above 1.10. */
+#define PUMPLOSS_BALANCE_SLIPPER_NO_FILM 4     /**< Balance warning: the pocket cannot carry the piston force. */
+#define PUMPLOSS_BALANCE_BARREL_LIFTS 8        /**< Balance warning: barrel balance above 1.00 (lift-off). */
+#define PUMPLOSS_BALANCE_BARREL_OVERCLAMPED 16 /**< Balance warning: barrel balance below 0.85. */
+
+/**
+ * Swash-plate pivot and dead volume of the pump (both 0 by default).
+ * @param h the handle
+ * @param pivot_offset_m distance of the pivot line from the shaft axis towards inner dead centre, m (|e| < R)
+ * @param dead_volume_m3 chamber volume at inner dead centre at full displacement, m^3 (>= 0)
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::piston_pump_kinematics
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_kinematics(pumploss_pump *h, double pivot_offset_m,
+                                                            double dead_volume_m3);
+/**
+ * Control piston, control pressure, cross-port path and barrel spring (all 0 by default).
+ * @param h the handle
+ * @param control_piston_conductance_m3 laminar conductance k of the control piston clearance, q = k p_c / mu, m^3
+ * @param control_pressure_pa control chamber gauge pressure while compensating, Pa
+ * @param cross_port_conductance_m3 laminar conductance high- to low-pressure kidney, m^3 (not to the case)
+ * @param barrel_spring_force_n barrel hold-down spring force, N
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for a negative value; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::piston_pump_budget
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_control(pumploss_pump *h, double control_piston_conductance_m3,
+                                                         double control_pressure_pa, double cross_port_conductance_m3,
+                                                         double barrel_spring_force_n);
+/**
+ * Kinematics at one displacement setting.
+ * @param h the handle
+ * @param displacement_fraction 0..1
+ * @param stroke_m receives 2 R tan(beta), m
+ * @param engaged_odc_m receives the engagement at outer dead centre, m
+ * @param engaged_idc_m receives the engagement at inner dead centre, m
+ * @param effective_length_m receives sqrt(L_ODC L_IDC), m
+ * @param dead_volume_m3 receives the chamber volume at inner dead centre, m^3
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ * @sa pumploss::piston_pump_kinematics
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_kinematics(const pumploss_pump *h, double displacement_fraction,
+                                                        double *stroke_m, double *engaged_odc_m,
+                                                        double *engaged_idc_m, double *effective_length_m,
+                                                        double *dead_volume_m3);
+/**
+ * Drain budget in a controller mode, with the viscosity band and the force balance.
+ * @param h the handle (oil set)
+ * @param mode PUMPLOSS_MODE_*
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa
+ * @param speed_rev_s shaft speed, rev/s
+ * @param displacement_fraction displacement setting, 0..1 (taken as 0 at deadhead)
+ * @param t_k bulk oil temperature, K
+ * @param film_rise_k film temperature rise for the heated bound, K (>= 0)
+ * @param total_m3_s receives the isoviscous drain flow, m^3/s
+ * @param total_film_m3_s receives the drain flow with the film viscosity, m^3/s
+ * @param metering_flow_m3_s receives the spool's metering flow into the control chamber, m^3/s
+ * @param warnings receives PUMPLOSS_BALANCE_* bits of the force balance
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when a balance ratio leaves its window;
+ *         PUMPLOSS_WREGIME; errors; PUMPLOSS_EDOMAIN for an unknown mode.
+ * @sa pumploss::piston_pump_budget
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget_mode(const pumploss_pump *h, int mode, double outlet_pa,
+                                                         double case_pa, double speed_rev_s,
+                                                         double displacement_fraction, double t_k, double film_rise_k,
+                                                         double *total_m3_s, double *total_film_m3_s,
+                                                         double *metering_flow_m3_s, int *warnings);
+/**
+ * Force balance: slipper and barrel balance ratios (independent of pressure and viscosity; the
+ * barrel's hold-down of the pressurised bores alone, without the spring).
+ * @param h the handle (slipper and valve plate set)
+ * @param displacement_fraction displacement setting, 0..1
+ * @param slipper_balance receives hydrostatic slipper force / (piston force / cos beta) at the stated film
+ * @param slipper_film_m receives the film at which the slipper balance is 1, m (0: none)
+ * @param barrel_balance receives valve-plate separating force / barrel hold-down
+ * @param warnings receives PUMPLOSS_BALANCE_* bits
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE outside the design windows; PUMPLOSS_EDATA when the
+ *         pump has no slipper or no valve-plate path; errors.
+ * @sa pumploss::piston_pump_balance
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_balance(const pumploss_pump *h, double displacement_fraction,
+                                                     double *slipper_balance, double *slipper_film_m,
+                                                     double *barrel_balance, int *warnings);
+/**
+ * The test stand's flow loss split into the case drain and the losses that never reach the case.
+ * @param h the handle (oil set)
+ * @param mode PUMPLOSS_MODE_*
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param inlet_pa inlet gauge pressure, Pa (<= outlet)
+ * @param case_pa case gauge pressure, Pa
+ * @param speed_rev_s shaft speed, rev/s
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param drain_m3_s receives the case drain, m^3/s
+ * @param compression_m3_s receives the compression of the delivered oil, m^3/s
+ * @param dead_volume_m3_s receives the dead-volume compression loss, m^3/s
+ * @param cross_port_m3_s receives the cross-port leakage, m^3/s
+ * @param total_m3_s receives their sum: the stand's flow loss, m^3/s
+ * @return as pumploss_pump_budget_mode().
+ * @sa pumploss::piston_pump_flow_loss
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_flow_loss(const pumploss_pump *h, int mode, double outlet_pa,
+                                                       double inlet_pa, double case_pa, double speed_rev_s,
+                                                       double displacement_fraction, double t_k, double *drain_m3_s,
+                                                       double *compression_m3_s, double *dead_volume_m3_s,
+                                                       double *cross_port_m3_s, double *total_m3_s);
+/**
+ * Standard uncertainty of one path's share from standard uncertainties of the four gaps.
+ * @param h the handle (oil set)
+ * @param path PUMPLOSS_PATH_*
+ * @param u_gap_m standard uncertainty of each gap (PUMPLOSS_GAP_* order), m
+ * @param n_gaps number of values in u_gap_m (PUMPLOSS_GAP_COUNT)
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param case_pa case gauge pressure, Pa
+ * @param speed_rev_s shaft speed, rev/s
+ * @param displacement_fraction displacement setting, 0..1
+ * @param t_k oil temperature, K
+ * @param share receives the share (0 when the total is 0)
+ * @param u_share receives its standard uncertainty
+ * @return as pumploss_pump_budget(); PUMPLOSS_EDOMAIN for an unknown path, n_gaps other than
+ *         PUMPLOSS_GAP_COUNT or a negative uncertainty.
+ * @sa pumploss::piston_pump_budget_uncertainty
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_share_uncertainty(const pumploss_pump *h, int path,
+                                                               const double *u_gap_m, size_t n_gaps,
+                                                               double outlet_pa, double case_pa, double speed_rev_s,
+                                                               double displacement_fraction, double t_k,
+                                                               double *share, double *u_share);
 /** @} */
 /* pumploss:capi-pump (declarations of this subject go above this line) */
 

@@ -71,13 +71,10 @@ int gum_wrapper(pumploss::machine kind, double v, double n, double dp, double q,
 }
 }  // namespace
 
-extern "C" {
-
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model_kind, double displacement_m3_rev,
-                                                     double rho_kg_m3, size_t count, const double* dp_pa,
-                                                     const double* speed_rev_s, const double* mu_pa_s,
-                                                     const double* flow_m3_s, const double* torque_n_m,
-                                                     pumploss_model** model) {
+namespace {
+int create_model(int machine_kind, int model_kind, double displacement_m3_rev, double rho_kg_m3, size_t count,
+                 const double* dp_pa, const double* speed_rev_s, const double* mu_pa_s, const double* flow_m3_s,
+                 const double* torque_n_m, const pumploss::loss_fit_options<double>& opt, pumploss_model** model) {
   if (model == nullptr) return PUMPLOSS_EMISUSE;
   *model = nullptr;
   // NULL arrays are misuse whatever else is wrong (the convention of pumploss.h), so before the enums.
@@ -97,7 +94,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model
       h->m = pumploss::fit_loss_model(static_cast<pumploss::machine>(machine_kind),
                                       static_cast<pumploss::loss_model_kind>(model_kind), displacement_m3_rev,
                                       rho_kg_m3, dp_pa, speed_rev_s, mu_pa_s, flow_m3_s, torque_n_m, count,
-                                      work.data(), h->flow_residual.data(), h->torque_residual.data());
+                                      work.data(), h->flow_residual.data(), h->torque_residual.data(), opt);
       st = h->m.st;
       h->message = describe(h->m);
     } catch (const std::bad_alloc&) {
@@ -114,6 +111,70 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model
   }
   *model = h;
   return static_cast<int>(st);
+}
+}  // namespace
+
+extern "C" {
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model_kind, double displacement_m3_rev,
+                                                     double rho_kg_m3, size_t count, const double* dp_pa,
+                                                     const double* speed_rev_s, const double* mu_pa_s,
+                                                     const double* flow_m3_s, const double* torque_n_m,
+                                                     pumploss_model** model) {
+  return create_model(machine_kind, model_kind, displacement_m3_rev, rho_kg_m3, count, dp_pa, speed_rev_s, mu_pa_s,
+                      flow_m3_s, torque_n_m, {}, model);
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create_terms(int machine_kind, int model_kind,
+                                                           double displacement_m3_rev, double u_displacement_m3_rev,
+                                                           double rho_kg_m3, double bulk_modulus_pa, int flow_terms,
+                                                           int criterion, size_t count, const double* dp_pa,
+                                                           const double* speed_rev_s, const double* mu_pa_s,
+                                                           const double* flow_m3_s, const double* torque_n_m,
+                                                           pumploss_model** model) {
+  if (model != nullptr) *model = nullptr;
+  if (model != nullptr && dp_pa != nullptr && speed_rev_s != nullptr && mu_pa_s != nullptr && flow_m3_s != nullptr &&
+      torque_n_m != nullptr && (flow_terms < 0 || flow_terms > 3 || (criterion != 0 && criterion != 1)))
+    return PUMPLOSS_EDOMAIN;
+  pumploss::loss_fit_options<double> opt;
+  opt.flow_terms = static_cast<unsigned>(flow_terms) & 3u;
+  opt.criterion = static_cast<pumploss::info_criterion>(criterion == 0 ? 0 : 1);
+  opt.bulk_modulus_pa = bulk_modulus_pa;
+  opt.u_displacement_m3_rev = u_displacement_m3_rev;
+  return create_model(machine_kind, model_kind, displacement_m3_rev, rho_kg_m3, count, dp_pa, speed_rev_s, mu_pa_s,
+                      flow_m3_s, torque_n_m, opt, model);
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_flow_terms(const pumploss_model* model, int* flow_terms,
+                                                         double* q_c_m3_s, double* u_q_c_m3_s, double* c_k,
+                                                         double* u_c_k) {
+  if (flow_terms != nullptr) *flow_terms = 0;
+  return call({q_c_m3_s, u_q_c_m3_s, c_k, u_c_k}, [&] {
+    if (model == nullptr || flow_terms == nullptr) return pumploss::status::misuse;
+    const auto& m = model->m;
+    *flow_terms = static_cast<int>(m.flow_terms);
+    *q_c_m3_s = m.q_c_m3_s;
+    *u_q_c_m3_s = m.u_q_c_m3_s;
+    *c_k = m.c_k;
+    *u_c_k = m.u_c_k;
+    return m.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_flow_diagnostics(const pumploss_model* model, double* aic, double* bic,
+                                                               double* corr_dp, double* corr_speed, double* corr_mu,
+                                                               double* max_std_residual) {
+  return call({aic, bic, corr_dp, corr_speed, corr_mu, max_std_residual}, [&] {
+    if (model == nullptr) return pumploss::status::misuse;
+    const auto& m = model->m;
+    *aic = m.aic_flow;
+    *bic = m.bic_flow;
+    *corr_dp = m.resid_corr_dp;
+    *corr_speed = m.resid_corr_speed;
+    *corr_mu = m.resid_corr_mu;
+    *max_std_residual = m.max_std_resid_flow;
+    return m.st;
+  });
 }
 
 PUMPLOSS_API void PUMPLOSS_CALL pumploss_model_destroy(pumploss_model* model) { delete model; }

@@ -42,6 +42,13 @@ static_assert(PUMPLOSS_GAP_COUNT == pumploss::pump_gap_count, "gaps");
 static_assert(PUMPLOSS_GAP_VALVE == static_cast<int>(pumploss::pump_gap::valve), "gaps");
 static_assert(PUMPLOSS_GROUP_COUNT == pumploss::path_group_count, "groups");
 static_assert(PUMPLOSS_GROUP_EXTRA == static_cast<int>(pumploss::path_group::extra), "groups");
+static_assert(PUMPLOSS_PATH_CONTROL_PISTON == static_cast<int>(pumploss::leakage_path::control_piston), "paths");
+static_assert(PUMPLOSS_MODE_DEADHEAD == static_cast<int>(pumploss::controller_mode::deadhead), "modes");
+static_assert(PUMPLOSS_BALANCE_SLIPPER_OVERCLAMPED == pumploss::warn_slipper_overclamped, "warnings");
+static_assert(PUMPLOSS_BALANCE_SLIPPER_LIFTS == pumploss::warn_slipper_lifts, "warnings");
+static_assert(PUMPLOSS_BALANCE_SLIPPER_NO_FILM == pumploss::warn_slipper_no_film, "warnings");
+static_assert(PUMPLOSS_BALANCE_BARREL_LIFTS == pumploss::warn_barrel_lifts, "warnings");
+static_assert(PUMPLOSS_BALANCE_BARREL_OVERCLAMPED == pumploss::warn_barrel_overclamped, "warnings");
 
 struct pumploss_pump {
   pumploss::piston_pump<double> pump;
@@ -423,6 +430,36 @@ status operating_checks(const pumploss_pump* h) {
 }
 }  // namespace
 
+namespace {
+// Calibration shared by pumploss_pump_calibrate() (on stroke) and pumploss_pump_calibrate_modes().
+int calibrate(pumploss_pump* h, size_t n, const double* drain_m3_s, const double* outlet_pa, const double* case_pa,
+              const double* speed_rev_s, const double* displacement_fraction, const double* t_k, const int* mode,
+              double* rms_residual_m3_s) {
+  return call({rms_residual_m3_s}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s)) return s;
+    // NULL is never a valid array, also with n = 0 (pumploss.h); no points: too few data
+    if (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
+        displacement_fraction == nullptr || t_k == nullptr)
+      return status::misuse;
+    if (n == 0) return status::insufficient_data;
+    std::vector<pumploss::drain_measurement> m(n);
+    for (size_t i = 0; i < n; ++i) {
+      if (mode != nullptr && (mode[i] < 0 || mode[i] >= pumploss::controller_mode_count)) return status::domain;
+      m[i] = {drain_m3_s[i], outlet_pa[i], case_pa[i], speed_rev_s[i], displacement_fraction[i], t_k[i],
+              mode != nullptr ? static_cast<pumploss::controller_mode>(mode[i]) : pumploss::controller_mode::on_stroke};
+    }
+    h->calibrated = false;
+    const auto c = pumploss::calibrate_piston_pump(h->pump, h->oil, m.data(), n);
+    if (is_error(c.st)) return c.st;
+    h->calibration = c;
+    h->calibrated = true;
+    *rms_residual_m3_s = c.rms_residual_m3_s;
+    return c.st;
+  });
+}
+}  // namespace
+
 extern "C" {
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_create(int pistons, double piston_diameter_m, double bore_clearance_m,
@@ -612,25 +649,21 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump* h, size_t 
                                                        const double* outlet_pa, const double* case_pa,
                                                        const double* speed_rev_s, const double* displacement_fraction,
                                                        const double* t_k, double* rms_residual_m3_s) {
-  return call({rms_residual_m3_s}, [&] {
-    const status s = operating_checks(h);
-    if (is_error(s)) return s;
-    // NULL is never a valid array, also with n = 0 (pumploss.h); no points: too few data
-    if (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
-        displacement_fraction == nullptr || t_k == nullptr)
-      return status::misuse;
-    if (n == 0) return status::insufficient_data;
-    std::vector<pumploss::drain_measurement> m(n);
-    for (size_t i = 0; i < n; ++i)
-      m[i] = {drain_m3_s[i], outlet_pa[i], case_pa[i], speed_rev_s[i], displacement_fraction[i], t_k[i]};
-    h->calibrated = false;
-    const auto c = pumploss::calibrate_piston_pump(h->pump, h->oil, m.data(), n);
-    if (is_error(c.st)) return c.st;
-    h->calibration = c;
-    h->calibrated = true;
-    *rms_residual_m3_s = c.rms_residual_m3_s;
-    return c.st;
-  });
+  return calibrate(h, n, drain_m3_s, outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k, nullptr,
+                   rms_residual_m3_s);
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate_modes(pumploss_pump* h, size_t n, const double* drain_m3_s,
+                                                             const double* outlet_pa, const double* case_pa,
+                                                             const double* speed_rev_s,
+                                                             const double* displacement_fraction, const double* t_k,
+                                                             const int* mode, double* rms_residual_m3_s) {
+  if (mode == nullptr) {  // NULL is never a valid array, also with n = 0 (pumploss.h)
+    if (rms_residual_m3_s != nullptr) *rms_residual_m3_s = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  return calibrate(h, n, drain_m3_s, outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k, mode,
+                   rms_residual_m3_s);
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pump* h, int group, double* scale,
@@ -672,6 +705,141 @@ PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_pump_path_name(int path) {
 
 PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_pump_group_name(int group) {
   return pumploss::path_group_name(static_cast<pumploss::path_group>(group));
+}
+
+}  // extern "C"
+
+// ---- kinematics, controller modes, force balance, non-case losses
+namespace {
+bool mode_ok(int mode) { return mode >= 0 && mode < pumploss::controller_mode_count; }
+pumploss::pump_operating_point<double> mode_point(int mode, double outlet_pa, double case_pa, double speed_rev_s,
+                                                  double displacement_fraction, double t_k) {
+  pumploss::pump_operating_point<double> op{outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k};
+  op.mode = static_cast<pumploss::controller_mode>(mode);
+  return op;
+}
+}  // namespace
+
+extern "C" {
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_kinematics(pumploss_pump* h, double pivot_offset_m,
+                                                            double dead_volume_m3) {
+  if (h != nullptr && !finite_inputs(pivot_offset_m, dead_volume_m3)) return PUMPLOSS_ENONFINITE;
+  return update_pump(h, [&](pumploss::piston_pump<double>& p) {
+    p.pivot_offset_m = pivot_offset_m;
+    p.dead_volume_m3 = dead_volume_m3;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_control(pumploss_pump* h, double control_piston_conductance_m3,
+                                                         double control_pressure_pa, double cross_port_conductance_m3,
+                                                         double barrel_spring_force_n) {
+  if (h != nullptr && !finite_inputs(control_piston_conductance_m3, control_pressure_pa, cross_port_conductance_m3,
+                                     barrel_spring_force_n))
+    return PUMPLOSS_ENONFINITE;
+  return update_pump(h, [&](pumploss::piston_pump<double>& p) {
+    p.control_piston_conductance_m3 = control_piston_conductance_m3;
+    p.control_pressure_pa = control_pressure_pa;
+    p.cross_port_conductance_m3 = cross_port_conductance_m3;
+    p.barrel_spring_force_n = barrel_spring_force_n;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_kinematics(const pumploss_pump* h, double displacement_fraction,
+                                                        double* stroke_m, double* engaged_odc_m,
+                                                        double* engaged_idc_m, double* effective_length_m,
+                                                        double* dead_volume_m3) {
+  return call({stroke_m, engaged_odc_m, engaged_idc_m, effective_length_m, dead_volume_m3}, [&] {
+    if (h == nullptr) return status::misuse;
+    const auto k = pumploss::piston_pump_kinematics(h->pump, displacement_fraction);
+    *stroke_m = k.stroke_m;
+    *engaged_odc_m = k.engaged_odc_m;
+    *engaged_idc_m = k.engaged_idc_m;
+    *effective_length_m = k.effective_length_m;
+    *dead_volume_m3 = k.dead_volume_m3;
+    return k.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget_mode(const pumploss_pump* h, int mode, double outlet_pa,
+                                                         double case_pa, double speed_rev_s,
+                                                         double displacement_fraction, double t_k, double film_rise_k,
+                                                         double* total_m3_s, double* total_film_m3_s,
+                                                         double* metering_flow_m3_s, int* warnings) {
+  if (warnings != nullptr) *warnings = 0;
+  return call({total_m3_s, total_film_m3_s, metering_flow_m3_s}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s) || warnings == nullptr) return status::misuse;
+    if (!mode_ok(mode)) return status::domain;
+    auto op = mode_point(mode, outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k);
+    op.film_temperature_rise_k = film_rise_k;
+    const auto b = pumploss::piston_pump_budget(h->pump, h->oil, op);
+    *total_m3_s = b.total_m3_s;
+    *total_film_m3_s = b.total_film_m3_s;
+    *metering_flow_m3_s = b.metering_flow_m3_s;
+    if (!is_error(b.st)) *warnings = static_cast<int>(b.warnings);
+    return b.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_balance(const pumploss_pump* h, double displacement_fraction,
+                                                     double* slipper_balance, double* slipper_film_m,
+                                                     double* barrel_balance, int* warnings) {
+  if (warnings != nullptr) *warnings = 0;
+  return call({slipper_balance, slipper_film_m, barrel_balance}, [&] {
+    if (h == nullptr || warnings == nullptr) return status::misuse;
+    const auto k = pumploss::piston_pump_kinematics(h->pump, displacement_fraction);
+    if (is_error(k.st)) return k.st;
+    if (!(h->pump.slipper_gap_m > 0) || !(h->pump.valve_gap_m > 0)) return status::insufficient_data;
+    const auto b = pumploss::piston_pump_balance(h->pump, k.tan_beta, 0.0);  // the bores' hold-down alone
+    *slipper_balance = b.slipper_balance;
+    *slipper_film_m = b.slipper_film_m;
+    *barrel_balance = b.barrel_balance;
+    *warnings = static_cast<int>(b.warnings);
+    return b.warnings != 0u ? status::implausible : status::ok;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_flow_loss(const pumploss_pump* h, int mode, double outlet_pa,
+                                                       double inlet_pa, double case_pa, double speed_rev_s,
+                                                       double displacement_fraction, double t_k, double* drain_m3_s,
+                                                       double* compression_m3_s, double* dead_volume_m3_s,
+                                                       double* cross_port_m3_s, double* total_m3_s) {
+  return call({drain_m3_s, compression_m3_s, dead_volume_m3_s, cross_port_m3_s, total_m3_s}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s)) return s;
+    if (!mode_ok(mode)) return status::domain;
+    auto op = mode_point(mode, outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k);
+    op.inlet_pa = inlet_pa;
+    const auto r = pumploss::piston_pump_flow_loss(h->pump, h->oil, op);
+    *drain_m3_s = r.drain_m3_s;
+    *compression_m3_s = r.compression_m3_s;
+    *dead_volume_m3_s = r.dead_volume_m3_s;
+    *cross_port_m3_s = r.cross_port_m3_s;
+    *total_m3_s = r.total_m3_s;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_share_uncertainty(const pumploss_pump* h, int path,
+                                                               const double* u_gap_m, size_t n_gaps,
+                                                               double outlet_pa, double case_pa, double speed_rev_s,
+                                                               double displacement_fraction, double t_k,
+                                                               double* share, double* u_share) {
+  return call({share, u_share}, [&] {
+    const status s = operating_checks(h);
+    if (is_error(s) || u_gap_m == nullptr) return status::misuse;
+    if (path < 0 || path >= pumploss::leakage_path_count || n_gaps != pumploss::pump_gap_count) return status::domain;
+    double u[pumploss::pump_gap_count];
+    for (int g = 0; g < pumploss::pump_gap_count; ++g) u[g] = u_gap_m[g];
+    const auto r = pumploss::piston_pump_budget_uncertainty(
+        h->pump, h->oil, {outlet_pa, case_pa, speed_rev_s, displacement_fraction, t_k}, u);
+    if (is_error(r.st)) return r.st;
+    const bool none = r.total_m3_s == 0.0;  // no flow at all: no share
+    *share = none ? 0.0 : r.share[path];
+    *u_share = none ? 0.0 : r.u_share[path];
+    return r.st;
+  });
 }
 
 }  // extern "C"

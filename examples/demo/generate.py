@@ -4,7 +4,10 @@
     /usr/bin/python3 examples/demo/generate.py      # rewrites test_stand.csv and field_readings.csv
 
 The numbers come from a Wilson-type loss model of the invented pump P-31 plus small random
-noise (fixed seed), so flow, torque, drain flow and temperatures agree with each other. They are
+noise (fixed seed), so flow, torque, drain flow and temperatures agree with each other. The flow
+loss is the case drain (laminar slip plus the compensator's constant leakage) plus the losses
+that never reach the case: laminar cross-port slip and the compression of the swept oil and the
+dead volume (as pumploss::piston_pump_flow_loss()). They are
 not measurements of any real pump. Standard library only.
 """
 import math
@@ -16,12 +19,14 @@ HERE = os.path.dirname(os.path.abspath(__file__))
 # --- the invented pump P-31 -------------------------------------------------------------
 V = 71e-6                  # displacement, m^3/rev
 D = V / (2 * math.pi)      # m^3/rad (Wilson's per-radian displacement)
-CS = 7.0e-9                # slip coefficient
+Z = 9                      # pistons
+V_DEAD = 2.5e-6            # chamber volume at inner dead centre, m^3 (pump_p31.toml)
+CS_DRAIN = 4.2e-9          # laminar slip to the case (pistons, slippers, balls, valve-plate lands)
+CS_CROSS = 0.15e-9         # laminar slip high- to low-pressure kidney (never reaches the case)
 CV = 9.4e4                 # viscous torque coefficient
 CF = 0.025                 # Coulomb (dry-friction) torque coefficient
 TC = 1.5                   # constant torque loss, N m
-DRAIN_SHARE = 0.8          # share of the slip that leaves through the case drain
-Q_CONTROL = 0.3 / 60000    # compensator consumption, m^3/s (0.3 L/min), always to the case
+Q_CONTROL = 0.3 / 60000    # compensator spool leakage, m^3/s (0.3 L/min), always to the case
 
 # --- the oil: ISO VG 46, 46 cSt at 40 degC, 6.9 cSt at 100 degC (as oil.toml) -----------
 def _loglog(nu_cst):
@@ -51,7 +56,15 @@ def rho_at(t_c, p_pa):
 P_METER = 0.5e5            # gauge pressure at the return-line flow meter, Pa
 
 def slip(dp, t_c, wear=1.0):
-    return wear * CS * D * dp / mu(t_c)
+    """Laminar leakage to the case, m^3/s."""
+    return wear * CS_DRAIN * D * dp / mu(t_c)
+
+def drain_flow(dp, t_c, wear=1.0):
+    return slip(dp, t_c, wear) + Q_CONTROL
+
+def compression(n, p_out, p_in, t_c):
+    """Swept oil and dead volume compressed to the outlet: (V n + z n V_dead)(1 - rho_in/rho_out)."""
+    return (V * n + Z * n * V_DEAD) * (1 - rho_at(t_c, p_in) / rho_at(t_c, p_out))
 
 # --- test stand: 5 speeds x 6 pressures, oil held near 45 degC ----------------------------
 def test_stand(rng):
@@ -65,13 +78,14 @@ def test_stand(rng):
             t_in = 45.0 + rng.gauss(0, 0.3)
             t_drain = t_in + 3.0 + 5.0 * (p_bar / 250) * (0.5 + 0.5 * n_rpm / 1500)
             t_out = t_in + 0.4 * p_bar / 100
-            s = slip(dp, t_drain)
-            q_out = D * omega - s - Q_CONTROL           # at the outlet port
+            drain = drain_flow(dp, t_drain)
+            cross = CS_CROSS * D * dp / mu(t_drain)
+            # at the outlet port: the drain, the cross-port slip and the compression never arrive there
+            q_out = D * omega - drain - cross - compression(n, p_bar * 1e5, p_in * 1e5, t_in)
             # the stand's flow meter sits after the loading valve: warmer by the throttling rise,
             # at low pressure; the same mass flow reads as a different volume flow
             t_meter = t_out + (p_bar * 1e5 - P_METER) / (rho_at(t_out, 0.0) * CP)
             q_meter = q_out * rho_at(t_out, p_bar * 1e5) / rho_at(t_meter, P_METER)
-            drain = DRAIN_SHARE * s + Q_CONTROL
             torque = D * dp + CV * D * mu(t_drain) * omega + CF * D * dp + TC
             rows.append((
                 n_rpm + rng.gauss(0, 0.5),
@@ -116,7 +130,7 @@ def field_readings(rng):
         churn = 0.0
         if k == 36:
             state, p_bar, churn = "deadhead", 250.0, 7.0
-        drain = (DRAIN_SHARE * slip(p_bar * 1e5, t_oil + 4.0, wear) + Q_CONTROL) * 60000
+        drain = drain_flow(p_bar * 1e5, t_oil + 4.0, wear) * 60000
         drain *= 1 + rng.gauss(0, 0.02)
         t_drain = t_oil + 4.0 * p_bar / 250 + 2.0 * (wear - 1) + churn + rng.gauss(0, 0.4)
         hours += 480 + rng.uniform(-60, 60)
@@ -139,7 +153,7 @@ def field_readings(rng):
 def baseline():
     """Drain flow of the new pump at the reference point of pump_p31.toml."""
     dp, t = 250e5, 50.0
-    return (DRAIN_SHARE * slip(dp, t) + Q_CONTROL) * 60000
+    return drain_flow(dp, t) * 60000
 
 if __name__ == "__main__":
     rng = random.Random(31)

@@ -475,17 +475,24 @@ inline result<T> oil_density_at(const oil<T>& o, T t_k, T p_pa) {
 }
 
 /// Dynamic viscosity of an oil at temperature and gauge pressure:
-/// \f$ \mu = \rho(p, T)\, \nu_{D341}(T)\, e^{\alpha_B p} \f$.
+/// \f$ \mu = \rho(0, T)\, \nu_{D341}(T)\, e^{\alpha_B p} \f$.
+///
+/// The Barus coefficient describes the dynamic viscosity's rise with pressure as measured, which
+/// already contains the oil's compression; the density therefore enters at zero gauge pressure
+/// only (taking \f$\rho(p)\f$ as well would count the compression twice, about +1.8 % at
+/// 250 bar).
 /// @param o the oil
 /// @param t_k temperature, K
 /// @param p_pa gauge pressure, Pa (the Barus factor uses max(p, 0))
 /// @return mu in Pa s, with the worst status of the parts.
+/// @par Source
+/// Barus 1893 (see viscosity_barus()); D341 line at atmospheric pressure.
 template <class T>
 inline result<T> oil_dynamic_viscosity(const oil<T>& o, T t_k, T p_pa) {
-  using std::exp;
   const auto nu = d341_viscosity(o.viscosity, t_k);
   if (is_error(nu.st)) return nu;
-  const auto rho = oil_density_at(o, t_k, p_pa);
+  if (!detail::finite(p_pa)) return detail::fail<T>(status::nonfinite);
+  const auto rho = oil_density_at(o, t_k, T(0));
   if (is_error(rho.st)) return rho;
   const auto mu = viscosity_barus(nu.value * rho.value, o.barus_per_pa, p_pa < T(0) ? T(0) : p_pa);
   if (is_error(mu.st)) return mu;

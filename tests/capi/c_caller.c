@@ -466,6 +466,27 @@ static void test_loss_model(void) {
   pumploss_model_destroy(h);
   pumploss_model_destroy(NULL);
   h = NULL;
+  {
+    /* the same data plus a constant 0.3 L/min and the compression of the delivered oil (C_k 1.06, K 1.4 GPa) */
+    double q2[24], qc = 0, uqc = 0, ck = 0, uck = 0, ic[6];
+    int terms = -1;
+    for (i = 0; i < 24; ++i) q2[i] = q[i] - 0.3 / 60000.0 - 1.06 * 2.0 * 3.14159265358979324 * sp[i] * d * dp[i] / 1.4e9;
+    CHECK(pumploss_model_create_terms(PUMPLOSS_PUMP, PUMPLOSS_MODEL_WILSON, 107e-6, 0.1e-6, 870.0, 1.4e9,
+                                      PUMPLOSS_FLOW_TERM_CONSTANT | PUMPLOSS_FLOW_TERM_COMPRESSION,
+                                      PUMPLOSS_CRITERION_BIC, 24, dp, sp, mu, q2, tq, &h) == PUMPLOSS_OK && h != NULL);
+    CHECK(pumploss_model_flow_terms(h, &terms, &qc, &uqc, &ck, &uck) == PUMPLOSS_OK && terms == 3 &&
+          near_rel(qc, 0.3 / 60000.0, 1e-8) && near_rel(ck, 1.06, 1e-8));
+    CHECK(pumploss_model_coefficients(h, &c[0], &c[1], &c[2], &c[3], &c[4], &c[5]) == PUMPLOSS_OK &&
+          near_rel(c[0], 3.5e-9, 1e-8));
+    CHECK(pumploss_model_standard_errors(h, &u[0], &u[1], &u[2], &u[3], &u[4], &u[5]) == PUMPLOSS_OK && u[0] > 0.0);
+    CHECK(pumploss_model_flow_diagnostics(h, &ic[0], &ic[1], &ic[2], &ic[3], &ic[4], &ic[5]) == PUMPLOSS_OK &&
+          ic[1] > ic[0]);
+    pumploss_model_destroy(h);
+    h = NULL;
+    CHECK(pumploss_model_create_terms(PUMPLOSS_PUMP, PUMPLOSS_MODEL_WILSON, 107e-6, 0.0, 870.0, 1.4e9, 8,
+                                      PUMPLOSS_CRITERION_BIC, 24, dp, sp, mu, q2, tq, &h) == PUMPLOSS_EDOMAIN &&
+          h == NULL);
+  }
   CHECK(pumploss_model_create(PUMPLOSS_PUMP, PUMPLOSS_MODEL_SCHLOESSER, 107e-6, 870.0, 4, dp, sp, mu, q, tq, &h) ==
         PUMPLOSS_EDATA && h == NULL);
   CHECK(pumploss_model_coefficients(h, &c[0], &c[1], &c[2], &c[3], &c[4], &c[5]) == PUMPLOSS_EMISUSE && is_nan(c[0]));
@@ -568,9 +589,9 @@ static void test_pump_budget(void) {
   CHECK(pumploss_pump_create(9, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, &h) == PUMPLOSS_OK);
   CHECK(pumploss_pump_create(13, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, NULL) == PUMPLOSS_EMISUSE);
   CHECK(pumploss_pump_set_piston(h, 0.0, 0.5) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_set_slipper(h, 6e-3, 11e-3, 12e-6, 0.8e-3, 60e-3) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_slipper(h, 9.5e-3, 11.5e-3, 12e-6, 0.8e-3, 60e-3) == PUMPLOSS_OK);
   CHECK(pumploss_pump_set_ball(h, 14e-3, 8e-6, 4e-3) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_set_valve_plate(h, 36e-3, 39e-3, 45e-3, 48e-3, 150.0 * pi / 180.0, 10e-6) == PUMPLOSS_OK);
+  CHECK(pumploss_pump_set_valve_plate(h, 31e-3, 34e-3, 44e-3, 47e-3, 150.0 * pi / 180.0, 10e-6) == PUMPLOSS_OK);
   CHECK(pumploss_pump_set_controller(h, 0.5e-3 / 60.0, 0.6e-3, 0.611) == PUMPLOSS_OK);
   CHECK(pumploss_pump_set_extra(h, 0.0, 0.0) == PUMPLOSS_OK);
   CHECK(pumploss_pump_set_valve_plate(h, 36e-3, 39e-3, 38e-3, 48e-3, 2.6, 10e-6) == PUMPLOSS_EDOMAIN);
@@ -603,8 +624,42 @@ static void test_pump_budget(void) {
   CHECK(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_OK &&
         fabs(sc - 1.0) < 1e-6);
   CHECK(pumploss_pump_calibrate(h, 6, drain, NULL, case_p, speed, disp, temp, &rms) == PUMPLOSS_EMISUSE && is_nan(rms));
+  {
+    const int modes[6] = {PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE,
+                          PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE};
+    const int bad_modes[6] = {0, 0, 5, 0, 0, 0};
+    const int st_m = pumploss_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, modes, &rms);
+    CHECK(st_m == PUMPLOSS_OK || st_m == PUMPLOSS_WILLCONDITIONED);
+    CHECK(pumploss_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, bad_modes, &rms) ==
+              PUMPLOSS_EDOMAIN && is_nan(rms));
+    CHECK(pumploss_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, NULL, &rms) ==
+              PUMPLOSS_EMISUSE && is_nan(rms));
+  }
   CHECK(strcmp(pumploss_pump_path_name(PUMPLOSS_PATH_SLIPPER), "slipper") == 0);
   CHECK(strcmp(pumploss_pump_group_name(PUMPLOSS_GROUP_VALVE_PLATE), "valve-plate") == 0);
+  {
+    /* kinematics, controller modes, balance, non-case losses, share uncertainty */
+    double st = 0, lo = 0, li = 0, le = 0, vd = 0, tf = 0, met = 0, sb = 0, hf = 0, bb = 0;
+    double qd = 0, qc = 0, qv = 0, qx = 0, qt = 0, s1 = 0, us = 0;
+    const double ug[PUMPLOSS_GAP_COUNT] = {1e-6, 0.5e-6, 0.5e-6, 0.8e-6};
+    int w = -1;
+    CHECK(pumploss_pump_set_kinematics(h, 0.0, 1.5e-6) == PUMPLOSS_OK);
+    CHECK(pumploss_pump_set_kinematics(h, 1.0, 1.5e-6) == PUMPLOSS_EDOMAIN);
+    CHECK(pumploss_pump_set_control(h, 2e-17, 20e5, 3e-17, 0.0) == PUMPLOSS_OK);
+    CHECK(pumploss_pump_kinematics(h, 0.0, &st, &lo, &li, &le, &vd) == PUMPLOSS_OK && st == 0.0 && lo == li);
+    CHECK(pumploss_pump_budget_mode(h, PUMPLOSS_MODE_DEADHEAD, 250e5, 1e5, 25.0, 1.0, 323.15, 5.0, &total, &tf, &met,
+                                    &w) == PUMPLOSS_OK && w == 0 && met > 0.0 && tf > 0.0);
+    CHECK(pumploss_pump_budget_mode(h, 7, 250e5, 1e5, 25.0, 1.0, 323.15, 5.0, &total, &tf, &met, &w) ==
+              PUMPLOSS_EDOMAIN && is_nan(total));
+    CHECK(pumploss_pump_balance(h, 1.0, &sb, &hf, &bb, &w) == PUMPLOSS_OK && sb > 0.9 && sb < 1.1 && bb > 0.85 &&
+          bb < 1.0 && hf > 0.0);
+    CHECK(pumploss_pump_flow_loss(h, PUMPLOSS_MODE_ON_STROKE, 250e5, 0.5e5, 1e5, 25.0, 1.0, 323.15, &qd, &qc, &qv, &qx,
+                                  &qt) == PUMPLOSS_OK && fabs(qt - (qd + qc + qv + qx)) < 1e-15);
+    CHECK(pumploss_pump_share_uncertainty(h, PUMPLOSS_PATH_PISTON_BORE, ug, PUMPLOSS_GAP_COUNT, 250e5, 1e5, 25.0, 1.0,
+                                          323.15, &s1, &us) == PUMPLOSS_OK && us > 0.0 && s1 > us);
+    CHECK(pumploss_pump_share_uncertainty(h, PUMPLOSS_PATH_PISTON_BORE, ug, 3, 250e5, 1e5, 25.0, 1.0, 323.15, &s1,
+                                          &us) == PUMPLOSS_EDOMAIN && is_nan(us));
+  }
   pumploss_pump_destroy(h);
   pumploss_pump_destroy(NULL);
 }
