@@ -24,6 +24,13 @@
 #include "health.hpp"
 #include "piston_pump.hpp"
 // pumploss:umbrella-pump
+#include "clearance_budget.hpp"
+#include "gear_pump.hpp"
+#include "vane_pump.hpp"
+#include "flow_test.hpp"
+#include "motor.hpp"
+#include "inlet.hpp"
+// pumploss:umbrella-flowtest
 // pumploss:umbrella-includes (new subject headers are added above this line)
 
 #endif
