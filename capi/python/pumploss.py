@@ -42,6 +42,8 @@ _SIGNATURES = {
     # pumploss:py-signatures-efficiency
     # pumploss:py-signatures-pump
     # pumploss:py-signatures-capi
+    # pumploss_flow_test and pumploss_motor_drain_check (int * outputs) are typed from pumploss.h
+    # pumploss:py-signatures-flowtest
 }
 # "double in, double* out" functions: name -> (n_in, n_out).
 _SCALAR = {
@@ -123,6 +125,12 @@ _SCALAR = {
     "pumploss_drain_fraction": (3, 1),
     # pumploss:py-scalar-pump
     # pumploss:py-scalar-capi
+    "pumploss_induction_motor_speed": (4, 1),
+    "pumploss_motor_creep": (8, 4),
+    "pumploss_inlet_pipe_check": (14, 2),
+    "pumploss_inlet_pipe_min_temperature": (15, 1),
+    "pumploss_shaft_seal_check": (4, 2),
+    # pumploss:py-scalar-flowtest
 }
 
 

@@ -9,6 +9,7 @@
 #define PUMPLOSS_INLET_HPP
 
 #include <cmath>
+#include <cstddef>
 
 #include "fluid.hpp"
 #include "line.hpp"
@@ -37,8 +38,10 @@ struct inlet_point {
 /// one of them), components and the static part \f$\rho g z\f$ (z: height of the pump's inlet
 /// above the oil level, negative for a flooded inlet), from line_pressure_drop_at().
 ///
-/// @param l the suction line from the tank (its inlet) to the pump's inlet port (its outlet);
-///        height_m is the port's height above the oil level
+/// @param elements the suction line's elements from the tank (first) to the pump's inlet port
+///        (last; its bore sets the velocity head)
+/// @param count number of elements (>= 1)
+/// @param height_m height of the pump's inlet port above the oil level, m (negative: flooded)
 /// @param o the oil
 /// @param q_m3_s suction flow, m^3/s (>= 0; the pump's displacement times speed)
 /// @param t_k oil temperature, K
@@ -57,34 +60,54 @@ struct inlet_point {
 /// Bernoulli with losses along a suction line (e.g. F. M. White, Fluid Mechanics, 7th ed.,
 /// McGraw-Hill 2011, section 6.9 (from memory)); line model of line.hpp.
 template <class T>
-inline inlet_point<T> inlet_check(const line<T>& l, const oil<T>& o, T q_m3_s, T t_k, T p_tank_abs_pa,
-                                  T p_min_abs_pa) {
+inline inlet_point<T> inlet_check(const line_element<T>* elements, std::size_t count, T height_m, const oil<T>& o,
+                                  T q_m3_s, T t_k, T p_tank_abs_pa, T p_min_abs_pa) {
   const T nan = scalar_traits<T>::nan();
   auto fail = [&](status s) { return inlet_point<T>{nan, nan, nan, nan, false, s}; };
-  if (!detail::all_finite(q_m3_s, t_k, p_tank_abs_pa, p_min_abs_pa)) return fail(status::nonfinite);
-  if (l.elements.empty() || !(q_m3_s >= T(0)) || !(t_k > T(0)) || !(p_tank_abs_pa > T(0)) || !(p_min_abs_pa > T(0)))
+  if (!detail::all_finite(q_m3_s, t_k, p_tank_abs_pa, p_min_abs_pa, height_m)) return fail(status::nonfinite);
+  if (elements == nullptr || count == 0 || !(q_m3_s >= T(0)) || !(t_k > T(0)) || !(p_tank_abs_pa > T(0)) ||
+      !(p_min_abs_pa > T(0)))
     return fail(status::domain);
-  const auto drop = line_pressure_drop_at(l, q_m3_s, o, t_k);
-  if (is_error(drop.st)) return fail(drop.st);
   const auto nu = oil_kinematic_viscosity(o, t_k);
   if (is_error(nu.st)) return fail(nu.st);
   const auto rho = oil_density_at(o, t_k, T(0));
   if (is_error(rho.st)) return fail(rho.st);
-  const T d = l.elements.back().diameter_m;
+  const auto mu = oil_dynamic_viscosity(o, t_k, T(0));
+  if (is_error(mu.st)) return fail(mu.st);
+  const auto drop = line_pressure_drop(elements, count, height_m, q_m3_s, rho.value, mu.value);
+  if (is_error(drop.st)) return fail(drop.st);
+  const T d = elements[count - 1].diameter_m;
   if (!(d > T(0))) return fail(status::domain);
   const T v = 4 * q_m3_s / (detail::pi<T>() * d * d);
   const T p = p_tank_abs_pa - drop.dp_pa - rho.value * v * v / 2;
-  status st = worst(drop.st, nu.st);
+  status st = worst(drop.st, worst(nu.st, worst(rho.st, mu.st)));
   if (!(p > T(0))) st = status::out_of_validity;
   const T margin = p - p_min_abs_pa;
   return {t_k, nu.value, p, margin, margin >= T(0) && p > T(0), st};
+}
+
+/// The inlet check of a line object (see the element-array overload, which allocates nothing).
+/// @param l the suction line from the tank to the pump's inlet port; height_m is the port's
+///        height above the oil level
+/// @param o the oil
+/// @param q_m3_s suction flow, m^3/s
+/// @param t_k oil temperature, K
+/// @param p_tank_abs_pa absolute pressure over the oil, Pa
+/// @param p_min_abs_pa the maker's minimum absolute inlet pressure, Pa
+/// @return as the element-array overload.
+template <class T>
+inline inlet_point<T> inlet_check(const line<T>& l, const oil<T>& o, T q_m3_s, T t_k, T p_tank_abs_pa,
+                                  T p_min_abs_pa) {
+  return inlet_check(l.elements.data(), l.elements.size(), l.height_m, o, q_m3_s, t_k, p_tank_abs_pa, p_min_abs_pa);
 }
 
 /// Lowest oil temperature at which the inlet passes (inlet pressure equal to the maker's minimum),
 /// by bisection on the temperature between t_lo_k and t_hi_k (the inlet pressure rises as the oil
 /// warms and thins).
 ///
-/// @param l the suction line (as inlet_check())
+/// @param elements the suction line's elements (as inlet_check())
+/// @param count number of elements
+/// @param height_m height of the pump's inlet port above the oil level, m
 /// @param o the oil
 /// @param q_m3_s suction flow, m^3/s
 /// @param p_tank_abs_pa absolute tank pressure, Pa
@@ -101,21 +124,23 @@ inline inlet_point<T> inlet_check(const line<T>& l, const oil<T>& o, T q_m3_s, T
 /// @par Source
 /// Root of inlet_check() in temperature.
 template <class T>
-inline result<T> inlet_min_temperature(const line<T>& l, const oil<T>& o, T q_m3_s, T p_tank_abs_pa, T p_min_abs_pa,
-                                       T t_lo_k, T t_hi_k) {
+inline result<T> inlet_min_temperature(const line_element<T>* elements, std::size_t count, T height_m,
+                                       const oil<T>& o, T q_m3_s, T p_tank_abs_pa, T p_min_abs_pa, T t_lo_k,
+                                       T t_hi_k) {
+  auto check = [&](T t) { return inlet_check(elements, count, height_m, o, q_m3_s, t, p_tank_abs_pa, p_min_abs_pa); };
   if (!detail::all_finite(t_lo_k, t_hi_k)) return detail::fail<T>(status::nonfinite);
   if (!(t_lo_k > T(0)) || !(t_hi_k > t_lo_k)) return detail::fail<T>(status::domain);
-  const auto lo = inlet_check(l, o, q_m3_s, t_lo_k, p_tank_abs_pa, p_min_abs_pa);
+  const auto lo = check(t_lo_k);
   if (is_error(lo.st) && lo.st != status::out_of_validity) return detail::fail<T>(lo.st);
   if (lo.pass) return {t_lo_k, status::ok};
-  const auto hi = inlet_check(l, o, q_m3_s, t_hi_k, p_tank_abs_pa, p_min_abs_pa);
+  const auto hi = check(t_hi_k);
   if (is_error(hi.st) && hi.st != status::out_of_validity) return detail::fail<T>(hi.st);
   if (!hi.pass) return detail::fail<T>(status::out_of_validity);
   T a = t_lo_k, b = t_hi_k;
   status st = hi.st;
   for (int it = 0; it < 200 && b - a > detail::constant<T>(1e-6L, "1e-6"); ++it) {
     const T m = (a + b) / 2;
-    const auto r = inlet_check(l, o, q_m3_s, m, p_tank_abs_pa, p_min_abs_pa);
+    const auto r = check(m);
     if (is_error(r.st) && r.st != status::out_of_validity) return detail::fail<T>(r.st);
     if (r.pass) {
       b = m;
@@ -125,6 +150,22 @@ inline result<T> inlet_min_temperature(const line<T>& l, const oil<T>& o, T q_m3
     }
   }
   return {b, st};
+}
+
+/// The lowest start temperature of a line object (see the element-array overload).
+/// @param l the suction line
+/// @param o the oil
+/// @param q_m3_s suction flow, m^3/s
+/// @param p_tank_abs_pa absolute tank pressure, Pa
+/// @param p_min_abs_pa the maker's minimum absolute inlet pressure, Pa
+/// @param t_lo_k lower end of the search, K
+/// @param t_hi_k upper end, K
+/// @return as the element-array overload.
+template <class T>
+inline result<T> inlet_min_temperature(const line<T>& l, const oil<T>& o, T q_m3_s, T p_tank_abs_pa, T p_min_abs_pa,
+                                       T t_lo_k, T t_hi_k) {
+  return inlet_min_temperature(l.elements.data(), l.elements.size(), l.height_m, o, q_m3_s, p_tank_abs_pa,
+                               p_min_abs_pa, t_lo_k, t_hi_k);
 }
 
 /// Result of the case pressure check against the shaft seal.
