@@ -95,7 +95,7 @@ TEST(RotaryBudget, EachPathMatchesItsLaminarGapLaw) {
   // totals and efficiency from the parts
   EXPECT_NEAR(gb.total_m3_s, gb.flow_m3_s[0] + gb.flow_m3_s[1] + gb.flow_m3_s[2], 1e-20);
   EXPECT_NEAR(gb.volumetric_efficiency, 1 - gb.total_m3_s / (12e-6 * 25), 1e-15);
-  EXPECT_NEAR(gb.share[0] + gb.share[1] + gb.share[2], 1.0, 1e-15);
+  EXPECT_NEAR(gb.share[0] + gb.share[1] + gb.share[2], 1.0, 1e-15);  // all positive at 150 bar
 }
 
 TEST(RotaryBudget, AgreesWithTheFiftyDigitEvaluation) {
@@ -160,6 +160,9 @@ TEST(RotaryBudget, ScalingLawsHold) {
   // at zero pressure the tips carry oil forward: negative "leakage" of -b h U per gear pair
   const double u = 2 * pumploss::detail::pi<double>() * 25 * g.tip_radius_m;
   EXPECT_NEAR(b0.flow_m3_s[0], -2 * g.face_width_m * g.tip_clearance_m * u / 2, 1e-18);
+  // shares of the gross leakage: the negative tip path keeps its sign, |shares| sum to 1
+  EXPECT_LT(b0.share[0], 0.0);
+  EXPECT_NEAR(std::fabs(b0.share[0]) + std::fabs(b0.share[1]) + std::fabs(b0.share[2]), 1.0, 1e-15);
   // side plates centred give less leakage than offset (h1^3 + h2^3 grows with the offset)
   auto c = g;
   c.lateral_offset = 0;

@@ -5,6 +5,7 @@
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
 
+#include <algorithm>
 #include <cmath>
 
 #include "commands.hpp"
@@ -150,14 +151,14 @@ int run_rotary(const rotary_options& o) {
 
   table tf, tz;
   tf.name = "flows";
-  tf.title = "Internal leakage of each path (outlet to inlet)";
+  tf.title = "Internal leakage of each path (outlet to inlet; shares of the gross leakage, the sum of |q|)";
   tz.name = "sensitivity";
   tz.title = "Sensitivity of the total leakage to each clearance: elasticity (h/Q) dQ/dh and dQ/dh";
   tf.cols = {{"outlet pressure", cell_kind::quantity, D::pressure, 3}};
   tz.cols = tf.cols;
   for (int k = 0; k < pumploss::clearance_path_count; ++k) tf.cols.push_back({path_name(k), cell_kind::quantity, D::volume_flow, 3});
   for (int k = 0; k < pumploss::clearance_path_count; ++k)
-    tf.cols.push_back({std::string("share ") + path_name(k), cell_kind::percent, D::pressure, 3});
+    tf.cols.push_back({std::string("share ") + path_name(k), cell_kind::percent, D::pressure, 3});  // of sum |q|
   tf.cols.push_back({"total", cell_kind::quantity, D::volume_flow, 3});
   tf.cols.push_back({"volumetric efficiency", cell_kind::percent, D::pressure, 4});
   tf.cols.push_back({"status", cell_kind::text, D::pressure, 0});
@@ -196,12 +197,13 @@ int run_rotary(const rotary_options& o) {
   r.title = "Clearance leakage budget: " + f.name;
   if (f.gear)
     r.facts.emplace_back(
-        "Gear pump", fmt::format("{}; tips {} on {} teeth in series of {} land, {} wide; lateral {} {} (offset {:.2f}); "
+        "Gear pump", fmt::format("{}; tips {} on {} teeth in series of {} land, {} wide; lateral {} {}{}; "
                                  "mesh {}",
                                  q(f.g.displacement_m3_rev, D::displacement, 4), q(f.g.tip_clearance_m, D::length),
                                  f.g.teeth_sealing, q(f.g.tip_land_m, D::length), q(f.g.face_width_m, D::length),
                                  f.g.balanced_bushings ? "balanced bushings, film" : "side plates, end float",
-                                 q(f.g.lateral_clearance_m, D::length), f.g.lateral_offset,
+                                 q(f.g.lateral_clearance_m, D::length),
+                                 f.g.balanced_bushings ? std::string() : fmt::format(" (offset {:.2f})", f.g.lateral_offset),
                                  f.g.mesh_clearance_m > 0 ? "slot " + q(f.g.mesh_clearance_m, D::length) + " (stated estimate)"
                                                           : std::string("sealed by the flanks (stated estimate)")));
   else

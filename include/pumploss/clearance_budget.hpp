@@ -33,7 +33,7 @@ struct rotary_operating_point {
 template <class T>
 struct clearance_budget {
   T flow_m3_s[clearance_path_count];  ///< each path's leakage, m^3/s (a tip path may be negative: drag exceeds pressure flow)
-  T share[clearance_path_count];      ///< each path's share of the total (NaN when the total is not positive)
+  T share[clearance_path_count];      ///< each path's flow over the gross leakage sum |q_i| (in [-1, 1]; NaN when all are 0)
   T total_m3_s;                       ///< total internal leakage, m^3/s
   T ideal_flow_m3_s;                  ///< displacement times speed, m^3/s
   T volumetric_efficiency;            ///< 1 - total / (V n)
@@ -94,10 +94,15 @@ inline void clearance_reynolds(clearance_budget<T>& b, T q_m3_s, T width_m) {
 /// Totals, shares, volumetric efficiency and the laminar check at the end of a budget.
 template <class T>
 inline clearance_budget<T> clearance_budget_finish(clearance_budget<T> b, T displacement_m3_rev, T speed_rev_s) {
+  using std::abs;
   b.total_m3_s = T(0);
-  for (int i = 0; i < clearance_path_count; ++i) b.total_m3_s += b.flow_m3_s[i];
+  T gross = T(0);  // shares of the gross leakage: a tip path may be negative (drag above pressure flow)
+  for (int i = 0; i < clearance_path_count; ++i) {
+    b.total_m3_s += b.flow_m3_s[i];
+    gross += abs(b.flow_m3_s[i]);
+  }
   for (int i = 0; i < clearance_path_count; ++i)
-    b.share[i] = b.total_m3_s > T(0) ? b.flow_m3_s[i] / b.total_m3_s : scalar_traits<T>::nan();
+    b.share[i] = gross > T(0) ? b.flow_m3_s[i] / gross : scalar_traits<T>::nan();
   b.ideal_flow_m3_s = displacement_m3_rev * speed_rev_s;
   b.volumetric_efficiency = T(1) - b.total_m3_s / b.ideal_flow_m3_s;
   if (b.max_gap_reynolds > T(2000)) b.st = worst(b.st, status::regime);
