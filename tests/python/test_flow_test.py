@@ -3,6 +3,7 @@ independent implementations written here: the flow test with motor slip solved i
 own root finder (findroot, not the library's fixed-point iteration), the suction pipe with
 python3-fluids (Colebrook friction factor, a reference library), and the gear pump's lateral path
 by the radial disc law in mpmath."""
+import ctypes
 import math
 
 import pytest
@@ -80,4 +81,4 @@ def test_gear_pump_lateral_path_matches_radial_disc_law(lib):
         assert dqdh == pytest.approx(float(3 * ref / mpf(10e-6)), rel=1e-11)
         assert 0 < eta < 1
     finally:
-        lib.raw("pumploss_gear_pump_destroy", h)
+        lib._dll.pumploss_gear_pump_destroy(ctypes.c_void_p(h))  # void: not typed by raw()

@@ -115,7 +115,7 @@ TEST(CliFlowTest, DemoMatchesLibrary) {
   ASSERT_EQ(t.rows.size(), 3u);
   EXPECT_NEAR(t.num(1, "speed [rpm]") / 60 / r.speed_loaded_rev_s, 1.0, 1e-9);
   EXPECT_NEAR(t.num(1, "leakage [L/min]") / 60000 / r.leakage_m3_s, 1.0, 1e-9);
-  EXPECT_NEAR(t.num(2, "volumetric efficiency [%]") / 100 / r.volumetric_efficiency_ref, 1.0, 1e-9);
+  EXPECT_NEAR(t.num(2, "volumetric efficiency percent") / 100 / r.volumetric_efficiency_ref, 1.0, 1e-9);
   EXPECT_NE(out.find(std::string("Verdict:                ") + pumploss::flow_verdict_name(r.verdict)),
             std::string::npos)
       << out;
