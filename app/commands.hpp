@@ -21,6 +21,8 @@ void add_test_stand(CLI::App& app, int& rc);
 void add_drain_line(CLI::App& app, int& rc);
 void add_health(CLI::App& app, int& rc);
 void add_budget(CLI::App& app, int& rc);
+void add_flow_test(CLI::App& app, int& rc);      // cmd_flow_test.cpp
+void add_rotary_budget(CLI::App& app, int& rc);  // cmd_rotary_budget.cpp
 
 /// Options every reporting subcommand has.
 struct output_options {

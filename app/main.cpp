@@ -27,6 +27,8 @@ int main(int argc, char** argv) {
   add_drain_line(app, rc);
   add_health(app, rc);
   add_budget(app, rc);
+  add_flow_test(app, rc);
+  add_rotary_budget(app, rc);
   try {
     app.parse(argc, argv);
   } catch (const CLI::ParseError& e) {

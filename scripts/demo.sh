@@ -34,6 +34,8 @@ run test-stand "$demo/test_stand.csv" --setup "$demo/test_stand.toml" --out "$ou
 run drain-line "$demo/drain_line.toml" --size --out "$out"
 run health "$demo/field_readings.csv" --pump "$demo/pump_p31.toml" --out "$out"
 run budget "$demo/pump_p31.toml" --out "$out"
+run flow-test "$demo/flow_test_g12.toml" --out "$out"
+run rotary-budget "$demo/flow_test_g12.toml" --out "$out"
 
 printf '\n==== demo done ====\n'
 echo "Reports and plots: $(cd "$out" && pwd)/"

@@ -1341,7 +1341,6 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain_flow(
     double p_allowed_pa, double p_allowed_peak_pa, double v_max_m_s, int kinds_mask, double *diameter_m,
     double *fixed_dp_pa, int *dominant_element, int *fixed_exceeds);
 /** @} */
-/* pumploss:capi-friction (declarations of this subject go above this line) */
 
 /* ==== efficiency ==== */
 /** @name Efficiency, leakage scaling, heat
@@ -1981,7 +1980,6 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_flow_terms(const pumploss_model *m
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_flow_diagnostics(const pumploss_model *model, double *aic, double *bic,
                                                                double *corr_dp, double *corr_speed, double *corr_mu,
                                                                double *max_std_residual);
-/* pumploss:capi-efficiency (declarations of this subject go above this line) */
 
 /* ==== pump ==== */
 /** @name Pump health from field readings
@@ -2708,10 +2706,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_share_uncertainty(const pumploss_pu
                                                                double displacement_fraction, double t_k,
                                                                double *share, double *u_share);
 /** @} */
-/* pumploss:capi-pump (declarations of this subject go above this line) */
 
 /* ==== capi ==== */
-/* pumploss:capi-capi (declarations of this subject go above this line) */
 
 /* ==== test stand ==== */
 /** @name Test-stand data reduction (opaque handles)
@@ -2962,9 +2958,362 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map(const pumploss_test_stand
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map_axis(const pumploss_test_stand *ts, int axis, size_t count,
                                                             double values_si[]);
 /** @} */
-/* pumploss:capi-test-stand (declarations of this subject go above this line) */
+/* ==== flowtest ==== */
+/** @name Field flow test of any pump
+ *  Two flow meter readings (no load and loaded) with the drive's speed (measured, or an induction
+ *  motor's slip from its nameplate), laminar leakage corrected to a reference viscosity and
+ *  pressure, volumetric efficiency, percent of new and a verdict (see pumploss::flow_test_evaluate).
+ *  Results are engineering estimates; the pump maker's data and test procedure govern. @{ */
+#define PUMPLOSS_FLOW_PASS 0   /**< Flow test verdict: at or above limit + watch band. */
+#define PUMPLOSS_FLOW_WATCH 1  /**< Flow test verdict: between the limit and limit + watch band. */
+#define PUMPLOSS_FLOW_FAIL 2   /**< Flow test verdict: below the limit. */
+/**
+ * Speed of an induction motor at a shaft torque, slip proportional to torque:
+ * n = n_s - (n_s - n_r) M / M_r with M_r = P_r / (2 pi n_r).
+ * @param sync_speed_rev_s synchronous speed, rev/s (25 for 4 poles at 50 Hz)
+ * @param rated_speed_rev_s nameplate speed, rev/s (< synchronous)
+ * @param rated_power_w nameplate power, W
+ * @param torque_nm shaft torque, N m (>= 0)
+ * @param speed_rev_s receives the speed, rev/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME above 1.5 times rated torque; PUMPLOSS_EDOMAIN;
+ *         PUMPLOSS_EVALIDITY when the torque would stop the motor. @sa pumploss::induction_motor_speed
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_induction_motor_speed(double sync_speed_rev_s, double rated_speed_rev_s,
+                                                              double rated_power_w, double torque_nm,
+                                                              double *speed_rev_s);
+/**
+ * Evaluate a field flow test. A speed of 0 takes the reading's speed from the motor's nameplate
+ * at the torque V dp / (2 pi eta_hm).
+ * @param no_load_flow_m3_s flow with the loading valve open, m^3/s (> 0)
+ * @param no_load_pressure_pa its pressure, Pa (>= 0)
+ * @param no_load_speed_rev_s its measured drive speed, rev/s, or 0: from the motor
+ * @param loaded_flow_m3_s flow at the test pressure, m^3/s (> 0)
+ * @param loaded_pressure_pa test pressure, Pa (> no-load pressure)
+ * @param loaded_speed_rev_s its measured drive speed, rev/s, or 0: from the motor
+ * @param displacement_m3_rev stated displacement, m^3/rev, or 0: derived from the readings
+ * @param hydromech_efficiency assumed hydromechanical efficiency for the torque, (0, 1]
+ * @param motor_sync_speed_rev_s motor synchronous speed, rev/s (used for speeds of 0)
+ * @param motor_rated_speed_rev_s motor nameplate speed, rev/s
+ * @param motor_rated_power_w motor nameplate power, W
+ * @param mu_test_pa_s oil viscosity during the test, Pa s
+ * @param mu_ref_pa_s reference viscosity (the new pump's rating), Pa s
+ * @param ref_pressure_pa reference (rated) pressure, Pa
+ * @param ref_speed_rev_s reference (rated) speed, rev/s
+ * @param new_volumetric_efficiency the new pump's volumetric efficiency at the reference, (0, 1]
+ * @param limit percent of new (as a fraction) below which the pump fails (0.85 common practice, no source)
+ * @param watch_band band above the limit that reads "watch" (0.05 common practice, no source)
+ * @param speed_loaded_rev_s receives the drive speed at the loaded reading, rev/s
+ * @param displacement_out_m3_rev receives the displacement used, m^3/rev
+ * @param leakage_m3_s receives the leakage at the loaded reading, m^3/s
+ * @param volumetric_efficiency receives q_loaded / (V n_loaded)
+ * @param uncorrected_ratio receives q_loaded / q_no_load (the raw readings' ratio)
+ * @param percent_of_new receives the efficiency at the reference over the new one (fraction)
+ * @param verdict receives PUMPLOSS_FLOW_* (-1 on error)
+ * @return PUMPLOSS_OK; reports PUMPLOSS_WEXTRAPOLATED, PUMPLOSS_WIMPLAUSIBLE, PUMPLOSS_WREGIME;
+ *         errors. @sa pumploss::flow_test_evaluate
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_flow_test(double no_load_flow_m3_s, double no_load_pressure_pa,
+                                                  double no_load_speed_rev_s, double loaded_flow_m3_s,
+                                                  double loaded_pressure_pa, double loaded_speed_rev_s,
+                                                  double displacement_m3_rev, double hydromech_efficiency,
+                                                  double motor_sync_speed_rev_s, double motor_rated_speed_rev_s,
+                                                  double motor_rated_power_w, double mu_test_pa_s,
+                                                  double mu_ref_pa_s, double ref_pressure_pa, double ref_speed_rev_s,
+                                                  double new_volumetric_efficiency, double limit, double watch_band,
+                                                  double *speed_loaded_rev_s, double *displacement_out_m3_rev,
+                                                  double *leakage_m3_s, double *volumetric_efficiency,
+                                                  double *uncorrected_ratio, double *percent_of_new, int *verdict);
+/** @} */
 
-/* pumploss:capi-declarations (new subjects add their section above this line) */
+/** @name Gear and vane pump leakage budgets
+ *  Internal leakage of an external gear pump (tooth tips, lateral gaps, mesh estimate) and of a
+ *  vane pump (vane tips, side plates, rotor slots) from their clearances, with the exact
+ *  sensitivity to each clearance (see pumploss::gear_pump_budget, pumploss::vane_pump_budget).
+ *  A handle may be read by many threads at once; change it on one thread. @{ */
+#define PUMPLOSS_GEAR_PATH_TIP 0      /**< Gear pump path and clearance: tooth tips against the housing. */
+#define PUMPLOSS_GEAR_PATH_LATERAL 1  /**< Gear pump path and clearance: lateral gaps (side plates or bushings). */
+#define PUMPLOSS_GEAR_PATH_MESH 2     /**< Gear pump path and clearance: the mesh (stated estimate). */
+#define PUMPLOSS_VANE_PATH_TIP 0      /**< Vane pump path and clearance: vane tips against the cam ring. */
+#define PUMPLOSS_VANE_PATH_SIDE 1     /**< Vane pump path and clearance: rotor faces against the side plates. */
+#define PUMPLOSS_VANE_PATH_SLOT 2     /**< Vane pump path and clearance: vanes in their rotor slots. */
+#define PUMPLOSS_ROTARY_PATH_COUNT 3  /**< Number of paths (and clearances) of a gear or vane budget. */
+
+/** Opaque external gear pump description (clearances and oil). */
+typedef struct pumploss_gear_pump pumploss_gear_pump;
+/**
+ * Create a gear pump description (two equal gears); side plates centred over half a turn of
+ * each gear face, mesh sealed, oil unset.
+ * @param displacement_m3_rev the maker's displacement, m^3/rev
+ * @param shaft_radius_m shaft (bearing bore) radius, drained to the inlet, m
+ * @param lateral_land_m root radius minus shaft radius (the lateral sealing land), m
+ * @param tooth_height_m tip radius minus root radius, m
+ * @param face_width_m gear face width, m
+ * @param tip_land_m width of one tooth's tip land along the circumference, m
+ * @param teeth_sealing teeth of one gear sealing against the housing in series (>= 1)
+ * @param tip_clearance_m radial tip clearance, m
+ * @param lateral_clearance_m total end float of a gear (side plates), m
+ * @param out receives the handle (NULL on error); free with pumploss_gear_pump_destroy()
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE, PUMPLOSS_ENOMEM.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gear_pump_create(double displacement_m3_rev, double shaft_radius_m,
+                                                         double lateral_land_m, double tooth_height_m,
+                                                         double face_width_m, double tip_land_m, int teeth_sealing,
+                                                         double tip_clearance_m, double lateral_clearance_m,
+                                                         pumploss_gear_pump **out);
+/** Destroy a gear pump description; NULL is a no-op.
+ *  @param h the handle */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_gear_pump_destroy(pumploss_gear_pump *h);
+/**
+ * Lateral gaps: fixed side plates (clearance = end float, split by the offset) or pressure-
+ * balanced bushings (clearance = film per side).
+ * @param h the handle
+ * @param clearance_m end float (side plates) or film per side (bushings), m
+ * @param balanced_bushings 1 for pressure-balanced bushings, 0 for side plates
+ * @param offset_ratio axial offset of a gear in its end float, 0 (centred) .. < 1
+ * @param arc_rad arc of each gear face under outlet pressure, rad, (0, 2 pi]
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gear_pump_set_lateral(pumploss_gear_pump *h, double clearance_m,
+                                                              int balanced_bushings, double offset_ratio,
+                                                              double arc_rad);
+/**
+ * The mesh as one plane slot across the face width (a stated estimate; clearance 0 seals it).
+ * @param h the handle
+ * @param clearance_m slot height, m (>= 0)
+ * @param length_m sealing length of the slot, m (> 0 when the clearance is)
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gear_pump_set_mesh(pumploss_gear_pump *h, double clearance_m, double length_m);
+/**
+ * The oil: two viscosity points (ASTM D341) and the density at 15 degC; other properties of a
+ * typical mineral oil.
+ * @param h the handle
+ * @param t1_k first point temperature, K
+ * @param nu1_m2_s first point kinematic viscosity, m^2/s
+ * @param t2_k second point temperature, K
+ * @param nu2_m2_s second point kinematic viscosity, m^2/s
+ * @param rho15_kg_m3 density at 15 degC, kg/m^3
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gear_pump_set_oil(pumploss_gear_pump *h, double t1_k, double nu1_m2_s,
+                                                          double t2_k, double nu2_m2_s, double rho15_kg_m3);
+/**
+ * One path of the gear pump budget (PUMPLOSS_GEAR_PATH_*) and its clearance's sensitivity.
+ * @param h the handle (oil set)
+ * @param path PUMPLOSS_GEAR_PATH_*
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param inlet_pa inlet gauge pressure, Pa (<= outlet)
+ * @param speed_rev_s shaft speed, rev/s
+ * @param t_k oil temperature in the gaps, K
+ * @param q_m3_s receives the path's leakage, m^3/s
+ * @param total_m3_s receives the total leakage, m^3/s
+ * @param volumetric_efficiency receives 1 - total / (V n)
+ * @param d_total_d_gap_m2_s receives dQ_total/dh of the path's clearance, (m^3/s)/m
+ * @param elasticity receives (h/Q) dQ_total/dh
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME (not laminar); PUMPLOSS_WIMPLAUSIBLE (leakage above the
+ *         ideal flow); PUMPLOSS_EMISUSE when the oil is not set; PUMPLOSS_EDOMAIN for an unknown path.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_gear_pump_path(const pumploss_gear_pump *h, int path, double outlet_pa,
+                                                       double inlet_pa, double speed_rev_s, double t_k,
+                                                       double *q_m3_s, double *total_m3_s,
+                                                       double *volumetric_efficiency, double *d_total_d_gap_m2_s,
+                                                       double *elasticity);
+
+/** Opaque vane pump description (clearances and oil). */
+typedef struct pumploss_vane_pump pumploss_vane_pump;
+/**
+ * Create a vane pump description; side plates over half a turn, no slot path, oil unset.
+ * @param displacement_m3_rev the maker's displacement, m^3/rev
+ * @param hub_radius_m hub (shaft bore) radius, drained to the inlet, m
+ * @param face_land_m rotor radius minus hub radius, m
+ * @param ring_gap_m cam ring radius at the sealing arcs minus rotor radius, m
+ * @param rotor_width_m rotor width, m
+ * @param sealing_arcs arcs between an outlet and an inlet port (1 unbalanced, 2 balanced)
+ * @param vanes_per_arc vanes in series in each arc (>= 1)
+ * @param vane_tip_land_m sealing length across one vane tip, m
+ * @param tip_clearance_m film between vane tip and cam ring, m
+ * @param side_clearance_m film between a rotor face and its side plate, m
+ * @param out receives the handle (NULL on error); free with pumploss_vane_pump_destroy()
+ * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE, PUMPLOSS_ENOMEM.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_vane_pump_create(double displacement_m3_rev, double hub_radius_m,
+                                                         double face_land_m, double ring_gap_m, double rotor_width_m,
+                                                         int sealing_arcs, int vanes_per_arc, double vane_tip_land_m,
+                                                         double tip_clearance_m, double side_clearance_m,
+                                                         pumploss_vane_pump **out);
+/** Destroy a vane pump description; NULL is a no-op.
+ *  @param h the handle */
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_vane_pump_destroy(pumploss_vane_pump *h);
+/**
+ * Arc of each rotor face under outlet pressure.
+ * @param h the handle
+ * @param pressure_arc_rad arc, rad, (0, 2 pi]
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_vane_pump_set_sides(pumploss_vane_pump *h, double pressure_arc_rad);
+/**
+ * Vanes in their slots: those whose undervane space (at outlet pressure) faces a suction chamber.
+ * @param h the handle
+ * @param vanes_in_suction number of such vanes (>= 0; 0 removes the path)
+ * @param slot_length_m engaged depth of a vane in its slot, m
+ * @param slot_clearance_m clearance on the open side, m (>= 0; 0 removes the path)
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_vane_pump_set_slots(pumploss_vane_pump *h, int vanes_in_suction,
+                                                            double slot_length_m, double slot_clearance_m);
+/**
+ * The oil, as pumploss_gear_pump_set_oil().
+ * @param h the handle
+ * @param t1_k first point temperature, K
+ * @param nu1_m2_s first point kinematic viscosity, m^2/s
+ * @param t2_k second point temperature, K
+ * @param nu2_m2_s second point kinematic viscosity, m^2/s
+ * @param rho15_kg_m3 density at 15 degC, kg/m^3
+ * @return PUMPLOSS_OK or an error (the description is unchanged on error).
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_vane_pump_set_oil(pumploss_vane_pump *h, double t1_k, double nu1_m2_s,
+                                                          double t2_k, double nu2_m2_s, double rho15_kg_m3);
+/**
+ * One path of the vane pump budget (PUMPLOSS_VANE_PATH_*) and its clearance's sensitivity.
+ * @param h the handle (oil set)
+ * @param path PUMPLOSS_VANE_PATH_*
+ * @param outlet_pa outlet gauge pressure, Pa
+ * @param inlet_pa inlet gauge pressure, Pa (<= outlet)
+ * @param speed_rev_s shaft speed, rev/s
+ * @param t_k oil temperature in the gaps, K
+ * @param q_m3_s receives the path's leakage, m^3/s
+ * @param total_m3_s receives the total leakage, m^3/s
+ * @param volumetric_efficiency receives 1 - total / (V n)
+ * @param d_total_d_gap_m2_s receives dQ_total/dh of the path's clearance, (m^3/s)/m
+ * @param elasticity receives (h/Q) dQ_total/dh
+ * @return as pumploss_gear_pump_path().
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_vane_pump_path(const pumploss_vane_pump *h, int path, double outlet_pa,
+                                                       double inlet_pa, double speed_rev_s, double t_k,
+                                                       double *q_m3_s, double *total_m3_s,
+                                                       double *volumetric_efficiency, double *d_total_d_gap_m2_s,
+                                                       double *elasticity);
+/** @} */
+
+/** @name Hydraulic motors, pump inlet and shaft seal
+ *  Motor case drain against inlet flow with bands (common practice, no source), creep at stall
+ *  under a held load, the inlet pressure of a suction pipe at cold viscosity against the maker's
+ *  minimum, and case pressure against the shaft seal's ratings. A held load needs a brake;
+ *  a blocked case drain over-pressurises the case and blows the shaft seal. @{ */
+#define PUMPLOSS_MOTOR_SOUND 0       /**< Motor drain band: at or below the sound limit. */
+#define PUMPLOSS_MOTOR_ACCEPTABLE 1  /**< Motor drain band: at or below the acceptable limit. */
+#define PUMPLOSS_MOTOR_ELEVATED 2    /**< Motor drain band: below the worn limit. */
+#define PUMPLOSS_MOTOR_WORN 3        /**< Motor drain band: at or above the worn limit. */
+/**
+ * Motor case drain against its inlet flow.
+ * @param drain_m3_s case drain flow, m^3/s (>= 0)
+ * @param inlet_m3_s inlet flow, m^3/s (> 0)
+ * @param sound_max largest sound fraction (0.05 common practice, no source)
+ * @param acceptable_max largest acceptable fraction (0.10)
+ * @param worn_min smallest worn fraction (0.15)
+ * @param fraction receives drain / inlet
+ * @param band receives PUMPLOSS_MOTOR_* (-1 on error)
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when the drain is not below the inlet flow; errors.
+ *         @sa pumploss::motor_drain_check
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_drain_check(double drain_m3_s, double inlet_m3_s, double sound_max,
+                                                          double acceptable_max, double worn_min, double *fraction,
+                                                          int *band);
+/**
+ * Creep of a motor holding a load with blocked ports (laminar leakage scaled from a stall test).
+ * @param displacement_m3_rev motor displacement, m^3/rev
+ * @param load_torque_nm held torque at the motor shaft, N m
+ * @param hydromech_efficiency efficiency of the motor driven backwards by the load, (0, 1] (1 conservative)
+ * @param leak_test_m3_s leakage measured at stall, m^3/s
+ * @param leak_test_dp_pa pressure of that measurement, Pa
+ * @param leak_test_mu_pa_s viscosity of that measurement, Pa s
+ * @param mu_pa_s viscosity while holding, Pa s
+ * @param travel_per_rev_m load travel per motor revolution, m (0: none)
+ * @param holding_pressure_pa receives the port pressure of the held load, Pa
+ * @param leakage_m3_s receives the leakage at that pressure, m^3/s
+ * @param creep_speed_rev_s receives the creep speed, rev/s
+ * @param load_speed_m_s receives the load's creep speed, m/s
+ * @return PUMPLOSS_OK; PUMPLOSS_WEXTRAPOLATED above 1.25 times the test pressure; errors.
+ *         @sa pumploss::motor_creep
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_creep(double displacement_m3_rev, double load_torque_nm,
+                                                    double hydromech_efficiency, double leak_test_m3_s,
+                                                    double leak_test_dp_pa, double leak_test_mu_pa_s, double mu_pa_s,
+                                                    double travel_per_rev_m, double *holding_pressure_pa,
+                                                    double *leakage_m3_s, double *creep_speed_rev_s,
+                                                    double *load_speed_m_s);
+/**
+ * Absolute pressure at a pump's inlet through one suction pipe with fittings of total loss
+ * coefficient K at the pipe's bore (tank outlet included), at an oil temperature.
+ * @param diameter_m pipe inside diameter, m
+ * @param length_m pipe length, m
+ * @param roughness_m pipe roughness, m (>= 0)
+ * @param k_fittings sum of the fittings' loss coefficients, (>= 0)
+ * @param height_m height of the pump's inlet above the oil level, m (negative: flooded)
+ * @param q_m3_s suction flow, m^3/s
+ * @param t_k oil temperature, K
+ * @param t1_k oil's first viscosity point temperature, K
+ * @param nu1_m2_s its kinematic viscosity, m^2/s
+ * @param t2_k second point temperature, K
+ * @param nu2_m2_s its kinematic viscosity, m^2/s
+ * @param rho15_kg_m3 density at 15 degC, kg/m^3
+ * @param p_tank_abs_pa absolute pressure over the oil, Pa (101325 vented)
+ * @param p_min_abs_pa the maker's minimum absolute inlet pressure, Pa
+ * @param inlet_abs_pa receives the absolute inlet pressure, Pa
+ * @param margin_pa receives inlet pressure minus the minimum, Pa (>= 0 passes)
+ * @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY when the line cannot deliver the flow (the pressure
+ *         would not be positive); errors. @sa pumploss::inlet_check
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_inlet_pipe_check(double diameter_m, double length_m, double roughness_m,
+                                                         double k_fittings, double height_m, double q_m3_s,
+                                                         double t_k, double t1_k, double nu1_m2_s, double t2_k,
+                                                         double nu2_m2_s, double rho15_kg_m3, double p_tank_abs_pa,
+                                                         double p_min_abs_pa, double *inlet_abs_pa,
+                                                         double *margin_pa);
+/**
+ * Lowest oil temperature at which the inlet of pumploss_inlet_pipe_check() passes.
+ * @param diameter_m pipe inside diameter, m
+ * @param length_m pipe length, m
+ * @param roughness_m pipe roughness, m
+ * @param k_fittings sum of the fittings' loss coefficients
+ * @param height_m height of the pump's inlet above the oil level, m
+ * @param q_m3_s suction flow, m^3/s
+ * @param t1_k oil's first viscosity point temperature, K
+ * @param nu1_m2_s its kinematic viscosity, m^2/s
+ * @param t2_k second point temperature, K
+ * @param nu2_m2_s its kinematic viscosity, m^2/s
+ * @param rho15_kg_m3 density at 15 degC, kg/m^3
+ * @param p_tank_abs_pa absolute pressure over the oil, Pa
+ * @param p_min_abs_pa the maker's minimum absolute inlet pressure, Pa
+ * @param t_lo_k lower end of the search, K
+ * @param t_hi_k upper end of the search, K
+ * @param t_min_k receives the temperature, K
+ * @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY when it does not pass even at t_hi_k; errors.
+ *         @sa pumploss::inlet_min_temperature
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_inlet_pipe_min_temperature(double diameter_m, double length_m,
+                                                                   double roughness_m, double k_fittings,
+                                                                   double height_m, double q_m3_s, double t1_k,
+                                                                   double nu1_m2_s, double t2_k, double nu2_m2_s,
+                                                                   double rho15_kg_m3, double p_tank_abs_pa,
+                                                                   double p_min_abs_pa, double t_lo_k, double t_hi_k,
+                                                                   double *t_min_k);
+/**
+ * Case pressure against the shaft seal's continuous and peak ratings (gauge).
+ * @param case_continuous_pa continuous case pressure, Pa
+ * @param case_peak_pa peak case pressure, Pa
+ * @param seal_continuous_pa continuous rating, Pa (> 0)
+ * @param seal_peak_pa peak rating, Pa (>= continuous rating)
+ * @param margin_continuous_pa receives rating minus pressure, continuous, Pa (>= 0 passes)
+ * @param margin_peak_pa receives rating minus pressure, peak, Pa (>= 0 passes)
+ * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when the peak is below the continuous pressure;
+ *         errors. @sa pumploss::shaft_seal_check
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_shaft_seal_check(double case_continuous_pa, double case_peak_pa,
+                                                         double seal_continuous_pa, double seal_peak_pa,
+                                                         double *margin_continuous_pa, double *margin_peak_pa);
+/** @} */
+
 
 #ifdef __cplusplus
 }

@@ -23,5 +23,11 @@
 #include "health.hpp"
 #include "health_monitor.hpp"
 #include "piston_pump.hpp"
+#include "clearance_budget.hpp"
+#include "gear_pump.hpp"
+#include "vane_pump.hpp"
+#include "flow_test.hpp"
+#include "motor.hpp"
+#include "inlet.hpp"
 
 #endif

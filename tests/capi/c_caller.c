@@ -666,6 +666,65 @@ static void test_pump_budget(void) {
 
 
 
+/* Flow test with motor slip (hand calculation of tests/flow_test_test.cpp), gear and vane pump
+   handles, motor drain and creep, pump inlet, shaft seal. */
+static void test_flowtest(void) {
+  double n1 = 0.0, v = 0.0, leak = 0.0, ev = 0.0, raw = 0.0, pon = 0.0, q = 0.0, total = 0.0, eta = 0.0;
+  double dqdh = 0.0, el = 0.0, frac = 0.0, a = 0.0, b = 0.0, c = 0.0, d = 0.0;
+  int verdict = 7, band = 7;
+  pumploss_gear_pump *g = NULL;
+  pumploss_vane_pump *vp = NULL;
+  /* 18.0 L/min at 0 bar, 16.0 L/min at 170 bar, speeds from a 7.5 kW 1450 rpm motor: n1 = 1461.33 rpm */
+  CHECK(pumploss_flow_test(18.0 / 60000, 0.0, 0.0, 16.0 / 60000, 170e5, 0.0, 0.0, 0.85, 25.0, 1450.0 / 60, 7500.0,
+                           0.020, 0.028, 170e5, 1450.0 / 60, 0.95, 0.85, 0.05, &n1, &v, &leak, &ev, &raw, &pon,
+                           &verdict) == PUMPLOSS_OK);
+  CHECK(fabs(n1 * 60 - 1461.3333333333) < 1e-6 && fabs(leak * 60000 - 1.536) < 1e-9 && verdict == PUMPLOSS_FLOW_PASS);
+  CHECK(pumploss_flow_test(16.0 / 60000, 170e5, 0.0, 18.0 / 60000, 0.0, 0.0, 0.0, 0.85, 25.0, 1450.0 / 60, 7500.0,
+                           0.020, 0.028, 170e5, 1450.0 / 60, 0.95, 0.85, 0.05, &n1, &v, &leak, &ev, &raw, &pon,
+                           &verdict) == PUMPLOSS_EDOMAIN && is_nan(pon) && verdict == -1);
+  CHECK(pumploss_induction_motor_speed(25.0, 1450.0 / 60, 7500.0, 0.0, &n1) == PUMPLOSS_OK && n1 == 25.0);
+  /* invented gear pump: 12 cm3/rev; budget at 150 bar, 25 rev/s, 40 degC VG 32 */
+  CHECK(pumploss_gear_pump_create(12e-6, 9e-3, 3.5e-3, 4e-3, 18e-3, 1.2e-3, 5, 20e-6, 30e-6, &g) == PUMPLOSS_OK);
+  CHECK(pumploss_gear_pump_path(g, 0, 150e5, 0.0, 25.0, 313.15, &q, &total, &eta, &dqdh, &el) == PUMPLOSS_EMISUSE &&
+        is_nan(q));
+  CHECK(pumploss_gear_pump_set_oil(g, 313.15, 32e-6, 373.15, 5.4e-6, 870.0) == PUMPLOSS_OK);
+  CHECK(pumploss_gear_pump_set_lateral(g, 30e-6, 0, 0.2, 3.14159265358979) == PUMPLOSS_OK);
+  CHECK(pumploss_gear_pump_set_lateral(g, 30e-6, 0, 1.0, 3.14159265358979) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_gear_pump_set_mesh(g, 5e-6, 2e-3) == PUMPLOSS_OK);
+  CHECK(pumploss_gear_pump_path(g, PUMPLOSS_GEAR_PATH_LATERAL, 150e5, 0.0, 25.0, 313.15, &q, &total, &eta, &dqdh,
+                                &el) == PUMPLOSS_OK);
+  /* reference rows of tests/reference/rotary/ take 870 kg/m3 at 40 degC, here at 15 degC: about 2 % apart */
+  CHECK(fabs(q / 6.4923465749206912496e-6 - 1.0) < 0.03 && eta > 0.9 && eta < 1.0 && dqdh > 0.0);
+  CHECK(pumploss_gear_pump_path(g, 3, 150e5, 0.0, 25.0, 313.15, &q, &total, &eta, &dqdh, &el) == PUMPLOSS_EDOMAIN);
+  pumploss_gear_pump_destroy(g);
+  pumploss_gear_pump_destroy(NULL);
+  CHECK(pumploss_vane_pump_create(16e-6, 12e-3, 23e-3, 3e-3, 20e-3, 2, 1, 1.5e-3, 15e-6, 12e-6, &vp) == PUMPLOSS_OK);
+  CHECK(pumploss_vane_pump_set_slots(vp, 3, 8e-3, 10e-6) == PUMPLOSS_OK);
+  CHECK(pumploss_vane_pump_set_sides(vp, 0.0) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_vane_pump_set_oil(vp, 313.15, 32e-6, 373.15, 5.4e-6, 870.0) == PUMPLOSS_OK);
+  CHECK(pumploss_vane_pump_path(vp, PUMPLOSS_VANE_PATH_SLOT, 150e5, 0.0, 25.0, 313.15, &q, &total, &eta, &dqdh,
+                                &el) == PUMPLOSS_OK);
+  CHECK(fabs(q / 3.3674568965517241379e-7 - 1.0) < 0.03 && fabs(el * total / q - 3.0) < 1e-9);
+  pumploss_vane_pump_destroy(vp);
+  pumploss_vane_pump_destroy(NULL);
+  /* motors */
+  CHECK(pumploss_motor_drain_check(2.4, 60.0, 0.05, 0.10, 0.15, &frac, &band) == PUMPLOSS_OK &&
+        band == PUMPLOSS_MOTOR_SOUND && fabs(frac - 0.04) < 1e-15);
+  CHECK(pumploss_motor_drain_check(2.4, 0.0, 0.05, 0.10, 0.15, &frac, &band) == PUMPLOSS_EDOMAIN && band == -1);
+  CHECK(pumploss_motor_creep(500e-6, 2000.0, 1.0, 0.8 / 60000, 200e5, 0.046, 0.023, 0.1, &a, &b, &c, &d) ==
+            PUMPLOSS_WEXTRAPOLATED &&
+        fabs(c * 60 - 4.0212385965949352) < 1e-9);
+  /* inlet: 25 mm pipe, 1.5 m, 30 L/min, 0.5 m lift, VG 32 at 40 degC */
+  CHECK(pumploss_inlet_pipe_check(0.025, 1.5, 0.0, 0.0, 0.5, 30.0 / 60000, 313.15, 313.15, 32e-6, 373.15, 5.4e-6,
+                                  870.0, 101325.0, 80000.0, &a, &b) == PUMPLOSS_OK);
+  CHECK(a > 90000.0 && a < 101325.0 && b > 0.0);
+  CHECK(pumploss_inlet_pipe_min_temperature(0.025, 1.5, 0.0, 0.5, 0.5, 30.0 / 60000, 313.15, 32e-6, 373.15, 5.4e-6,
+                                            870.0, 101325.0, 80000.0, 233.15, 373.15, &c) == PUMPLOSS_OK);
+  CHECK(c > 233.15 && c < 313.15);
+  CHECK(pumploss_shaft_seal_check(1.5e5, 7e5, 2e5, 6e5, &a, &b) == PUMPLOSS_OK && a == 0.5e5 && b == -1e5);
+}
+
+
 
 static void test_test_stand(void) {
   double n[30], p1[30], p2[30], q[30], tq[30], qd[30], ti[30], td[30], none[30];
@@ -803,6 +862,7 @@ int main(void) {
   test_test_stand();
   test_pump_health();
   test_pump_budget();
+  test_flowtest();
   printf("%d passed, %d failed\n", checks - failures, failures);
   return failures == 0 ? 0 : 1;
 }
