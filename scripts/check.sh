@@ -61,6 +61,14 @@ ls "$out"/shared/libpumploss.so.*.*.* >/dev/null || { echo "no versioned libpump
 echo "SONAME $soname; file $(basename "$(ls "$out"/shared/libpumploss.so.*.*.*)")"
 ctest --test-dir "$out/shared" --output-on-failure -j "$jobs" -L capi
 
+step "Python package: pip install --no-build-isolation into a scratch environment, its tests there"
+venv="$here/$out/python-venv"
+rm -rf "$venv"
+"$python" -m venv --system-site-packages "$venv"
+"$venv/bin/python" -m pip install -q --no-build-isolation --no-index --no-deps ./python
+(cd "$out" && PYTHONDONTWRITEBYTECODE=1 "$venv/bin/python" -m pytest -q -p no:cacheprovider "$here/python/tests")
+rm -rf python/build
+
 step "sanitizers: the whole test suite under ASan+UBSan (clang)"
 # Every ctest test of this build: the C++ unit tests, the C API tests (bad input, threads, the C
 # callers), the CLI tests and examples. Not registered under sanitizers: the Python ctypes tests
