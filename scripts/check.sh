@@ -63,6 +63,19 @@ for lib in libpumploss libpumploss_cxx; do
 done
 ctest --test-dir "$out/shared" --output-on-failure -j "$jobs"
 
+step "Python package: pip install --no-build-isolation into a scratch environment, its tests there"
+venv="$here/$out/python-venv"
+rm -rf "$venv"
+"$python" -m venv --system-site-packages "$venv"
+"$venv/bin/python" -m pip install -q --no-build-isolation --no-index --no-deps ./python
+(cd "$out" && PYTHONDONTWRITEBYTECODE=1 "$venv/bin/python" -m pytest -q -p no:cacheprovider "$here/python/tests")
+rm -rf python/build
+
+step "LibreOffice Calc extension: sheet functions in a real .ods, recalculated headless, against the C API"
+lib="$("$venv/bin/python" -c 'import pumploss; print(pumploss.library().path)')"
+"$python" spreadsheet/libreoffice/build_oxt.py capi/include/pumploss.h "$lib" "$out/pumploss.oxt"
+"$python" spreadsheet/libreoffice/recalc_test.py "$out/pumploss.oxt" "$lib" "$out/spreadsheet"
+
 step "sanitizers: the whole test suite under ASan+UBSan (clang)"
 # Every ctest test of this build: the C++ unit tests, the C API tests (bad input, threads, the C
 # callers), the CLI tests and examples. Not registered under sanitizers: the Python ctypes tests

@@ -12,6 +12,9 @@ PACKAGES=(
   python3 python3-pytest python3-fluids python3-mpmath python3-scipy  # binding generator (build), Python cross-checks
   gfortran                                         # Fortran caller test
   python3-numpy                                    # friction cross-checks (ulp distances)
+  python3-pandas python3-dask python3-distributed  # Python package: pandas helper, Dask scale-out
+  python3-venv python3-pip python3-setuptools python3-wheel  # pip install of the Python package
+  libreoffice-calc-nogui python3-uno libreoffice-script-provider-python libreoffice-dev  # Calc extension and its test
   clang valgrind                                   # sanitizer builds (ASan, UBSan, TSan), memcheck
   g++-mingw-w64-x86-64                             # Windows x64 DLL cross-build
   wine64                                           # runs a C test against the DLL

@@ -3,7 +3,7 @@
 and writes, at build time, everything that would otherwise be kept by hand:
 
     capigen.py all     HEADER OUTDIR     pumploss.def (Windows exports), pumploss_signatures.py
-                                         (ctypes table of capi/python/pumploss.py), pumploss.f90
+                                         (ctypes table of the Python package, python/pumploss), pumploss.f90
                                          (Fortran 2003 module) and pumploss.bas (VBA module for
                                          64-bit spreadsheet hosts) into OUTDIR
     capigen.py def     HEADER OUT.def    one of them
@@ -72,9 +72,25 @@ def norm_type(t):
     return t
 
 
+def doc_comments(raw):
+    """The Doxygen comment right before each function's declaration: name -> plain text."""
+    docs = {}
+    rx = r"/\*\*((?:(?!\*/).)*)\*/\s*PUMPLOSS_API[^;(]*?PUMPLOSS_CALL\s+(pumploss_\w+)\s*\("
+    for m in re.finditer(rx, raw, flags=re.S):
+        lines = [re.sub(r"^\s*\*? ?", "", ln).rstrip() for ln in m.group(1).splitlines()]
+        text = "\n".join(lines).strip()
+        text = re.sub(r"@(brief|return|param|sa|par)\b ?", lambda k: {"brief": "", "sa": "See also: "}.get(k.group(1), k.group(1).capitalize() + " "), text)
+        docs[m.group(2)] = text
+    return docs
+
+
+DOCS = {}  # filled by parse(): the header's comment of each function, for the Python docstrings
+
+
 def parse(path):
     """Returns (functions, handle_types, status_codes, option_constants)."""
     raw = open(path, encoding="utf-8").read()
+    DOCS.update(doc_comments(raw))
     block = re.search(r"@name Status codes(.*?)@\}", raw, flags=re.S)
     if not block:
         sys.exit(f"capigen.py: no '@name Status codes' group in {path}")
@@ -354,7 +370,7 @@ def write_def(funcs, handles, codes, consts, out):
 def write_python(funcs, handles, codes, consts, out):
     w = out.write
     w('"""ctypes signatures of the pumploss C API, generated from pumploss.h by\n')
-    w('tools/capigen/capigen.py at build time: do not edit. Read by pumploss.py.\n\n')
+    w('tools/capigen/capigen.py at build time: do not edit. Read by the Python package (python/pumploss).\n\n')
     w("FUNCTIONS: name -> (return type, ((kind, C type, parameter name), ...), names of the array\n")
     w("outputs). Kinds: see tools/capigen/capigen.py.\n")
     w('"""\n\n')
@@ -365,7 +381,8 @@ def write_python(funcs, handles, codes, consts, out):
         w(f"    {f.name!r}: ({f.ret!r}, ({params}), ({arrays})),\n")
     w("}\n\nHANDLES = (" + "".join(f"{h!r}, " for h in handles) + ")\n\n")
     w("STATUS_CODES = {\n" + "".join(f"    {n!r}: {v},\n" for n, v in codes) + "}\n\n")
-    w("CONSTANTS = {\n" + "".join(f"    {n!r}: {v},\n" for n, v in consts) + "}\n")
+    w("CONSTANTS = {\n" + "".join(f"    {n!r}: {v},\n" for n, v in consts) + "}\n\n")
+    w("DOCS = {\n" + "".join(f"    {f.name!r}: {DOCS.get(f.name, '')!r},\n" for f in funcs) + "}\n")
 
 
 # Words a VBA parameter may not be called (keywords and statements); such names get a "_".

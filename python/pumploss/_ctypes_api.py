@@ -1,4 +1,6 @@
-"""pumploss for Python through ctypes: no compiled extension, only the shared library.
+"""The low-level layer of the pumploss package: the C API through ctypes, one call at a time.
+The package's module-level functions (pumploss.NAME) are built on it; this layer is for the
+cross-check tests and for callers who want the raw statuses.
 
     import pumploss
     lib = pumploss.load()                      # or load("/path/to/libpumploss.so")
@@ -30,11 +32,12 @@ __all__ = ["load", "Library", "PumplossError", "PumplossWarning", "OK", "is_erro
 
 OK = 0
 
-try:
-    from pumploss_signatures import CONSTANTS, FUNCTIONS, STATUS_CODES
-except ImportError as e:  # pragma: no cover - a packaging mistake, not a run-time condition
-    raise ImportError("pumploss_signatures.py (generated from pumploss.h at build time, in <build>/bindings "
-                      "or installed beside pumploss.py) is not on the import path") from e
+try:  # the installed package carries the signatures generated when it was built
+    from . import _signatures
+except ImportError:  # the build tree: pumploss_signatures.py in the build's bindings folder
+    import pumploss_signatures as _signatures
+
+CONSTANTS, FUNCTIONS, STATUS_CODES = _signatures.CONSTANTS, _signatures.FUNCTIONS, _signatures.STATUS_CODES
 
 globals().update(STATUS_CODES)
 globals().update(CONSTANTS)
