@@ -22,6 +22,7 @@ PACKAGES=(
   libclang-rt-dev gcovr linux-perf                 # libFuzzer runtime, coverage report, profiling
   # pumploss:setup-capi
   libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (examples/cli)
+  emscripten node-acorn chromium                   # WebAssembly module (scripts/web.sh), page tests
   # pumploss:setup-cli
 )
 
