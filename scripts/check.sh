@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # The whole test suite, as CI runs it: install what is missing, then build and test
 #   1. the static library with warnings as errors, all tests (ctest), valgrind on the callers;
+#   1a. the WebAssembly module and the calculator page (scripts/web_test.sh);
 #   2. the shared library (exported symbols checked), its callers and the installed-package
 #      consumers (find_package, pkg-config);
 #   3. the whole test suite under AddressSanitizer + UndefinedBehaviorSanitizer and the C API
@@ -42,6 +43,9 @@ cmake -S . -B "$out/static" -DCMAKE_BUILD_TYPE=Release -DPUMPLOSS_WERROR=ON >/de
 cmake --build "$out/static" -j "$jobs"
 step "static build: tests (incl. valgrind memcheck of the C and Fortran callers)"
 ctest --test-dir "$out/static" --output-on-failure -j "$jobs"
+
+step "WebAssembly module and calculator page: Node against the native library, headless Chromium"
+bash scripts/web_test.sh "$out/static" "$out/web"
 
 step "shared build (libpumploss.so): exports, callers, installed-package consumers"
 cmake -S . -B "$out/shared" -DCMAKE_BUILD_TYPE=Release -DBUILD_SHARED_LIBS=ON -DPUMPLOSS_WERROR=ON \

@@ -19,6 +19,7 @@ bash scripts/setup.sh
 # Debian's emscripten runs its JavaScript optimiser with node; acorn comes from Debian's
 # node-acorn, which a node other than Debian's own does not search by default.
 export NODE_PATH="/usr/share/nodejs${NODE_PATH:+:$NODE_PATH}"
+mkdir -p "$build" "$out"
 
 # The library itself through the project's CMake (same sources, same definitions as native).
 flags="-fexceptions"
@@ -37,7 +38,7 @@ em++ -O2 $flags "${archives[@]}" -o "$out/pumploss_core.mjs" \
   -sEXPORTED_RUNTIME_METHODS='["UTF8ToString","stringToUTF8","lengthBytesUTF8"]'
 "$python" web/gen_web.py module "$header" "$out/pumploss.mjs"
 "$python" web/gen_web.py dts "$header" "$out/pumploss.d.ts"
-cp web/page/index.html web/page/app.mjs web/page/style.css "$out/"
+cp web/page/index.html web/page/app.mjs web/page/calc.mjs web/page/style.css "$out/"
 
 size="$(stat -c %s "$out/pumploss_core.mjs")"
 echo "web: $out/pumploss_core.mjs $size bytes (the .wasm inlined); open $out/index.html through any static server"
