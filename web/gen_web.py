@@ -31,7 +31,9 @@ ROOT = os.path.dirname(HERE)
 
 
 def load_capigen():
-    path = os.environ.get("PUMPLOSS_CAPIGEN") or os.path.join(ROOT, "tests", "capi", "gen_capi.py")
+    path = os.environ.get("PUMPLOSS_CAPIGEN") or os.path.join(ROOT, "tools", "capigen", "capigen.py")
+    if not os.path.exists(path):  # the parser's place before the build tools had a folder
+        path = os.path.join(ROOT, "tests", "capi", "gen_capi.py")
     spec = importlib.util.spec_from_file_location("capigen", path)
     mod = importlib.util.module_from_spec(spec)
     spec.loader.exec_module(mod)
@@ -417,7 +419,7 @@ def main():
     if len(sys.argv) != 4:
         sys.exit(__doc__)
     mode, header, dest = sys.argv[1:]
-    funcs, handles, codes = CG.parse(header)
+    funcs, handles, codes = CG.parse(header)[:3]
     with open(dest, "w", encoding="utf-8", newline="\n") as out:
         if mode == "exports":
             json.dump([f"_{f.name}" for f in funcs] + ["_malloc", "_free"], out)
