@@ -2,6 +2,7 @@
 # The whole test suite, as CI runs it: install what is missing, then build and test
 #   1. the static library with warnings as errors, all tests (ctest), valgrind on the callers;
 #   1a. the demo (scripts/demo.sh) on the static build's program, into a scratch folder;
+#   1b. the WebAssembly module and the calculator page (scripts/web_test.sh);
 #   2. the shared build of everything (libpumploss_cxx.so + libpumploss.so, tests, benchmarks,
 #      examples) and all its tests: exported symbols, the Python ctypes tests, the installed
 #      package's C and C++ consumers (find_package, pkg-config; the static build's ctest ran
@@ -49,6 +50,9 @@ ctest --test-dir "$out/static" --output-on-failure -j "$jobs"
 
 step "demo: scripts/demo.sh on the static build, into $out/demo"
 PUMPLOSS_DEMO_BUILD="$out/static" bash scripts/demo.sh "$out/demo"
+
+step "WebAssembly module and calculator page: Node against the native library, headless Chromium"
+bash scripts/web_test.sh "$out/static" "$out/web"
 
 step "shared build (libpumploss_cxx.so, libpumploss.so): everything, all tests, installed-package consumers"
 cmake -S . -B "$out/shared" -DCMAKE_BUILD_TYPE=Release -DBUILD_SHARED_LIBS=ON -DPUMPLOSS_WERROR=ON \

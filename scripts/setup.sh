@@ -20,6 +20,7 @@ PACKAGES=(
   wine64                                           # runs a C test against the DLL
   libclang-rt-dev gcovr linux-perf                 # libFuzzer runtime, coverage report, profiling
   libcli11-dev libfmt-dev libtomlplusplus-dev      # command-line program (app/)
+  emscripten node-acorn chromium                   # WebAssembly module (scripts/web.sh), page tests
 )
 
 missing=()

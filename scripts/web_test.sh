@@ -1,0 +1,55 @@
+#!/usr/bin/env bash
+# Test the WebAssembly module and the calculator page, as CI does:
+#   1. build them (scripts/web.sh) into OUT;
+#   2. the module in Node against the native C library: every scalar and batch function of
+#      pumploss.h at the same inputs, same status, outputs within a few ulp (web/tests/);
+#   3. the page in headless Chromium, served by a static file server on loopback: the values in
+#      its DOM against the module's, and a screenshot (OUT/screenshot.png);
+#   4. module size and call cost against native (ratios, for the performance page; report only).
+# Usage: scripts/web_test.sh NATIVE_BUILD_DIR [OUT]   (a native build with libpumploss*.a)
+set -euo pipefail
+here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+cd "$here"
+native_build="$(cd "${1:?usage: scripts/web_test.sh NATIVE_BUILD_DIR [OUT]}" && pwd)"
+out="${2:-out/web}"
+python=/usr/bin/python3
+header=capi/include/pumploss.h
+
+bash scripts/web.sh "$out"
+work="$out/test"
+mkdir -p "$work"
+
+mapfile -t libs < <(find "$native_build" -maxdepth 1 -name 'libpumploss*.a' | sort -r)
+[ ${#libs[@]} -gt 0 ] || { echo "web_test: no static libpumploss in $native_build" >&2; exit 1; }
+"$python" web/gen_web.py cases "$header" "$work/cases.json"
+"$python" web/gen_web.py native "$header" "$work/native_cases.c"
+cc -std=c99 -O2 -Wall -Werror -I capi/include "$work/native_cases.c" "${libs[@]}" -lstdc++ -lm -o "$work/native_cases"
+"$work/native_cases" > "$work/native.jsonl"
+PUMPLOSS_WEB_DIR="$out" PUMPLOSS_WEB_CASES="$work/cases.json" PUMPLOSS_WEB_NATIVE="$work/native.jsonl" \
+  node --test web/tests/
+
+# The page, from a static file server on loopback, in headless Chromium.
+port="$("$python" -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1", 0)); print(s.getsockname()[1])')"
+"$python" -m http.server --bind 127.0.0.1 "$port" --directory "$out" >/dev/null 2>&1 &
+server=$!
+trap 'kill $server 2>/dev/null || true' EXIT
+for _ in $(seq 50); do
+  "$python" -c "import urllib.request; urllib.request.urlopen('http://127.0.0.1:$port/index.html')" 2>/dev/null && break
+  sleep 0.1
+done
+chrome=(chromium --headless --no-sandbox --disable-gpu --disable-quic --no-first-run
+  --disable-background-networking --disable-component-update --disable-sync --hide-scrollbars
+  --virtual-time-budget=15000)
+timeout 120 "${chrome[@]}" --user-data-dir="$work/chrome-dom" --dump-dom \
+  "http://127.0.0.1:$port/index.html" 2>/dev/null > "$work/page_dom.html"
+node web/tests/page_check.mjs "$work/page_dom.html" "$out"
+timeout 120 "${chrome[@]}" --user-data-dir="$work/chrome-shot" --window-size=1280,1400 \
+  --screenshot="$work/screenshot.png" "http://127.0.0.1:$port/index.html" >/dev/null 2>&1
+[ -s "$work/screenshot.png" ] || { echo "web_test: no screenshot" >&2; exit 1; }
+echo "web: screenshot $work/screenshot.png"
+
+# Size and call cost (report only: timings scatter on a shared machine).
+size="$(stat -c %s "$out/pumploss_core.mjs")"
+echo "web: module $size bytes in one file (aim: under 500 kB)"
+cc -std=c99 -O2 -I capi/include web/bench/native_call_cost.c "${libs[@]}" -lstdc++ -lm -o "$work/native_call_cost"
+node web/bench/call_cost.mjs "$out" "$("$work/native_call_cost" 1000000)" 1000000
