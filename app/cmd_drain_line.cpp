@@ -360,7 +360,8 @@ int run_drain_line(const drain_options& o) {
       for (auto& e : l2.elements)
         if (pumploss::detail::has_bore(e)) e.diameter_m = z.diameter_m;
       std::vector<pumploss::drain_point<double>> p2(pts.size());
-      pumploss::drain_check(l2, oil, flow, lim, t0, t1, n, p2.data());
+      // the summary is in the sizing result already; each point carries its own status here
+      static_cast<void>(pumploss::drain_check(l2, oil, flow, lim, t0, t1, n, p2.data()));
       svg::series sized{std::string("continuous with ") + b.name, {}, {}, true, true, false};
       t.cols.insert(t.cols.end() - 1, {std::string("case pressure ") + b.name, cell_kind::quantity, D::pressure, 3});
       for (std::size_t i = 0; i < p2.size(); ++i) {

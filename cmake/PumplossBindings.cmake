@@ -2,7 +2,7 @@
 # tools/capigen/capigen.py (pumploss.h is their one source; tests/capi/exports.txt is the one
 # hand-kept ABI snapshot, checked against them by the capi_exports test):
 #   pumploss.def            Windows exports of pumploss.dll (used by the Windows link)
-#   pumploss_signatures.py  ctypes table read by the Python package (python/pumploss)
+#   ctypes signatures       the table module read by the Python package (python/pumploss)
 #   pumploss.f90            Fortran 2003 module (ISO_C_BINDING)
 #   pumploss.bas            VBA module for 64-bit spreadsheet hosts
 # Needs a Python 3 interpreter at build time (standard library only).

@@ -1,5 +1,5 @@
 // Findings of the C API audit, each fixed and pinned here through pumploss.h only:
-// - pumploss_pump_calibration_group() gave EOVERFLOW for the controller and extra groups even on
+// - pumploss_piston_pump_calibration_group() gave EOVERFLOW for the controller and extra groups even on
 //   exact data (their gap change is undefined: NaN under a usable status became an overflow);
 // - pumploss_pipe_flow() at zero flow gave EOVERFLOW although the header promised f = inf;
 // - pumploss_unit_convert() accepted temperatures below absolute zero;
@@ -18,27 +18,27 @@ const double kPi = 3.14159265358979323846;
 
 /// An invented pump of about 70 cm3/rev with every path present (plausible dimensions, no real
 /// product), oil VG 46 (46 mm2/s at 40 degC, 6.8 mm2/s at 100 degC: invented data-sheet values).
-pumploss_pump* make_pump(double extra_conductance_m3, double extra_cda_m2) {
-  pumploss_pump* h = nullptr;
-  if (pumploss_pump_create(9, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * kPi / 180.0, &h) != PUMPLOSS_OK) return nullptr;
-  EXPECT_EQ(pumploss_pump_set_piston(h, 0.0, 0.5), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_pump_set_slipper(h, 6e-3, 11e-3, 12e-6, 0.8e-3, 60e-3), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_pump_set_ball(h, 14e-3, 8e-6, 4e-3), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_pump_set_valve_plate(h, 36e-3, 39e-3, 45e-3, 48e-3, 150.0 * kPi / 180.0, 10e-6), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_pump_set_controller(h, 0.5e-3 / 60.0, 0.6e-3, 0.611), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_pump_set_extra(h, extra_conductance_m3, extra_cda_m2), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_pump_set_oil(h, 313.15, 46e-6, 373.15, 6.8e-6, 870.0), PUMPLOSS_OK);
+pumploss_piston_pump* make_pump(double extra_conductance_m3, double extra_cda_m2) {
+  pumploss_piston_pump* h = nullptr;
+  if (pumploss_piston_pump_create(9, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * kPi / 180.0, &h) != PUMPLOSS_OK) return nullptr;
+  EXPECT_EQ(pumploss_piston_pump_set_piston(h, 0.0, 0.5), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_piston_pump_set_slipper(h, 6e-3, 11e-3, 12e-6, 0.8e-3, 60e-3), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_piston_pump_set_ball(h, 14e-3, 8e-6, 4e-3), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_piston_pump_set_valve_plate(h, 36e-3, 39e-3, 45e-3, 48e-3, 150.0 * kPi / 180.0, 10e-6), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_piston_pump_set_controller(h, 0.5e-3 / 60.0, 0.6e-3, 0.611), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_piston_pump_set_extra(h, extra_conductance_m3, extra_cda_m2), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_piston_pump_set_oil(h, 313.15, 46e-6, 373.15, 6.8e-6, 870.0), PUMPLOSS_OK);
   return h;
 }
 
 /// Exact data: the handle's own drain flows over pressures, temperatures and displacements.
-void calibrate_on_own_flows(pumploss_pump* h) {
+void calibrate_on_own_flows(pumploss_piston_pump* h) {
   std::vector<double> q, outlet, case_p, speed, disp, temp;
   for (double dp : {80e5, 160e5, 250e5, 320e5})
     for (double t : {308.15, 328.15, 348.15})
       for (double x : {0.3, 0.65, 1.0}) {
         double total = 0.0, frac = 0.0;
-        ASSERT_EQ(pumploss_pump_budget(h, dp + 1e5, 1e5, 25.0, x, t, &total, &frac), PUMPLOSS_OK);
+        ASSERT_EQ(pumploss_piston_pump_budget(h, dp + 1e5, 1e5, 25.0, x, t, &total, &frac), PUMPLOSS_OK);
         q.push_back(total);
         outlet.push_back(dp + 1e5);
         case_p.push_back(1e5);
@@ -47,7 +47,7 @@ void calibrate_on_own_flows(pumploss_pump* h) {
         temp.push_back(t);
       }
   double rms = 0.0;
-  const int st = pumploss_pump_calibrate(h, q.size(), q.data(), outlet.data(), case_p.data(), speed.data(),
+  const int st = pumploss_piston_pump_calibrate(h, q.size(), q.data(), outlet.data(), case_p.data(), speed.data(),
                                          disp.data(), temp.data(), &rms);
   ASSERT_TRUE(st == PUMPLOSS_OK || st == PUMPLOSS_WILLCONDITIONED) << st;
   EXPECT_LT(rms, 1e-12);
@@ -56,45 +56,45 @@ void calibrate_on_own_flows(pumploss_pump* h) {
 }  // namespace
 
 TEST(CapiAudit, CalibrationGroupsOnExactDataAreUsable) {
-  pumploss_pump* h = make_pump(1e-17, 1e-8);
+  pumploss_piston_pump* h = make_pump(1e-17, 1e-8);
   ASSERT_NE(h, nullptr);
   calibrate_on_own_flows(h);
   // A model fitted to its own flows: every present group's factor is 1 (self-calculated, exact).
   for (int g = 0; g < PUMPLOSS_GROUP_COUNT; ++g) {
     double scale = 0.0, se = 0.0, growth = 0.0;
     int confused = -1;
-    const int st = pumploss_pump_calibration_group(h, g, &scale, &se, &growth, &confused);
-    ASSERT_FALSE(PUMPLOSS_IS_ERROR(st)) << pumploss_pump_group_name(g) << ": status " << st;
-    EXPECT_NEAR(scale, 1.0, 1e-6) << pumploss_pump_group_name(g);
+    const int st = pumploss_piston_pump_calibration_group(h, g, &scale, &se, &growth, &confused);
+    ASSERT_FALSE(PUMPLOSS_IS_ERROR(st)) << pumploss_piston_pump_group_name(g) << ": status " << st;
+    EXPECT_NEAR(scale, 1.0, 1e-6) << pumploss_piston_pump_group_name(g);
     EXPECT_FALSE(std::isinf(se) || std::isinf(growth));
     EXPECT_GE(confused, 0);
     if (g == PUMPLOSS_GROUP_CONTROLLER || g == PUMPLOSS_GROUP_EXTRA) {
       // no gap: the gap change is undefined, said by the one report that may carry a NaN
-      EXPECT_EQ(st, PUMPLOSS_WUNDEFINED) << pumploss_pump_group_name(g);
+      EXPECT_EQ(st, PUMPLOSS_WUNDEFINED) << pumploss_piston_pump_group_name(g);
       EXPECT_TRUE(std::isnan(growth));
       EXPECT_TRUE(std::isfinite(se));
     } else {
-      EXPECT_EQ(st, PUMPLOSS_OK) << pumploss_pump_group_name(g);
-      EXPECT_NEAR(growth, 0.0, 1e-6) << pumploss_pump_group_name(g);  // factor 1: unchanged gap
+      EXPECT_EQ(st, PUMPLOSS_OK) << pumploss_piston_pump_group_name(g);
+      EXPECT_NEAR(growth, 0.0, 1e-6) << pumploss_piston_pump_group_name(g);  // factor 1: unchanged gap
     }
   }
-  pumploss_pump_destroy(h);
+  pumploss_piston_pump_destroy(h);
 }
 
 TEST(CapiAudit, AbsentCalibrationGroupIsNoData) {
-  pumploss_pump* h = make_pump(0.0, 0.0);  // no user paths: the extra group has no flow
+  pumploss_piston_pump* h = make_pump(0.0, 0.0);  // no user paths: the extra group has no flow
   ASSERT_NE(h, nullptr);
   calibrate_on_own_flows(h);
   double scale = 0.0, se = 0.0, growth = 0.0;
   int confused = -1;
-  EXPECT_EQ(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_EXTRA, &scale, &se, &growth, &confused),
+  EXPECT_EQ(pumploss_piston_pump_calibration_group(h, PUMPLOSS_GROUP_EXTRA, &scale, &se, &growth, &confused),
             PUMPLOSS_EDATA);
   EXPECT_TRUE(std::isnan(scale) && std::isnan(se) && std::isnan(growth));
-  EXPECT_EQ(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &scale, &se, &growth, &confused), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &scale, nullptr, &growth, &confused),
+  EXPECT_EQ(pumploss_piston_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &scale, &se, &growth, &confused), PUMPLOSS_OK);
+  EXPECT_EQ(pumploss_piston_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &scale, nullptr, &growth, &confused),
             PUMPLOSS_EMISUSE);
   EXPECT_TRUE(std::isnan(scale) && std::isnan(growth));
-  pumploss_pump_destroy(h);
+  pumploss_piston_pump_destroy(h);
 }
 
 TEST(CapiAudit, PipeFlowAtZeroFlow) {

@@ -120,7 +120,8 @@ def main():
         # budget: one stacked area per leakage path of the pump file
         root = ET.parse(os.path.join(out, "budget.svg")).getroot()
         got = list(groups(root, "area"))
-        check(got == ["piston-bore", "slipper", "ball-socket", "valve-plate-inner", "valve-plate-outer", "controller"],
+        check(got == ["piston-bore", "slipper", "ball-socket", "valve-plate-inner", "valve-plate-outer", "controller",
+                      "bleed-orifice", "control-piston"],
               "budget: areas %r" % got)
 
         # every plot lists its series and limit lines in its legend

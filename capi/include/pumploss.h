@@ -2332,7 +2332,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_restore(pumploss_health_m
 #define PUMPLOSS_GROUP_COUNT 5        /**< Number of calibration groups. */
 
 /** Opaque piston pump description (geometry, clearances, oil, last calibration). */
-typedef struct pumploss_pump pumploss_pump;
+typedef struct pumploss_piston_pump pumploss_piston_pump;
 
 /**
  * Create a pump description with its pistons; other paths start absent, the oil unset.
@@ -2342,16 +2342,16 @@ typedef struct pumploss_pump pumploss_pump;
  * @param engaged_length_min_m engaged piston-bore length at outer dead centre, m
  * @param pitch_radius_m pitch radius of the bores, m
  * @param max_swash_angle_rad maximum swash angle, rad (0 < angle < pi/4)
- * @param out receives the handle (NULL on error); free with pumploss_pump_destroy()
+ * @param out receives the handle (NULL on error); free with pumploss_piston_pump_destroy()
  * @return PUMPLOSS_OK, PUMPLOSS_EDOMAIN (including more pistons than fit the pitch circle),
  *         PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE, PUMPLOSS_ENOMEM.
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_create(int pistons, double piston_diameter_m, double bore_clearance_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_create(int pistons, double piston_diameter_m, double bore_clearance_m,
                                                     double engaged_length_min_m, double pitch_radius_m,
-                                                    double max_swash_angle_rad, pumploss_pump **out);
+                                                    double max_swash_angle_rad, pumploss_piston_pump **out);
 /** Destroy a pump description; NULL is a no-op.
  *  @param h the handle */
-PUMPLOSS_API void PUMPLOSS_CALL pumploss_pump_destroy(pumploss_pump *h);
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_piston_pump_destroy(pumploss_piston_pump *h);
 /**
  * Piston details.
  * @param h the handle
@@ -2359,7 +2359,7 @@ PUMPLOSS_API void PUMPLOSS_CALL pumploss_pump_destroy(pumploss_pump *h);
  * @param high_pressure_share share of pistons on the high-pressure side, (0, 1] (0.5 typical)
  * @return PUMPLOSS_OK or an error (the description is unchanged on error).
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_piston(pumploss_pump *h, double eccentricity_ratio,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_piston(pumploss_piston_pump *h, double eccentricity_ratio,
                                                         double high_pressure_share);
 /**
  * Slipper pad fed through a capillary in piston and slipper. A gap of 0 removes the path.
@@ -2371,7 +2371,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_piston(pumploss_pump *h, double
  * @param feed_length_m feed bore length, m
  * @return PUMPLOSS_OK or an error (the description is unchanged on error).
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_slipper(pumploss_pump *h, double pocket_radius_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_slipper(pumploss_piston_pump *h, double pocket_radius_m,
                                                          double outer_radius_m, double gap_m, double feed_diameter_m,
                                                          double feed_length_m);
 /**
@@ -2382,7 +2382,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_slipper(pumploss_pump *h, doubl
  * @param length_m sealing length, m
  * @return PUMPLOSS_OK or an error (the description is unchanged on error).
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_ball(pumploss_pump *h, double ball_diameter_m, double clearance_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_ball(pumploss_piston_pump *h, double ball_diameter_m, double clearance_m,
                                                       double length_m);
 /**
  * Valve plate sealing lands of the high-pressure kidney. A gap of 0 removes the paths.
@@ -2395,7 +2395,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_ball(pumploss_pump *h, double b
  * @param gap_m barrel-valve plate gap, m (>= 0)
  * @return PUMPLOSS_OK or an error (the description is unchanged on error).
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_valve_plate(pumploss_pump *h, double inner_land_inner_radius_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_valve_plate(pumploss_piston_pump *h, double inner_land_inner_radius_m,
                                                              double inner_land_outer_radius_m,
                                                              double outer_land_inner_radius_m,
                                                              double outer_land_outer_radius_m, double kidney_arc_rad,
@@ -2408,7 +2408,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_valve_plate(pumploss_pump *h, d
  * @param bleed_cd bleed orifice discharge coefficient, (0, 1]
  * @return PUMPLOSS_OK or an error (the description is unchanged on error).
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_controller(pumploss_pump *h, double consumption_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_controller(pumploss_piston_pump *h, double consumption_m3_s,
                                                             double bleed_diameter_m, double bleed_cd);
 /**
  * User paths: a laminar conductance (q = k dp / mu) and an orifice (q = CdA sqrt(2 dp / rho)).
@@ -2417,7 +2417,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_controller(pumploss_pump *h, do
  * @param orifice_cda_m2 Cd A, m^2 (>= 0)
  * @return PUMPLOSS_OK or an error (the description is unchanged on error).
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_extra(pumploss_pump *h, double conductance_m3, double orifice_cda_m2);
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_extra(pumploss_piston_pump *h, double conductance_m3, double orifice_cda_m2);
 /**
  * The oil: two viscosity points (ASTM D341) and the density at 15 degC; the other properties
  * are those of a typical mineral oil (pumploss_typical_mineral_oil()).
@@ -2429,7 +2429,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_extra(pumploss_pump *h, double 
  * @param rho15_kg_m3 density at 15 degC, kg/m^3
  * @return PUMPLOSS_OK or an error (the description is unchanged on error).
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_oil(pumploss_pump *h, double t1_k, double nu1_m2_s, double t2_k,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_oil(pumploss_piston_pump *h, double t1_k, double nu1_m2_s, double t2_k,
                                                      double nu2_m2_s, double rho15_kg_m3);
 /**
  * Geometric maximum displacement, and its mismatch with a stated one.
@@ -2439,7 +2439,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_oil(pumploss_pump *h, double t1
  * @param mismatch receives geometric / stated - 1 (0 when none is stated)
  * @return PUMPLOSS_OK; PUMPLOSS_WIMPLAUSIBLE when they differ by more than 5 %; errors.
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_displacement(const pumploss_pump *h, double stated_m3_rev,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_displacement(const pumploss_piston_pump *h, double stated_m3_rev,
                                                           double *displacement_m3_rev, double *mismatch);
 /**
  * Predicted case drain flow at an operating point.
@@ -2454,7 +2454,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_displacement(const pumploss_pump *h
  * @return PUMPLOSS_OK; PUMPLOSS_WREGIME when a path is not laminar; errors; PUMPLOSS_EMISUSE
  *         when the oil is not set.
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget(const pumploss_pump *h, double outlet_pa, double case_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_budget(const pumploss_piston_pump *h, double outlet_pa, double case_pa,
                                                     double speed_rev_s, double displacement_fraction, double t_k,
                                                     double *total_m3_s, double *drain_fraction);
 /**
@@ -2468,9 +2468,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget(const pumploss_pump *h, doub
  * @param t_k oil temperature, K
  * @param q_m3_s receives the path's flow, m^3/s
  * @param share receives its share of the total
- * @return as pumploss_pump_budget(); PUMPLOSS_EDOMAIN for an unknown path.
+ * @return as pumploss_piston_pump_budget(); PUMPLOSS_EDOMAIN for an unknown path.
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_path_flow(const pumploss_pump *h, int path, double outlet_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_path_flow(const pumploss_piston_pump *h, int path, double outlet_pa,
                                                        double case_pa, double speed_rev_s,
                                                        double displacement_fraction, double t_k, double *q_m3_s,
                                                        double *share);
@@ -2485,9 +2485,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_path_flow(const pumploss_pump *h, i
  * @param t_k oil temperature, K
  * @param d_total_d_gap_m2_s receives dQ/dh, (m^3/s)/m
  * @param elasticity receives (h/Q) dQ/dh
- * @return as pumploss_pump_budget(); PUMPLOSS_EDOMAIN for an unknown gap.
+ * @return as pumploss_piston_pump_budget(); PUMPLOSS_EDOMAIN for an unknown gap.
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_sensitivity(const pumploss_pump *h, int gap, double outlet_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_gap_sensitivity(const pumploss_piston_pump *h, int gap, double outlet_pa,
                                                              double case_pa, double speed_rev_s,
                                                              double displacement_fraction, double t_k,
                                                              double *d_total_d_gap_m2_s, double *elasticity);
@@ -2504,12 +2504,12 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_sensitivity(const pumploss_pump
  * @param growth receives k - 1 (0.2: the gap must be 20 % larger)
  * @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY when that gap alone cannot explain it; errors.
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_growth(const pumploss_pump *h, int gap, double measured_drain_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_gap_growth(const pumploss_piston_pump *h, int gap, double measured_drain_m3_s,
                                                         double outlet_pa, double case_pa, double speed_rev_s,
                                                         double displacement_fraction, double t_k, double *growth);
 /**
  * Calibrate one scale factor per path group to measured drain flows (non-negative least
- * squares); results are kept in the handle (pumploss_pump_calibration_group()).
+ * squares); results are kept in the handle (pumploss_piston_pump_calibration_group()).
  * @param h the handle (oil set)
  * @param n number of measurements
  * @param drain_m3_s measured drain flows, m^3/s (n values)
@@ -2521,12 +2521,12 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_growth(const pumploss_pump *h, 
  * @param rms_residual_m3_s receives the root-mean-square residual, m^3/s
  * @return PUMPLOSS_OK; PUMPLOSS_WILLCONDITIONED; PUMPLOSS_EDATA for too few points; errors.
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump *h, size_t n, const double *drain_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_calibrate(pumploss_piston_pump *h, size_t n, const double *drain_m3_s,
                                                        const double *outlet_pa, const double *case_pa,
                                                        const double *speed_rev_s, const double *displacement_fraction,
                                                        const double *t_k, double *rms_residual_m3_s);
 /**
- * Calibrate as pumploss_pump_calibrate(), each measurement with its controller mode (readings on
+ * Calibrate as pumploss_piston_pump_calibrate(), each measurement with its controller mode (readings on
  * stroke and at deadhead separate the pistons from the other laminar paths).
  * @param h the handle (oil set)
  * @param n number of measurements
@@ -2538,10 +2538,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump *h, size_t 
  * @param t_k oil temperatures, K (n values)
  * @param mode PUMPLOSS_MODE_* of each measurement (n values)
  * @param rms_residual_m3_s receives the root-mean-square residual, m^3/s
- * @return as pumploss_pump_calibrate(); PUMPLOSS_EDOMAIN for an unknown mode.
+ * @return as pumploss_piston_pump_calibrate(); PUMPLOSS_EDOMAIN for an unknown mode.
  * @sa pumploss::calibrate_piston_pump
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate_modes(pumploss_pump *h, size_t n, const double *drain_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_calibrate_modes(pumploss_piston_pump *h, size_t n, const double *drain_m3_s,
                                                              const double *outlet_pa, const double *case_pa,
                                                              const double *speed_rev_s,
                                                              const double *displacement_fraction, const double *t_k,
@@ -2561,17 +2561,17 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate_modes(pumploss_pump *h, s
  *         calibration has been made or the group has no flow in this pump (absent); PUMPLOSS_EDOMAIN
  *         for an unknown group; PUMPLOSS_EMISUSE.
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pump *h, int group, double *scale,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_calibration_group(const pumploss_piston_pump *h, int group, double *scale,
                                                                double *std_error, double *gap_growth,
                                                                int *confused_with);
 /** Name of a path.
  *  @param path PUMPLOSS_PATH_*
  *  @return "piston-bore", "slipper", ... or "unknown" (static storage) */
-PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_path_name(int path);
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_piston_pump_path_name(int path);
 /** Name of a calibration group.
  *  @param group PUMPLOSS_GROUP_*
  *  @return "piston", "slipper", ... or "unknown" (static storage) */
-PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_group_name(int group);
+PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_piston_pump_group_name(int group);
 /* ---- piston pump: kinematics, controller modes, force balance, non-case losses (h7) ---- */
 #define PUMPLOSS_MODE_ON_STROKE 0     /**< Controller mode: on stroke (control chamber vented). */
 #define PUMPLOSS_MODE_COMPENSATING 1  /**< Controller mode: compensating (control piston and bleed at control pressure). */
@@ -2590,7 +2590,7 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_pump_group_name(int group);
  * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
  * @sa pumploss::piston_pump_kinematics
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_kinematics(pumploss_pump *h, double pivot_offset_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_kinematics(pumploss_piston_pump *h, double pivot_offset_m,
                                                             double dead_volume_m3);
 /**
  * Control piston, control pressure, cross-port path and barrel spring (all 0 by default).
@@ -2602,7 +2602,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_kinematics(pumploss_pump *h, do
  * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for a negative value; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
  * @sa pumploss::piston_pump_budget
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_control(pumploss_pump *h, double control_piston_conductance_m3,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_control(pumploss_piston_pump *h, double control_piston_conductance_m3,
                                                          double control_pressure_pa, double cross_port_conductance_m3,
                                                          double barrel_spring_force_n);
 /**
@@ -2617,7 +2617,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_control(pumploss_pump *h, doubl
  * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
  * @sa pumploss::piston_pump_kinematics
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_kinematics(const pumploss_pump *h, double displacement_fraction,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_kinematics(const pumploss_piston_pump *h, double displacement_fraction,
                                                         double *stroke_m, double *engaged_odc_m,
                                                         double *engaged_idc_m, double *effective_length_m,
                                                         double *dead_volume_m3);
@@ -2639,7 +2639,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_kinematics(const pumploss_pump *h, 
  *         PUMPLOSS_WREGIME; errors; PUMPLOSS_EDOMAIN for an unknown mode.
  * @sa pumploss::piston_pump_budget
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget_mode(const pumploss_pump *h, int mode, double outlet_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_budget_mode(const pumploss_piston_pump *h, int mode, double outlet_pa,
                                                          double case_pa, double speed_rev_s,
                                                          double displacement_fraction, double t_k, double film_rise_k,
                                                          double *total_m3_s, double *total_film_m3_s,
@@ -2657,7 +2657,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget_mode(const pumploss_pump *h,
  *         pump has no slipper or no valve-plate path; errors.
  * @sa pumploss::piston_pump_balance
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_balance(const pumploss_pump *h, double displacement_fraction,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_balance(const pumploss_piston_pump *h, double displacement_fraction,
                                                      double *slipper_balance, double *slipper_film_m,
                                                      double *barrel_balance, int *warnings);
 /**
@@ -2675,10 +2675,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_balance(const pumploss_pump *h, dou
  * @param dead_volume_m3_s receives the dead-volume compression loss, m^3/s
  * @param cross_port_m3_s receives the cross-port leakage, m^3/s
  * @param total_m3_s receives their sum: the stand's flow loss, m^3/s
- * @return as pumploss_pump_budget_mode().
+ * @return as pumploss_piston_pump_budget_mode().
  * @sa pumploss::piston_pump_flow_loss
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_flow_loss(const pumploss_pump *h, int mode, double outlet_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_flow_loss(const pumploss_piston_pump *h, int mode, double outlet_pa,
                                                        double inlet_pa, double case_pa, double speed_rev_s,
                                                        double displacement_fraction, double t_k, double *drain_m3_s,
                                                        double *compression_m3_s, double *dead_volume_m3_s,
@@ -2696,11 +2696,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_flow_loss(const pumploss_pump *h, i
  * @param t_k oil temperature, K
  * @param share receives the share (0 when the total is 0)
  * @param u_share receives its standard uncertainty
- * @return as pumploss_pump_budget(); PUMPLOSS_EDOMAIN for an unknown path, n_gaps other than
+ * @return as pumploss_piston_pump_budget(); PUMPLOSS_EDOMAIN for an unknown path, n_gaps other than
  *         PUMPLOSS_GAP_COUNT or a negative uncertainty.
  * @sa pumploss::piston_pump_budget_uncertainty
  */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_share_uncertainty(const pumploss_pump *h, int path,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_share_uncertainty(const pumploss_piston_pump *h, int path,
                                                                const double *u_gap_m, size_t n_gaps,
                                                                double outlet_pa, double case_pa, double speed_rev_s,
                                                                double displacement_fraction, double t_k,

@@ -50,7 +50,7 @@ static_assert(PUMPLOSS_BALANCE_SLIPPER_NO_FILM == pumploss::warn_slipper_no_film
 static_assert(PUMPLOSS_BALANCE_BARREL_LIFTS == pumploss::warn_barrel_lifts, "warnings");
 static_assert(PUMPLOSS_BALANCE_BARREL_OVERCLAMPED == pumploss::warn_barrel_overclamped, "warnings");
 
-struct pumploss_pump {
+struct pumploss_piston_pump {
   pumploss::piston_pump<double> pump;
   pumploss::oil<double> oil;
   bool has_oil = false;
@@ -408,7 +408,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_restore(pumploss_health_m
 namespace {
 // Apply a change to a copy of the description and keep it only when it validates.
 template <class F>
-int update_pump(pumploss_pump* h, F&& change) {
+int update_pump(pumploss_piston_pump* h, F&& change) {
   if (h == nullptr) return PUMPLOSS_EMISUSE;
   pumploss::capi::fp_guard guard;
   pumploss::piston_pump<double> p = h->pump;
@@ -424,15 +424,15 @@ template <class... Ts>
 bool finite_inputs(Ts... xs) {
   return pumploss::detail::all_finite(xs...);
 }
-status operating_checks(const pumploss_pump* h) {
+status operating_checks(const pumploss_piston_pump* h) {
   if (h == nullptr || !h->has_oil) return status::misuse;
   return status::ok;
 }
 }  // namespace
 
 namespace {
-// Calibration shared by pumploss_pump_calibrate() (on stroke) and pumploss_pump_calibrate_modes().
-int calibrate(pumploss_pump* h, size_t n, const double* drain_m3_s, const double* outlet_pa, const double* case_pa,
+// Calibration shared by pumploss_piston_pump_calibrate() (on stroke) and pumploss_piston_pump_calibrate_modes().
+int calibrate(pumploss_piston_pump* h, size_t n, const double* drain_m3_s, const double* outlet_pa, const double* case_pa,
               const double* speed_rev_s, const double* displacement_fraction, const double* t_k, const int* mode,
               double* rms_residual_m3_s) {
   return call({rms_residual_m3_s}, [&] {
@@ -462,9 +462,9 @@ int calibrate(pumploss_pump* h, size_t n, const double* drain_m3_s, const double
 
 extern "C" {
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_create(int pistons, double piston_diameter_m, double bore_clearance_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_create(int pistons, double piston_diameter_m, double bore_clearance_m,
                                                     double engaged_length_min_m, double pitch_radius_m,
-                                                    double max_swash_angle_rad, pumploss_pump** out) {
+                                                    double max_swash_angle_rad, pumploss_piston_pump** out) {
   if (out == nullptr) return PUMPLOSS_EMISUSE;
   *out = nullptr;
   pumploss::capi::fp_guard guard;
@@ -477,16 +477,16 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_create(int pistons, double piston_d
   p.max_swash_angle_rad = max_swash_angle_rad;
   const auto check = pumploss::validate_piston_pump(p);
   if (pumploss::is_error(check.st)) return static_cast<int>(check.st);
-  auto* h = new (std::nothrow) pumploss_pump{};
+  auto* h = new (std::nothrow) pumploss_piston_pump{};
   if (h == nullptr) return PUMPLOSS_ENOMEM;
   h->pump = p;
   *out = h;
   return PUMPLOSS_OK;
 }
 
-PUMPLOSS_API void PUMPLOSS_CALL pumploss_pump_destroy(pumploss_pump* h) { delete h; }
+PUMPLOSS_API void PUMPLOSS_CALL pumploss_piston_pump_destroy(pumploss_piston_pump* h) { delete h; }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_piston(pumploss_pump* h, double eccentricity_ratio,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_piston(pumploss_piston_pump* h, double eccentricity_ratio,
                                                         double high_pressure_share) {
   if (h != nullptr && !finite_inputs(eccentricity_ratio, high_pressure_share)) return PUMPLOSS_ENONFINITE;
   return update_pump(h, [&](pumploss::piston_pump<double>& p) {
@@ -495,7 +495,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_piston(pumploss_pump* h, double
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_slipper(pumploss_pump* h, double pocket_radius_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_slipper(pumploss_piston_pump* h, double pocket_radius_m,
                                                          double outer_radius_m, double gap_m, double feed_diameter_m,
                                                          double feed_length_m) {
   if (h != nullptr && !finite_inputs(pocket_radius_m, outer_radius_m, gap_m, feed_diameter_m, feed_length_m))
@@ -509,7 +509,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_slipper(pumploss_pump* h, doubl
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_ball(pumploss_pump* h, double ball_diameter_m, double clearance_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_ball(pumploss_piston_pump* h, double ball_diameter_m, double clearance_m,
                                                       double length_m) {
   if (h != nullptr && !finite_inputs(ball_diameter_m, clearance_m, length_m)) return PUMPLOSS_ENONFINITE;
   return update_pump(h, [&](pumploss::piston_pump<double>& p) {
@@ -519,7 +519,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_ball(pumploss_pump* h, double b
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_valve_plate(pumploss_pump* h, double inner_land_inner_radius_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_valve_plate(pumploss_piston_pump* h, double inner_land_inner_radius_m,
                                                              double inner_land_outer_radius_m,
                                                              double outer_land_inner_radius_m,
                                                              double outer_land_outer_radius_m, double kidney_arc_rad,
@@ -537,7 +537,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_valve_plate(pumploss_pump* h, d
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_controller(pumploss_pump* h, double consumption_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_controller(pumploss_piston_pump* h, double consumption_m3_s,
                                                             double bleed_diameter_m, double bleed_cd) {
   if (h != nullptr && !finite_inputs(consumption_m3_s, bleed_diameter_m, bleed_cd)) return PUMPLOSS_ENONFINITE;
   return update_pump(h, [&](pumploss::piston_pump<double>& p) {
@@ -547,7 +547,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_controller(pumploss_pump* h, do
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_extra(pumploss_pump* h, double conductance_m3, double orifice_cda_m2) {
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_extra(pumploss_piston_pump* h, double conductance_m3, double orifice_cda_m2) {
   if (h != nullptr && !finite_inputs(conductance_m3, orifice_cda_m2)) return PUMPLOSS_ENONFINITE;
   return update_pump(h, [&](pumploss::piston_pump<double>& p) {
     p.extra_conductance_m3 = conductance_m3;
@@ -555,7 +555,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_extra(pumploss_pump* h, double 
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_oil(pumploss_pump* h, double t1_k, double nu1_m2_s, double t2_k,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_oil(pumploss_piston_pump* h, double t1_k, double nu1_m2_s, double t2_k,
                                                      double nu2_m2_s, double rho15_kg_m3) {
   if (h == nullptr) return PUMPLOSS_EMISUSE;
   pumploss::capi::fp_guard guard;
@@ -570,7 +570,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_oil(pumploss_pump* h, double t1
   return PUMPLOSS_OK;
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_displacement(const pumploss_pump* h, double stated_m3_rev,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_displacement(const pumploss_piston_pump* h, double stated_m3_rev,
                                                           double* displacement_m3_rev, double* mismatch) {
   return call({displacement_m3_rev, mismatch}, [&] {
     if (h == nullptr) return status::misuse;
@@ -585,7 +585,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_displacement(const pumploss_pump* h
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget(const pumploss_pump* h, double outlet_pa, double case_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_budget(const pumploss_piston_pump* h, double outlet_pa, double case_pa,
                                                     double speed_rev_s, double displacement_fraction, double t_k,
                                                     double* total_m3_s, double* drain_fraction) {
   return call({total_m3_s, drain_fraction}, [&] {
@@ -598,7 +598,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget(const pumploss_pump* h, doub
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_path_flow(const pumploss_pump* h, int path, double outlet_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_path_flow(const pumploss_piston_pump* h, int path, double outlet_pa,
                                                        double case_pa, double speed_rev_s,
                                                        double displacement_fraction, double t_k, double* q_m3_s,
                                                        double* share) {
@@ -614,7 +614,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_path_flow(const pumploss_pump* h, i
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_sensitivity(const pumploss_pump* h, int gap, double outlet_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_gap_sensitivity(const pumploss_piston_pump* h, int gap, double outlet_pa,
                                                              double case_pa, double speed_rev_s,
                                                              double displacement_fraction, double t_k,
                                                              double* d_total_d_gap_m2_s, double* elasticity) {
@@ -630,7 +630,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_sensitivity(const pumploss_pump
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_growth(const pumploss_pump* h, int gap, double measured_drain_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_gap_growth(const pumploss_piston_pump* h, int gap, double measured_drain_m3_s,
                                                         double outlet_pa, double case_pa, double speed_rev_s,
                                                         double displacement_fraction, double t_k, double* growth) {
   return call({growth}, [&] {
@@ -645,7 +645,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_gap_growth(const pumploss_pump* h, 
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump* h, size_t n, const double* drain_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_calibrate(pumploss_piston_pump* h, size_t n, const double* drain_m3_s,
                                                        const double* outlet_pa, const double* case_pa,
                                                        const double* speed_rev_s, const double* displacement_fraction,
                                                        const double* t_k, double* rms_residual_m3_s) {
@@ -653,7 +653,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate(pumploss_pump* h, size_t 
                    rms_residual_m3_s);
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate_modes(pumploss_pump* h, size_t n, const double* drain_m3_s,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_calibrate_modes(pumploss_piston_pump* h, size_t n, const double* drain_m3_s,
                                                              const double* outlet_pa, const double* case_pa,
                                                              const double* speed_rev_s,
                                                              const double* displacement_fraction, const double* t_k,
@@ -666,7 +666,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibrate_modes(pumploss_pump* h, s
                    rms_residual_m3_s);
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pump* h, int group, double* scale,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_calibration_group(const pumploss_piston_pump* h, int group, double* scale,
                                                                double* std_error, double* gap_growth,
                                                                int* confused_with) {
   if (confused_with != nullptr) *confused_with = 0;
@@ -699,11 +699,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_calibration_group(const pumploss_pu
   return std::isnan(se) || std::isnan(growth) ? PUMPLOSS_WUNDEFINED : PUMPLOSS_OK;
 }
 
-PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_pump_path_name(int path) {
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_piston_pump_path_name(int path) {
   return pumploss::leakage_path_name(static_cast<pumploss::leakage_path>(path));
 }
 
-PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_pump_group_name(int group) {
+PUMPLOSS_API const char* PUMPLOSS_CALL pumploss_piston_pump_group_name(int group) {
   return pumploss::path_group_name(static_cast<pumploss::path_group>(group));
 }
 
@@ -722,7 +722,7 @@ pumploss::pump_operating_point<double> mode_point(int mode, double outlet_pa, do
 
 extern "C" {
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_kinematics(pumploss_pump* h, double pivot_offset_m,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_kinematics(pumploss_piston_pump* h, double pivot_offset_m,
                                                             double dead_volume_m3) {
   if (h != nullptr && !finite_inputs(pivot_offset_m, dead_volume_m3)) return PUMPLOSS_ENONFINITE;
   return update_pump(h, [&](pumploss::piston_pump<double>& p) {
@@ -731,7 +731,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_kinematics(pumploss_pump* h, do
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_control(pumploss_pump* h, double control_piston_conductance_m3,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_set_control(pumploss_piston_pump* h, double control_piston_conductance_m3,
                                                          double control_pressure_pa, double cross_port_conductance_m3,
                                                          double barrel_spring_force_n) {
   if (h != nullptr && !finite_inputs(control_piston_conductance_m3, control_pressure_pa, cross_port_conductance_m3,
@@ -745,7 +745,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_set_control(pumploss_pump* h, doubl
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_kinematics(const pumploss_pump* h, double displacement_fraction,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_kinematics(const pumploss_piston_pump* h, double displacement_fraction,
                                                         double* stroke_m, double* engaged_odc_m,
                                                         double* engaged_idc_m, double* effective_length_m,
                                                         double* dead_volume_m3) {
@@ -761,7 +761,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_kinematics(const pumploss_pump* h, 
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget_mode(const pumploss_pump* h, int mode, double outlet_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_budget_mode(const pumploss_piston_pump* h, int mode, double outlet_pa,
                                                          double case_pa, double speed_rev_s,
                                                          double displacement_fraction, double t_k, double film_rise_k,
                                                          double* total_m3_s, double* total_film_m3_s,
@@ -782,7 +782,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_budget_mode(const pumploss_pump* h,
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_balance(const pumploss_pump* h, double displacement_fraction,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_balance(const pumploss_piston_pump* h, double displacement_fraction,
                                                      double* slipper_balance, double* slipper_film_m,
                                                      double* barrel_balance, int* warnings) {
   if (warnings != nullptr) *warnings = 0;
@@ -800,7 +800,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_balance(const pumploss_pump* h, dou
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_flow_loss(const pumploss_pump* h, int mode, double outlet_pa,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_flow_loss(const pumploss_piston_pump* h, int mode, double outlet_pa,
                                                        double inlet_pa, double case_pa, double speed_rev_s,
                                                        double displacement_fraction, double t_k, double* drain_m3_s,
                                                        double* compression_m3_s, double* dead_volume_m3_s,
@@ -821,7 +821,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_flow_loss(const pumploss_pump* h, i
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_share_uncertainty(const pumploss_pump* h, int path,
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_share_uncertainty(const pumploss_piston_pump* h, int path,
                                                                const double* u_gap_m, size_t n_gaps,
                                                                double outlet_pa, double case_pa, double speed_rev_s,
                                                                double displacement_fraction, double t_k,

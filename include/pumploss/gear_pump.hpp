@@ -89,7 +89,7 @@ inline status gear_pump_check(const gear_pump<T>& g) {
 /// are those under load (housing and shaft deflection shift the gears towards the inlet).
 /// A tip path can be negative at low pressure (drag exceeds pressure flow).
 /// @par Accuracy
-/// Each path as its gap law (a few ulp; tests/gear_pump_test.cpp against self-calculated mpmath
+/// Each path as its gap law (a few ulp; tests/rotary_pump_test.cpp against self-calculated mpmath
 /// values).
 /// @par Source
 /// Plane Poiseuille-Couette slot and radial disc flow (gap_plates_flow(), gap_radial_sector_flow();

@@ -55,7 +55,7 @@ struct inlet_point {
 /// real inlet pressure is lower than computed). Engineering estimate: the maker's inlet limits
 /// (minimum pressure, maximum cold-start viscosity) govern.
 /// @par Accuracy
-/// As line_pressure_drop() (tests/inlet_test.cpp checks a laminar pipe by Hagen-Poiseuille).
+/// As line_pressure_drop() (tests/inlet_motor_test.cpp checks a laminar pipe by Hagen-Poiseuille).
 /// @par Source
 /// Bernoulli with losses along a suction line (e.g. F. M. White, Fluid Mechanics, 7th ed.,
 /// McGraw-Hill 2011, section 6.9 (from memory)); line model of line.hpp.

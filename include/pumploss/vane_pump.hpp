@@ -87,7 +87,7 @@ inline status vane_pump_check(const vane_pump<T>& v) {
 /// slots (drag averaging to zero over a revolution) and the chamfer of the tips are neglected.
 /// A tip path can be negative at low pressure (drag exceeds pressure flow).
 /// @par Accuracy
-/// Each path as its gap law (a few ulp; tests/vane_pump_test.cpp against self-calculated mpmath
+/// Each path as its gap law (a few ulp; tests/rotary_pump_test.cpp against self-calculated mpmath
 /// values).
 /// @par Source
 /// Plane Poiseuille-Couette slot and radial disc flow (gap_plates_flow(), gap_radial_sector_flow();

@@ -579,36 +579,36 @@ static void test_pump_health(void) {
 }
 
 static void test_pump_budget(void) {
-  pumploss_pump *h = NULL;
+  pumploss_piston_pump *h = NULL;
   double v = 0.0, mis = 0.0, total = 0.0, frac = 0.0, q = 0.0, share = 0.0, dq = 0.0, el = 0.0, gr = 0.0, rms = 0.0;
   double sc = 0.0, se = 0.0, gg = 0.0, sum = 0.0;
   double drain[6], outlet[6], case_p[6], speed[6], disp[6], temp[6];
   int i = 0, confused = 0;
   const double pi = 3.14159265358979323846;
   /* invented pump: 9 pistons of 20 mm on a 34 mm pitch radius, 20 degrees: 69.97 cm3/rev (hand) */
-  CHECK(pumploss_pump_create(9, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, &h) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_create(13, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, NULL) == PUMPLOSS_EMISUSE);
-  CHECK(pumploss_pump_set_piston(h, 0.0, 0.5) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_set_slipper(h, 9.5e-3, 11.5e-3, 12e-6, 0.8e-3, 60e-3) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_set_ball(h, 14e-3, 8e-6, 4e-3) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_set_valve_plate(h, 31e-3, 34e-3, 44e-3, 47e-3, 150.0 * pi / 180.0, 10e-6) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_set_controller(h, 0.5e-3 / 60.0, 0.6e-3, 0.611) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_set_extra(h, 0.0, 0.0) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_set_valve_plate(h, 36e-3, 39e-3, 38e-3, 48e-3, 2.6, 10e-6) == PUMPLOSS_EDOMAIN);
-  CHECK(pumploss_pump_budget(h, 250e5, 1e5, 25.0, 1.0, 323.15, &total, &frac) == PUMPLOSS_EMISUSE && is_nan(total));
-  CHECK(pumploss_pump_set_oil(h, 313.15, 46e-6, 373.15, 6.8e-6, 870.0) == PUMPLOSS_OK);
-  CHECK(pumploss_pump_displacement(h, 71e-6, &v, &mis) == PUMPLOSS_OK && fabs(v * 1e6 - 69.97) < 0.01);
-  CHECK(pumploss_pump_budget(h, 250e5, 1e5, 25.0, 1.0, 323.15, &total, &frac) == PUMPLOSS_OK && total > 0.0 &&
+  CHECK(pumploss_piston_pump_create(9, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, &h) == PUMPLOSS_OK);
+  CHECK(pumploss_piston_pump_create(13, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * pi / 180.0, NULL) == PUMPLOSS_EMISUSE);
+  CHECK(pumploss_piston_pump_set_piston(h, 0.0, 0.5) == PUMPLOSS_OK);
+  CHECK(pumploss_piston_pump_set_slipper(h, 9.5e-3, 11.5e-3, 12e-6, 0.8e-3, 60e-3) == PUMPLOSS_OK);
+  CHECK(pumploss_piston_pump_set_ball(h, 14e-3, 8e-6, 4e-3) == PUMPLOSS_OK);
+  CHECK(pumploss_piston_pump_set_valve_plate(h, 31e-3, 34e-3, 44e-3, 47e-3, 150.0 * pi / 180.0, 10e-6) == PUMPLOSS_OK);
+  CHECK(pumploss_piston_pump_set_controller(h, 0.5e-3 / 60.0, 0.6e-3, 0.611) == PUMPLOSS_OK);
+  CHECK(pumploss_piston_pump_set_extra(h, 0.0, 0.0) == PUMPLOSS_OK);
+  CHECK(pumploss_piston_pump_set_valve_plate(h, 36e-3, 39e-3, 38e-3, 48e-3, 2.6, 10e-6) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_piston_pump_budget(h, 250e5, 1e5, 25.0, 1.0, 323.15, &total, &frac) == PUMPLOSS_EMISUSE && is_nan(total));
+  CHECK(pumploss_piston_pump_set_oil(h, 313.15, 46e-6, 373.15, 6.8e-6, 870.0) == PUMPLOSS_OK);
+  CHECK(pumploss_piston_pump_displacement(h, 71e-6, &v, &mis) == PUMPLOSS_OK && fabs(v * 1e6 - 69.97) < 0.01);
+  CHECK(pumploss_piston_pump_budget(h, 250e5, 1e5, 25.0, 1.0, 323.15, &total, &frac) == PUMPLOSS_OK && total > 0.0 &&
         frac > 0.001 && frac < 0.15);
   for (i = 0; i < PUMPLOSS_PATH_COUNT; ++i) {
-    CHECK(pumploss_pump_path_flow(h, i, 250e5, 1e5, 25.0, 1.0, 323.15, &q, &share) == PUMPLOSS_OK);
+    CHECK(pumploss_piston_pump_path_flow(h, i, 250e5, 1e5, 25.0, 1.0, 323.15, &q, &share) == PUMPLOSS_OK);
     sum += q;
   }
   CHECK(fabs(sum / total - 1.0) < 1e-14);
-  CHECK(pumploss_pump_path_flow(h, 99, 250e5, 1e5, 25.0, 1.0, 323.15, &q, &share) == PUMPLOSS_EDOMAIN && is_nan(q));
-  CHECK(pumploss_pump_gap_sensitivity(h, PUMPLOSS_GAP_VALVE, 250e5, 1e5, 25.0, 1.0, 323.15, &dq, &el) == PUMPLOSS_OK &&
+  CHECK(pumploss_piston_pump_path_flow(h, 99, 250e5, 1e5, 25.0, 1.0, 323.15, &q, &share) == PUMPLOSS_EDOMAIN && is_nan(q));
+  CHECK(pumploss_piston_pump_gap_sensitivity(h, PUMPLOSS_GAP_VALVE, 250e5, 1e5, 25.0, 1.0, 323.15, &dq, &el) == PUMPLOSS_OK &&
         dq > 0.0 && el > 0.0 && el < 3.0);
-  CHECK(pumploss_pump_gap_growth(h, PUMPLOSS_GAP_BORE, total * 1.2, 250e5, 1e5, 25.0, 1.0, 323.15, &gr) == PUMPLOSS_OK &&
+  CHECK(pumploss_piston_pump_gap_growth(h, PUMPLOSS_GAP_BORE, total * 1.2, 250e5, 1e5, 25.0, 1.0, 323.15, &gr) == PUMPLOSS_OK &&
         gr > 0.0);
   for (i = 0; i < 6; ++i) {
     outlet[i] = 50e5 + 50e5 * i;
@@ -616,52 +616,52 @@ static void test_pump_budget(void) {
     speed[i] = 25.0;
     disp[i] = i % 2 ? 1.0 : 0.5;
     temp[i] = 313.15 + 5.0 * i;
-    CHECK(pumploss_pump_budget(h, outlet[i], case_p[i], speed[i], disp[i], temp[i], &drain[i], &frac) == PUMPLOSS_OK);
+    CHECK(pumploss_piston_pump_budget(h, outlet[i], case_p[i], speed[i], disp[i], temp[i], &drain[i], &frac) == PUMPLOSS_OK);
   }
-  CHECK(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_EDATA);
-  CHECK(pumploss_pump_calibrate(h, 6, drain, outlet, case_p, speed, disp, temp, &rms) == PUMPLOSS_OK ||
-        pumploss_pump_calibrate(h, 6, drain, outlet, case_p, speed, disp, temp, &rms) == PUMPLOSS_WILLCONDITIONED);
-  CHECK(pumploss_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_OK &&
+  CHECK(pumploss_piston_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_EDATA);
+  CHECK(pumploss_piston_pump_calibrate(h, 6, drain, outlet, case_p, speed, disp, temp, &rms) == PUMPLOSS_OK ||
+        pumploss_piston_pump_calibrate(h, 6, drain, outlet, case_p, speed, disp, temp, &rms) == PUMPLOSS_WILLCONDITIONED);
+  CHECK(pumploss_piston_pump_calibration_group(h, PUMPLOSS_GROUP_PISTON, &sc, &se, &gg, &confused) == PUMPLOSS_OK &&
         fabs(sc - 1.0) < 1e-6);
-  CHECK(pumploss_pump_calibrate(h, 6, drain, NULL, case_p, speed, disp, temp, &rms) == PUMPLOSS_EMISUSE && is_nan(rms));
+  CHECK(pumploss_piston_pump_calibrate(h, 6, drain, NULL, case_p, speed, disp, temp, &rms) == PUMPLOSS_EMISUSE && is_nan(rms));
   {
     const int modes[6] = {PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE,
                           PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE, PUMPLOSS_MODE_ON_STROKE};
     const int bad_modes[6] = {0, 0, 5, 0, 0, 0};
-    const int st_m = pumploss_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, modes, &rms);
+    const int st_m = pumploss_piston_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, modes, &rms);
     CHECK(st_m == PUMPLOSS_OK || st_m == PUMPLOSS_WILLCONDITIONED);
-    CHECK(pumploss_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, bad_modes, &rms) ==
+    CHECK(pumploss_piston_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, bad_modes, &rms) ==
               PUMPLOSS_EDOMAIN && is_nan(rms));
-    CHECK(pumploss_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, NULL, &rms) ==
+    CHECK(pumploss_piston_pump_calibrate_modes(h, 6, drain, outlet, case_p, speed, disp, temp, NULL, &rms) ==
               PUMPLOSS_EMISUSE && is_nan(rms));
   }
-  CHECK(strcmp(pumploss_pump_path_name(PUMPLOSS_PATH_SLIPPER), "slipper") == 0);
-  CHECK(strcmp(pumploss_pump_group_name(PUMPLOSS_GROUP_VALVE_PLATE), "valve-plate") == 0);
+  CHECK(strcmp(pumploss_piston_pump_path_name(PUMPLOSS_PATH_SLIPPER), "slipper") == 0);
+  CHECK(strcmp(pumploss_piston_pump_group_name(PUMPLOSS_GROUP_VALVE_PLATE), "valve-plate") == 0);
   {
     /* kinematics, controller modes, balance, non-case losses, share uncertainty */
     double st = 0, lo = 0, li = 0, le = 0, vd = 0, tf = 0, met = 0, sb = 0, hf = 0, bb = 0;
     double qd = 0, qc = 0, qv = 0, qx = 0, qt = 0, s1 = 0, us = 0;
     const double ug[PUMPLOSS_GAP_COUNT] = {1e-6, 0.5e-6, 0.5e-6, 0.8e-6};
     int w = -1;
-    CHECK(pumploss_pump_set_kinematics(h, 0.0, 1.5e-6) == PUMPLOSS_OK);
-    CHECK(pumploss_pump_set_kinematics(h, 1.0, 1.5e-6) == PUMPLOSS_EDOMAIN);
-    CHECK(pumploss_pump_set_control(h, 2e-17, 20e5, 3e-17, 0.0) == PUMPLOSS_OK);
-    CHECK(pumploss_pump_kinematics(h, 0.0, &st, &lo, &li, &le, &vd) == PUMPLOSS_OK && st == 0.0 && lo == li);
-    CHECK(pumploss_pump_budget_mode(h, PUMPLOSS_MODE_DEADHEAD, 250e5, 1e5, 25.0, 1.0, 323.15, 5.0, &total, &tf, &met,
+    CHECK(pumploss_piston_pump_set_kinematics(h, 0.0, 1.5e-6) == PUMPLOSS_OK);
+    CHECK(pumploss_piston_pump_set_kinematics(h, 1.0, 1.5e-6) == PUMPLOSS_EDOMAIN);
+    CHECK(pumploss_piston_pump_set_control(h, 2e-17, 20e5, 3e-17, 0.0) == PUMPLOSS_OK);
+    CHECK(pumploss_piston_pump_kinematics(h, 0.0, &st, &lo, &li, &le, &vd) == PUMPLOSS_OK && st == 0.0 && lo == li);
+    CHECK(pumploss_piston_pump_budget_mode(h, PUMPLOSS_MODE_DEADHEAD, 250e5, 1e5, 25.0, 1.0, 323.15, 5.0, &total, &tf, &met,
                                     &w) == PUMPLOSS_OK && w == 0 && met > 0.0 && tf > 0.0);
-    CHECK(pumploss_pump_budget_mode(h, 7, 250e5, 1e5, 25.0, 1.0, 323.15, 5.0, &total, &tf, &met, &w) ==
+    CHECK(pumploss_piston_pump_budget_mode(h, 7, 250e5, 1e5, 25.0, 1.0, 323.15, 5.0, &total, &tf, &met, &w) ==
               PUMPLOSS_EDOMAIN && is_nan(total));
-    CHECK(pumploss_pump_balance(h, 1.0, &sb, &hf, &bb, &w) == PUMPLOSS_OK && sb > 0.9 && sb < 1.1 && bb > 0.85 &&
+    CHECK(pumploss_piston_pump_balance(h, 1.0, &sb, &hf, &bb, &w) == PUMPLOSS_OK && sb > 0.9 && sb < 1.1 && bb > 0.85 &&
           bb < 1.0 && hf > 0.0);
-    CHECK(pumploss_pump_flow_loss(h, PUMPLOSS_MODE_ON_STROKE, 250e5, 0.5e5, 1e5, 25.0, 1.0, 323.15, &qd, &qc, &qv, &qx,
+    CHECK(pumploss_piston_pump_flow_loss(h, PUMPLOSS_MODE_ON_STROKE, 250e5, 0.5e5, 1e5, 25.0, 1.0, 323.15, &qd, &qc, &qv, &qx,
                                   &qt) == PUMPLOSS_OK && fabs(qt - (qd + qc + qv + qx)) < 1e-15);
-    CHECK(pumploss_pump_share_uncertainty(h, PUMPLOSS_PATH_PISTON_BORE, ug, PUMPLOSS_GAP_COUNT, 250e5, 1e5, 25.0, 1.0,
+    CHECK(pumploss_piston_pump_share_uncertainty(h, PUMPLOSS_PATH_PISTON_BORE, ug, PUMPLOSS_GAP_COUNT, 250e5, 1e5, 25.0, 1.0,
                                           323.15, &s1, &us) == PUMPLOSS_OK && us > 0.0 && s1 > us);
-    CHECK(pumploss_pump_share_uncertainty(h, PUMPLOSS_PATH_PISTON_BORE, ug, 3, 250e5, 1e5, 25.0, 1.0, 323.15, &s1,
+    CHECK(pumploss_piston_pump_share_uncertainty(h, PUMPLOSS_PATH_PISTON_BORE, ug, 3, 250e5, 1e5, 25.0, 1.0, 323.15, &s1,
                                           &us) == PUMPLOSS_EDOMAIN && is_nan(us));
   }
-  pumploss_pump_destroy(h);
-  pumploss_pump_destroy(NULL);
+  pumploss_piston_pump_destroy(h);
+  pumploss_piston_pump_destroy(NULL);
 }
 
 

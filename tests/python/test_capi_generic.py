@@ -1,5 +1,5 @@
 """The ctypes module against the bindings generated from pumploss.h at build time
-(pumploss_signatures.py, tools/capigen/capigen.py): every function is reachable without a
+(the ctypes table that tools/capigen/capigen.py writes into the build folder): every function is reachable without a
 header at run time, and every status-returning function keeps the NaN/status conventions when
 called with NaN, infinities and zeros. New functions are picked up without editing this file."""
 import math
