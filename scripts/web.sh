@@ -23,16 +23,16 @@ mkdir -p "$build" "$out"
 
 # The library itself through the project's CMake (same sources, same definitions as native).
 flags="-fexceptions"
-emcmake cmake -S . -B "$build/lib" -DCMAKE_BUILD_TYPE=Release -DBUILD_SHARED_LIBS=OFF \
+emcmake cmake -S . -B "$build/lib" -DCMAKE_BUILD_TYPE=MinSizeRel -DBUILD_SHARED_LIBS=OFF \
   -DPUMPLOSS_BUILD_TESTS=OFF -DPUMPLOSS_BUILD_BENCH=OFF -DPUMPLOSS_BUILD_DOCS=OFF \
   -DPUMPLOSS_BUILD_EXAMPLES=OFF -DPUMPLOSS_BUILD_APP=OFF -DPUMPLOSS_INSTALL=OFF \
   -DCMAKE_CXX_FLAGS="$flags" -DCMAKE_C_FLAGS="$flags" >/dev/null
 cmake --build "$build/lib" -j "$(nproc 2>/dev/null || echo 2)" >/dev/null
-mapfile -t archives < <(find "$build/lib" -maxdepth 1 -name 'libpumploss*.a' | sort -r)
+mapfile -t archives < <(find "$build/lib" -maxdepth 1 -name 'libpumploss*.a' | sort)
 [ ${#archives[@]} -gt 0 ] || { echo "web.sh: no libpumploss archive in $build/lib" >&2; exit 1; }
 
 "$python" web/gen_web.py exports "$header" "$build/exports.json"
-em++ -O2 $flags "${archives[@]}" -o "$out/pumploss_core.mjs" \
+em++ -Os $flags "${archives[@]}" -o "$out/pumploss_core.mjs" \
   -sMODULARIZE=1 -sEXPORT_ES6=1 -sSINGLE_FILE=1 -sENVIRONMENT=web -sALLOW_MEMORY_GROWTH=1 \
   -sEXPORTED_FUNCTIONS=@"$build/exports.json" \
   -sEXPORTED_RUNTIME_METHODS='["UTF8ToString","stringToUTF8","lengthBytesUTF8"]'

@@ -56,7 +56,8 @@ def out_len_expr(f):
 
 def in_len_expr(f, idx):
     """JS expression of an input array's length: the product of the run of size_t params nearest
-    before it (`n` of a batch; `levels, per_level` of a grid; `n_dp` before `dp_pa`)."""
+    before it (`n` of a batch; `levels, per_level` of a grid; `n_dp` before `dp_pa`), else of
+    the run right after it."""
     j = idx - 1
     while j >= 0 and f.params[j].kind != "SIZE":
         j -= 1
@@ -64,6 +65,13 @@ def in_len_expr(f, idx):
     while j >= 0 and f.params[j].kind == "SIZE":
         run.insert(0, f.params[j].name)
         j -= 1
+    if not run:  # the count follows its arrays (`const double t_k[], size_t count`)
+        j = idx + 1
+        while j < len(f.params) and f.params[j].kind != "SIZE":
+            j += 1
+        while j < len(f.params) and f.params[j].kind == "SIZE":
+            run.append(f.params[j].name)
+            j += 1
     return " * ".join(run) if run else "0"
 
 
@@ -213,9 +221,11 @@ def js_function(f):
             reads.append(f"__handle: new Handle('{p.handle}', m.HEAPU32[(s + {8 * slot}) >> 2], st)")
             L.append(f"    m.HEAPU32[(s + {8 * slot}) >> 2] = 0;")
             slot += 1
-        elif k in ("DOUT", "IOUT"):
+        elif k in ("DOUT", "IOUT", "ZOUT"):
             key = "element_status" if p.name == "status" else p.name  # `status` is the call's
             if p.array:
+                if k == "ZOUT":
+                    raise SystemExit(f"gen_web.py: {f.name}: size_t arrays are not supported")
                 size = 8 if k == "DOUT" else 4
                 L.append(f"    const n_{p.name} = {n_expr};")
                 L.append(f"    const p_{p.name} = n_{p.name} > 0 ? m._malloc({size} * n_{p.name}) : 0;")
@@ -229,6 +239,8 @@ def js_function(f):
                 args.append(f"s + {8 * slot}")
                 if k == "DOUT":
                     reads.append(f"{key}: c.f64(s, {slot})")
+                elif k == "ZOUT":  # size_t: 32 bits in wasm32
+                    reads.append(f"{key}: m.HEAPU32[(s + {8 * slot}) >> 2]")
                 else:
                     reads.append(f"{key}: c.i32(s + {8 * slot}, 0)")
                 slot += 1
@@ -257,13 +269,14 @@ def js_function(f):
     return L
 
 
-def write_module(funcs, handles, codes, out):
+def write_module(funcs, handles, codes, out, consts=()):
     w = out.write
     w(MODULE_HEAD)
     w("  const m = c.m;\n")
     for f in funcs:
         w("\n".join(js_function(f)) + "\n")
     w("  api.STATUS = Object.freeze({" + ", ".join(f"{n[len('PUMPLOSS_'):]}: {v}" for n, v in codes) + "});\n")
+    w("  api.CONSTANTS = Object.freeze({" + ", ".join(f"{n[len('PUMPLOSS_'):]}: {v}" for n, v in consts) + "});\n")
     w("  api.isError = isError;\n  api.isReport = isReport;\n")
     w("  return Object.freeze(api);\n}\n")
 
@@ -277,7 +290,7 @@ def ts_type(p):
     }.get(p.kind, "Handle")
 
 
-def write_dts(funcs, handles, codes, out):
+def write_dts(funcs, handles, codes, out, consts=()):
     w = out.write
     w("// Generated from pumploss.h by web/gen_web.py: do not edit.\n")
     w("// Units are SI and part of each parameter name (dp_pa, mu_pa_s, q_m3_s, t_k).\n")
@@ -306,12 +319,16 @@ def write_dts(funcs, handles, codes, out):
                     fields.append(f"{key}: {'Float64Array' if p.array else 'number'}")
                 elif p.kind == "IOUT":
                     fields.append(f"{key}: {'Int32Array' if p.array else 'number'}")
+                elif p.kind == "ZOUT":
+                    fields.append(f"{key}: number")
                 elif p.kind == "CBUF":
                     fields.append(f"{p.name}: string")
             ret = "{ " + "; ".join(fields + ["status: number"]) + " }"
         w(f"  /** {f.name} of pumploss.h. */\n")
         w(f"  {fn}({sig}): {ret};\n")
     w("  readonly STATUS: Readonly<{" + " ".join(f"{n[len('PUMPLOSS_'):]}: {v};" for n, v in codes) + "}>;\n")
+    w("  /** Option constants of pumploss.h by name without the prefix (PUMPLOSS_STATE_DEADHEAD: STATE_DEADHEAD). */\n")
+    w("  readonly CONSTANTS: Readonly<{" + " ".join(f"{n[len('PUMPLOSS_'):]}: {v};" for n, v in consts) + "}>;\n")
     w("  isError(status: number): boolean;\n  isReport(status: number): boolean;\n")
     w("}\n\n/** Load the WebAssembly module (single file, works offline). */\n")
     w("export default function loadPumploss(): Promise<Pumploss>;\n")
@@ -368,6 +385,9 @@ def write_native(funcs, out):
     w("static void pd(const char *name, const double *v, size_t n) {\n")
     w("  size_t i;\n  printf(\"%s\\\"%s\\\":[\", first ? \"\" : \",\", name);\n  first = 0;\n")
     w("  for (i = 0; i < n; ++i) printf(\"%s\\\"%a\\\"\", i ? \",\" : \"\", v[i]);\n  printf(\"]\");\n}\n")
+    if any(p.kind == "ZOUT" for f in case_functions(funcs) for p in f.params):
+        w("static void pz(const char *name, const size_t *v) {\n")
+        w("  printf(\"%s\\\"%s\\\":[%lu]\", first ? \"\" : \",\", name, (unsigned long)v[0]);\n  first = 0;\n}\n")
     w("static void pi(const char *name, const int *v, size_t n) {\n")
     w("  size_t i;\n  printf(\"%s\\\"%s\\\":[\", first ? \"\" : \",\", name);\n  first = 0;\n")
     w("  for (i = 0; i < n; ++i) printf(\"%s%d\", i ? \",\" : \"\", v[i]);\n  printf(\"]\");\n}\n\n")
@@ -397,6 +417,9 @@ def write_native(funcs, out):
                 elif p.kind == "IOUT":
                     w(f"    int o_{p.name}[9];\n")
                     args.append(f"o_{p.name}")
+                elif p.kind == "ZOUT":
+                    w(f"    size_t o_{p.name}[9];\n")
+                    args.append(f"o_{p.name}")
                 elif p.kind == "CBUF":
                     w(f"    char o_{p.name}[1024];\n")
                     args.append(f"o_{p.name}")
@@ -410,6 +433,8 @@ def write_native(funcs, out):
                     w(f"    pd(\"{p.name}\", o_{p.name}, {n if p.array else 1});\n")
                 elif p.kind == "IOUT":
                     w(f"    pi(\"{p.name}\", o_{p.name}, {n if p.array else 1});\n")
+                elif p.kind == "ZOUT":
+                    w(f"    pz(\"{p.name}\", o_{p.name});\n")
             w("    printf(\"}}\\n\");\n  }\n")
             k += 1
     w("  return 0;\n}\n")
@@ -419,14 +444,16 @@ def main():
     if len(sys.argv) != 4:
         sys.exit(__doc__)
     mode, header, dest = sys.argv[1:]
-    funcs, handles, codes = CG.parse(header)[:3]
+    parsed = CG.parse(header)
+    funcs, handles, codes = parsed[:3]
+    consts = parsed[3] if len(parsed) > 3 else ()
     with open(dest, "w", encoding="utf-8", newline="\n") as out:
         if mode == "exports":
             json.dump([f"_{f.name}" for f in funcs] + ["_malloc", "_free"], out)
         elif mode == "module":
-            write_module(funcs, handles, codes, out)
+            write_module(funcs, handles, codes, out, consts)
         elif mode == "dts":
-            write_dts(funcs, handles, codes, out)
+            write_dts(funcs, handles, codes, out, consts)
         elif mode == "cases":
             write_cases(funcs, out)
         elif mode == "native":

@@ -116,10 +116,24 @@ class _Fn:
                           else p[2] for p in self.outs if p[0] != "HOUT"]
         self.ins = [p for p in self.params if p[0] in ("DIN", "IIN", "STR", "HIN", "DARR", "IARR", "SIZE")]
         self.scalar = all(p[0] in ("DIN", "IIN", "STR", "HIN") for p in self.ins)
-        # counts taken from the arrays after them, unless two counts stand in a row
-        self.explicit_sizes = set()
+        # a count is taken from the arrays after it (up to the next count), else from the arrays
+        # before it (since the previous count), else it is passed explicitly (two in a row)
+        self.explicit_sizes, self.sizes_after = set(), set()
+        kinds = [p[0] for p in self.params]
         for i, p in enumerate(self.params):
-            if p[0] == "SIZE" and (i + 1 >= len(self.params) or self.params[i + 1][0] == "SIZE"):
+            if p[0] != "SIZE":
+                continue
+            j = i + 1
+            while j < len(kinds) and kinds[j] != "SIZE" and kinds[j] not in ("DARR", "IARR"):
+                j += 1
+            if j < len(kinds) and kinds[j] in ("DARR", "IARR"):
+                continue  # from the arrays after it
+            j = i - 1
+            while j >= 0 and kinds[j] != "SIZE" and kinds[j] not in ("DARR", "IARR"):
+                j -= 1
+            if j >= 0 and kinds[j] in ("DARR", "IARR"):
+                self.sizes_after.add(p[2])  # the count follows its arrays
+            else:
                 self.explicit_sizes.add(p[2])
         self.user_ins = [p for p in self.ins if not (p[0] == "SIZE" and p[2] not in self.explicit_sizes)]
         self._c = None
@@ -135,6 +149,7 @@ class _Fn:
         it = iter(args)
         conv, outs, sizes, keep = [], [], [], []
         pending = []  # counts to be filled from the arrays after them
+        last_arrays = []  # lengths of the arrays since the last count
         for kind, _ctype, pname in self.params:
             if kind == "HIN":
                 conv.append(handle if handle is not None else next(it))
@@ -150,6 +165,13 @@ class _Fn:
                     n = int(next(it))
                     conv.append(n)
                     sizes.append(n)
+                elif pname in self.sizes_after:
+                    n = last_arrays[0] if last_arrays else 0
+                    if any(m != n for m in last_arrays):
+                        raise ValueError(f"{self.short}: the arrays before {pname} differ in length {last_arrays}")
+                    conv.append(n)
+                    sizes.append(n)
+                    last_arrays = []
                 else:
                     pending = [len(conv), None]
                     conv.append(None)
@@ -160,6 +182,7 @@ class _Fn:
                 dtype = np.float64 if kind == "DARR" else np.intc
                 a = np.ascontiguousarray(next(it), dtype=dtype).ravel()
                 keep.append(a)
+                last_arrays.append(a.size)
                 if pending:
                     if pending[1] is None:
                         pending[1] = a.size

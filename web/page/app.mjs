@@ -6,7 +6,7 @@ import { DEFAULTS, reading, leakageAt, drainLine } from './calc.mjs';
 const pl = await loadPumploss();
 const state = { ...DEFAULTS };
 const SI = { pressure: 'Pa', flow: 'm3/s', temperature: 'K', displacement: 'm3/rev', length: 'm', speed: 'rev/s' };
-const FIXED = { metre: [1, 'm'], count: [1, ''], kinematic: [1e6, 'mm2/s'], density: [1, 'kg/m3'] };
+const FIXED = { metre: [1, 'm'], count: [1, ''], kinematic: [1e6, 'mm2/s'], density: [1, 'kg/m3'], cm3: [1e6, 'cm3'] };
 const unit = {};
 document.querySelectorAll('#units select').forEach((s) => { unit[s.dataset.q] = s.value; });
 
@@ -32,11 +32,13 @@ function compute() {
   err.textContent = '';
   try {
     const r = reading(pl, state);
-    put('out-fraction', r.fraction, `${(100 * r.fraction).toFixed(2)} %`);
+    put('out-drain-ref', r.drain_at_reference_m3_s, `${fmt(toUser('flow', r.drain_at_reference_m3_s), 4)} ${unit.flow}`);
     put('out-fraction-ref', r.fraction_at_reference, `${(100 * r.fraction_at_reference).toFixed(2)} %`);
     put('out-growth', r.growth, `${r.growth >= 0 ? '+' : ''}${(100 * r.growth).toFixed(1)} %`);
     const v = document.getElementById('out-verdict');
-    put('out-verdict', r.level, r.verdict + (r.status ? ` (${pl.status_message(r.status)})` : ''));
+    put('out-verdict', r.level, r.refused
+      ? `refused: ${pl.status_message(r.status)} Check the reading (a drain meter not connected, a wrong unit).`
+      : r.verdict + (r.status ? ` (${pl.status_message(r.status)})` : ''));
     v.dataset.level = String(r.level);
 
     const k = leakageAt(pl, state);
@@ -51,13 +53,13 @@ function compute() {
         + `<td class="${d.pass[i] ? 'pass' : 'fail'}">${d.pass[i] ? 'pass' : 'FAIL'}</td>`;
       return tr;
     }));
-    const fails = d.t_k.filter((_, i) => !d.pass[i]).map((t) => fmt(toUser('temperature', t), 3));
+    const fails = d.pass.some((p) => !p);
     const verdict = document.getElementById('out-line-verdict');
-    verdict.dataset.level = fails.length ? '3' : '0';
+    verdict.dataset.level = fails ? '3' : '0';
     verdict.dataset.si = String(d.worst_margin_pa);
-    verdict.textContent = fails.length
-      ? `FAIL at ${fails.join(', ')} ${unit.temperature}: case pressure over the maker's limit. Do not start the pump cold on this line.`
-      : `Pass at every temperature; smallest margin ${fmt(toUser('pressure', d.worst_margin_pa), 3)} ${unit.pressure}.`;
+    verdict.textContent = fails
+      ? `${d.verdict.replace(/\.?\s*$/, '.')} Do not start the pump cold on this line; never block, cap or valve a case drain.`
+      : `${d.verdict.replace(/\.?\s*$/, '.')} Smallest margin ${fmt(toUser('pressure', d.worst_margin_pa), 3)} ${unit.pressure}.`;
   } catch (e) {
     err.textContent = `Cannot compute: ${e.message}`;
   }

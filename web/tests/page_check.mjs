@@ -22,7 +22,7 @@ const si = (id) => {
 };
 const r = calc.reading(pl, calc.DEFAULTS), k = calc.leakageAt(pl, calc.DEFAULTS), d = calc.drainLine(pl, calc.DEFAULTS);
 const checks = [
-  ['out-fraction', r.fraction], ['out-fraction-ref', r.fraction_at_reference], ['out-growth', r.growth],
+  ['out-drain-ref', r.drain_at_reference_m3_s], ['out-fraction-ref', r.fraction_at_reference], ['out-growth', r.growth],
   ['out-verdict', r.level], ['out-leakage', k.q_m3_s], ['out-line-verdict', d.worst_margin_pa],
 ];
 for (const [id, want] of checks) assert.equal(si(id), want, `#${id}`);
