@@ -18,10 +18,10 @@ const double kPi = 3.14159265358979323846;
 
 /// An invented pump of about 70 cm3/rev with every path present (plausible dimensions, no real
 /// product), oil VG 46 (46 mm2/s at 40 degC, 6.8 mm2/s at 100 degC: invented data-sheet values).
-/// Slipper and valve plate are those of tests/capi/c_caller.c's pump, whose hydrostatic balance is
-/// plausible: with a slipper pocket of 6 mm and a kidney of 39..45 mm the pads would lift off
-/// (pumploss_piston_pump_budget() then says PUMPLOSS_WIMPLAUSIBLE, and calibration refuses a
-/// pump it cannot trust).
+/// Slipper and valve plate are those of tests/capi/c_caller.c's pump, whose force balance lies in
+/// the design window of piston_pump.hpp (slipper 0.90..1.10, barrel 0.85..1.00). The earlier
+/// slipper (pocket 6 mm in an 11 mm land) and valve plate (lands 36..39 and 45..48 mm) left it,
+/// so every budget was PUMPLOSS_WIMPLAUSIBLE and the exact data below could not be made.
 pumploss_piston_pump* make_pump(double extra_conductance_m3, double extra_cda_m2) {
   pumploss_piston_pump* h = nullptr;
   if (pumploss_piston_pump_create(9, 20e-3, 15e-6, 20e-3, 34e-3, 20.0 * kPi / 180.0, &h) != PUMPLOSS_OK) return nullptr;

@@ -2,7 +2,8 @@
 // never write the handle, so eight threads may evaluate ONE shared handle at once.
 //
 // For every handle kind of the table generated from pumploss.h (so a new kind is covered
-// without editing this file): one handle is created, then configured on one thread by every
+// without editing this file): one handle is created (by the kind's builder in capi_harness.hpp
+// when its create function needs more than guessed inputs), then configured on one thread by every
 // function that changes it (add_ / set_ / calibrate, each with the first valid input the harness
 // finds), then eight threads call every read-only function of that kind on that same handle,
 // many times, with valid, special and random inputs, and compare each outcome bit for bit with
