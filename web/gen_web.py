@@ -232,6 +232,11 @@ def js_function(f):
                 else:
                     reads.append(f"{key}: c.i32(s + {8 * slot}, 0)")
                 slot += 1
+        elif k == "ZOUT" and not p.array:  # one count (size_t: 4 bytes on wasm32)
+            args.append(f"s + {8 * slot}")
+            L.append(f"    m.HEAPU32[(s + {8 * slot}) >> 2] = 0;")
+            reads.append(f"{p.name}: m.HEAPU32[(s + {8 * slot}) >> 2]")
+            slot += 1
         else:
             raise SystemExit(f"gen_web.py: {f.name}: unknown kind {k}")
     if slot * 8 > 4096 - 8:
@@ -306,6 +311,8 @@ def write_dts(funcs, handles, codes, out):
                     fields.append(f"{key}: {'Float64Array' if p.array else 'number'}")
                 elif p.kind == "IOUT":
                     fields.append(f"{key}: {'Int32Array' if p.array else 'number'}")
+                elif p.kind == "ZOUT":
+                    fields.append(f"{p.name}: number")
                 elif p.kind == "CBUF":
                     fields.append(f"{p.name}: string")
             ret = "{ " + "; ".join(fields + ["status: number"]) + " }"
