@@ -361,7 +361,7 @@ inline bool find_baseline(int fn, const Context& ctx, std::size_t n, Case& out, 
 // API, as an embedder would. Keyed by the handle type's name in pumploss.h; a kind with no
 // builder is made by the generic search.
 
-/// A handle health assessor of an invented 71 cm3/rev pump (data as tests/capi/c_caller.c's),
+/// A health assessor of an invented 71 cm3/rev pump (data as tests/capi/c_caller.c's),
 /// described for the version 2 model, with a baseline.
 inline pumploss_health* build_health_raw() {
   pumploss_health* h = nullptr;
