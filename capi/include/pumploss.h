@@ -2823,6 +2823,92 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_map(pumploss_test_s
                                                                  double speed_lo_rev_s, double speed_hi_rev_s,
                                                                  double dp_lo_pa, double dp_hi_pa, double t_k,
                                                                  size_t speeds, size_t pressures);
+/* Reading a setup back (const: an embedder shows or logs what was set; any number of threads). */
+/**
+ * The machine of a setup, as given to pumploss_test_stand_setup_create().
+ * @param setup the handle (only read)
+ * @param machine_kind receives PUMPLOSS_PUMP or PUMPLOSS_MOTOR (-1 on error)
+ * @param nominal_displacement_m3_rev receives the maker's displacement, m^3/rev
+ * @return PUMPLOSS_OK, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_machine(const pumploss_test_stand_setup *setup,
+                                                                     int *machine_kind,
+                                                                     double *nominal_displacement_m3_rev);
+/**
+ * The kinematic viscosity of the setup's oil at a temperature (its ASTM D341 line through the
+ * two points given at creation; pumploss_viscosity_d341() of those points).
+ * @param setup the handle (only read)
+ * @param t_k oil temperature, K (> 0)
+ * @param nu_m2_s receives the kinematic viscosity, m^2/s
+ * @return as pumploss_viscosity_d341(): PUMPLOSS_OK, PUMPLOSS_WREGIME (below 0.2 mm^2/s),
+ *         PUMPLOSS_EDOMAIN, PUMPLOSS_ENONFINITE, PUMPLOSS_EOVERFLOW, PUMPLOSS_EMISUSE.
+ * @sa pumploss::oil_kinematic_viscosity
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_viscosity(const pumploss_test_stand_setup *setup,
+                                                                   double t_k, double *nu_m2_s);
+/**
+ * The oil's density, expansion and bulk modulus (pumploss_test_stand_setup_set_oil(), or the
+ * typical mineral oil of pumploss_test_stand_setup_create()).
+ * @param setup the handle (only read)
+ * @param rho_kg_m3 receives the density at t_ref_k, kg/m^3
+ * @param t_ref_k receives its temperature, K
+ * @param alpha_per_k receives the volumetric expansion coefficient, 1/K
+ * @param bulk_modulus_pa receives the bulk modulus, Pa
+ * @return PUMPLOSS_OK, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_oil(const pumploss_test_stand_setup *setup,
+                                                                 double *rho_kg_m3, double *t_ref_k,
+                                                                 double *alpha_per_k, double *bulk_modulus_pa);
+/**
+ * The method (pumploss_test_stand_setup_set_method(), or the defaults).
+ * @param setup the handle (only read)
+ * @param viscosity_temperature receives PUMPLOSS_TS_VISCOSITY_* (-1 on error)
+ * @param displacement receives PUMPLOSS_TS_DISPLACEMENT_* (-1 on error)
+ * @param fit_model receives PUMPLOSS_MODEL_WILSON or PUMPLOSS_MODEL_SCHLOESSER (-1 on error)
+ * @return PUMPLOSS_OK, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_method(const pumploss_test_stand_setup *setup,
+                                                                    int *viscosity_temperature, int *displacement,
+                                                                    int *fit_model);
+/**
+ * Where the flow meter sits (pumploss_test_stand_setup_set_meter(), or at the port).
+ * @param setup the handle (only read)
+ * @param meter_position receives PUMPLOSS_TS_METER_AT_PORT or PUMPLOSS_TS_METER_IN_RETURN (-1 on error)
+ * @param meter_pressure_pa receives the gauge pressure at a return-line meter, Pa
+ * @return PUMPLOSS_OK, PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_meter(const pumploss_test_stand_setup *setup,
+                                                                   int *meter_position, double *meter_pressure_pa);
+/**
+ * The stated uncertainty of one instrument (pumploss_test_stand_setup_set_instrument(); 0 % and
+ * 0 as limits until set).
+ * @param setup the handle (only read)
+ * @param instrument PUMPLOSS_TS_SPEED, _PRESSURE, _FLOW or _TORQUE
+ * @param reading_percent receives the per cent of reading
+ * @param absolute_si receives the absolute part in the instrument's SI unit
+ * @param distribution receives PUMPLOSS_TS_LIMITS or PUMPLOSS_TS_STANDARD (-1 on error)
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for an unknown instrument; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_instrument(const pumploss_test_stand_setup *setup,
+                                                                        int instrument, double *reading_percent,
+                                                                        double *absolute_si, int *distribution);
+/**
+ * The grid of the overall-efficiency map (pumploss_test_stand_setup_set_map()).
+ * @param setup the handle (only read)
+ * @param speed_lo_rev_s receives the lowest speed, rev/s
+ * @param speed_hi_rev_s receives the highest speed, rev/s
+ * @param dp_lo_pa receives the lowest pressure difference, Pa
+ * @param dp_hi_pa receives the highest pressure difference, Pa
+ * @param t_k receives the map's oil temperature, K
+ * @param speeds receives the number of grid speeds (the default 29 also before a set_map)
+ * @param pressures receives the number of grid pressures (the default 27 also before a set_map)
+ * @return PUMPLOSS_OK; PUMPLOSS_EDATA before pumploss_test_stand_setup_set_map() (no range set:
+ *         the doubles NaN, the counts still given); PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_map(const pumploss_test_stand_setup *setup,
+                                                                 double *speed_lo_rev_s, double *speed_hi_rev_s,
+                                                                 double *dp_lo_pa, double *dp_hi_pa, double *t_k,
+                                                                 size_t *speeds, size_t *pressures);
 /**
  * Reduce a test: every result is computed here and kept in the handle.
  * A temperature that was not measured is passed as an array of NaN.
@@ -3261,8 +3347,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_creep(double displacement_m3_rev, 
  * @param p_min_abs_pa the maker's minimum absolute inlet pressure, Pa
  * @param inlet_abs_pa receives the absolute inlet pressure, Pa
  * @param margin_pa receives inlet pressure minus the minimum, Pa (>= 0 passes)
- * @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY when the line cannot deliver the flow (the pressure
- *         would not be positive); errors. @sa pumploss::inlet_check
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME when k_fittings > 0 and the pipe's Reynolds number is
+ *         below 1e4 (a constant K is a turbulent figure: a real fitting loses more in laminar
+ *         flow, so the inlet pressure may be lower than computed); PUMPLOSS_EVALIDITY when the
+ *         line cannot deliver the flow (the pressure would not be positive); errors.
+ *         @sa pumploss::inlet_check
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_inlet_pipe_check(double diameter_m, double length_m, double roughness_m,
                                                          double k_fittings, double height_m, double q_m3_s,
@@ -3288,7 +3377,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_inlet_pipe_check(double diameter_m, doub
  * @param t_lo_k lower end of the search, K
  * @param t_hi_k upper end of the search, K
  * @param t_min_k receives the temperature, K
- * @return PUMPLOSS_OK; PUMPLOSS_EVALIDITY when it does not pass even at t_hi_k; errors.
+ * @return PUMPLOSS_OK; PUMPLOSS_WREGIME as pumploss_inlet_pipe_check() at the temperature found
+ *         (with k_fittings > 0 the usual case for oil: the true start temperature may be somewhat
+ *         higher); PUMPLOSS_EVALIDITY when it does not pass even at t_hi_k; errors.
  *         @sa pumploss::inlet_min_temperature
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_inlet_pipe_min_temperature(double diameter_m, double length_m,

@@ -348,14 +348,14 @@ void write_verdict(const pumploss::drain_summary<double>& s, char* out, size_t c
   };
   out[0] = '\0';
   if (s.pass && s.pass_peak) {
-    put("PASS at every temperature checked");
+    put("%s", "PASS at every temperature checked");
     return;
   }
-  put("FAIL: ");
+  put("%s", "FAIL: ");
   if (!s.pass) ranges("continuous", s.n_fail, s.fail);
-  if (!s.pass && !s.pass_peak) put("; ");
+  if (!s.pass && !s.pass_peak) put("%s", "; ");
   if (!s.pass_peak) ranges("peak", s.n_fail_peak, s.fail_peak);
-  if (s.ranges_truncated) put(" (and more)");
+  if (s.ranges_truncated) put("%s", " (and more)");
 }
 
 }  // namespace

@@ -163,6 +163,108 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_map(pumploss_test_s
   return PUMPLOSS_OK;
 }
 
+// Reading a setup back: const, no allocation; int outputs -1 on an error.
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_machine(const pumploss_test_stand_setup* setup,
+                                                                     int* machine_kind,
+                                                                     double* nominal_displacement_m3_rev) {
+  if (machine_kind != nullptr) *machine_kind = -1;
+  return call({nominal_displacement_m3_rev}, [&] {
+    if (setup == nullptr || machine_kind == nullptr) return status::misuse;
+    *machine_kind = static_cast<int>(setup->s.kind);
+    *nominal_displacement_m3_rev = setup->s.nominal_displacement_m3_rev;
+    return status::ok;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_viscosity(const pumploss_test_stand_setup* setup,
+                                                                   double t_k, double* nu_m2_s) {
+  return call({nu_m2_s}, [&] {
+    if (setup == nullptr) return status::misuse;
+    const auto r = pumploss::oil_kinematic_viscosity(setup->s.fluid, t_k);
+    *nu_m2_s = r.value;
+    return r.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_oil(const pumploss_test_stand_setup* setup,
+                                                                 double* rho_kg_m3, double* t_ref_k,
+                                                                 double* alpha_per_k, double* bulk_modulus_pa) {
+  return call({rho_kg_m3, t_ref_k, alpha_per_k, bulk_modulus_pa}, [&] {
+    if (setup == nullptr) return status::misuse;
+    const auto& f = setup->s.fluid;
+    *rho_kg_m3 = f.rho_ref_kg_m3;
+    *t_ref_k = f.t_ref_k;
+    *alpha_per_k = f.alpha_per_k;
+    *bulk_modulus_pa = f.bulk_modulus_pa;
+    return status::ok;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_method(const pumploss_test_stand_setup* setup,
+                                                                    int* viscosity_temperature, int* displacement,
+                                                                    int* fit_model) {
+  for (int* p : {viscosity_temperature, displacement, fit_model})
+    if (p != nullptr) *p = -1;
+  if (setup == nullptr || viscosity_temperature == nullptr || displacement == nullptr || fit_model == nullptr)
+    return PUMPLOSS_EMISUSE;
+  *viscosity_temperature = static_cast<int>(setup->s.viscosity_at);
+  *displacement = static_cast<int>(setup->s.displacement);
+  *fit_model = setup->s.fit_schloesser ? PUMPLOSS_MODEL_SCHLOESSER : PUMPLOSS_MODEL_WILSON;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_meter(const pumploss_test_stand_setup* setup,
+                                                                   int* meter_position, double* meter_pressure_pa) {
+  if (meter_position != nullptr) *meter_position = -1;
+  return call({meter_pressure_pa}, [&] {
+    if (setup == nullptr || meter_position == nullptr) return status::misuse;
+    *meter_position = setup->s.meter_at_port ? PUMPLOSS_TS_METER_AT_PORT : PUMPLOSS_TS_METER_IN_RETURN;
+    *meter_pressure_pa = setup->s.meter_pressure_pa;
+    return status::ok;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_instrument(const pumploss_test_stand_setup* setup,
+                                                                        int instrument, double* reading_percent,
+                                                                        double* absolute_si, int* distribution) {
+  if (distribution != nullptr) *distribution = -1;
+  const int code = call({reading_percent, absolute_si}, [&] {
+    if (setup == nullptr || distribution == nullptr) return status::misuse;
+    if (instrument < PUMPLOSS_TS_SPEED || instrument > PUMPLOSS_TS_TORQUE) return status::domain;
+    const auto& s = setup->s;
+    const pumploss::instrument_limits* ins[] = {&s.speed, &s.pressure, &s.flow, &s.torque};
+    const auto& i = *ins[instrument];
+    *reading_percent = i.reading_fraction * 100.0;
+    *absolute_si = i.absolute;
+    *distribution = i.rectangular ? PUMPLOSS_TS_LIMITS : PUMPLOSS_TS_STANDARD;
+    return status::ok;
+  });
+  if (pumploss::is_error(static_cast<status>(code)) && distribution != nullptr) *distribution = -1;
+  return code;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_map(const pumploss_test_stand_setup* setup,
+                                                                 double* speed_lo_rev_s, double* speed_hi_rev_s,
+                                                                 double* dp_lo_pa, double* dp_hi_pa, double* t_k,
+                                                                 size_t* speeds, size_t* pressures) {
+  if (speeds != nullptr) *speeds = 0;
+  if (pressures != nullptr) *pressures = 0;
+  return call({speed_lo_rev_s, speed_hi_rev_s, dp_lo_pa, dp_hi_pa, t_k}, [&] {
+    if (setup == nullptr || speeds == nullptr || pressures == nullptr) return status::misuse;
+    const auto& s = setup->s;
+    *speeds = s.map_speeds;
+    *pressures = s.map_pressures;
+    // set_map() refuses a range with hi <= lo, so hi > lo says it was set
+    if (!(s.map_speed_hi_rev_s > s.map_speed_lo_rev_s)) return status::insufficient_data;
+    *speed_lo_rev_s = s.map_speed_lo_rev_s;
+    *speed_hi_rev_s = s.map_speed_hi_rev_s;
+    *dp_lo_pa = s.map_dp_lo_pa;
+    *dp_hi_pa = s.map_dp_hi_pa;
+    *t_k = s.map_temperature_k;
+    return status::ok;
+  });
+}
+
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_create(const pumploss_test_stand_setup* setup, size_t count,
                                                           const double* speed_rev_s, const double* inlet_pressure_pa,
                                                           const double* outlet_pressure_pa, const double* flow_m3_s,

@@ -718,8 +718,12 @@ static void test_flowtest(void) {
   CHECK(pumploss_inlet_pipe_check(0.025, 1.5, 0.0, 0.0, 0.5, 30.0 / 60000, 313.15, 313.15, 32e-6, 373.15, 5.4e-6,
                                   870.0, 101325.0, 80000.0, &a, &b) == PUMPLOSS_OK);
   CHECK(a > 90000.0 && a < 101325.0 && b > 0.0);
+  /* with a fitting of K = 0.5: the flow is laminar (Re about 100 at the answer), where a constant K
+     is a turbulent figure (the loss of a real fitting grows as K1/Re: W. B. Hooper, Chem. Eng.
+     24 Aug 1981, 96-100; fittings.hpp's constant_k_min_reynolds), so the answer is a report, not OK: the true start temperature may be
+     somewhat higher. The value is still the root of the stated model. */
   CHECK(pumploss_inlet_pipe_min_temperature(0.025, 1.5, 0.0, 0.5, 0.5, 30.0 / 60000, 313.15, 32e-6, 373.15, 5.4e-6,
-                                            870.0, 101325.0, 80000.0, 233.15, 373.15, &c) == PUMPLOSS_OK);
+                                            870.0, 101325.0, 80000.0, 233.15, 373.15, &c) == PUMPLOSS_WREGIME);
   CHECK(c > 233.15 && c < 313.15);
   CHECK(pumploss_shaft_seal_check(1.5e5, 7e5, 2e5, 6e5, &a, &b) == PUMPLOSS_OK && a == 0.5e5 && b == -1e5);
 }

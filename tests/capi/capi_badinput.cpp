@@ -26,7 +26,7 @@ int main(int argc, char** argv) {
     const Fn& f = kFunctions[fn];
     ++classes[f.cls];
     Case base;
-    const std::size_t n = has_size(f) ? 5 : 0;
+    const std::size_t n = count_for(f);
     if (!find_baseline(fn, ctx, n, base)) {
       notes.push_back(std::string(f.name) + ": no valid input found; only error paths exercised");
       base = candidate(fn, 0, n);

@@ -352,15 +352,149 @@ inline bool find_baseline(int fn, const Context& ctx, std::size_t n, Case& out, 
   return have_report;
 }
 
+// ---- Builders: valid handles of the kinds that guessed inputs cannot make ----
+//
+// A create function that needs a configured handle of another kind (the health monitor needs a
+// described health handle) or arrays that agree with each other (a test stand needs readings of
+// one pump) cannot be satisfied by the search around the generator's guesses; nor does an
+// unconfigured handle show what its evaluations do. A builder makes such a handle through the C
+// API, as an embedder would. Keyed by the handle type's name in pumploss.h; a kind with no
+// builder is made by the generic search.
+
+/// A health assessor of an invented 71 cm3/rev pump (data as tests/capi/c_caller.c's),
+/// described for the version 2 model, with a baseline.
+inline pumploss_health* build_health_raw() {
+  pumploss_health* h = nullptr;
+  if (pumploss_health_create(71e-6, 250e5, 323.15, 313.15, 46e-6, 373.15, 6.8e-6, 870.0, 1900.0, &h) != PUMPLOSS_OK)
+    return nullptr;
+  if (pumploss_health_set_description(h, 0.3e-3 / 60.0, 0.0, 25.0, 25.0) != PUMPLOSS_OK ||
+      pumploss_health_set_baseline(h, 4.0e-3 / 60.0) != PUMPLOSS_OK) {
+    pumploss_health_destroy(h);
+    return nullptr;
+  }
+  return h;
+}
+inline void* build_health() { return build_health_raw(); }
+
+/// A monitor of that pump that has learned its baseline and noise from 12 readings of a sound
+/// pump (4 L/min at the reference state, +/- 0.1 %), so its state is readable.
+inline void* build_health_monitor() {
+  pumploss_health* h = build_health_raw();
+  if (h == nullptr) return nullptr;
+  pumploss_health_monitor* m = nullptr;
+  const int st = pumploss_health_monitor_create(h, 8, 2, 0.05, &m);
+  pumploss_health_destroy(h);  // the monitor keeps a copy
+  if (st != PUMPLOSS_OK) return nullptr;
+  const double nv = std::numeric_limits<double>::quiet_NaN();
+  for (int i = 0; i < 12; ++i) {
+    int level = 0, raw = 0, events = 0;
+    double qn = 0.0;
+    const double q = 4.0e-3 / 60.0 * (1.0 + 0.001 * (i % 3 - 1));
+    if (pumploss_health_monitor_feed(m, static_cast<double>(i), q, 250e5, 0.0, 323.15, 25.0, nv, nv,
+                                     PUMPLOSS_STATE_ON_STROKE, &level, &raw, &events, &qn) != PUMPLOSS_OK) {
+      pumploss_health_monitor_destroy(m);
+      return nullptr;
+    }
+  }
+  return m;
+}
+
+/// Readings and map grid of the test-stand builder: 3 speeds x 3 pressures = 9 readings, and a
+/// map of 9 x 9 (the harness calls an evaluation with every count equal to n).
+constexpr std::size_t kTestStandReadings = 9;
+
+/// A configured test-stand setup of the pump below: oil VG 46, instruments, a 9 x 9 map grid.
+inline pumploss_test_stand_setup* build_test_stand_setup_raw() {
+  pumploss_test_stand_setup* s = nullptr;
+  if (pumploss_test_stand_setup_create(PUMPLOSS_PUMP, 71e-6, 313.15, 46e-6, 373.15, 6.9e-6, &s) != PUMPLOSS_OK)
+    return nullptr;
+  const bool ok = pumploss_test_stand_setup_set_oil(s, 872.0, 288.15, 7e-4, 1.6e9) == PUMPLOSS_OK &&
+                  pumploss_test_stand_setup_set_instrument(s, PUMPLOSS_TS_FLOW, 0.3, 0.0, PUMPLOSS_TS_LIMITS) == PUMPLOSS_OK &&
+                  pumploss_test_stand_setup_set_instrument(s, PUMPLOSS_TS_TORQUE, 0.2, 0.1, PUMPLOSS_TS_LIMITS) == PUMPLOSS_OK &&
+                  pumploss_test_stand_setup_set_map(s, 500.0 / 60, 1500.0 / 60, 50e5, 250e5, 323.15, kTestStandReadings,
+                                                    kTestStandReadings) == PUMPLOSS_OK;
+  if (!ok) {
+    pumploss_test_stand_setup_destroy(s);
+    return nullptr;
+  }
+  return s;
+}
+inline void* build_test_stand_setup() { return build_test_stand_setup_raw(); }
+
+/// A reduced test of a known pump (invented, self-calculated): 71 cm3/rev, slip 2e-12 m^3/(s Pa),
+/// torque 1.05 x ideal + 2 N m, drain 1.5e-12 m^3/(s Pa), at 500, 1000 and 1500 rpm and 50, 150
+/// and 250 bar, inlet 45 degC, drain 50 degC.
+inline void* build_test_stand() {
+  pumploss_test_stand_setup* s = build_test_stand_setup_raw();
+  if (s == nullptr) return nullptr;
+  constexpr std::size_t n = kTestStandReadings;
+  double speed[n], p1[n], p2[n], q[n], torque[n], drain[n], t_in[n], t_drain[n], none[n];
+  for (std::size_t k = 0; k < n; ++k) {
+    speed[k] = (500.0 + 500.0 * static_cast<double>(k / 3)) / 60.0;
+    p1[k] = 0.3e5;
+    p2[k] = p1[k] + 50e5 + 100e5 * static_cast<double>(k % 3);
+    const double dp = p2[k] - p1[k];
+    q[k] = 71e-6 * speed[k] - 2e-12 * dp;
+    torque[k] = 1.05 * 71e-6 * dp / (2.0 * 3.14159265358979324) + 2.0;
+    drain[k] = 1.5e-12 * dp;
+    t_in[k] = 318.15;
+    t_drain[k] = 323.15;
+    none[k] = std::numeric_limits<double>::quiet_NaN();
+  }
+  pumploss_test_stand* t = nullptr;
+  char msg[256];
+  const int st = pumploss_test_stand_create(s, n, speed, p1, p2, q, torque, drain, t_in, none, t_drain, none, msg,
+                                            sizeof msg, &t);
+  pumploss_test_stand_setup_destroy(s);  // the reduction keeps what it needs
+  if (st > 0 && st < 100) return nullptr;
+  return t;
+}
+
+struct Builder {
+  const char* type;   ///< the handle type's name in pumploss.h
+  void* (*make)();    ///< a valid handle, NULL when the C API refused (then the test fails: no handle)
+  std::size_t n;      ///< the count its evaluations need in every size_t (0: the harness default)
+};
+inline const Builder kBuilders[] = {
+    {"pumploss_health", &build_health, 0},
+    {"pumploss_health_monitor", &build_health_monitor, PUMPLOSS_HEALTH_MONITOR_STATE_COUNT},
+    {"pumploss_test_stand_setup", &build_test_stand_setup, 0},
+    {"pumploss_test_stand", &build_test_stand, kTestStandReadings},
+};
+/// The builder of handle type t, or NULL.
+inline const Builder* builder_of(int t) {
+  for (const Builder& b : kBuilders)
+    if (std::strcmp(b.type, kHandleTypes[t]) == 0) return &b;
+  return nullptr;
+}
+/// The count n the tests give a function's size_t parameters: 0 without one; the builder's
+/// count for an evaluation of a kind that needs its own (a test stand's readings, a monitor's
+/// state length); else 5.
+inline std::size_t count_for(const Fn& f) {
+  if (!has_size(f)) return 0;
+  for (int p = 0; p < f.nparams; ++p) {
+    if (f.params[p].kind != K_HIN) continue;
+    const Builder* b = builder_of(f.params[p].handle);
+    if (b != nullptr && b->n > 0) return b->n;
+  }
+  return 5;
+}
+
 /// How a live handle was made: the create function, its input and the output position, so
-/// that fresh handles can be made again without searching for valid inputs.
+/// that fresh handles can be made again without searching for valid inputs; or the builder.
 struct Recipe {
   int type, fn, out_param;
   Case c;
+  void* (*make)() = nullptr;
 };
 
 /// Run a recipe in ctx; true when it gave a handle (then ctx.live[type] holds it).
 inline bool cook(const Recipe& r, Context& ctx, Exec& e) {
+  if (r.make != nullptr) {
+    void* h = r.make();
+    if (h != nullptr) ctx.live[static_cast<std::size_t>(r.type)] = h;
+    return h != nullptr;
+  }
   e.prepare(r.c, ctx);
   e.invoke(r.c);
   void*& h = e.hbuf[static_cast<std::size_t>(r.out_param)];
@@ -373,10 +507,20 @@ inline bool cook(const Recipe& r, Context& ctx, Exec& e) {
   return made;
 }
 
-/// Create one live handle per handle type from the first create function with a valid input;
+/// Create one live handle per handle type: by its builder, else from the first create function
+/// with a valid input;
 /// the recipes that worked go to `recipes` when given (make_from_recipes() repeats them).
 inline void make_live_handles(Context& ctx, std::vector<std::string>* notes, std::vector<Recipe>* recipes = nullptr) {
   for (int t = 0; t < kHandleTypeCount; ++t) {
+    if (const Builder* b = builder_of(t)) {
+      Recipe r{t, -1, -1, Case{}, b->make};
+      Exec e;
+      if (cook(r, ctx, e)) {
+        if (recipes) recipes->push_back(r);
+      } else if (notes) {
+        notes->push_back(std::string("the builder of ") + kHandleTypes[t] + " failed: the C API refused its data");
+      }
+    }
     for (int fn = 0; fn < kFunctionCount && ctx.live[static_cast<std::size_t>(t)] == nullptr; ++fn) {
       const Fn& f = kFunctions[fn];
       if (f.cls != C_CREATE) continue;

@@ -45,7 +45,7 @@ int main() {
     if (mutates_handle(f)) continue;
     ++functions;
     Case base;
-    const std::size_t n = has_size(f) ? 5 : 0;
+    const std::size_t n = count_for(f);
     if (!find_baseline(fn, ctx, n, base)) base = candidate(fn, 0, n);
     int shown = 0;
     for (const Case& c : make_cases(fn, base, ctx, 50)) {

@@ -2,7 +2,8 @@
 // never write the handle, so eight threads may evaluate ONE shared handle at once.
 //
 // For every handle kind of the table generated from pumploss.h (so a new kind is covered
-// without editing this file): one handle is created, then configured on one thread by every
+// without editing this file): one handle is created (by the kind's builder in capi_harness.hpp
+// when its create function needs more than guessed inputs), then configured on one thread by every
 // function that changes it (add_ / set_ / calibrate, each with the first valid input the harness
 // finds), then eight threads call every read-only function of that kind on that same handle,
 // many times, with valid, special and random inputs, and compare each outcome bit for bit with
@@ -47,7 +48,7 @@ int main(int argc, char** argv) {
     const int t = handle_kind(f);
     if (f.cls != C_METHOD || !mutates_handle(f) || t < 0 || ctx.live[static_cast<std::size_t>(t)] == nullptr) continue;
     Case base;
-    if (find_baseline(fn, ctx, has_size(f) ? 5 : 0, base)) ++changers[static_cast<std::size_t>(t)];
+    if (find_baseline(fn, ctx, count_for(f), base)) ++changers[static_cast<std::size_t>(t)];
   }
 
   // 2. The evaluations of every kind: read-only methods, cases around a valid input.
@@ -59,7 +60,7 @@ int main(int argc, char** argv) {
     if (f.cls != C_METHOD || mutates_handle(f) || t < 0 || ctx.live[static_cast<std::size_t>(t)] == nullptr) continue;
     ++readers[static_cast<std::size_t>(t)];
     Case base;
-    const std::size_t n = has_size(f) ? 5 : 0;
+    const std::size_t n = count_for(f);
     if (!find_baseline(fn, ctx, n, base)) base = candidate(fn, 0, n);
     for (Case& c : make_cases(fn, base, ctx, 30)) cases.push_back(std::move(c));
   }

@@ -27,7 +27,7 @@ int main(int argc, char** argv) {
     // that change a handle are called from one thread only, in the other tests.
     if (mutates_handle(kFunctions[fn])) continue;
     Case base;
-    const std::size_t n = has_size(kFunctions[fn]) ? 5 : 0;
+    const std::size_t n = count_for(kFunctions[fn]);
     if (!find_baseline(fn, ctx, n, base)) base = candidate(fn, 0, n);
     for (Case& c : make_cases(fn, base, ctx, 40)) cases.push_back(std::move(c));
   }
@@ -39,7 +39,7 @@ int main(int argc, char** argv) {
     Exec maker;
     make_from_recipes(recipes, fresh, maker);
     Case base;
-    const std::size_t n = has_size(kFunctions[fn]) ? 5 : 0;
+    const std::size_t n = count_for(kFunctions[fn]);
     if (!find_baseline(fn, fresh, n, base)) base = candidate(fn, 0, n);
     for (Case& c : make_cases(fn, base, fresh, 6)) mcases.push_back(std::move(c));
   }
