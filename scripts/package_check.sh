@@ -35,9 +35,10 @@ need() {
 case "$kind" in
   deb)
     rm -f "$build"/pumploss_*.deb
-    (cd "$build" && cpack -G DEB >/dev/null)
+    (cd "$build" && cpack -G DEB >/dev/null 2>&1) || (cd "$build" && cpack -G DEB)
     deb="$(ls "$build"/pumploss_*.deb)"
-    listing="$(dpkg-deb -c "$deb" | awk '{print $NF}')"
+    full="$(dpkg-deb -c "$deb")"
+    listing="$(awk '{print $NF}' <<<"$full")"
     need "$listing" ".deb" \
       '^\./usr/lib/(.*/)?libpumploss\.so\.[0-9]+\.[0-9]+\.[0-9]+$' \
       '^\./usr/lib/(.*/)?libpumploss_cxx\.so\.[0-9]+\.[0-9]+\.[0-9]+$' \
@@ -49,7 +50,7 @@ case "$kind" in
       '^\./usr/lib/(.*/)?cmake/pumploss/pumploss-targets\.cmake$' \
       '^\./usr/share/pumploss/spreadsheet/pumploss\.bas$'
     # symlinks show as "name -> target" in dpkg-deb -c: the unversioned development links
-    dpkg-deb -c "$deb" | grep -Eq '/libpumploss\.so -> ' || { echo "package_check: no libpumploss.so link"; exit 1; }
+    grep -Eq '/libpumploss\.so -> ' <<<"$full" || { echo "package_check: no libpumploss.so link"; exit 1; }
     echo "$(basename "$deb"): $(wc -l <<<"$listing") entries; control:"
     dpkg-deb -f "$deb" Package Version Architecture Depends | sed 's/^/  /'
     root="$build/deb-package-install"
@@ -73,7 +74,7 @@ case "$kind" in
     ;;
   zip)
     rm -f "$build"/pumploss-*.zip
-    (cd "$build" && cpack -G ZIP >/dev/null)
+    (cd "$build" && cpack -G ZIP >/dev/null 2>&1) || (cd "$build" && cpack -G ZIP)
     zip="$(ls "$build"/pumploss-*.zip)"
     /usr/bin/python3 - "$zip" <<'EOF'
 import re, sys, zipfile
