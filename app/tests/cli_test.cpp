@@ -976,8 +976,9 @@ void expect_same_table(const pumploss::table_data& a, const pumploss::table_data
     for (std::size_t i = 0; i < a.values[k].size(); ++i) {
       EXPECT_EQ(std::memcmp(&a.values[k][i], &b.values[k][i], sizeof(double)), 0)
           << what << " " << a.spec[k].name << " row " << i;
-      if (a.spec[k].kind == column_kind::text || a.spec[k].kind == column_kind::date)
+      if (a.spec[k].kind == column_kind::text || a.spec[k].kind == column_kind::date) {
         EXPECT_EQ(a.texts[k][i], b.texts[k][i]) << what << " " << a.spec[k].name << " row " << i;
+      }
     }
   }
 }
@@ -1023,10 +1024,19 @@ TEST(CliExports, DemoFilesInEveryExportedFormGiveTheSameNumbers) {
       ASSERT_EQ(r.code, 0) << what << ": " << r.err;
       const auto got = csv_outputs(out);
       EXPECT_EQ(got.size(), want.size()) << what;
-      for (const auto& [name, text] : want) EXPECT_TRUE(got.count(name) && got.at(name) == text) << what << " " << name;
+      for (const auto& [name, text] : want) {
+        ASSERT_TRUE(got.count(name)) << what << " " << name;
+        std::string g = got.at(name);  // the refused readings name their file: the plain one's name
+        replace_all(g, file, kDemo + "/" + in.file);
+        EXPECT_EQ(g, text) << what << " " << name;
+      }
       // the note says what was detected
-      if (f.european) EXPECT_NE(r.out.find("read as separated by ';' with ',' as the decimal mark"), std::string::npos) << r.out;
-      if (f.cp1252) EXPECT_NE(r.out.find("Windows-1252"), std::string::npos) << r.out;
+      if (f.european) {
+        EXPECT_NE(r.out.find("read as separated by ';' with ',' as the decimal mark"), std::string::npos) << r.out;
+      }
+      if (f.cp1252) {
+        EXPECT_NE(r.out.find("Windows-1252"), std::string::npos) << r.out;
+      }
       // the European form with the format given, and refused when the format given contradicts it
       if (f.european && !f.bom_crlf) {
         const auto g = run({in.command, file, in.setup_option, kDemo + "/" + in.setup, "--csv-format", "semicolon-comma"}, tmp);
