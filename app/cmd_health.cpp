@@ -27,6 +27,7 @@ using pumploss::status;
 struct health_options {
   std::string readings, pump;
   output_options out;
+  pumploss::csv_dialect csv_format = pumploss::csv_dialect::detect;
 };
 
 // The column of the readings file that a refusal points at.
@@ -63,7 +64,7 @@ int run_health(const health_options& o) {
   const display_units du = make_units(o.out);
   const auto p = read_pump(o.pump);
   auto spec = field_columns();
-  const auto d = read_csv(o.readings, spec);
+  const auto d = read_csv(o.readings, spec, o.csv_format);
   // hard limits of the file only; what oil and pump can be at is the library's plausibility check
   d.check_range("case pressure", -1e5, 1e7, "is not a case pressure between -1 and 100 bar");
   const auto& dates = d.si("date");
@@ -329,6 +330,7 @@ int run_health(const health_options& o) {
   const std::string tunit = hours ? "operating hours" : "days";
 
   report r;
+  add_input_notes(r, d);
   r.title = "Pump health from field readings: " + p.name;
   r.facts.emplace_back("Readings", fmt::format("{} ({} readings, {} to {}; {} scored, {} refused; {} in the "
                                                "baseline's state ({}) for steps and trend)",
@@ -449,6 +451,7 @@ void add_health(CLI::App& app, int& rc) {
       ->required()
       ->check(CLI::ExistingFile);
   add_output_options(*sub, o->out);
+  add_csv_format_option(*sub, o->csv_format);
   sub->callback([o, &rc] { rc = run_health(*o); });
 }
 

@@ -23,6 +23,7 @@ using pumploss::status;
 struct stand_options {
   std::string data, setup;
   output_options out;
+  pumploss::csv_dialect csv_format = pumploss::csv_dialect::detect;
 };
 
 // The readings of the CSV, in SI, as the library takes them.
@@ -57,7 +58,7 @@ int run_test_stand(const stand_options& o) {
   const auto setup = read_stand_setup(o.setup);
   const auto& s = setup.run;
   const bool pump = s.kind == pumploss::machine::pump;
-  const auto d = read_csv(o.data, stand_columns());
+  const auto d = read_csv(o.data, stand_columns(), o.csv_format);
 
   const auto res = pumploss::reduce_test_stand(s, readings_of(d, pump));
   if (pumploss::is_error(res.st)) refuse(res.messages.front(), d, o);
@@ -74,6 +75,7 @@ int run_test_stand(const stand_options& o) {
   const std::string vt = pumploss::viscosity_temperature_name(s.viscosity_at);
 
   report r;
+  add_input_notes(r, d);
   r.title = std::string("Test-stand analysis: ") + setup.machine_name;
   r.facts.emplace_back("Data", o.data + fmt::format(" ({} operating points; {} speed levels x {} pressure levels)", n,
                                                     res.speed_levels, res.pressure_levels));
@@ -258,6 +260,7 @@ void add_test_stand(CLI::App& app, int& rc) {
       ->required()
       ->check(CLI::ExistingFile);
   add_output_options(*sub, o->out);
+  add_csv_format_option(*sub, o->csv_format);
   sub->callback([o, &rc] { rc = run_test_stand(*o); });
 }
 

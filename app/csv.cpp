@@ -1,5 +1,8 @@
 #include "csv.hpp"
 
+#include <CLI/CLI.hpp>
+
+#include <map>
 #include <stdexcept>
 
 namespace plcli {
@@ -22,12 +25,29 @@ void csv_data::check_range(const std::string& name, double lo, double hi, const 
     if (!(values[k][i] >= lo && values[k][i] <= hi)) throw error(i, name, "'" + texts[k][i] + "' " + what);
 }
 
-csv_data read_csv(const std::string& path, const std::vector<column_spec>& spec) {
+csv_data read_csv(const std::string& path, const std::vector<column_spec>& spec, pumploss::csv_dialect dialect) {
   csv_data d;
-  static_cast<pumploss::table_data&>(d) = pumploss::read_table_file(path, spec);
+  static_cast<pumploss::table_data&>(d) = pumploss::read_table_file(path, spec, dialect);
   const pumploss::table_error& e = d.pumploss::table_data::error;
   if (pumploss::is_error(e.st)) throw input_error(path, e.line, e.column, e.message);
   return d;
+}
+
+void add_csv_format_option(CLI::App& sub, pumploss::csv_dialect& dialect) {
+  using pumploss::csv_dialect;
+  std::map<std::string, csv_dialect> names;
+  for (const auto d : {csv_dialect::detect, csv_dialect::comma, csv_dialect::semicolon_comma, csv_dialect::semicolon_point})
+    names[pumploss::csv_dialect_name(d)] = d;
+  sub.add_option("--csv-format", dialect,
+                 "How the CSV is written: detect (default: ',' or ';' from the header row, the decimal mark from the "
+                 "numbers), comma (',' and decimal point), semicolon-comma (';' and decimal comma, a European "
+                 "spreadsheet export), semicolon-point")
+      ->transform(CLI::CheckedTransformer(names, CLI::ignore_case))
+      ->option_text("FORMAT");
+}
+
+void add_input_notes(report& r, const csv_data& d) {
+  for (const auto& n : d.notes) r.notes.push_back(d.source + ": " + n + " (--csv-format sets the format)");
 }
 
 }  // namespace plcli

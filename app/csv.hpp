@@ -8,6 +8,11 @@
 
 #include "common.hpp"
 #include "pumploss/table_reader.hpp"
+#include "report.hpp"
+
+namespace CLI {
+class App;
+}
 
 namespace plcli {
 
@@ -26,8 +31,16 @@ struct csv_data : pumploss::table_data {
   void check_range(const std::string& name, double lo, double hi, const std::string& what) const;
 };
 
-/// Read a comma-separated file. Throws input_error.
-csv_data read_csv(const std::string& path, const std::vector<column_spec>& spec);
+/// Read a file of readings separated by ',' or ';' (dialect detected unless given). Throws input_error.
+csv_data read_csv(const std::string& path, const std::vector<column_spec>& spec,
+                  pumploss::csv_dialect dialect = pumploss::csv_dialect::detect);
+
+/// Add --csv-format (detect, comma, semicolon-comma, semicolon-point) to a subcommand that reads a CSV.
+void add_csv_format_option(CLI::App& sub, pumploss::csv_dialect& dialect);
+
+/// Put what the reader detected or assumed about the file (a ';' export, a Windows-1252 degree
+/// sign) into the report's notes, naming the file.
+void add_input_notes(report& r, const csv_data& d);
 
 }  // namespace plcli
 

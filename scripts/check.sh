@@ -6,7 +6,7 @@
 #   2. the shared build of everything (libpumploss_cxx.so + libpumploss.so, tests, benchmarks,
 #      examples) and all its tests: exported symbols, the Python ctypes tests, the installed
 #      package's C and C++ consumers (find_package, pkg-config; the static build's ctest ran
-#      them against an installed static package);
+#      them against an installed static package); the .deb (scripts/package_check.sh deb);
 #   3. the whole test suite under AddressSanitizer + UndefinedBehaviorSanitizer and the C API
 #      thread test under ThreadSanitizer (clang);
 #   3a. the libFuzzer targets (tests/fuzz), PUMPLOSS_FUZZ_SECONDS (default 60) each;
@@ -15,6 +15,7 @@
 #   4. the Windows x64 DLL (mingw-w64): export table against the generated pumploss.def and
 #      exports.txt, and the C caller run against it under wine when wine is installed;
 #      pumploss_cxx.dll (export table: pumploss:: functions only) with a C++ consumer under wine;
+#      the Windows zip (scripts/package_check.sh zip);
 #   5. the docs (Doxygen, warnings as errors) and the citation check (scripts/check_citations.py);
 #   6. the benchmarks of the performance page (scripts/bench.sh): their ratios are printed for
 #      the record; they fail the run only with PUMPLOSS_BENCH_STRICT=1 (timings on a shared
@@ -66,6 +67,8 @@ for lib in libpumploss libpumploss_cxx; do
   echo "SONAME $soname; file $(basename "$(ls "$out/shared/$lib".so.*.*.*)")"
 done
 ctest --test-dir "$out/shared" --output-on-failure -j "$jobs"
+# the .deb (CPack): contents, unpacked into a scratch root, its program and find_package consumers
+bash scripts/package_check.sh deb "$out/shared"
 
 step "Python package: pip install --no-build-isolation into a scratch environment, its tests there"
 venv="$here/$out/python-venv"
@@ -129,6 +132,8 @@ cmake --build "$out/win64" -j "$jobs"
   --exports=tests/capi/exports.txt --dll="$out/win64/pumploss.dll" --objdump=x86_64-w64-mingw32-objdump
 x86_64-w64-mingw32-gcc -std=c89 -pedantic-errors -Wall -Wextra -Werror -DPUMPLOSS_SHARED \
   -Icapi/include tests/capi/c_caller.c "$out/win64/libpumploss.dll.a" -static -o "$out/win64/c_caller.exe"
+# the Windows zip (CPack): DLL, import library, .def, header, VBA module, docs
+bash scripts/package_check.sh zip "$out/win64"
 # The C++ core as a DLL of its own (PUMPLOSS_SELF_CONTAINED off): its export table holds exactly
 # the PUMPLOSS_CXX_API functions of namespace pumploss, and a C++ program links them (dllimport).
 cmake --preset ci-windows-x64 -B "$out/win64-cxx" -DPUMPLOSS_SELF_CONTAINED=OFF >/dev/null

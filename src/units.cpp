@@ -108,6 +108,109 @@ const unit_info* find_unit(std::string_view symbol) noexcept {
   return nullptr;
 }
 
+namespace {
+
+// Spellings of exported files -> symbols (compared after the normalisation below).
+struct alias {
+  const char* written;
+  const char* symbol;
+};
+// compared exactly (case matters: 'nm' would be a nanometre)
+constexpr alias kExactAliases[] = {{"degreeC", "degC"}, {"degreeF", "degF"}, {"deg C", "degC"}, {"deg F", "degF"},
+                                   {"Nm", "N.m"},       {"mPas", "mPa.s"},   {"Pas", "Pa.s"}};
+// compared without case
+constexpr alias kCaselessAliases[] = {{"l/min", "L/min"}, {"lpm", "L/min"}, {"l/s", "L/s"},   {"l", "L"},
+                                      {"rpm", "rpm"},     {"r/min", "rpm"}, {"u/min", "rpm"}, {"1/min", "rpm"},
+                                      {"gpm", "gpm"}};
+
+bool same_caseless(std::string_view a, std::string_view b) noexcept {
+  if (a.size() != b.size()) return false;
+  for (std::size_t i = 0; i < a.size(); ++i) {
+    auto lo = [](char c) { return (c >= 'A' && c <= 'Z') ? static_cast<char>(c - 'A' + 'a') : c; };
+    if (lo(a[i]) != lo(b[i])) return false;
+  }
+  return true;
+}
+
+// Whether the text is well-formed UTF-8 (no overlong forms checked: only the mapping below matters).
+bool valid_utf8(std::string_view s) noexcept {
+  for (std::size_t i = 0; i < s.size();) {
+    const auto c = static_cast<unsigned char>(s[i]);
+    std::size_t n = 0;
+    if (c < 0x80) n = 0;
+    else if ((c >> 5) == 0x6) n = 1;
+    else if ((c >> 4) == 0xE) n = 2;
+    else if ((c >> 3) == 0x1E) n = 3;
+    else return false;
+    for (std::size_t k = 1; k <= n; ++k)
+      if (i + k >= s.size() || (static_cast<unsigned char>(s[i + k]) >> 6) != 0x2) return false;
+    i += n + 1;
+  }
+  return true;
+}
+
+}  // namespace
+
+const unit_info* find_unit_written(std::string_view written, bool* windows_1252) noexcept {
+  if (windows_1252 != nullptr) *windows_1252 = false;
+  while (!written.empty() && (written.front() == ' ' || written.front() == '\t')) written.remove_prefix(1);
+  while (!written.empty() && (written.back() == ' ' || written.back() == '\t')) written.remove_suffix(1);
+  if (const unit_info* u = find_unit(written)) return u;
+  if (written.size() > 32) return nullptr;
+  // normalise into a small buffer: UTF-8 signs, or Windows-1252 single bytes when not UTF-8
+  static constexpr struct {
+    const char* from;
+    const char* to;
+  } kUtf8[] = {{"\xC2\xB0", "deg"}, {"\xE2\x84\x83", "degC"}, {"\xE2\x84\x89", "degF"}, {"\xC2\xB3", "3"},
+               {"\xC2\xB2", "2"},   {"\xC2\xB5", "u"},        {"\xCE\xBC", "u"},        {"\xC2\xB7", "."}};
+  static constexpr struct {
+    char from;
+    const char* to;
+  } kCp1252[] = {{'\xB0', "deg"}, {'\xB2', "2"}, {'\xB3', "3"}, {'\xB5', "u"}, {'\xB7', "."}};
+  char buf[128];
+  std::size_t n = 0;
+  const bool utf8 = valid_utf8(written);
+  bool used_1252 = false;
+  for (std::size_t i = 0; i < written.size();) {
+    const char* to = nullptr;
+    std::size_t step = 1;
+    if (static_cast<unsigned char>(written[i]) >= 0x80) {
+      if (utf8) {
+        for (const auto& m : kUtf8) {
+          const std::string_view f(m.from);
+          if (written.substr(i, f.size()) == f) {
+            to = m.to;
+            step = f.size();
+            break;
+          }
+        }
+      } else {
+        for (const auto& m : kCp1252)
+          if (written[i] == m.from) {
+            to = m.to;
+            used_1252 = true;
+            break;
+          }
+      }
+      if (to == nullptr) return nullptr;  // any other non-ASCII character: not a unit we know
+    }
+    if (to != nullptr) {
+      for (const char* c = to; *c != '\0'; ++c) buf[n++] = *c;
+    } else {
+      buf[n++] = written[i];
+    }
+    i += step;
+  }
+  const std::string_view norm(buf, n);
+  const unit_info* u = find_unit(norm);
+  for (const auto& a : kExactAliases)
+    if (u == nullptr && norm == a.written) u = find_unit(a.symbol);
+  for (const auto& a : kCaselessAliases)
+    if (u == nullptr && same_caseless(norm, a.written)) u = find_unit(a.symbol);
+  if (u != nullptr && windows_1252 != nullptr) *windows_1252 = used_1252;
+  return u;
+}
+
 int unit_count() noexcept { return static_cast<int>(std::size(kUnits)); }
 
 const unit_info* unit_at(int i) noexcept {

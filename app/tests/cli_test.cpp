@@ -7,8 +7,10 @@
 #include <cmath>
 #include <cstdio>
 #include <cstdlib>
+#include <cstring>
 #include <filesystem>
 #include <fstream>
+#include <map>
 #include <random>
 #include <sstream>
 #include <string>
@@ -705,8 +707,8 @@ TEST(CliMalformed, BadNumber) {
 TEST(CliMalformed, UnknownUnit) {
   std::string s = demo_stand();
   std::string head = line_at(s, 4);
-  head.replace(head.find("[N.m]"), 5, "[Nm]");
-  expect_rejected(replace_line(s, 4, head), "4:", "unknown unit 'Nm'");
+  head.replace(head.find("[N.m]"), 5, "[Nmm]");
+  expect_rejected(replace_line(s, 4, head), "4:", "unknown unit 'Nmm'");
 }
 
 TEST(CliMalformed, UnitOfTheWrongQuantity) {
@@ -725,8 +727,8 @@ TEST(CliMalformed, OnlyAHeader) {
 TEST(CliMalformed, WrongDelimiter) {
   std::string s = demo_stand();
   for (auto& c : s)
-    if (c == ',') c = ';';
-  expect_rejected(s, "4:", "separated by ';'");
+    if (c == ',') c = '\t';
+  expect_rejected(s, "4:", "separated by 'TAB'");
 }
 
 TEST(CliMalformed, DecimalComma) {
@@ -896,4 +898,171 @@ TEST(CliReport, UnitsInHeadingsFullPrecisionCsvAndCautionsAtTheFoot) {
   // 20 bar in psi to the CSV's ten significant digits
   EXPECT_LT(rel(t.num(0, "outlet pressure [psi]"), pumploss::convert(20.0, "bar", "psi").value), 1e-9);
   EXPECT_NE(t.head.back().find("status"), std::string::npos);
+}
+
+// ------------------------------------------------------------------------------ files as people export them
+
+namespace {
+
+// The forms a spreadsheet or logger exports the demo files in.
+struct export_form {
+  const char* name;
+  bool european;    // ';' between fields, ',' as the decimal mark
+  bool bom_crlf;    // UTF-8 byte order mark, CRLF line ends
+  bool signs;       // degree sign, l/min, RPM in the header
+  bool cp1252;      // the degree sign as the Windows-1252 byte (a file that is not UTF-8)
+  bool parentheses; // "name (unit)" instead of "name [unit]"
+};
+
+const export_form kForms[] = {
+    {"european", true, false, false, false, false},       {"bom-crlf", false, true, false, false, false},
+    {"degree-signs", false, false, true, false, false},    {"windows-1252", false, false, true, true, false},
+    {"parentheses", false, false, false, false, true},     {"all-at-once", true, true, true, false, true},
+};
+
+void replace_all(std::string& s, const std::string& from, const std::string& to) {
+  for (auto at = s.find(from); at != std::string::npos; at = s.find(from, at + to.size())) s.replace(at, from.size(), to);
+}
+
+// Rewrite a plain demo file (',' and '.', units in brackets) in an exported form.
+std::string exported(const std::string& plain, const export_form& f) {
+  std::stringstream in(plain);
+  std::string out, line;
+  bool header = true;
+  while (std::getline(in, line)) {
+    if (!line.empty() && line[0] != '#') {
+      if (header) {
+        if (f.signs) {
+          replace_all(line, "[degC]", f.cp1252 ? "[\xB0" "C]" : "[\xC2\xB0" "C]");
+          replace_all(line, "[L/min]", "[l/min]");
+          replace_all(line, "[rpm]", "[RPM]");
+        }
+        if (f.parentheses) {
+          replace_all(line, "[", "(");
+          replace_all(line, "]", ")");
+        }
+      }
+      if (f.european) {  // fields split at commas outside quotes; numbers get the decimal comma
+        std::vector<std::string> fields(1);
+        bool quoted = false;
+        for (const char c : line) {
+          if (c == '"') quoted = !quoted;
+          if (c == ',' && !quoted) fields.emplace_back();
+          else fields.back() += c;
+        }
+        line.clear();
+        for (std::size_t i = 0; i < fields.size(); ++i) {
+          std::string x = fields[i];
+          if (!header && pumploss::parse_number(x)) replace_all(x, ".", ",");
+          if (x.find(';') != std::string::npos && x.front() != '"') x = "\"" + x + "\"";
+          line += (i ? ";" : "") + x;
+        }
+      }
+      header = false;
+    }
+    out += line + (f.bom_crlf ? "\r\n" : "\n");
+  }
+  return (f.bom_crlf ? "\xEF\xBB\xBF" : "") + out;
+}
+
+// Same SI values, bit for bit, and the same texts of the non-numeric columns.
+void expect_same_table(const pumploss::table_data& a, const pumploss::table_data& b, const std::string& what) {
+  ASSERT_EQ(b.error.st, pumploss::status::ok) << what << ":" << b.error.line << ":" << b.error.column << ": "
+                                              << b.error.message;
+  ASSERT_EQ(a.rows(), b.rows()) << what;
+  ASSERT_GT(a.rows(), 10u);
+  for (std::size_t k = 0; k < a.spec.size(); ++k) {
+    ASSERT_EQ(a.present[k], b.present[k]) << what << " " << a.spec[k].name;
+    for (std::size_t i = 0; i < a.values[k].size(); ++i) {
+      EXPECT_EQ(std::memcmp(&a.values[k][i], &b.values[k][i], sizeof(double)), 0)
+          << what << " " << a.spec[k].name << " row " << i;
+      if (a.spec[k].kind == column_kind::text || a.spec[k].kind == column_kind::date) {
+        EXPECT_EQ(a.texts[k][i], b.texts[k][i]) << what << " " << a.spec[k].name << " row " << i;
+      }
+    }
+  }
+}
+
+// Every CSV file of a report folder, by name.
+std::map<std::string, std::string> csv_outputs(const std::string& dir) {
+  std::map<std::string, std::string> m;
+  for (const auto& e : fs::directory_iterator(dir))
+    if (e.path().extension() == ".csv") m[e.path().filename().string()] = slurp(e.path().string());
+  return m;
+}
+
+}  // namespace
+
+TEST(CliExports, DemoFilesInEveryExportedFormGiveTheSameNumbers) {
+  temp_dir tmp;
+  const struct {
+    const char* command;
+    const char* file;
+    const char* setup_option;
+    const char* setup;
+    std::vector<pumploss::column_spec> spec;
+  } inputs[] = {{"test-stand", "test_stand.csv", "--setup", "test_stand.toml", stand_columns()},
+                {"health", "field_readings.csv", "--pump", "pump_p31_health.toml", field_columns()}};
+  for (const auto& in : inputs) {
+    const std::string plain_text = slurp(kDemo + "/" + in.file);
+    const auto plain = read_csv(kDemo + "/" + in.file, in.spec);
+    const std::string plain_out = tmp / (std::string(in.command) + "_plain");
+    const auto r0 = run({in.command, kDemo + "/" + in.file, in.setup_option, kDemo + "/" + in.setup, "--out", plain_out}, tmp);
+    ASSERT_EQ(r0.code, 0) << r0.err;
+    EXPECT_EQ(r0.out.find("--csv-format"), std::string::npos);  // a plain file needs no note
+    const auto want = csv_outputs(plain_out);
+    ASSERT_FALSE(want.empty());
+    for (const auto& f : kForms) {
+      const std::string what = std::string(in.command) + " " + f.name;
+      const std::string file = tmp / (std::string(f.name) + "_" + in.file);
+      write_file(file, exported(plain_text, f));
+      // through the library: the same doubles
+      expect_same_table(plain, pumploss::read_table_file(file, in.spec), what);
+      // through the program: the same reduced / normalised results, byte for byte
+      const std::string out = tmp / (std::string(in.command) + "_" + f.name);
+      const auto r = run({in.command, file, in.setup_option, kDemo + "/" + in.setup, "--out", out}, tmp);
+      ASSERT_EQ(r.code, 0) << what << ": " << r.err;
+      const auto got = csv_outputs(out);
+      EXPECT_EQ(got.size(), want.size()) << what;
+      for (const auto& [name, text] : want) {
+        ASSERT_TRUE(got.count(name)) << what << " " << name;
+        std::string g = got.at(name);  // the refused readings name their file: the plain one's name
+        replace_all(g, file, kDemo + "/" + in.file);
+        EXPECT_EQ(g, text) << what << " " << name;
+      }
+      // the note says what was detected
+      if (f.european) {
+        EXPECT_NE(r.out.find("read as separated by ';' with ',' as the decimal mark"), std::string::npos) << r.out;
+      }
+      if (f.cp1252) {
+        EXPECT_NE(r.out.find("Windows-1252"), std::string::npos) << r.out;
+      }
+      // the European form with the format given, and refused when the format given contradicts it
+      if (f.european && !f.bom_crlf) {
+        const auto g = run({in.command, file, in.setup_option, kDemo + "/" + in.setup, "--csv-format", "semicolon-comma"}, tmp);
+        EXPECT_EQ(g.code, 0) << g.err;
+        EXPECT_EQ(g.out.find("detected"), std::string::npos);
+        const auto c = run({in.command, file, in.setup_option, kDemo + "/" + in.setup, "--csv-format", "comma"}, tmp);
+        EXPECT_EQ(c.code, 2);
+        EXPECT_NE(c.err.find(file + ":"), std::string::npos) << c.err;
+        EXPECT_NE(c.err.find("separated by ';'"), std::string::npos) << c.err;
+      }
+    }
+  }
+}
+
+TEST(CliExports, AmbiguousNumbersAreRefusedWithThePlaceAndTheFix) {
+  temp_dir tmp;
+  // a European export whose first pressure carries a thousands separator: "1.234,5"
+  std::string s = exported(demo_stand(), kForms[0]);
+  std::string row = line_at(s, 5);
+  const auto semi = row.find(';');
+  row = row.substr(0, semi + 1) + "1.234,5" + row.substr(row.find(';', semi + 1));
+  const std::string csv = tmp / "stand.csv";
+  write_file(csv, replace_line(s, 5, row));
+  const auto r = run({"test-stand", csv, "--setup", kDemo + "/test_stand.toml"}, tmp);
+  EXPECT_EQ(r.code, 2);
+  EXPECT_NE(r.err.find(csv + ":5:" + std::to_string(semi + 2) + ":"), std::string::npos) << r.err;
+  EXPECT_NE(r.err.find("without thousands grouping"), std::string::npos) << r.err;
+  EXPECT_EQ(run({"test-stand", csv, "--setup", kDemo + "/test_stand.toml", "--csv-format", "semicolons"}, tmp).code, 1);
 }

@@ -118,7 +118,7 @@ PUMPLOSS_CXX_API const char* health_reason_text(unsigned reason) noexcept;
 /// A sentence for one refusal bit (static storage, never null).
 /// @param refusal one health_refusal bit
 /// @return the sentence; a sentence saying so for an unknown bit
-const char* health_refusal_text(unsigned refusal) noexcept;
+PUMPLOSS_CXX_API const char* health_refusal_text(unsigned refusal) noexcept;
 
 /// A short name for a level ("sound", "acceptable", "elevated", "worn"; "unknown" otherwise).
 /// @param level the level
@@ -128,12 +128,12 @@ PUMPLOSS_CXX_API const char* health_level_name(health_level level) noexcept;
 /// The case-drain caution every health report, plot and page carries: lines of at most 110
 /// characters separated by '\n' (static storage, never null).
 /// @return the caution text
-const char* health_case_drain_caution() noexcept;
+PUMPLOSS_CXX_API const char* health_case_drain_caution() noexcept;
 
 /// A short name for an operating state ("on stroke", "deadhead", "unknown").
 /// @param s the state
 /// @return the name (static storage)
-const char* operating_state_name(operating_state s) noexcept;
+PUMPLOSS_CXX_API const char* operating_state_name(operating_state s) noexcept;
 
 /// Bands, limits and plausibility checks of the verdict; every one configurable.
 template <class T>

@@ -323,7 +323,7 @@ inline constexpr int controller_mode_count = 3;
 /// Short name of a mode ("on-stroke", "compensating", "deadhead"), "unknown" for another number.
 /// @param mode the mode
 /// @return the name (static storage)
-const char* controller_mode_name(controller_mode mode) noexcept;
+PUMPLOSS_CXX_API const char* controller_mode_name(controller_mode mode) noexcept;
 
 /// The operating point of a budget evaluation.
 template <class T>

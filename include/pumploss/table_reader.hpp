@@ -1,21 +1,31 @@
 /// @file table_reader.hpp
-/// @brief Reader for comma-separated tables of readings whose header row carries the units
-/// ("outlet pressure [bar]"), values converted to SI on reading, every problem reported with
-/// line and column.
+/// @brief Reader for tables of readings whose header row carries the units ("outlet pressure
+/// [bar]"), as people export them from spreadsheets and loggers; values converted to SI on
+/// reading, every problem reported with line and column.
 ///
 /// The workflows (test_stand.hpp, and the program's reports) take their readings from such
 /// tables. The format: one header row naming the columns, each quantity column with its unit in
-/// brackets; lines starting with '#' are comments and blank lines are ignored; every other line
-/// is a complete row. Fields are separated by ','; a field may be quoted with '"' ('""' is a quote
-/// inside it). Column names are compared without case and outer blanks; their order is free.
-/// Numbers are plain decimal ('.' as the decimal point; 'inf', 'nan' and hexadecimal refused).
-/// A UTF-8 byte order mark on the first line is skipped.
+/// brackets or parentheses ("outlet pressure [bar]", "outlet pressure (bar)"); lines starting
+/// with '#' are comments and blank lines are ignored; every other line is a complete row. Column
+/// names are compared without case and outer blanks; their order is free. A field may be quoted
+/// with '"' ('""' is a quote inside it). A UTF-8 byte order mark and CRLF line ends are accepted.
+/// Units as exported are accepted (find_unit_written(): '°C', 'l/min', 'RPM', 'gpm', ...; the
+/// Windows-1252 degree byte of a file that is not UTF-8, with a note).
+///
+/// Delimiter and decimal mark (csv_dialect): ',' between fields with '.' as the decimal point,
+/// or ';' between fields with ',' (European spreadsheet export) or '.' as the decimal mark. By
+/// default they are detected: the delimiter from the header row, the decimal mark from the
+/// numbers; a ';' file gets a note in `table_data::notes` saying what was found. A file that stays
+/// ambiguous is refused at the first field that makes it so: a header with both ',' and ';', a
+/// number with a thousands separator ("1.500,5"), a ';' file with both "1,5" and "2.5", a
+/// comma-separated row with more fields than the header or a quoted "1,500" (thousands or a
+/// decimal comma?). Numbers are otherwise plain decimal ('inf', 'nan' and hexadecimal refused).
 ///
 /// Nothing is skipped silently: a missing required column, an unknown column, a column twice, a
 /// quantity without a unit or with a unit of another quantity, a field that is not a number, a
-/// row with more or fewer fields than the header (a decimal comma shows up this way), a file
-/// separated by ';' or TAB, an empty file or one without data rows is an error naming line and
-/// column. Nothing here throws except std::bad_alloc.
+/// row with more or fewer fields than the header, a file separated by TAB or '|', an empty file
+/// or one without data rows is an error naming line and column. Nothing here throws except
+/// std::bad_alloc.
 #ifndef PUMPLOSS_TABLE_READER_HPP
 #define PUMPLOSS_TABLE_READER_HPP
 
@@ -48,6 +58,19 @@ struct column_spec {
   bool allow_missing = false; ///< an empty field is a missing value (NaN) instead of an error
 };
 
+/// How the fields and the decimals of a table are written.
+enum class csv_dialect : int {
+  detect = 0,           ///< from the header row (delimiter) and the numbers (decimal mark)
+  comma = 1,            ///< ',' between fields, '.' as the decimal point
+  semicolon_comma = 2,  ///< ';' between fields, ',' as the decimal mark (European spreadsheet export)
+  semicolon_point = 3   ///< ';' between fields, '.' as the decimal point
+};
+
+/// Name of a dialect as the program's option takes it.
+/// @param d the dialect
+/// @return "detect", "comma", "semicolon-comma" or "semicolon-point"
+PUMPLOSS_CXX_API const char* csv_dialect_name(csv_dialect d) noexcept;
+
 /// Where and why a table could not be read.
 struct table_error {
   status st = status::ok;  ///< ok, or the error (domain, unknown_unit, incompatible_units, insufficient_data, misuse)
@@ -68,6 +91,8 @@ struct table_data {
   std::vector<std::vector<int>> pos;          ///< per spec column: 1-based character column of each field
   std::vector<int> line;                      ///< per row: its 1-based line number in the file
   table_error error;                          ///< why reading failed (st ok when it did not)
+  csv_dialect dialect = csv_dialect::detect;  ///< the dialect the file was read in (detect: not read)
+  std::vector<std::string> notes;             ///< what was detected or assumed (a ';' file, a Windows-1252 degree sign), for the report
 
   /// @return the number of data rows
   std::size_t rows() const noexcept { return line.size(); }
@@ -92,11 +117,28 @@ struct table_data {
 /// @return the table; `error.st` says whether it was read
 PUMPLOSS_CXX_API table_data read_table(std::string_view text, const std::vector<column_spec>& spec, std::string source = {});
 
+/// Read a table from text in a given dialect (csv_dialect::detect: as read_table() above).
+/// @param text the whole file
+/// @param spec the expected columns
+/// @param source a name for messages (the file name)
+/// @param dialect the delimiter and decimal mark, or detect
+/// @return the table; `error.st` says whether it was read
+PUMPLOSS_CXX_API table_data read_table(std::string_view text, const std::vector<column_spec>& spec, std::string source,
+                                       csv_dialect dialect);
+
 /// Read a table from a file.
 /// @param path the file
 /// @param spec the expected columns
 /// @return as read_table(); status::misuse with line 0 when the file cannot be opened
 PUMPLOSS_CXX_API table_data read_table_file(const std::string& path, const std::vector<column_spec>& spec);
+
+/// Read a table from a file in a given dialect.
+/// @param path the file
+/// @param spec the expected columns
+/// @param dialect the delimiter and decimal mark, or detect
+/// @return as read_table()
+PUMPLOSS_CXX_API table_data read_table_file(const std::string& path, const std::vector<column_spec>& spec,
+                                            csv_dialect dialect);
 
 /// Parse a finite plain decimal number filling the whole text (outer blanks allowed); 'inf',
 /// 'nan', hexadecimal and out-of-range values are refused.

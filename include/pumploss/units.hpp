@@ -104,6 +104,21 @@ struct unit_info {
 /// @return the unit, or nullptr when unknown.
 PUMPLOSS_CXX_API const unit_info* find_unit(std::string_view symbol) noexcept;
 
+/// Look a unit up as people write it in the header of an exported file: first as find_unit(),
+/// then with the spellings of spreadsheets and instruments mapped to the symbols:
+/// - the degree sign: '°C', '°F' (UTF-8), '℃', '℉', 'deg C', 'deg F';
+/// - superscripts and signs: '³' -> '3', '²' -> '2', 'µ'/'μ' -> 'u', '·' -> '.' ('cm³/rev', 'mm²/s', 'N·m');
+/// - case-insensitive trade spellings: 'l/min', 'lpm', 'l/s', 'l', 'rpm', 'r/min', 'U/min', '1/min',
+///   'gpm'; and 'Nm', 'mPas'.
+/// A text that is not valid UTF-8 is taken as Windows-1252 (the single bytes 0xB0 degree,
+/// 0xB2, 0xB3 superscripts, 0xB5 micro, 0xB7 middle dot, as Windows-1252 and ISO 8859-1 both
+/// define them); `*windows_1252` (when given) is set true then, so the caller can say so. Any
+/// other byte outside ASCII stays an unknown unit.
+/// @param written the unit as written (outer blanks allowed)
+/// @param windows_1252 optional: set to whether the Windows-1252 reading was needed
+/// @return the unit, or nullptr when unknown
+PUMPLOSS_CXX_API const unit_info* find_unit_written(std::string_view written, bool* windows_1252 = nullptr) noexcept;
+
 /// @return the number of units known to find_unit().
 PUMPLOSS_CXX_API int unit_count() noexcept;
 

@@ -1,6 +1,8 @@
 // libFuzzer target: the library's table reader (pumploss/table_reader.hpp, read_table) with the
 // column specs of the test-stand and field-reading files and a small mixed one. The first byte
-// chooses the spec, the rest is the file. Every problem must come out as a table_error with an
+// chooses the spec, the rest is the file. The corpus holds the exported forms too (';' with a
+// decimal comma, BOM + CRLF, degree signs in UTF-8 and Windows-1252, units in parentheses,
+// ambiguous '1,500' and mixed decimal marks), so the detection paths are fuzzed from the start. Every problem must come out as a table_error with an
 // error status; a crash, undefined behaviour, an exception, a non-finite SI value or columns of
 // unequal length are findings.
 #include <cmath>
