@@ -540,8 +540,8 @@ std::vector<pumploss::health_step<double>> abrupt_steps(const std::vector<double
 constexpr unsigned kSeeds = 1000;
 }  // namespace
 
-// (a) linear wear without a step: no abrupt step. Measured (this test, 1000 seeds): see the
-// expectation below; the rule's bound is 2.2e-4 per decision (health_cusum).
+// (a) linear wear without a step: no abrupt step. Measured (this test, 1000 seeds): 0 of 1000
+// series (self-calculated; the rule's bound is 1.8e-5 per decision, health_cusum).
 TEST(HealthSteps, LinearWearIsNeverAStep) {
   unsigned series_with_alarm = 0;
   for (unsigned seed = 0; seed < kSeeds; ++seed)
@@ -550,7 +550,8 @@ TEST(HealthSteps, LinearWearIsNeverAStep) {
   EXPECT_EQ(series_with_alarm, 0u);
 }
 
-// (b) accelerating wear (the demo's 0.5 (y - 2.5)^2) without a step: no abrupt step.
+// (b) accelerating wear (the demo's 0.5 (y - 2.5)^2) without a step: no abrupt step. Measured:
+// 0 of 1000 series, and 0 of 1000 at four times the acceleration (self-calculated).
 TEST(HealthSteps, AcceleratingWearIsNeverAStep) {
   unsigned series_with_alarm = 0;
   for (unsigned seed = 0; seed < kSeeds; ++seed)
@@ -566,6 +567,8 @@ TEST(HealthSteps, AcceleratingWearIsNeverAStep) {
 }
 
 // (c) accelerating wear with the demo's jump (+0.35 wear from reading 30): exactly that step.
+// Measured: found exactly at reading 30 in 984 of 1000 series (992 of 1000 on linear wear); the
+// misses are a step one reading off or not significant (self-calculated).
 TEST(HealthSteps, TheDemosJumpOnAcceleratingWearIsFoundWhereItIs) {
   unsigned exact = 0, linear_exact = 0;
   for (unsigned seed = 0; seed < kSeeds; ++seed) {
@@ -580,8 +583,8 @@ TEST(HealthSteps, TheDemosJumpOnAcceleratingWearIsFoundWhereItIs) {
   }
   std::printf("jump on accelerating wear: exactly found at reading 30 in %u of %u series; on linear wear %u\n", exact,
               kSeeds, linear_exact);
-  EXPECT_GE(exact, 980u);
-  EXPECT_GE(linear_exact, 980u);
+  EXPECT_GE(exact, 975u);
+  EXPECT_GE(linear_exact, 985u);
 }
 
 TEST(HealthTrend, ProjectionStaysWithinTheDataSpanAndAgreesWithTheVerdict) {
@@ -815,7 +818,7 @@ TEST(HealthCapi, MonitorAndVersion2Functions) {
   int raw, events;
   double b, s, l, t;
   EXPECT_EQ(pumploss_health_monitor_state(m, &level, &b, &s, &l, &t), PUMPLOSS_EDATA);
-  for (int i = 0; i < 12; ++i) {
+  for (int i = 0; i < 13; ++i) {  // a step is confirmed by 5 readings of the new level (health_cusum::confirm)
     const double qq = (i < 8 ? 4.0e-3 : 9.0e-3) / 60 * (1 + 0.002 * (i % 3));
     ASSERT_EQ(pumploss_health_monitor_feed(m, i, qq, 250e5, 0.0, kTRef, kN, kNaN, kNaN, PUMPLOSS_STATE_ON_STROKE,
                                            &level, &raw, &events, &qn),

@@ -792,7 +792,7 @@ struct health_step {
 /// (N readings back) and the new level is \f$ \mu_0 + K + C^+/N \f$ (or \f$ \mu_0 - K - C^-/N \f$)
 /// (Page 1954; Montgomery 9.1).
 ///
-/// Abrupt or gradual: a signal is held until `confirm` readings (4) from the latest candidate jump
+/// Abrupt or gradual: a signal is held until `confirm` readings (5) from the latest candidate jump
 /// on are in (the step is reported that many readings minus one after the CUSUM signal; finish()
 /// decides a held signal at the end of a series). Every reading j not yet examined, with at least
 /// `min_before` (3) readings of the current regime before it and `confirm` from it on, is a
@@ -802,13 +802,15 @@ struct health_step {
 /// and \f$ z_j = \delta / (s\,\sqrt{(X^TX)^{-1}_{\delta\delta}}) \f$ with s the larger of sigma and the
 /// fit's residual standard deviation. A smooth acceleration of wear is taken up by the quadratic
 /// term; only a discontinuity makes \f$\delta\f$ large. The shift is abrupt (a step, e.g. damage)
-/// when the largest \f$ z_j \f$ in the signal's direction exceeds `z_abrupt` = 4.5: two-sided
-/// normal tail 6.8e-6 per candidate, at most 32 candidates, so at most 2.2e-4 per decision by
+/// when the largest \f$ z_j \f$ in the signal's direction exceeds `z_abrupt` = 5: two-sided
+/// normal tail 5.7e-7 per candidate, at most 32 candidates, so at most 1.8e-5 per decision by
 /// Bonferroni's inequality. The step is placed at that j, before = a, after = a + delta (the jump
 /// beyond the trend), and j starts a new regime. Otherwise the shift is gradual (wear faster than
 /// the target follows) and keeps the CUSUM's index and level. After a decision the sums restart at
-/// the new level. Measured rates on monthly series of 42 readings with 2 % noise (tests/health_test.cpp):
-/// see HealthSteps.* there.
+/// the new level. Measured on 1000 monthly series of 42 readings with 2 % noise each
+/// (tests/health_test.cpp, HealthSteps): no false step on linear wear, none on the demo's accelerating
+/// wear nor on four times that acceleration; the demo's jump found exactly at its reading in 98.4 %
+/// of the series on accelerating wear, 99.2 % on linear wear.
 ///
 /// @par Source
 /// E. S. Page, Continuous inspection schemes, Biometrika 41 (1954) 100-115; tabular CUSUM and
@@ -823,11 +825,11 @@ template <class T>
 class health_cusum {
  public:
   static constexpr std::size_t history = 32;       ///< readings kept (the largest fit window)
-  static constexpr std::size_t confirm = 4;        ///< readings from a candidate jump on before it is judged
+  static constexpr std::size_t confirm = 5;        ///< readings from a candidate jump on before it is judged
   static constexpr std::size_t min_before = 3;     ///< readings of the regime before a candidate jump
   static constexpr std::size_t window_before = 12; ///< readings before a candidate jump in its fit, at most
   /// Critical value of the jump's z statistic.
-  static T z_abrupt() { return detail::constant<T>(4.5L, "4.5"); }
+  static T z_abrupt() { return detail::constant<T>(5.0L, "5.0"); }
 
   /// Start with a target and a noise level.
   /// @param target_ mu_0, same unit as the readings
