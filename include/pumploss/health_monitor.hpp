@@ -7,8 +7,9 @@
 /// needs: the baseline learned from the first readings when none is given, a verdict with
 /// hysteresis and a debounce count so that it does not flicker, and online step detection by
 /// the tabular CUSUM (health_cusum): a level shift is reported health_cusum::confirm - 1 readings
-/// after its signal, abrupt when it is a jump beyond the local quadratic trend. A "sound" verdict is not a clearance to run; never block,
-/// cap or valve a case drain line.
+/// after its signal, abrupt only when it is a jump beyond the local quadratic trend (accelerating
+/// wear is not a step). A "sound" verdict is not a clearance to run; never block, cap or valve a
+/// case drain line.
 #ifndef PUMPLOSS_HEALTH_MONITOR_HPP
 #define PUMPLOSS_HEALTH_MONITOR_HPP
 
@@ -21,7 +22,7 @@ namespace pumploss {
 /// Settings of a health_monitor.
 template <class T>
 struct health_monitor_settings {
-  std::size_t learn_count = 12;    ///< accepted readings that set the CUSUM target and noise (and the baseline when none is given), >= 2 (12: with 8 the noise learned from 7 moving ranges let 1 of 300 series of accelerating wear be called a step, tests/health_test.cpp)
+  std::size_t learn_count = 12;    ///< accepted readings that set the CUSUM target and noise (and the baseline when none is given), >= 2 (with 8, 1 of 300 series of accelerating wear was called a step)
   std::size_t debounce_count = 3;  ///< consecutive readings a new level must hold before the verdict changes, >= 1
   T hysteresis = detail::constant<T>(0.05L, "0.05");  ///< to step down, the figures must lie below the band edges x (1 - hysteresis), 0..0.5
   T cusum_k = detail::constant<T>(0.5L, "0.5");       ///< CUSUM reference value, in sigma
