@@ -387,8 +387,11 @@ int run_health(const health_options& o) {
   if (!ts.rows.empty()) r.tables.push_back(std::move(ts));
   if (!tx.rows.empty()) r.tables.push_back(std::move(tx));
   r.notes.push_back("steps: tabular CUSUM (Page 1954; Montgomery, Introduction to Statistical Quality Control, 6th ed., "
-                    "9.1) on the normalised drain flow; a step is abrupt when one jump between readings exceeds 3 sqrt(2) "
-                    "noise sigmas; the trend is fitted after the last step or event and projected no further than its span");
+                    "9.1) on the normalised drain flow; a shift is an abrupt step only when it is a jump beyond the local "
+                    "quadratic trend (level-shift z test, z > 5, confirmed by 5 readings; Box and Tiao 1975), so that "
+                    "accelerating wear is not called a step; level before and after are the trend at the step without "
+                    "and with the jump; the trend is fitted after the last step or event and projected no further than "
+                    "its span");
   r.notes.push_back("the verdict bands are common practice, no source, unless the pump file names the maker's figures");
   std::vector<std::string> caution_lines;
   {

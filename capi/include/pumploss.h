@@ -2132,12 +2132,12 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_level_name(int level);
 #define PUMPLOSS_MONITOR_LEARNING 0x01         /**< Monitor event: still learning. */
 #define PUMPLOSS_MONITOR_BASELINE_LEARNED 0x02 /**< Monitor event: learning completed with this reading. */
 #define PUMPLOSS_MONITOR_REFUSED 0x04          /**< Monitor event: reading refused (see the status). */
-#define PUMPLOSS_MONITOR_STEP_UP 0x08          /**< Monitor event: abrupt step up (tabular CUSUM). */
+#define PUMPLOSS_MONITOR_STEP_UP 0x08          /**< Monitor event: abrupt step up: a jump beyond the local trend (tabular CUSUM, confirmed by 5 readings). */
 #define PUMPLOSS_MONITOR_STEP_DOWN 0x10        /**< Monitor event: abrupt step down. */
 #define PUMPLOSS_MONITOR_SHIFT 0x20            /**< Monitor event: gradual level shift. */
 #define PUMPLOSS_MONITOR_LEVEL_CHANGED 0x40    /**< Monitor event: the confirmed verdict changed. */
 #define PUMPLOSS_MONITOR_PENDING 0x80          /**< Monitor event: another level pending (debounce). */
-/** Length (doubles) of a saved monitor state, layout version 1. */
+/** Length (doubles) of a saved monitor state, layout version 2. */
 #define PUMPLOSS_HEALTH_MONITOR_STATE_COUNT 96
 
 /**
@@ -2234,7 +2234,7 @@ typedef struct pumploss_health_monitor pumploss_health_monitor;
  * Create a monitor from a described health handle (pumploss_health_set_description(); its
  * baseline, or none to learn one, and its bands are copied).
  * @param h the health handle
- * @param learn_count readings that learn the noise and CUSUM target (and the baseline), 2 to 100000
+ * @param learn_count readings that learn the noise and CUSUM target (and the baseline), 2 to 100000 (12 or more: a noise learned from fewer readings lets chance runs pass as steps)
  * @param debounce_count readings a new level must hold, 1 to 100000
  * @param hysteresis relative margin below a band edge to step down a level, 0 to 0.5
  * @param out receives the monitor (NULL on error)

@@ -775,36 +775,62 @@ template <class T>
 struct health_step {
   std::size_t index;        ///< first reading of the new level (0-based, in the series)
   std::size_t signal_index; ///< reading at which the CUSUM crossed its decision interval
-  T before;                 ///< level before the shift (the CUSUM target)
-  T after;                  ///< estimated new level, target +/- (K + C/N)
+  T before;                 ///< level before the shift: the CUSUM target; for an abrupt step the local trend at index
+  T after;                  ///< new level: target +/- (K + C/N); for an abrupt step the local trend at index plus the jump
   int direction;            ///< +1 up, -1 down
-  bool abrupt;              ///< the jump between the readings at index-1 and index alone exceeds 3 sqrt(2) sigma
+  bool abrupt;              ///< a jump beyond the local quadratic trend, significant at z > health_cusum::z_abrupt
+  T z = scalar_traits<T>::nan();  ///< the largest jump's test statistic (NaN: no candidate could be tested)
 };
 
-/// Tabular (two-sided) CUSUM for individual readings, one reading at a time, constant memory.
+/// Tabular (two-sided) CUSUM for individual readings with a test of abruptness that a smooth
+/// acceleration of wear does not pass; one reading at a time, constant memory, no allocation.
 ///
-/// \f[ C^+_i = \max(0,\ x_i - (\mu_0 + K) + C^+_{i-1}),\qquad
+/// Level shifts: \f[ C^+_i = \max(0,\ x_i - (\mu_0 + K) + C^+_{i-1}),\qquad
 ///     C^-_i = \max(0,\ (\mu_0 - K) - x_i + C^-_{i-1}) \f]
 /// with \f$ K = k\sigma \f$ and decision interval \f$ H = h\sigma \f$ (k = 0.5, h = 5 by default).
 /// On a signal the shift is placed after the last reading at which the signalling sum was zero
-/// (N readings back), the new level is \f$ \mu_0 + K + C^+/N \f$ (or \f$ \mu_0 - K - C^-/N \f$),
-/// the sums restart and the new level becomes the target. When the largest jump between
-/// consecutive readings of the signalling run, less the local drift (the median difference of
-/// the readings kept), exceeds \f$ 3\sqrt2\,\sigma \f$ the shift is called
-/// abrupt (a step, e.g. damage): it is placed at that jump and the new level is the mean of the
-/// readings from it on; a further jump the same way within `settle` readings is the same step
-/// settling and counts as gradual. Other shifts are gradual (wear faster than the target follows). The
-/// abrupt rule is ours.
+/// (N readings back) and the new level is \f$ \mu_0 + K + C^+/N \f$ (or \f$ \mu_0 - K - C^-/N \f$)
+/// (Page 1954; Montgomery 9.1).
+///
+/// Abrupt or gradual: a signal is held until `confirm` readings (5) from the latest candidate jump
+/// on are in (the step is reported that many readings minus one after the CUSUM signal; finish()
+/// decides a held signal at the end of a series). Every reading j not yet examined, with at least
+/// `min_before` (3) readings of the current regime before it and `confirm` from it on, is a
+/// candidate: over the window from max(regime start, j - `window_before`) to the latest reading
+/// (at most `history` readings) the local trend and a level shift at j are fitted by least squares,
+/// \f[ x_i = a + b\,u_i + c\,u_i^2 + \delta\,[u_i \ge 0] + e_i,\qquad u_i = i - j, \f]
+/// and \f$ z_j = \delta / (s\,\sqrt{(X^TX)^{-1}_{\delta\delta}}) \f$ with s the largest of sigma, the
+/// fit's residual standard deviation and the median moving range over 0.95387 of the regime's
+/// readings kept (as health_noise_sigma(); a floor when sigma was learned from few readings). A smooth acceleration of wear is taken up by the quadratic
+/// term; only a discontinuity makes \f$\delta\f$ large. The shift is abrupt (a step, e.g. damage)
+/// when the largest \f$ z_j \f$ in the signal's direction exceeds `z_abrupt` = 5: two-sided
+/// normal tail 5.7e-7 per candidate, at most 32 candidates, so at most 1.8e-5 per decision by
+/// Bonferroni's inequality. The step is placed at that j, before = a, after = a + delta (the jump
+/// beyond the trend), and j starts a new regime. Otherwise the shift is gradual (wear faster than
+/// the target follows) and keeps the CUSUM's index and level. After a decision the sums restart at
+/// the new level. Measured on 1000 monthly series of 42 readings with 2 % noise each
+/// (tests/health_test.cpp, HealthSteps): no false step on linear wear, none on the demo's accelerating
+/// wear nor on four times that acceleration; the demo's jump found exactly at its reading in 98.0 %
+/// of the series on accelerating wear, 99.1 % on linear wear.
 ///
 /// @par Source
 /// E. S. Page, Continuous inspection schemes, Biometrika 41 (1954) 100-115; tabular CUSUM and
 /// the estimate of the new mean: D. C. Montgomery, Introduction to Statistical Quality Control,
 /// 6th ed., Wiley 2009, section 9.1 (Example 9.1 reproduced in tests/health_test.cpp, from memory).
+/// The level shift in a regression on a local trend: G. E. P. Box and G. C. Tiao, Intervention
+/// analysis with applications to economic and environmental problems, J. Amer. Statist. Assoc. 70
+/// (1975) 70-79 (step intervention); the maximum over candidate change points: R. E. Quandt, Tests
+/// of the hypothesis that a linear regression system obeys two separate regimes, J. Amer. Statist.
+/// Assoc. 55 (1960) 324-330. Window lengths and z_abrupt are our choice (the rates in the tests).
 template <class T>
 class health_cusum {
  public:
-  static constexpr std::size_t history = 32;  ///< readings kept to place an abrupt step
-  static constexpr std::size_t settle = 3;    ///< readings after an abrupt step in which a jump the same way is the same step
+  static constexpr std::size_t history = 32;       ///< readings kept (the largest fit window)
+  static constexpr std::size_t confirm = 5;        ///< readings from a candidate jump on before it is judged
+  static constexpr std::size_t min_before = 3;     ///< readings of the regime before a candidate jump
+  static constexpr std::size_t window_before = 12; ///< readings before a candidate jump in its fit, at most
+  /// Critical value of the jump's z statistic.
+  static T z_abrupt() { return detail::constant<T>(5.0L, "5.0"); }
 
   /// Start with a target and a noise level.
   /// @param target_ mu_0, same unit as the readings
@@ -819,82 +845,52 @@ class health_cusum {
     c_hi = c_lo = T(0);
     n_hi = n_lo = 0;
     count = 0;
-    last_abrupt = 0;
-    last_abrupt_dir = 0;
+    regime = examined = 0;
+    held_dir = 0;
+    held_start = held_signal = 0;
+    held_after = T(0);
   }
   /// Feed one reading.
   /// @param x the reading
   /// @param step receives the shift when the function returns true (index counted from the
   ///        first reading fed since reset())
-  /// @return true on a signal
+  /// @return true when a held signal was decided with this reading
   bool update(T x, health_step<T>& step) {
     hist[count % history] = x;
     ++count;
+    if (held_dir != 0) {
+      if (count < held_signal + confirm) return false;
+      decide(step);
+      return true;
+    }
     const T kk = k * sigma;
     c_hi = x - (target + kk) + c_hi;
     if (c_hi > T(0)) ++n_hi; else { c_hi = T(0); n_hi = 0; }
     c_lo = (target - kk) - x + c_lo;
     if (c_lo > T(0)) ++n_lo; else { c_lo = T(0); n_lo = 0; }
     const T hh = h * sigma;
-    int dir = 0;
     std::size_t n = 0;
     T c = T(0);
-    if (c_hi > hh) { dir = 1; n = n_hi; c = c_hi; }
-    else if (c_lo > hh) { dir = -1; n = n_lo; c = c_lo; }
-    if (dir == 0) return false;
-    step.signal_index = count - 1;
-    step.index = count - n;
-    step.before = target;
-    step.after = target + T(dir) * (kk + c / T(static_cast<double>(n)));
-    step.direction = dir;
-    step.abrupt = false;
-    // an abrupt step: the largest jump between consecutive readings of the signalling run
-    // (its first reading may sit before the jump by noise) beyond 3 sqrt(2) sigma
-    using std::sqrt;
-    const T limit = T(3) * sqrt(T(2)) * sigma;
-    const T drift = local_drift();  // a steady trend is not a step: judge the jump beyond it
-    T best = limit;
-    for (std::size_t j = step.index; j < count; ++j) {
-      if (j < 1 || count - j >= history) continue;
-      const T jump = (hist[j % history] - hist[(j - 1) % history] - drift) * T(dir);
-      if (jump > best) {
-        best = jump;
-        step.abrupt = true;
-        step.index = j;
-      }
-    }
-    // a second jump the same way within settle readings is the same step settling: not a new one
-    if (step.abrupt && last_abrupt_dir == dir && step.index <= last_abrupt + settle) step.abrupt = false;
-    if (step.abrupt) {
-      last_abrupt = step.index;
-      last_abrupt_dir = dir;
-    }
-    if (step.abrupt) {  // the new level: the mean of the readings from the jump on
-      T sum = T(0);
-      for (std::size_t j = step.index; j < count; ++j) sum += hist[j % history];
-      step.after = sum / T(static_cast<double>(count - step.index));
-    }
-    target = step.after;
-    c_hi = c_lo = T(0);
-    n_hi = n_lo = 0;
+    if (c_hi > hh) { held_dir = 1; n = n_hi; c = c_hi; }
+    else if (c_lo > hh) { held_dir = -1; n = n_lo; c = c_lo; }
+    if (held_dir == 0) return false;
+    held_signal = count - 1;
+    held_start = count - n;
+    held_after = target + T(held_dir) * (kk + c / T(static_cast<double>(n)));
+    return false;
+  }
+  /// Decide a held signal with the readings there are (at the end of a series).
+  /// @param step receives the shift when the function returns true
+  /// @return true when a signal was held
+  bool finish(health_step<T>& step) {
+    if (held_dir == 0) return false;
+    decide(step);
     return true;
   }
-  /// Median of the differences between consecutive readings kept (the local drift per reading).
-  /// @return the drift (0 with fewer than 3 readings kept)
-  T local_drift() const {
-    const std::size_t kept = count < history ? count : history;
-    if (kept < 3) return T(0);
-    T d[history];
-    std::size_t m = 0;
-    for (std::size_t j = count - kept + 1; j < count; ++j) d[m++] = hist[j % history] - hist[(j - 1) % history];
-    for (std::size_t i = 1; i < m; ++i)
-      for (std::size_t j = i; j > 0 && d[j] < d[j - 1]; --j) {
-        const T tmp = d[j];
-        d[j] = d[j - 1];
-        d[j - 1] = tmp;
-      }
-    return m % 2 ? d[m / 2] : (d[m / 2 - 1] + d[m / 2]) / 2;
-  }
+  /// Whether a signal is held until its confirmation readings are in.
+  /// @return true while held
+  bool holding() const noexcept { return held_dir != 0; }
+
   T target = T(0);   ///< current target mu_0
   T sigma = T(1);    ///< noise sigma
   T k = T(0);        ///< reference value, in sigma
@@ -905,11 +901,142 @@ class health_cusum {
   std::size_t n_lo = 0;   ///< readings since C- was last zero
   std::size_t count = 0;  ///< readings fed since reset
   T hist[history] = {};   ///< the last readings (ring)
-  std::size_t last_abrupt = 0;  ///< index of the last abrupt step
-  int last_abrupt_dir = 0;      ///< its direction (0: none yet)
+  std::size_t regime = 0;       ///< first reading of the current regime (after the last abrupt step)
+  std::size_t examined = 0;     ///< first reading not yet examined as a candidate jump
+  int held_dir = 0;             ///< direction of the held signal (0: none)
+  std::size_t held_start = 0;   ///< the held signal's CUSUM index
+  std::size_t held_signal = 0;  ///< the held signal's signal index
+  T held_after = T(0);          ///< the held signal's CUSUM estimate of the new level
+
+ private:
+  // Least squares of x_i = a + b u + c u^2 + d [u >= 0], u = i - j, over readings lo..count-1.
+  // Returns false when the fit is singular; else p = (a, b, c, d), z of d.
+  bool fit_jump(std::size_t j, std::size_t lo, T s_floor, T (&p)[4], T& z) const {
+    using std::sqrt;
+    T a[4][9] = {};  // normal equations augmented with X'y and the identity (Gauss-Jordan)
+    const std::size_t hi = count;
+    for (std::size_t i = lo; i < hi; ++i) {
+      const T u = T(static_cast<double>(i)) - T(static_cast<double>(j));
+      const T row[4] = {T(1), u, u * u, i >= j ? T(1) : T(0)};
+      const T y = hist[i % history];
+      for (int r = 0; r < 4; ++r) {
+        for (int c = 0; c < 4; ++c) a[r][c] += row[r] * row[c];
+        a[r][4] += row[r] * y;
+      }
+    }
+    for (int r = 0; r < 4; ++r) a[r][5 + r] = T(1);
+    for (int c = 0; c < 4; ++c) {
+      int piv = c;
+      for (int r = c + 1; r < 4; ++r)
+        if ((a[r][c] < T(0) ? -a[r][c] : a[r][c]) > (a[piv][c] < T(0) ? -a[piv][c] : a[piv][c])) piv = r;
+      const T pv = a[piv][c] < T(0) ? -a[piv][c] : a[piv][c];
+      if (!(pv > T(1e-9))) return false;
+      if (piv != c)
+        for (int q = 0; q < 9; ++q) {
+          const T t = a[c][q];
+          a[c][q] = a[piv][q];
+          a[piv][q] = t;
+        }
+      const T inv = T(1) / a[c][c];
+      for (int q = 0; q < 9; ++q) a[c][q] *= inv;
+      for (int r = 0; r < 4; ++r) {
+        if (r == c) continue;
+        const T f = a[r][c];
+        if (f == T(0)) continue;
+        for (int q = 0; q < 9; ++q) a[r][q] -= f * a[c][q];
+      }
+    }
+    for (int r = 0; r < 4; ++r) p[r] = a[r][4];
+    T rss = T(0);
+    for (std::size_t i = lo; i < hi; ++i) {
+      const T u = T(static_cast<double>(i)) - T(static_cast<double>(j));
+      const T e = hist[i % history] - (p[0] + p[1] * u + p[2] * u * u + (i >= j ? p[3] : T(0)));
+      rss += e * e;
+    }
+    const std::size_t npts = hi - lo;
+    T s = sigma > s_floor ? sigma : s_floor;
+    if (npts > 4) {
+      const T sr = sqrt(rss / T(static_cast<double>(npts - 4)));
+      if (sr > s) s = sr;
+    }
+    const T vdd = a[3][8];
+    if (!(vdd > T(0))) return false;
+    z = p[3] / (s * sqrt(vdd));
+    return true;
+  }
+  // Noise of the readings of the current regime kept (median moving range / 0.95387, as
+  // health_noise_sigma()): a floor under sigma when sigma was learned from few readings.
+  T window_noise() const {
+    std::size_t lo = regime;
+    if (count > history && lo < count - history) lo = count - history;
+    if (count < lo + 3) return T(0);
+    T d[history];
+    std::size_t m = 0;
+    for (std::size_t i = lo + 1; i < count; ++i) {
+      const T v = hist[i % history] - hist[(i - 1) % history];
+      d[m++] = v < T(0) ? -v : v;
+    }
+    for (std::size_t i = 1; i < m; ++i)
+      for (std::size_t q = i; q > 0 && d[q] < d[q - 1]; --q) {
+        const T t = d[q];
+        d[q] = d[q - 1];
+        d[q - 1] = t;
+      }
+    const T med = m % 2 ? d[m / 2] : (d[m / 2 - 1] + d[m / 2]) / 2;
+    return med / detail::constant<T>(0.95387255240084L, "0.95387255240084");
+  }
+  void decide(health_step<T>& step) {
+    const int dir = held_dir;
+    step.signal_index = held_signal;
+    step.index = held_start;
+    step.before = target;
+    step.after = held_after;
+    step.direction = dir;
+    step.abrupt = false;
+    step.z = scalar_traits<T>::nan();
+    // candidates: not yet examined, min_before readings of the regime before, confirm from on
+    std::size_t j0 = examined;
+    if (j0 < regime + min_before) j0 = regime + min_before;
+    if (count > history && j0 < count - history + min_before) j0 = count - history + min_before;
+    const T s_floor = window_noise();
+    T best = -std::numeric_limits<T>::infinity();
+    std::size_t at = 0;
+    T bp[4] = {};
+    for (std::size_t j = j0; j + confirm <= count; ++j) {
+      std::size_t lo = regime;
+      if (j >= window_before && lo < j - window_before) lo = j - window_before;
+      if (count > history && lo < count - history) lo = count - history;
+      T p[4], z;
+      if (!fit_jump(j, lo, s_floor, p, z)) continue;
+      z *= T(dir);
+      if (z > best) {
+        best = z;
+        at = j;
+        for (int q = 0; q < 4; ++q) bp[q] = p[q];
+      }
+    }
+    if (count >= confirm && count - confirm + 1 > examined) examined = count - confirm + 1;
+    if (best > -std::numeric_limits<T>::infinity()) step.z = best;
+    if (best > z_abrupt()) {
+      step.abrupt = true;
+      step.index = at;
+      step.before = bp[0];
+      step.after = bp[0] + bp[3];
+      regime = at;
+      if (examined < at + 1) examined = at + 1;
+      const T u = T(static_cast<double>(count - 1)) - T(static_cast<double>(at));
+      target = bp[0] + bp[1] * u + bp[2] * u * u + bp[3];  // the level now, on the fitted trend
+    } else {
+      target = held_after;
+    }
+    held_dir = 0;
+    c_hi = c_lo = T(0);
+    n_hi = n_lo = 0;
+  }
 };
 
-/// Find level shifts in a series with the tabular CUSUM (health_cusum).
+/// Find level shifts in a series with the tabular CUSUM (health_cusum); a signal still held at
+/// the end of the series is decided with the readings there are (health_cusum::finish()).
 /// @param x the series (normalised drain flows or fractions), n values
 /// @param n number of values
 /// @param target mu_0 (NaN: the mean of the first min(4, n) values)
@@ -951,6 +1078,11 @@ inline status health_detect_steps(const T* x, std::size_t n, T target, T sigma, 
       if (found < capacity) out[found] = s;
       ++found;
     }
+  }
+  health_step<T> s{};
+  if (c.finish(s)) {  // a signal held at the end: decided with the readings there are
+    if (found < capacity) out[found] = s;
+    ++found;
   }
   return status::ok;
 }

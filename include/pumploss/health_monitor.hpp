@@ -6,8 +6,10 @@
 /// checked, normalised and scored as assess_health() does; the monitor adds what a controller
 /// needs: the baseline learned from the first readings when none is given, a verdict with
 /// hysteresis and a debounce count so that it does not flicker, and online step detection by
-/// the tabular CUSUM (health_cusum). A "sound" verdict is not a clearance to run; never block,
-/// cap or valve a case drain line.
+/// the tabular CUSUM (health_cusum): a level shift is reported health_cusum::confirm - 1 readings
+/// after its signal, abrupt only when it is a jump beyond the local quadratic trend (accelerating
+/// wear is not a step). A "sound" verdict is not a clearance to run; never block, cap or valve a
+/// case drain line.
 #ifndef PUMPLOSS_HEALTH_MONITOR_HPP
 #define PUMPLOSS_HEALTH_MONITOR_HPP
 
@@ -20,7 +22,7 @@ namespace pumploss {
 /// Settings of a health_monitor.
 template <class T>
 struct health_monitor_settings {
-  std::size_t learn_count = 8;     ///< accepted readings that set the CUSUM target and noise (and the baseline when none is given), >= 2
+  std::size_t learn_count = 12;    ///< accepted readings that set the CUSUM target and noise (and the baseline when none is given), >= 2 (with 8, 1 of 300 series of accelerating wear was called a step)
   std::size_t debounce_count = 3;  ///< consecutive readings a new level must hold before the verdict changes, >= 1
   T hysteresis = detail::constant<T>(0.05L, "0.05");  ///< to step down, the figures must lie below the band edges x (1 - hysteresis), 0..0.5
   T cusum_k = detail::constant<T>(0.5L, "0.5");       ///< CUSUM reference value, in sigma
@@ -76,10 +78,10 @@ inline health_level health_level_of(const health_bands<T>& b, T fraction, T grow
 template <class T>
 class health_monitor {
  public:
-  /// Number of T values save() writes (the state buffer size; version 1).
+  /// Number of T values save() writes (the state buffer size; version 2).
   static constexpr std::size_t state_count = 96;
   /// Version of the saved state layout.
-  static constexpr int state_version = 1;
+  static constexpr int state_version = 2;
 
   /// Set up a monitor.
   /// @param ref the pump description (baseline NaN: learned from the first learn_count readings)
@@ -279,10 +281,14 @@ class health_monitor {
     putn(cusum_.count);
     putn(cusum_start_);
     put(last_step_time_);
-    putn(cusum_.last_abrupt);
-    put(T(cusum_.last_abrupt_dir));
+    putn(cusum_.regime);
+    put(T(cusum_.held_dir));
     for (std::size_t j = 0; j < health_cusum<T>::history; ++j) put(cusum_.hist[j]);
     for (std::size_t j = 0; j < health_cusum<T>::history; ++j) put(times_[j]);
+    putn(cusum_.examined);
+    putn(cusum_.held_start);
+    putn(cusum_.held_signal);
+    put(cusum_.held_after);
     while (i < state_count) put(T(0));
     return status::ok;
   }
@@ -328,18 +334,23 @@ class health_monitor {
     m.cusum_.c_hi = buf[16];
     m.cusum_.c_lo = buf[17];
     m.last_step_time_ = buf[22];
-    if (!idx(23, m.cusum_.last_abrupt) || !(buf[24] == T(-1) || buf[24] == T(0) || buf[24] == T(1)))
+    if (!idx(23, m.cusum_.regime) || !(buf[24] == T(-1) || buf[24] == T(0) || buf[24] == T(1)))
       return status::out_of_validity;
-    m.cusum_.last_abrupt_dir = buf[24] > T(0) ? 1 : (buf[24] < T(0) ? -1 : 0);
+    m.cusum_.held_dir = buf[24] > T(0) ? 1 : (buf[24] < T(0) ? -1 : 0);
     std::size_t i = 25;
     for (std::size_t j = 0; j < health_cusum<T>::history; ++j) m.cusum_.hist[j] = buf[i++];
     for (std::size_t j = 0; j < health_cusum<T>::history; ++j) m.times_[j] = buf[i++];
+    if (!idx(i, m.cusum_.examined) || !idx(i + 1, m.cusum_.held_start) || !idx(i + 2, m.cusum_.held_signal))
+      return status::out_of_validity;
+    m.cusum_.held_after = buf[i + 3];
     if (!detail::all_finite(m.learn_sum_, m.learn_mr_sum_, m.learn_prev_, m.cusum_.target, m.cusum_.sigma,
-                            m.cusum_.c_hi, m.cusum_.c_lo))
+                            m.cusum_.c_hi, m.cusum_.c_lo, m.cusum_.held_after))
       return status::out_of_validity;
     // counts that cannot belong together mean a damaged buffer
     if (m.cusum_.n_hi > m.cusum_.count || m.cusum_.n_lo > m.cusum_.count || m.cusum_.count > m.accepted_ ||
-        m.cusum_start_ > m.accepted_ || m.pending_n_ >= settings_.debounce_count || m.steps_ > m.accepted_)
+        m.cusum_start_ > m.accepted_ || m.pending_n_ >= settings_.debounce_count || m.steps_ > m.accepted_ ||
+        m.cusum_.regime > m.cusum_.count || m.cusum_.examined > m.cusum_.count || m.cusum_.held_start > m.cusum_.count ||
+        m.cusum_.held_signal > m.cusum_.count)
       return status::out_of_validity;
     *this = m;
     return status::ok;
