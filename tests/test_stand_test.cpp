@@ -245,15 +245,19 @@ TEST(TestStandReduction, MessyInputsAreRefusedWithRowAndColumn) {
     s2.viscosity_at = pumploss::viscosity_temperature::inlet;  // the inlet was measured
     EXPECT_TRUE(pumploss::is_usable(pumploss::reduce_test_stand(s2, r).st));
   }
-  {  // an incomplete grid: no two-step estimate; the report says so when it was asked for
+  {  // an incomplete grid (changed on purpose with issue 16: it used to stop the run): the two-step
+     // estimator uses the complete sub-grid and a report names the short level
     auto r = good;
     for (auto* v : {&r.speed_rev_s, &r.inlet_pressure_pa, &r.outlet_pressure_pa, &r.flow_m3_s, &r.torque_n_m,
                     &r.drain_flow_m3_s, &r.inlet_temperature_k, &r.drain_temperature_k})
       v->erase(v->begin() + 5);
     auto res = pumploss::reduce_test_stand(s, r);
-    EXPECT_TRUE(pumploss::is_error(res.st));
-    EXPECT_EQ(first(res).setting, "displacement");
-    EXPECT_EQ(res.estimators[2].st, status::insufficient_data);
+    ASSERT_TRUE(pumploss::is_usable(res.st));
+    EXPECT_TRUE(pumploss::is_usable(res.estimators[2].st));
+    bool named = false;
+    for (const auto& m : res.messages)
+      named = named || m.text.find("pressure level 6 (250 bar) lacks speed level 1 (500 rpm)") != std::string::npos;
+    EXPECT_TRUE(named);
     auto s2 = s;
     s2.displacement = pumploss::displacement_choice::slope;
     res = pumploss::reduce_test_stand(s2, r);
