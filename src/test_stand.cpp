@@ -338,30 +338,35 @@ void estimate_displacement(test_stand_result& res, const std::vector<std::size_t
     lev_p[plev[k]] += dpp[k], ++cnt_p[plev[k]];
     lev_s[slev[k]] += sp[k], ++cnt_s[slev[k]];
   }
+  // drop, one at a time, the level with the largest share of missing cells until the grid is complete
   std::vector<bool> keep_p(np), keep_s(ns);
-  auto full = [&](bool by_speed) {  // keep the levels present everywhere along the other axis
-    std::fill(keep_p.begin(), keep_p.end(), false);
-    std::fill(keep_s.begin(), keep_s.end(), false);
-    std::size_t kp = 0, ks = 0;
-    for (std::size_t a = 0; a < np; ++a) keep_p[a] = cnt_p[a] > 0;
-    for (std::size_t b = 0; b < ns; ++b) keep_s[b] = cnt_s[b] > 0;
-    if (by_speed) {  // drop the speed levels missing at some pressure level
-      for (std::size_t b = 0; b < ns; ++b)
-        for (std::size_t a = 0; a < np; ++a)
-          if (keep_p[a] && cell[a * ns + b] == no_row) keep_s[b] = false;
-    } else {  // drop the pressure levels missing some speed level
-      for (std::size_t a = 0; a < np; ++a)
-        for (std::size_t b = 0; b < ns; ++b)
-          if (keep_s[b] && cell[a * ns + b] == no_row) keep_p[a] = false;
-    }
+  for (std::size_t a = 0; a < np; ++a) keep_p[a] = cnt_p[a] > 0;
+  for (std::size_t b = 0; b < ns; ++b) keep_s[b] = cnt_s[b] > 0;
+  std::pair<std::size_t, std::size_t> dims{0, 0};
+  for (;;) {
+    std::vector<std::size_t> miss_p(np, 0), miss_s(ns, 0);
+    std::size_t kp = 0, ks = 0, missing = 0;
     for (std::size_t a = 0; a < np; ++a) kp += keep_p[a] ? 1u : 0u;
     for (std::size_t b = 0; b < ns; ++b) ks += keep_s[b] ? 1u : 0u;
-    return std::make_pair(kp, ks);
-  };
-  const auto by_s = full(true);
-  const auto by_p = full(false);
-  const bool use_speed = by_s.first * by_s.second >= by_p.first * by_p.second;
-  const auto dims = full(use_speed);
+    for (std::size_t a = 0; a < np; ++a)
+      for (std::size_t b = 0; b < ns; ++b)
+        if (keep_p[a] && keep_s[b] && cell[a * ns + b] == no_row) ++miss_p[a], ++miss_s[b], ++missing;
+    dims = {kp, ks};
+    if (missing == 0) break;
+    double worst_share = -1;
+    bool drop_pressure = true;
+    std::size_t which = 0;
+    for (std::size_t a = 0; a < np; ++a)
+      if (keep_p[a] && static_cast<double>(miss_p[a]) / static_cast<double>(ks) > worst_share)
+        worst_share = static_cast<double>(miss_p[a]) / static_cast<double>(ks), drop_pressure = true, which = a;
+    for (std::size_t b = 0; b < ns; ++b)
+      if (keep_s[b] && static_cast<double>(miss_s[b]) / static_cast<double>(kp) > worst_share)
+        worst_share = static_cast<double>(miss_s[b]) / static_cast<double>(kp), drop_pressure = false, which = b;
+    if (drop_pressure)
+      keep_p[which] = false;
+    else
+      keep_s[which] = false;
+  }
   char buf[160];
   for (std::size_t a = 0; a < np; ++a)
     for (std::size_t b = 0; b < ns; ++b)
@@ -386,16 +391,30 @@ void estimate_displacement(test_stand_result& res, const std::vector<std::size_t
   res.estimators[2] = displacement_two_step(xs.data(), ps.data(), ys.data(), dims.first, dims.second);
 }
 
-// Leverages h_ii of a design matrix (m rows, p columns, column-major): columns scaled to unit
-// norm, Gram matrix inverted by Cholesky (p <= 5). Returns false when singular.
-bool leverages(const std::vector<double>& a, std::size_t m, std::size_t p, std::vector<double>& h) {
-  std::vector<double> x(a), g(p * p, 0.0);
+// Externally studentized residuals of the weighted regression y ~ A (m rows, p columns,
+// column-major), each row weighted by 1 / u_i (the point's standard uncertainty: instruments'
+// limits are per cent of reading, so the scatter grows with the reading):
+// t_i = e_i / (s_(i) sqrt(1 - h_ii)), s_(i)^2 = ((m - p) s^2 - e_i^2 / (1 - h_ii)) / (m - p - 1)
+// (Belsley, Kuh and Welsch 1980, 2.1). Columns scaled to unit norm, the Gram matrix factored by
+// Cholesky (p <= 5; a diagnostic, the coefficients come from fit_loss_model()'s QR). `floor`: an
+// unweighted RMS residual at or below it is rounding (exact data): every t is 0 then.
+void externally_studentized(std::vector<double> x, std::size_t m, std::size_t p, const std::vector<double>& y,
+                            const std::vector<double>& u, double floor, std::vector<double>& t) {
+  const double nan = std::numeric_limits<double>::quiet_NaN();
+  t.assign(m, nan);
+  if (m < p + 2) return;
+  std::vector<double> yw(m), g(p * p, 0.0), norm(p), beta(p, 0.0), z(p), h(m, 0.0);
+  for (std::size_t i = 0; i < m; ++i) {
+    if (!(u[i] > 0)) return;
+    yw[i] = y[i] / u[i];
+    for (std::size_t j = 0; j < p; ++j) x[j * m + i] /= u[i];
+  }
   for (std::size_t j = 0; j < p; ++j) {
     double nn = 0;
     for (std::size_t i = 0; i < m; ++i) nn += x[j * m + i] * x[j * m + i];
-    nn = std::sqrt(nn);
-    if (!(nn > 0)) return false;
-    for (std::size_t i = 0; i < m; ++i) x[j * m + i] /= nn;
+    norm[j] = std::sqrt(nn);
+    if (!(norm[j] > 0)) return;
+    for (std::size_t i = 0; i < m; ++i) x[j * m + i] /= norm[j];
   }
   for (std::size_t j = 0; j < p; ++j)
     for (std::size_t k = 0; k <= j; ++k) {
@@ -403,39 +422,43 @@ bool leverages(const std::vector<double>& a, std::size_t m, std::size_t p, std::
       for (std::size_t i = 0; i < m; ++i) sum += x[j * m + i] * x[k * m + i];
       g[j * p + k] = sum;
     }
-  for (std::size_t j = 0; j < p; ++j) {  // Cholesky, lower triangle in place
+  for (std::size_t j = 0; j < p; ++j) {  // Cholesky G = L L^T, lower triangle in place
     for (std::size_t k = 0; k < j; ++k) g[j * p + j] -= g[j * p + k] * g[j * p + k];
-    if (!(g[j * p + j] > 1e-14)) return false;
+    if (!(g[j * p + j] > 1e-14)) return;
     g[j * p + j] = std::sqrt(g[j * p + j]);
     for (std::size_t i = j + 1; i < p; ++i) {
       for (std::size_t k = 0; k < j; ++k) g[i * p + j] -= g[i * p + k] * g[j * p + k];
       g[i * p + j] /= g[j * p + j];
     }
   }
-  h.assign(m, 0.0);
-  std::vector<double> z(p);
-  for (std::size_t i = 0; i < m; ++i) {  // h_ii = |L^-1 x_i|^2
-    for (std::size_t j = 0; j < p; ++j) {
+  // beta = G^-1 X^T y: forward then back substitution
+  for (std::size_t j = 0; j < p; ++j) {
+    double v = 0;
+    for (std::size_t i = 0; i < m; ++i) v += x[j * m + i] * yw[i];
+    for (std::size_t k = 0; k < j; ++k) v -= g[j * p + k] * z[k];
+    z[j] = v / g[j * p + j];
+  }
+  for (std::size_t j = p; j-- > 0;) {
+    double v = z[j];
+    for (std::size_t k = j + 1; k < p; ++k) v -= g[k * p + j] * beta[k];
+    beta[j] = v / g[j * p + j];
+  }
+  std::vector<double> e(m);
+  double rss = 0, rss_plain = 0;
+  for (std::size_t i = 0; i < m; ++i) {
+    double fit = 0;
+    for (std::size_t j = 0; j < p; ++j) fit += x[j * m + i] * beta[j];
+    e[i] = yw[i] - fit;
+    rss += e[i] * e[i];
+    rss_plain += e[i] * u[i] * e[i] * u[i];
+    for (std::size_t j = 0; j < p; ++j) {  // h_ii = |L^-1 x_i|^2
       double v = x[j * m + i];
       for (std::size_t k = 0; k < j; ++k) v -= g[j * p + k] * z[k];
       z[j] = v / g[j * p + j];
       h[i] += z[j] * z[j];
     }
   }
-  return true;
-}
-
-// Externally studentized residuals t_i = e_i / (s_(i) sqrt(1 - h_ii)) (Belsley, Kuh and Welsch 1980, 2.1).
-// `floor`: an RMS residual at or below it is rounding (exact data): every t is 0 then.
-void externally_studentized(const std::vector<double>& a, std::size_t m, std::size_t p, const std::vector<double>& e,
-                            double floor, std::vector<double>& t) {
-  const double nan = std::numeric_limits<double>::quiet_NaN();
-  t.assign(m, nan);
-  std::vector<double> h;
-  if (m < p + 2 || !leverages(a, m, p, h)) return;
-  double rss = 0;
-  for (const double v : e) rss += v * v;
-  if (std::sqrt(rss / static_cast<double>(m)) <= floor) {
+  if (std::sqrt(rss_plain / static_cast<double>(m)) <= floor) {
     std::fill(t.begin(), t.end(), 0.0);
     return;
   }
@@ -448,16 +471,19 @@ void externally_studentized(const std::vector<double>& a, std::size_t m, std::si
   }
 }
 
-// Studentized residuals of the flow and torque regressions of a fitted model (same columns as fit_loss_model()).
+// Studentized residuals of the flow and torque regressions of a fitted model (the columns of
+// fit_loss_model()), weighted by each point's standard uncertainty of flow and torque.
 void studentized(const loss_model<double>& mod, const std::vector<double>& dp, const std::vector<double>& n,
                  const std::vector<double>& mu, const std::vector<double>& q, const std::vector<double>& torque,
-                 const std::vector<double>& rq, const std::vector<double>& rt, std::vector<double>& tq,
+                 const std::vector<double>& uq, const std::vector<double>& ut, std::vector<double>& tq,
                  std::vector<double>& tt) {
   const std::size_t m = dp.size();
   const bool ext = mod.model == loss_model_kind::schloesser;
   const double dd = mod.displacement_m3_rev / (2 * 3.14159265358979323846);
-  std::vector<double> af, at;
-  std::size_t pf = 0, pt = ext ? 4 : 3;
+  const double sign = mod.kind == machine::pump ? 1.0 : -1.0;
+  std::vector<double> af, at, yq(m), yt(m);
+  std::size_t pf = 0;
+  const std::size_t pt = ext ? 4 : 3;
   auto col = [&](std::vector<double>& a, auto f) {
     for (std::size_t i = 0; i < m; ++i) a.push_back(f(detail::loss_columns(dd, mod.rho_kg_m3, dp[i], n[i], mu[i]), i));
   };
@@ -470,9 +496,13 @@ void studentized(const loss_model<double>& mod, const std::vector<double>& dp, c
   col(at, [](const auto& c, std::size_t) { return c.tq_coul; });
   col(at, [](const auto&, std::size_t) { return 1.0; });
   if (ext) col(at, [](const auto& c, std::size_t) { return c.tq_hydro; });
+  for (std::size_t i = 0; i < m; ++i) {
+    yq[i] = sign * (dd * 2 * 3.14159265358979323846 * n[i] - q[i]);
+    yt[i] = sign * (torque[i] - dd * dp[i]);
+  }
   const double rounding = 1e-10;  // relative RMS residual of exact data
-  externally_studentized(af, m, pf, rq, rounding * *std::max_element(q.begin(), q.end()), tq);
-  externally_studentized(at, m, pt, rt, rounding * *std::max_element(torque.begin(), torque.end()), tt);
+  externally_studentized(std::move(af), m, pf, yq, uq, rounding * *std::max_element(q.begin(), q.end()), tq);
+  externally_studentized(std::move(at), m, pt, yt, ut, rounding * *std::max_element(torque.begin(), torque.end()), tt);
 }
 
 // Verdicts of the acceptance criteria at the matching set points.
@@ -663,6 +693,16 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
     res.points[k].pressure_level = plev[k];
   }
 
+  // standard uncertainties of each set point's flow and torque (type B with type A), the outlier test's weights
+  auto rss = [](double a, double b) { return std::sqrt(a * a + b * b); };
+  std::vector<double> u_flow(m), u_torque(m);
+  for (std::size_t k = 0; k < m; ++k) {
+    u_flow[k] = rss(instrument_uncertainty(setup.flow, q_read_p[k]), res.points[k].ua_flow_m3_s);
+    u_torque[k] = rss(instrument_uncertainty(setup.torque, tp[k]), res.points[k].ua_torque_n_m);
+    if (!(u_flow[k] > 0)) u_flow[k] = 1e-6 * qp[k] + 1e-300;  // no uncertainty stated: equal relative weights
+    if (!(u_torque[k] > 0)) u_torque[k] = 1e-6 * tp[k] + 1e-300;
+  }
+
   // ---- displacement, fit, outliers: repeated while the worst outlier is excluded by rule
   std::vector<double> work(loss_fit_workspace(m));
   const double rho = oil_density_at(oil, t_visc[n / 2], 0.0).value;
@@ -695,9 +735,11 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
     }
     // fit on the included set points
     const std::size_t mi = inc.size();
-    std::vector<double> xs(mi), xd(mi), xm(mi), xq(mi), xt(mi), rq(mi), rt(mi);
+    std::vector<double> xs(mi), xd(mi), xm(mi), xq(mi), xt(mi), rq(mi), rt(mi), xuq(mi), xut(mi);
     for (std::size_t j = 0; j < mi; ++j) {
       xs[j] = sp[inc[j]]; xd[j] = dpp[inc[j]]; xm[j] = mup[inc[j]]; xq[j] = qp[inc[j]]; xt[j] = tp[inc[j]];
+      xuq[j] = u_flow[inc[j]];
+      xut[j] = u_torque[inc[j]];
     }
     loss_fit_options<double> opt;
     opt.flow_terms = setup.flow_terms & 3u;
@@ -720,7 +762,7 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
           res.points[k2].flow_residual_m3_s = qp[k2] - pr.flow_m3_s;
           res.points[k2].torque_residual_n_m = tp[k2] - pr.torque_n_m;
         }
-        studentized(mod, xd, xs, xm, xq, xt, rq, rt, tq_t, tt_t);
+        studentized(mod, xd, xs, xm, xq, xt, xuq, xut, tq_t, tt_t);
       }
       res.models.push_back(mod);
     }
@@ -753,7 +795,6 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
 
   // ---- efficiencies with GUM uncertainty per set point (type B of the instruments with type A), and the drain table
   bool implausible = false;
-  auto rss = [](double a, double b) { return std::sqrt(a * a + b * b); };
   for (std::size_t k = 0; k < m; ++k) {
     auto& pt = res.points[k];
     const double u_dp_b = pressure_difference_uncertainty(instrument_uncertainty(setup.pressure, p1p[k]),
