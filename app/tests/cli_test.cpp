@@ -421,9 +421,14 @@ TEST(CliTestStand, DemoMatchesLibrary) {
 
   const double rho = pumploss::oil_density_at(oil, d.si("drain temperature")[n / 2], 0.0).value;
   std::vector<double> work(pumploss::loss_fit_workspace(n));
-  const auto m = pumploss::fit_loss_model(pumploss::machine::pump, pumploss::loss_model_kind::wilson, v.v_m3_rev, rho,
+  // the reduction offers the constant and compression flow columns (chosen by BIC) and carries the
+  // displacement's uncertainty into the coefficients (issue 16; changed on purpose)
+  pumploss::loss_fit_options<double> opt;
+  opt.flow_terms = 3u;
+  opt.u_displacement_m3_rev = v.u_v_m3_rev;
+  const auto m = pumploss::fit_loss_model<double>(pumploss::machine::pump, pumploss::loss_model_kind::wilson, v.v_m3_rev, rho,
                                           dp.data(), d.si("speed").data(), mu.data(), q.data(), d.si("torque").data(), n,
-                                          work.data());
+                                          work.data(), nullptr, nullptr, opt);
   ASSERT_EQ(m.st, pumploss::status::ok);
   const auto lm = read_out(out + "/test_stand_loss_model.csv");
   EXPECT_LT(rel(std::stod(lm.text(0, "Wilson")), m.c_s), 1e-4);
@@ -434,9 +439,9 @@ TEST(CliTestStand, DemoMatchesLibrary) {
   // the map: a point of the grid predicted by the Schloesser model at 50 degC
   const auto map = read_out(out + "/test_stand_map.csv");
   ASSERT_EQ(map.rows.size(), 29u * 27u);
-  const auto ms = pumploss::fit_loss_model(pumploss::machine::pump, pumploss::loss_model_kind::schloesser, v.v_m3_rev,
+  const auto ms = pumploss::fit_loss_model<double>(pumploss::machine::pump, pumploss::loss_model_kind::schloesser, v.v_m3_rev,
                                            rho, dp.data(), d.si("speed").data(), mu.data(), q.data(),
-                                           d.si("torque").data(), n, work.data());
+                                           d.si("torque").data(), n, work.data(), nullptr, nullptr, opt);
   const std::size_t k = 10 * 29 + 12;  // pressure 10 of 27, speed 12 of 29
   const double pk = map.num(k, "pressure difference [bar]") * 1e5, sk = map.num(k, "speed [rpm]") / 60;
   const auto pr = pumploss::loss_model_predict(ms, pk, sk, pumploss::oil_dynamic_viscosity(oil, 323.15, 0.0).value);
