@@ -17,6 +17,16 @@ namespace plcli {
 
 namespace {
 
+// The outlier and exclusion flag of a set point for the points table.
+std::string point_flag(const pumploss::test_stand_point& p) {
+  std::string f = (p.outlier & 1u) && (p.outlier & 2u) ? "flow+torque outlier"
+                  : (p.outlier & 1u)                   ? "flow outlier"
+                  : (p.outlier & 2u)                   ? "torque outlier"
+                                                       : "";
+  if (p.excluded) f += std::string(f.empty() ? "" : ", ") + (p.excluded_by_list ? "excluded (list)" : "excluded (rule)");
+  return f;
+}
+
 using D = pumploss::dimension;
 using pumploss::status;
 
@@ -85,6 +95,16 @@ int run_test_stand(const stand_options& o) {
                                    : "meter in the return line at " + show_quantity(s.meter_pressure_pa, D::pressure, du) +
                                          " and the meter temperature, corrected to the " + (pump ? "outlet" : "inlet") +
                                          " port by the density ratio (pumploss::flow_at_port)");
+  r.facts.emplace_back(
+      "Set points",
+      fmt::format("{} from {} readings grouped by speed ({:.3g} %) and pressure ({:.3g} % or {:.3g} bar); {} settling "
+                  "readings dropped (steady-state limits of ISO 4409 class B, from memory); type A s/sqrt(n) of the "
+                  "scatter with the instruments' type B",
+                  n, res.row_point.size(), 100 * s.group_speed_fraction, 100 * s.group_dp_fraction,
+                  s.group_dp_abs_pa / 1e5, res.rows_unsteady));
+  r.facts.emplace_back("Outliers", fmt::format("{} set points flagged (externally studentized residual above {:.3g}), {} "
+                                               "excluded from the fit; see the 'flag' column",
+                                               res.outliers, s.outlier_threshold, res.excluded));
   r.facts.emplace_back("Displacement used",
                        show_quantity(res.displacement_m3_rev, D::displacement, du, 5) + " from " + v_source);
 
@@ -105,14 +125,17 @@ int run_test_stand(const stand_options& o) {
              {"U overall", cell_kind::percent, D::pressure, 2},
              {"status", cell_kind::text, D::pressure, 0},
              {"flow residual", cell_kind::quantity, D::volume_flow, 2},
-             {"torque residual", cell_kind::quantity, D::torque, 2}};
+             {"torque residual", cell_kind::quantity, D::torque, 2},
+             {"readings", cell_kind::number, D::pressure, 3},
+             {"flag", cell_kind::text, D::pressure, 0}};
   svg::series measured{"test points", {}, {}, false, true, false};
   for (std::size_t i = 0; i < n; ++i) {
     const auto& p = res.points[i];
     const auto& g = p.eta;
     tp.rows.push_back({static_cast<double>(i + 1), p.speed_rev_s, p.dp_pa, p.flow_m3_s, p.torque_n_m, p.mu_pa_s,
                        g.eta_v.value, g.eta_v.U, g.eta_hm.value, g.eta_hm.U, g.eta_t.value, g.eta_t.U,
-                       status_text(p.st), p.flow_residual_m3_s, p.torque_residual_n_m});
+                       status_text(p.st), p.flow_residual_m3_s, p.torque_residual_n_m, static_cast<double>(p.rows),
+                       point_flag(p)});
     measured.x.push_back(du.show(p.speed_rev_s, D::rotational_speed));
     measured.y.push_back(du.show(p.dp_pa, D::pressure));
   }

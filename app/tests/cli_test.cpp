@@ -361,6 +361,10 @@ TEST(CliTestStand, DemoMatchesLibrary) {
   const auto r = run({"test-stand", kDemo + "/test_stand.csv", "--setup", kDemo + "/test_stand.toml", "--out", out}, tmp);
   ASSERT_EQ(r.code, 0) << r.err;
   EXPECT_TRUE(has_cautions(slurp(out + "/test_stand.txt")));
+  // the demo has one reading per set point: 30 set points, nothing dropped as settling (issue 16)
+  EXPECT_NE(r.out.find("30 from 30 readings"), std::string::npos) << r.out;
+  EXPECT_NE(r.out.find("0 settling readings dropped"), std::string::npos);
+  EXPECT_NE(r.out.find("Outliers:"), std::string::npos);
 
   // the test's own pipeline: flow at the port, two-step displacement, GUM, Wilson fit
   const auto d = read_csv(kDemo + "/test_stand.csv", stand_columns());
