@@ -3,6 +3,7 @@
 // returns: efficiencies per operating point with their expanded uncertainty, the derived
 // displacement by three estimators, the fitted loss models, the drain table and the
 // overall-efficiency map (CSV and SVG contour plot).
+#include <limits>
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
 
@@ -247,6 +248,35 @@ int run_test_stand(const stand_options& o) {
   p.contours = c;
   p.lines.push_back(measured);
 
+  if (!res.acceptance.empty()) {  // the acceptance verdicts, one row per criterion
+    table ta;
+    ta.name = "acceptance";
+    ta.title = "Acceptance criteria: verdict and margin at the matching set point (U: expanded uncertainty, k = 2)";
+    ta.cols = {{"criterion", cell_kind::text, D::pressure, 0},
+               {"quantity", cell_kind::text, D::pressure, 0},
+               {"limit", cell_kind::text, D::pressure, 0},
+               {"set point", cell_kind::number, D::pressure, 2},
+               {"measured", cell_kind::text, D::pressure, 0},
+               {"margin", cell_kind::text, D::pressure, 0},
+               {"verdict", cell_kind::text, D::pressure, 0}};
+    for (std::size_t i = 0; i < res.acceptance.size(); ++i) {
+      const auto& v = res.acceptance[i];
+      const bool drain = v.criterion.what == pumploss::acceptance_quantity::drain_flow;
+      auto shown = [&](double x) {
+        return drain ? show_quantity(x, D::volume_flow, du, 4) : fmt::format("{:.2f} %", 100 * x);
+      };
+      ta.rows.push_back({v.criterion.label.empty() ? fmt::format("{}", i + 1) : v.criterion.label,
+                         std::string(pumploss::acceptance_quantity_name(v.criterion.what)),
+                         (drain ? "max " : "min ") + shown(v.criterion.limit),
+                         v.tested ? static_cast<double>(v.point + 1) : std::numeric_limits<double>::quiet_NaN(),
+                         v.tested ? shown(v.value) + (drain ? "" : fmt::format(" +- {:.2f} %", 100 * v.U)) : "not tested",
+                         v.tested ? shown(v.margin) : "-",
+                         std::string(!v.tested ? "NOT TESTED" : v.pass ? "pass" : "FAIL")});
+    }
+    r.tables.push_back(std::move(ta));
+    r.facts.emplace_back("Acceptance", res.accepted ? "every criterion met (see the acceptance table)"
+                                                    : "NOT accepted: a criterion failed or was not tested (see the table)");
+  }
   r.tables.push_back(std::move(td));
   r.tables.push_back(std::move(tm));
   r.tables.push_back(std::move(tp));

@@ -906,3 +906,43 @@ TEST(CliReport, UnitsInHeadingsFullPrecisionCsvAndCautionsAtTheFoot) {
   EXPECT_LT(rel(t.num(0, "outlet pressure [psi]"), pumploss::convert(20.0, "bar", "psi").value), 1e-9);
   EXPECT_NE(t.head.back().find("status"), std::string::npos);
 }
+
+// Issue 16: [fit] is optional; [outliers] and [[acceptance]] criteria in the setup give a verdict
+// per criterion with its margin (pass, fail, not tested) and an overall one.
+TEST(CliTestStand, AcceptanceCriteriaAndOptionalFit) {
+  temp_dir tmp;
+  std::string setup = slurp(kDemo + "/test_stand.toml");
+  const auto fit = setup.find("[fit]");
+  ASSERT_NE(fit, std::string::npos);
+  setup.erase(fit, setup.find("[map]") - fit);  // no [fit]: Wilson alone
+  const auto oil = setup.find("oil = \"oil.toml\"");
+  ASSERT_NE(oil, std::string::npos);
+  setup.replace(oil, std::string("oil = \"oil.toml\"").size(), "oil = \"" + kDemo + "/oil.toml\"");
+  setup += "\n[outliers]\nthreshold = 3.5\nrule = \"exclude\"\n"
+           "\n[[acceptance]]\nlabel = \"overall 1500 rpm 250 bar\"\nquantity = \"overall\"\nspeed = \"1500 rpm\"\n"
+           "pressure = \"250 bar\"\nmin_percent = 50\n"
+           "\n[[acceptance]]\nlabel = \"volumetric 1500 rpm 250 bar\"\nquantity = \"volumetric\"\nspeed = \"1500 rpm\"\n"
+           "pressure = \"250 bar\"\nmin_percent = 99.9\n"
+           "\n[[acceptance]]\nlabel = \"drain\"\nquantity = \"drain_flow\"\nmax = \"100 L/min\"\n"
+           "\n[[acceptance]]\nlabel = \"not run\"\nquantity = \"overall\"\nspeed = \"3000 rpm\"\npressure = \"250 bar\"\n"
+           "min_percent = 50\n";
+  const std::string toml = tmp / "setup.toml", out = tmp / "out";
+  write_file(toml, setup);
+  const auto r = run({"test-stand", kDemo + "/test_stand.csv", "--setup", toml, "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err << r.out;
+  EXPECT_EQ(r.out.find("Schloesser fit"), std::string::npos);  // Wilson alone without [fit]
+  EXPECT_NE(r.out.find("NOT accepted"), std::string::npos) << r.out;
+  EXPECT_NE(r.out.find("externally studentized residual above 3.5"), std::string::npos);
+  const auto acc = read_out(out + "/test_stand_acceptance.csv");
+  ASSERT_EQ(acc.rows.size(), 4u);
+  EXPECT_EQ(acc.text(0, "verdict"), "pass");
+  EXPECT_EQ(acc.text(1, "verdict"), "FAIL");
+  EXPECT_EQ(acc.text(2, "verdict"), "pass");
+  EXPECT_EQ(acc.text(3, "verdict"), "NOT TESTED");
+  // a bad criterion is refused with the file's line
+  write_file(toml, setup + "\n[[acceptance]]\nquantity = \"overall\"\nspeed = \"1500 rpm\"\npressure = \"250 bar\"\n"
+                           "min_percent = 150\n");
+  const auto bad = run({"test-stand", kDemo + "/test_stand.csv", "--setup", toml, "--out", out}, tmp);
+  EXPECT_NE(bad.code, 0);
+  EXPECT_NE(bad.err.find("min_percent"), std::string::npos) << bad.err;
+}
