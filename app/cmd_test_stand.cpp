@@ -86,6 +86,7 @@ int run_test_stand(const stand_options& o) {
 
   report r;
   r.title = std::string("Test-stand analysis: ") + setup.machine_name;
+  for (const auto& j : setup.job) r.facts.emplace_back(j.first, j.second);
   r.facts.emplace_back("Data", o.data + fmt::format(" ({} operating points; {} speed levels x {} pressure levels)", n,
                                                     res.speed_levels, res.pressure_levels));
   r.facts.emplace_back("Machine", std::string(pump ? "pump" : "motor") + ", nominal displacement " +

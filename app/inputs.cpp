@@ -209,6 +209,15 @@ stand_setup read_stand_setup(const std::string& path) {
   auto& r = s.run;
   s.oil = read_oil_ref(root);
   r.fluid = s.oil.props;
+  if (auto j = root.table_opt("job")) {  // optional job details, reported as given (issue 16)
+    const std::pair<const char*, const char*> keys[] = {
+        {"customer", "Customer"},   {"serial", "Serial number"}, {"job_number", "Job number"},
+        {"date", "Test date"},      {"operator", "Operator"},    {"stand", "Test stand"},
+        {"instruments", "Instruments"}, {"oil", "Oil (as tested)"}};
+    for (const auto& k : keys)
+      if (const auto v = j->text_opt(k.first)) s.job.emplace_back(k.second, *v);
+    j->finish();
+  }
   auto m = root.table("machine");
   s.machine_name = m.text("name");
   r.kind = m.choice("kind", {"pump", "motor"}) == "pump" ? pumploss::machine::pump : pumploss::machine::motor;

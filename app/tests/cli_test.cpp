@@ -918,6 +918,9 @@ TEST(CliTestStand, AcceptanceCriteriaAndOptionalFit) {
   const auto oil = setup.find("oil = \"oil.toml\"");
   ASSERT_NE(oil, std::string::npos);
   setup.replace(oil, std::string("oil = \"oil.toml\"").size(), "oil = \"" + kDemo + "/oil.toml\"");
+  setup += "\n[job]\ncustomer = \"Acme Mill\"\nserial = \"SN 4711\"\njob_number = \"J-2026-118\"\n"
+           "date = \"2026-12-03\"\noperator = \"R. Meyer\"\nstand = \"Stand 2\"\ninstruments = \"cal. 2026-06\"\n"
+           "oil = \"VG 46 batch 7\"\n";
   setup += "\n[outliers]\nthreshold = 3.5\nrule = \"exclude\"\n"
            "\n[[acceptance]]\nlabel = \"overall 1500 rpm 250 bar\"\nquantity = \"overall\"\nspeed = \"1500 rpm\"\n"
            "pressure = \"250 bar\"\nmin_percent = 50\n"
@@ -932,6 +935,9 @@ TEST(CliTestStand, AcceptanceCriteriaAndOptionalFit) {
   ASSERT_EQ(r.code, 0) << r.err << r.out;
   EXPECT_EQ(r.out.find("Schloesser fit"), std::string::npos);  // Wilson alone without [fit]
   EXPECT_NE(r.out.find("NOT accepted"), std::string::npos) << r.out;
+  for (const char* job : {"Acme Mill", "SN 4711", "J-2026-118", "2026-12-03", "R. Meyer", "Stand 2", "cal. 2026-06",
+                          "VG 46 batch 7"})
+    EXPECT_NE(r.out.find(job), std::string::npos) << job;
   EXPECT_NE(r.out.find("externally studentized residual above 3.5"), std::string::npos);
   const auto acc = read_out(out + "/test_stand_acceptance.csv");
   ASSERT_EQ(acc.rows.size(), 4u);
