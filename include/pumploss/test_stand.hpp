@@ -162,7 +162,7 @@ struct test_stand_message {
   bool follows_value = false; ///< the sentence follows the reading's value ("is not a speed above zero ...")
 };
 
-/// One operating point after reduction.
+/// One set point after reduction (its steady readings averaged).
 struct test_stand_point {
   double speed_rev_s = 0;                   ///< speed, rev/s
   double dp_pa = 0;                         ///< pressure difference across the machine, Pa
@@ -225,8 +225,8 @@ struct test_stand_result {
   double u_displacement_m3_rev = 0;              ///< its standard uncertainty (0 for the nominal figure)
   displacement_choice displacement_used = displacement_choice::two_step;  ///< where displacement_m3_rev came from
   bool flow_corrected = false;                    ///< the flow was corrected to port conditions
-  std::vector<test_stand_point> points;          ///< per reading
-  std::vector<test_stand_drain> drain;           ///< per reading
+  std::vector<test_stand_point> points;          ///< per set point (readings grouped and averaged)
+  std::vector<test_stand_drain> drain;           ///< per set point
   double fit_density_kg_m3 = 0;                  ///< density the Schloesser terms used (oil at the middle point)
   std::vector<loss_model<double>> models;        ///< Wilson, then Schloesser when asked for
   std::vector<double> map_speed_rev_s;           ///< map grid speeds
