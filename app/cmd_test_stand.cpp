@@ -3,6 +3,7 @@
 // returns: efficiencies per operating point with their expanded uncertainty, the derived
 // displacement by three estimators, the fitted loss models, the drain table and the
 // overall-efficiency map (CSV and SVG contour plot).
+#include <limits>
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
 
@@ -16,6 +17,16 @@
 namespace plcli {
 
 namespace {
+
+// The outlier and exclusion flag of a set point for the points table.
+std::string point_flag(const pumploss::test_stand_point& p) {
+  std::string f = (p.outlier & 1u) && (p.outlier & 2u) ? "flow+torque outlier"
+                  : (p.outlier & 1u)                   ? "flow outlier"
+                  : (p.outlier & 2u)                   ? "torque outlier"
+                                                       : "";
+  if (p.excluded) f += std::string(f.empty() ? "" : ", ") + (p.excluded_by_list ? "excluded (list)" : "excluded (rule)");
+  return f;
+}
 
 using D = pumploss::dimension;
 using pumploss::status;
@@ -77,6 +88,7 @@ int run_test_stand(const stand_options& o) {
   report r;
   add_input_notes(r, d);
   r.title = std::string("Test-stand analysis: ") + setup.machine_name;
+  for (const auto& j : setup.job) r.facts.emplace_back(j.first, j.second);
   r.facts.emplace_back("Data", o.data + fmt::format(" ({} operating points; {} speed levels x {} pressure levels)", n,
                                                     res.speed_levels, res.pressure_levels));
   r.facts.emplace_back("Machine", std::string(pump ? "pump" : "motor") + ", nominal displacement " +
@@ -87,6 +99,16 @@ int run_test_stand(const stand_options& o) {
                                    : "meter in the return line at " + show_quantity(s.meter_pressure_pa, D::pressure, du) +
                                          " and the meter temperature, corrected to the " + (pump ? "outlet" : "inlet") +
                                          " port by the density ratio (pumploss::flow_at_port)");
+  r.facts.emplace_back(
+      "Set points",
+      fmt::format("{} from {} readings grouped by speed ({:.3g} %) and pressure ({:.3g} % or {:.3g} bar); {} settling "
+                  "readings dropped (steady-state limits of ISO 4409 class B, from memory); type A s/sqrt(n) of the "
+                  "scatter with the instruments' type B",
+                  n, res.row_point.size(), 100 * s.group_speed_fraction, 100 * s.group_dp_fraction,
+                  s.group_dp_abs_pa / 1e5, res.rows_unsteady));
+  r.facts.emplace_back("Outliers", fmt::format("{} set points flagged (externally studentized residual above {:.3g}), {} "
+                                               "excluded from the fit; see the 'flag' column",
+                                               res.outliers, s.outlier_threshold, res.excluded));
   r.facts.emplace_back("Displacement used",
                        show_quantity(res.displacement_m3_rev, D::displacement, du, 5) + " from " + v_source);
 
@@ -107,14 +129,17 @@ int run_test_stand(const stand_options& o) {
              {"U overall", cell_kind::percent, D::pressure, 2},
              {"status", cell_kind::text, D::pressure, 0},
              {"flow residual", cell_kind::quantity, D::volume_flow, 2},
-             {"torque residual", cell_kind::quantity, D::torque, 2}};
+             {"torque residual", cell_kind::quantity, D::torque, 2},
+             {"readings", cell_kind::number, D::pressure, 3},
+             {"flag", cell_kind::text, D::pressure, 0}};
   svg::series measured{"test points", {}, {}, false, true, false};
   for (std::size_t i = 0; i < n; ++i) {
     const auto& p = res.points[i];
     const auto& g = p.eta;
     tp.rows.push_back({static_cast<double>(i + 1), p.speed_rev_s, p.dp_pa, p.flow_m3_s, p.torque_n_m, p.mu_pa_s,
                        g.eta_v.value, g.eta_v.U, g.eta_hm.value, g.eta_hm.U, g.eta_t.value, g.eta_t.U,
-                       status_text(p.st), p.flow_residual_m3_s, p.torque_residual_n_m});
+                       status_text(p.st), p.flow_residual_m3_s, p.torque_residual_n_m, static_cast<double>(p.rows),
+                       point_flag(p)});
     measured.x.push_back(du.show(p.speed_rev_s, D::rotational_speed));
     measured.y.push_back(du.show(p.dp_pa, D::pressure));
   }
@@ -226,6 +251,35 @@ int run_test_stand(const stand_options& o) {
   p.contours = c;
   p.lines.push_back(measured);
 
+  if (!res.acceptance.empty()) {  // the acceptance verdicts, one row per criterion
+    table ta;
+    ta.name = "acceptance";
+    ta.title = "Acceptance criteria: verdict and margin at the matching set point (U: expanded uncertainty, k = 2)";
+    ta.cols = {{"criterion", cell_kind::text, D::pressure, 0},
+               {"quantity", cell_kind::text, D::pressure, 0},
+               {"limit", cell_kind::text, D::pressure, 0},
+               {"set point", cell_kind::number, D::pressure, 2},
+               {"measured", cell_kind::text, D::pressure, 0},
+               {"margin", cell_kind::text, D::pressure, 0},
+               {"verdict", cell_kind::text, D::pressure, 0}};
+    for (std::size_t i = 0; i < res.acceptance.size(); ++i) {
+      const auto& v = res.acceptance[i];
+      const bool drain = v.criterion.what == pumploss::acceptance_quantity::drain_flow;
+      auto shown = [&](double x) {
+        return drain ? show_quantity(x, D::volume_flow, du, 4) : fmt::format("{:.2f} %", 100 * x);
+      };
+      ta.rows.push_back({v.criterion.label.empty() ? fmt::format("{}", i + 1) : v.criterion.label,
+                         std::string(pumploss::acceptance_quantity_name(v.criterion.what)),
+                         (drain ? "max " : "min ") + shown(v.criterion.limit),
+                         v.tested ? static_cast<double>(v.point + 1) : std::numeric_limits<double>::quiet_NaN(),
+                         v.tested ? shown(v.value) + (drain ? "" : fmt::format(" +- {:.2f} %", 100 * v.U)) : "not tested",
+                         v.tested ? shown(v.margin) : "-",
+                         std::string(!v.tested ? "NOT TESTED" : v.pass ? "pass" : "FAIL")});
+    }
+    r.tables.push_back(std::move(ta));
+    r.facts.emplace_back("Acceptance", res.accepted ? "every criterion met (see the acceptance table)"
+                                                    : "NOT accepted: a criterion failed or was not tested (see the table)");
+  }
   r.tables.push_back(std::move(td));
   r.tables.push_back(std::move(tm));
   r.tables.push_back(std::move(tp));

@@ -209,6 +209,15 @@ stand_setup read_stand_setup(const std::string& path) {
   auto& r = s.run;
   s.oil = read_oil_ref(root);
   r.fluid = s.oil.props;
+  if (auto j = root.table_opt("job")) {  // optional job details, reported as given (issue 16)
+    const std::pair<const char*, const char*> keys[] = {
+        {"customer", "Customer"},   {"serial", "Serial number"}, {"job_number", "Job number"},
+        {"date", "Test date"},      {"operator", "Operator"},    {"stand", "Test stand"},
+        {"instruments", "Instruments"}, {"oil", "Oil (as tested)"}};
+    for (const auto& k : keys)
+      if (const auto v = j->text_opt(k.first)) s.job.emplace_back(k.second, *v);
+    j->finish();
+  }
   auto m = root.table("machine");
   s.machine_name = m.text("name");
   r.kind = m.choice("kind", {"pump", "motor"}) == "pump" ? pumploss::machine::pump : pumploss::machine::motor;
@@ -238,9 +247,46 @@ stand_setup read_stand_setup(const std::string& path) {
   r.flow = read_instrument(ins, "flow", D::volume_flow);
   r.torque = read_instrument(ins, "torque", D::torque);
   ins.finish();
-  auto f = root.table("fit");
-  r.fit_schloesser = f.choice("model", {"wilson", "wilson+schloesser"}, "wilson") == "wilson+schloesser";
-  f.finish();
+  if (auto f = root.table_opt("fit")) {  // optional (issue 16): Wilson alone by default
+    r.fit_schloesser = f->choice("model", {"wilson", "wilson+schloesser"}, "wilson") == "wilson+schloesser";
+    f->finish();
+  }
+  if (auto ol = root.table_opt("outliers")) {  // optional: the outlier test and the user's exclusion list
+    if (const auto t = ol->number_opt("threshold")) {
+      if (!(*t > 1 && *t <= 1e6)) throw ol->error("threshold", "must lie above 1");
+      r.outlier_threshold = *t;
+    }
+    r.exclude_outliers = ol->choice("rule", {"exclude", "flag"}, "exclude") == "exclude";
+    for (const double row : ol->has("exclude_rows") ? ol->number_list("exclude_rows") : std::vector<double>{}) {  // 1-based data rows, as a spreadsheet shows them
+      if (!(row >= 1 && row == std::floor(row) && row < 1e12))
+        throw ol->error("exclude_rows", "each entry must be a data row number from 1");
+      r.exclude_rows.push_back(static_cast<std::size_t>(row) - 1);
+    }
+    ol->finish();
+  }
+  for (auto& a : root.tables("acceptance")) {  // optional [[acceptance]] criteria
+    pumploss::acceptance_criterion c;
+    const std::string what = a.choice("quantity", {"volumetric", "hydromechanical", "overall", "drain_flow"});
+    c.what = what == "volumetric"        ? pumploss::acceptance_quantity::eta_v
+             : what == "hydromechanical" ? pumploss::acceptance_quantity::eta_hm
+             : what == "overall"         ? pumploss::acceptance_quantity::eta_t
+                                         : pumploss::acceptance_quantity::drain_flow;
+    const bool drain = c.what == pumploss::acceptance_quantity::drain_flow;
+    c.speed_rev_s = drain ? a.quantity_opt("speed", D::rotational_speed).value_or(0.0) : a.quantity("speed", D::rotational_speed);
+    c.dp_pa = drain ? a.quantity_opt("pressure", D::pressure).value_or(0.0) : a.quantity("pressure", D::pressure);
+    if (drain) {
+      c.limit = a.quantity("max", D::volume_flow);
+    } else {
+      const double pct = a.number("min_percent");
+      if (!(pct > 0 && pct <= 100)) throw a.error("min_percent", "must lie between 0 and 100 %");
+      c.limit = pct / 100;
+    }
+    if (!(c.limit >= 0 && c.speed_rev_s >= 0 && c.dp_pa >= 0))
+      throw a.error("quantity", "the limit, speed and pressure must not be negative");
+    c.label = a.text_opt("label").value_or("");
+    a.finish();
+    r.acceptance.push_back(c);
+  }
   auto map = root.table("map");
   std::tie(r.map_speed_lo_rev_s, r.map_speed_hi_rev_s) = range_pair(map, "speeds", D::rotational_speed);
   std::tie(r.map_dp_lo_pa, r.map_dp_hi_pa) = range_pair(map, "pressures", D::pressure);

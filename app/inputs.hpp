@@ -57,6 +57,7 @@ struct stand_setup {
   std::string machine_name;
   pumploss::test_stand_setup run;          ///< machine, oil, meter, instruments, fit, map grid
   std::vector<double> map_levels;          ///< overall efficiency contour levels (fractions)
+  std::vector<std::pair<std::string, std::string>> job;  ///< optional [job] details (label, text) in report order
 };
 stand_setup read_stand_setup(const std::string& path);
 /// Columns of the test-stand CSV.

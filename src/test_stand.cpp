@@ -113,6 +113,20 @@ bool setup_ok(const test_stand_setup& s, run& r) {
     return bad("map_speed_lo_rev_s", "the map's speeds must be [low, high] with 0 <= low < high");
   if (!(s.map_dp_lo_pa >= 0 && s.map_dp_hi_pa > s.map_dp_lo_pa && std::isfinite(s.map_dp_hi_pa)))
     return bad("map_dp_lo_pa", "the map's pressures must be [low, high] with 0 <= low < high");
+  if (!(s.group_speed_fraction > 0 && s.group_speed_fraction < 0.5 && s.group_dp_fraction > 0 &&
+        s.group_dp_fraction < 0.5 && s.group_dp_abs_pa >= 0 && std::isfinite(s.group_dp_abs_pa)))
+    return bad("group_speed_fraction", "the grouping tolerances must be fractions between 0 and 0.5 and a band >= 0");
+  const auto& l = s.steady;
+  if (!(l.speed_fraction > 0 && l.pressure_fraction > 0 && l.flow_fraction > 0 && l.torque_fraction > 0 &&
+        l.temperature_k > 0 && std::isfinite(l.speed_fraction + l.pressure_fraction + l.flow_fraction +
+                                             l.torque_fraction + l.temperature_k)))
+    return bad("steady", "the steady-state limits must be finite and above zero");
+  if (!(s.outlier_threshold > 1 && s.outlier_threshold <= 1e6) || (s.flow_terms & ~3u) != 0u)
+    return bad("outlier_threshold", "the outlier threshold must lie above 1 (flow terms: bits 1 and 2 only)");
+  for (const auto& c : s.acceptance)
+    if (!(std::isfinite(c.limit) && c.limit >= 0 && c.speed_rev_s >= 0 && c.dp_pa >= 0 &&
+          std::isfinite(c.speed_rev_s + c.dp_pa) && static_cast<int>(c.what) >= 0 && static_cast<int>(c.what) <= 3))
+      return bad("acceptance", "an acceptance criterion needs a known quantity, a finite limit and a point >= 0");
   if (s.map_speeds < 2 || s.map_pressures < 2 || s.map_speeds > 10000 || s.map_pressures > 10000)
     return bad("map_speeds", "the map needs 2 to 10000 speeds and pressures");
   return true;
@@ -204,6 +218,329 @@ bool readings_ok(const test_stand_setup& s, const test_stand_readings& d, run& r
   return true;
 }
 
+// Rows of one set point in the order read.
+struct set_point_rows {
+  std::vector<std::size_t> all;   // every row grouped here
+  std::vector<std::size_t> rows;  // the steady ones
+  std::size_t unsteady = 0;
+};
+
+// Group rows into set points: a row joins the set point whose running means of speed and pressure
+// difference it matches within the setup's tolerances (the previous row's set point tried first,
+// as logged data stay on a set point for many rows), else it opens a new one.
+std::vector<set_point_rows> group_rows(const test_stand_setup& s, const std::vector<double>& speed,
+                                       const std::vector<double>& dp) {
+  std::vector<set_point_rows> g;
+  std::vector<double> sum_n, sum_p;
+  auto fits = [&](std::size_t k, std::size_t i) {
+    const double c = static_cast<double>(g[k].all.size());
+    const double mn = sum_n[k] / c, mp = sum_p[k] / c;
+    return std::fabs(speed[i] - mn) <= s.group_speed_fraction * mn &&
+           std::fabs(dp[i] - mp) <= std::max(s.group_dp_fraction * std::fabs(mp), s.group_dp_abs_pa);
+  };
+  std::size_t last = no_row;
+  for (std::size_t i = 0; i < speed.size(); ++i) {
+    std::size_t k = (last != no_row && fits(last, i)) ? last : no_row;
+    for (std::size_t j = 0; k == no_row && j < g.size(); ++j)
+      if (fits(j, i)) k = j;
+    if (k == no_row) {
+      k = g.size();
+      g.emplace_back();
+      sum_n.push_back(0.0);
+      sum_p.push_back(0.0);
+    }
+    g[k].all.push_back(i);
+    sum_n[k] += speed[i];
+    sum_p[k] += dp[i];
+    last = k;
+  }
+  return g;
+}
+
+double median_of(const std::vector<std::size_t>& rows, const std::vector<double>& v) {
+  std::vector<double> x;
+  x.reserve(rows.size());
+  for (const std::size_t i : rows) x.push_back(v[i]);
+  const std::size_t h = x.size() / 2;
+  std::nth_element(x.begin(), x.begin() + static_cast<std::ptrdiff_t>(h), x.end());
+  double med = x[h];
+  if (x.size() % 2 == 0) med = 0.5 * (med + *std::max_element(x.begin(), x.begin() + static_cast<std::ptrdiff_t>(h)));
+  return med;
+}
+
+// The steady rows of a set point: every indicated value within the steady-state limits of its median.
+set_point_rows steady_rows(const test_stand_setup& s, const set_point_rows& g, const std::vector<double>& speed,
+                           const std::vector<double>& dp, const std::vector<double>& q,
+                           const std::vector<double>& torque, const std::vector<double>& temp) {
+  set_point_rows out;
+  out.all = g.all;
+  if (!s.drop_unsteady || g.all.size() < 3) {  // two rows have no majority to judge by
+    out.rows = g.all;
+    return out;
+  }
+  const auto& l = s.steady;
+  const double mn = median_of(g.all, speed), md = median_of(g.all, dp), mq = median_of(g.all, q),
+               mt = median_of(g.all, torque), mT = median_of(g.all, temp);
+  for (const std::size_t i : g.all) {
+    const bool ok = std::fabs(speed[i] - mn) <= l.speed_fraction * mn && std::fabs(dp[i] - md) <= l.pressure_fraction * md &&
+                    std::fabs(q[i] - mq) <= l.flow_fraction * mq && std::fabs(torque[i] - mt) <= l.torque_fraction * mt &&
+                    std::fabs(temp[i] - mT) <= l.temperature_k;
+    if (ok)
+      out.rows.push_back(i);
+    else
+      ++out.unsteady;
+  }
+  return out;
+}
+
+// Mean and sample standard deviation of v over rows (sd 0 for one row).
+std::pair<double, double> mean_sd(const std::vector<std::size_t>& rows, const std::vector<double>& v) {
+  double sum = 0;
+  for (const std::size_t i : rows) sum += v[i];
+  const double mean = sum / static_cast<double>(rows.size());
+  if (rows.size() < 2) return {mean, 0.0};
+  double ss = 0;
+  for (const std::size_t i : rows) ss += (v[i] - mean) * (v[i] - mean);
+  return {mean, std::sqrt(ss / static_cast<double>(rows.size() - 1))};
+}
+
+// The three displacement estimators on the included set points; the two-step one on the largest
+// complete sub-grid, with a note naming the short level.
+void estimate_displacement(test_stand_result& res, const std::vector<std::size_t>& inc, const std::vector<double>& sp,
+                           const std::vector<double>& dpp, const std::vector<double>& qp,
+                           const std::vector<std::size_t>& plev, const std::vector<std::size_t>& slev, std::size_t np,
+                           std::size_t ns, std::string& note) {
+  std::size_t pmin = no_row, smax = 0;
+  for (const std::size_t k : inc) {
+    pmin = std::min(pmin, plev[k]);
+    smax = std::max(smax, slev[k]);
+  }
+  {  // A: slope of flow over speed at the lowest pressure level
+    std::vector<double> xs, ys;
+    for (const std::size_t k : inc)
+      if (plev[k] == pmin) xs.push_back(sp[k]), ys.push_back(qp[k]);
+    res.estimators[0] = displacement_slope(xs.data(), ys.data(), xs.size());
+  }
+  {  // B: zero-pressure intercept at the highest speed level
+    std::vector<double> xs, ys;
+    double nsum = 0;
+    for (const std::size_t k : inc)
+      if (slev[k] == smax) xs.push_back(dpp[k]), ys.push_back(qp[k]), nsum += sp[k];
+    const double nmean = xs.empty() ? 0.0 : nsum / static_cast<double>(xs.size());
+    res.estimators[1] = displacement_intercept(nmean, xs.data(), ys.data(), xs.size());
+  }
+  // C: two-step on the complete sub-grid. cell[p][s]: the first included set point there.
+  std::vector<std::size_t> cell(np * ns, no_row);
+  std::vector<double> lev_p(np, 0.0), lev_s(ns, 0.0);
+  std::vector<std::size_t> cnt_p(np, 0), cnt_s(ns, 0);
+  for (const std::size_t k : inc) {
+    if (cell[plev[k] * ns + slev[k]] == no_row) cell[plev[k] * ns + slev[k]] = k;
+    lev_p[plev[k]] += dpp[k], ++cnt_p[plev[k]];
+    lev_s[slev[k]] += sp[k], ++cnt_s[slev[k]];
+  }
+  // drop, one at a time, the level with the largest share of missing cells until the grid is complete
+  std::vector<bool> keep_p(np), keep_s(ns);
+  for (std::size_t a = 0; a < np; ++a) keep_p[a] = cnt_p[a] > 0;
+  for (std::size_t b = 0; b < ns; ++b) keep_s[b] = cnt_s[b] > 0;
+  std::pair<std::size_t, std::size_t> dims{0, 0};
+  for (;;) {
+    std::vector<std::size_t> miss_p(np, 0), miss_s(ns, 0);
+    std::size_t kp = 0, ks = 0, missing = 0;
+    for (std::size_t a = 0; a < np; ++a) kp += keep_p[a] ? 1u : 0u;
+    for (std::size_t b = 0; b < ns; ++b) ks += keep_s[b] ? 1u : 0u;
+    for (std::size_t a = 0; a < np; ++a)
+      for (std::size_t b = 0; b < ns; ++b)
+        if (keep_p[a] && keep_s[b] && cell[a * ns + b] == no_row) ++miss_p[a], ++miss_s[b], ++missing;
+    dims = {kp, ks};
+    if (missing == 0) break;
+    double worst_share = -1;
+    bool drop_pressure = true;
+    std::size_t which = 0;
+    for (std::size_t a = 0; a < np; ++a)
+      if (keep_p[a] && static_cast<double>(miss_p[a]) / static_cast<double>(ks) > worst_share)
+        worst_share = static_cast<double>(miss_p[a]) / static_cast<double>(ks), drop_pressure = true, which = a;
+    for (std::size_t b = 0; b < ns; ++b)
+      if (keep_s[b] && static_cast<double>(miss_s[b]) / static_cast<double>(kp) > worst_share)
+        worst_share = static_cast<double>(miss_s[b]) / static_cast<double>(kp), drop_pressure = false, which = b;
+    if (drop_pressure)
+      keep_p[which] = false;
+    else
+      keep_s[which] = false;
+  }
+  char buf[160];
+  for (std::size_t a = 0; a < np; ++a)
+    for (std::size_t b = 0; b < ns; ++b)
+      if (cnt_p[a] > 0 && cnt_s[b] > 0 && cell[a * ns + b] == no_row && note.size() < 400) {
+        std::snprintf(buf, sizeof buf, "%spressure level %zu (%.4g bar) lacks speed level %zu (%.4g rpm)",
+                      note.empty() ? "" : "; ", a + 1, lev_p[a] / static_cast<double>(cnt_p[a]) / 1e5, b + 1,
+                      lev_s[b] / static_cast<double>(cnt_s[b]) * 60);
+        note += buf;
+      }
+  if (!note.empty()) {
+    std::snprintf(buf, sizeof buf, ": the two-step estimator used the complete sub-grid of %zu speeds x %zu pressures",
+                  dims.second, dims.first);
+    note = "incomplete grid: " + note + buf;
+  }
+  std::vector<double> xs, ps, ys;
+  for (std::size_t a = 0; a < np; ++a)
+    for (std::size_t b = 0; b < ns; ++b)
+      if (keep_p[a] && keep_s[b]) {
+        const std::size_t k = cell[a * ns + b];
+        xs.push_back(sp[k]), ps.push_back(dpp[k]), ys.push_back(qp[k]);
+      }
+  res.estimators[2] = displacement_two_step(xs.data(), ps.data(), ys.data(), dims.first, dims.second);
+}
+
+// Externally studentized residuals of the weighted regression y ~ A (m rows, p columns,
+// column-major), each row weighted by 1 / u_i (the point's standard uncertainty: instruments'
+// limits are per cent of reading, so the scatter grows with the reading):
+// t_i = e_i / (s_(i) sqrt(1 - h_ii)), s_(i)^2 = ((m - p) s^2 - e_i^2 / (1 - h_ii)) / (m - p - 1)
+// (Belsley, Kuh and Welsch 1980, 2.1). Columns scaled to unit norm, the Gram matrix factored by
+// Cholesky (p <= 5; a diagnostic, the coefficients come from fit_loss_model()'s QR). `floor`: an
+// unweighted RMS residual at or below it is rounding (exact data): every t is 0 then.
+void externally_studentized(std::vector<double> x, std::size_t m, std::size_t p, const std::vector<double>& y,
+                            const std::vector<double>& u, double floor, std::vector<double>& t) {
+  const double nan = std::numeric_limits<double>::quiet_NaN();
+  t.assign(m, nan);
+  if (m < p + 2) return;
+  std::vector<double> yw(m), g(p * p, 0.0), norm(p), beta(p, 0.0), z(p), h(m, 0.0);
+  for (std::size_t i = 0; i < m; ++i) {
+    if (!(u[i] > 0)) return;
+    yw[i] = y[i] / u[i];
+    for (std::size_t j = 0; j < p; ++j) x[j * m + i] /= u[i];
+  }
+  for (std::size_t j = 0; j < p; ++j) {
+    double nn = 0;
+    for (std::size_t i = 0; i < m; ++i) nn += x[j * m + i] * x[j * m + i];
+    norm[j] = std::sqrt(nn);
+    if (!(norm[j] > 0)) return;
+    for (std::size_t i = 0; i < m; ++i) x[j * m + i] /= norm[j];
+  }
+  for (std::size_t j = 0; j < p; ++j)
+    for (std::size_t k = 0; k <= j; ++k) {
+      double sum = 0;
+      for (std::size_t i = 0; i < m; ++i) sum += x[j * m + i] * x[k * m + i];
+      g[j * p + k] = sum;
+    }
+  for (std::size_t j = 0; j < p; ++j) {  // Cholesky G = L L^T, lower triangle in place
+    for (std::size_t k = 0; k < j; ++k) g[j * p + j] -= g[j * p + k] * g[j * p + k];
+    if (!(g[j * p + j] > 1e-14)) return;
+    g[j * p + j] = std::sqrt(g[j * p + j]);
+    for (std::size_t i = j + 1; i < p; ++i) {
+      for (std::size_t k = 0; k < j; ++k) g[i * p + j] -= g[i * p + k] * g[j * p + k];
+      g[i * p + j] /= g[j * p + j];
+    }
+  }
+  // beta = G^-1 X^T y: forward then back substitution
+  for (std::size_t j = 0; j < p; ++j) {
+    double v = 0;
+    for (std::size_t i = 0; i < m; ++i) v += x[j * m + i] * yw[i];
+    for (std::size_t k = 0; k < j; ++k) v -= g[j * p + k] * z[k];
+    z[j] = v / g[j * p + j];
+  }
+  for (std::size_t j = p; j-- > 0;) {
+    double v = z[j];
+    for (std::size_t k = j + 1; k < p; ++k) v -= g[k * p + j] * beta[k];
+    beta[j] = v / g[j * p + j];
+  }
+  std::vector<double> e(m);
+  double rss = 0, rss_plain = 0;
+  for (std::size_t i = 0; i < m; ++i) {
+    double fit = 0;
+    for (std::size_t j = 0; j < p; ++j) fit += x[j * m + i] * beta[j];
+    e[i] = yw[i] - fit;
+    rss += e[i] * e[i];
+    rss_plain += e[i] * u[i] * e[i] * u[i];
+    for (std::size_t j = 0; j < p; ++j) {  // h_ii = |L^-1 x_i|^2
+      double v = x[j * m + i];
+      for (std::size_t k = 0; k < j; ++k) v -= g[j * p + k] * z[k];
+      z[j] = v / g[j * p + j];
+      h[i] += z[j] * z[j];
+    }
+  }
+  if (std::sqrt(rss_plain / static_cast<double>(m)) <= floor) {
+    std::fill(t.begin(), t.end(), 0.0);
+    return;
+  }
+  for (std::size_t i = 0; i < m; ++i) {
+    const double omh = 1 - h[i];
+    if (!(omh > 1e-12)) continue;
+    const double s2i = (rss - e[i] * e[i] / omh) / static_cast<double>(m - p - 1);
+    const double scale = std::sqrt(std::max(s2i, 0.0) * omh);
+    t[i] = scale > 0 ? e[i] / scale : 0.0;
+  }
+}
+
+// Studentized residuals of the flow and torque regressions of a fitted model (the columns of
+// fit_loss_model()), weighted by each point's standard uncertainty of flow and torque.
+void studentized(const loss_model<double>& mod, const std::vector<double>& dp, const std::vector<double>& n,
+                 const std::vector<double>& mu, const std::vector<double>& q, const std::vector<double>& torque,
+                 const std::vector<double>& uq, const std::vector<double>& ut, std::vector<double>& tq,
+                 std::vector<double>& tt) {
+  const std::size_t m = dp.size();
+  const bool ext = mod.model == loss_model_kind::schloesser;
+  const double dd = mod.displacement_m3_rev / (2 * 3.14159265358979323846);
+  const double sign = mod.kind == machine::pump ? 1.0 : -1.0;
+  std::vector<double> af, at, yq(m), yt(m);
+  std::size_t pf = 0;
+  const std::size_t pt = ext ? 4 : 3;
+  auto col = [&](std::vector<double>& a, auto f) {
+    for (std::size_t i = 0; i < m; ++i) a.push_back(f(detail::loss_columns(dd, mod.rho_kg_m3, dp[i], n[i], mu[i]), i));
+  };
+  col(af, [](const auto& c, std::size_t) { return c.flow_slip; }), ++pf;
+  if (ext) col(af, [](const auto& c, std::size_t) { return c.flow_turb; }), ++pf;
+  if (mod.flow_terms & flow_term_constant) col(af, [](const auto&, std::size_t) { return 1.0; }), ++pf;
+  if (mod.flow_terms & flow_term_compression)
+    col(af, [&](const auto& c, std::size_t i) { return c.d * c.omega * dp[i] / mod.bulk_modulus_pa; }), ++pf;
+  col(at, [](const auto& c, std::size_t) { return c.tq_visc; });
+  col(at, [](const auto& c, std::size_t) { return c.tq_coul; });
+  col(at, [](const auto&, std::size_t) { return 1.0; });
+  if (ext) col(at, [](const auto& c, std::size_t) { return c.tq_hydro; });
+  for (std::size_t i = 0; i < m; ++i) {
+    yq[i] = sign * (dd * 2 * 3.14159265358979323846 * n[i] - q[i]);
+    yt[i] = sign * (torque[i] - dd * dp[i]);
+  }
+  const double rounding = 1e-10;  // relative RMS residual of exact data
+  externally_studentized(std::move(af), m, pf, yq, uq, rounding * *std::max_element(q.begin(), q.end()), tq);
+  externally_studentized(std::move(at), m, pt, yt, ut, rounding * *std::max_element(torque.begin(), torque.end()), tt);
+}
+
+// Verdicts of the acceptance criteria at the matching set points.
+void judge_acceptance(const test_stand_setup& s, test_stand_result& res) {
+  const double nan = std::numeric_limits<double>::quiet_NaN();
+  res.accepted = true;
+  for (const auto& c : s.acceptance) {
+    acceptance_verdict v;
+    v.criterion = c;
+    v.value = v.margin = nan;
+    const bool every = c.what == acceptance_quantity::drain_flow && c.speed_rev_s == 0;
+    for (std::size_t k = 0; k < res.points.size(); ++k) {
+      const auto& pt = res.points[k];
+      if (!every && !(std::fabs(pt.speed_rev_s - c.speed_rev_s) <= s.group_speed_fraction * c.speed_rev_s &&
+                      std::fabs(pt.dp_pa - c.dp_pa) <= std::max(s.group_dp_fraction * c.dp_pa, s.group_dp_abs_pa)))
+        continue;
+      double val = 0, u = 0;
+      switch (c.what) {
+        case acceptance_quantity::eta_v: val = pt.eta.eta_v.value, u = pt.eta.eta_v.U; break;
+        case acceptance_quantity::eta_hm: val = pt.eta.eta_hm.value, u = pt.eta.eta_hm.U; break;
+        case acceptance_quantity::eta_t: val = pt.eta.eta_t.value, u = pt.eta.eta_t.U; break;
+        case acceptance_quantity::drain_flow: val = res.drain[k].drain_flow_m3_s; break;
+      }
+      const bool max = c.what == acceptance_quantity::drain_flow;
+      const double margin = max ? c.limit - val : val - c.limit;
+      // the nearest matching set point judges a stated point; every set point: the smallest margin
+      const bool better = !v.tested || (every ? margin < v.margin
+                                              : std::fabs(pt.dp_pa - c.dp_pa) + std::fabs(pt.speed_rev_s - c.speed_rev_s) * 1e5 <
+                                                    std::fabs(res.points[v.point].dp_pa - c.dp_pa) +
+                                                        std::fabs(res.points[v.point].speed_rev_s - c.speed_rev_s) * 1e5);
+      if (better) v.tested = true, v.value = val, v.U = u, v.margin = margin, v.point = k;
+    }
+    v.pass = v.tested && v.margin >= 0;
+    res.accepted = res.accepted && v.pass;
+    res.acceptance.push_back(v);
+  }
+}
+
 }  // namespace
 
 double instrument_uncertainty(const instrument_limits& ins, double reading) {
@@ -246,6 +583,16 @@ const char* viscosity_temperature_name(viscosity_temperature t) noexcept {
     case viscosity_temperature::inlet: return "inlet";
     case viscosity_temperature::outlet: return "outlet";
     case viscosity_temperature::drain: return "drain";
+  }
+  return "unknown";
+}
+
+const char* acceptance_quantity_name(acceptance_quantity q) noexcept {
+  switch (q) {
+    case acceptance_quantity::eta_v: return "eta_v";
+    case acceptance_quantity::eta_hm: return "eta_hm";
+    case acceptance_quantity::eta_t: return "eta_t";
+    case acceptance_quantity::drain_flow: return "drain_flow";
   }
   return "unknown";
 }
@@ -294,123 +641,189 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
     q[i] = f.value;
   }
 
-  // ---- derived displacement by the three estimators
-  const auto [plev, np] = level_of(dp);
-  const auto [slev, ns] = level_of(speed);
+  // ---- set points: grouping, steady-state filter, averages with type A
+  const auto groups = group_rows(setup, speed, dp);
+  res.row_point.assign(n, no_row);
+  const std::size_t m0 = groups.size();
+  std::vector<set_point_rows> kept;
+  kept.reserve(m0);
+  for (const auto& g : groups) {
+    set_point_rows k = steady_rows(setup, g, speed, dp, q, torque, t_visc);
+    res.rows_unsteady += k.unsteady;
+    if (!k.rows.empty()) kept.push_back(std::move(k));
+  }
+  const std::size_t m = kept.size();
+  std::vector<double> sp(m), dpp(m), qp(m), tp(m), mup(m), drp(m), q_read_p(m), p1p(m), p2p(m);
+  res.points.resize(m);
+  res.drain.resize(m);
+  for (std::size_t k = 0; k < m; ++k) {
+    const auto& rows = kept[k].rows;
+    auto& pt = res.points[k];
+    pt.first_row = rows.front();
+    pt.rows = rows.size();
+    pt.rows_unsteady = kept[k].unsteady;
+    for (const std::size_t i : rows) res.row_point[i] = k;
+    const auto ms = mean_sd(rows, speed), md = mean_sd(rows, dp), mq = mean_sd(rows, q), mt = mean_sd(rows, torque);
+    sp[k] = ms.first; dpp[k] = md.first; qp[k] = mq.first; tp[k] = mt.first;
+    const double sq = std::sqrt(static_cast<double>(rows.size()));
+    pt.ua_speed_rev_s = ms.second / sq;
+    pt.ua_dp_pa = md.second / sq;
+    pt.ua_flow_m3_s = mq.second / sq;
+    pt.ua_torque_n_m = mt.second / sq;
+    mup[k] = mean_sd(rows, mu).first;
+    drp[k] = mean_sd(rows, d.drain_flow_m3_s).first;
+    q_read_p[k] = mean_sd(rows, q_read).first;
+    p1p[k] = mean_sd(rows, p1).first;
+    p2p[k] = mean_sd(rows, p2).first;
+    for (const std::size_t x : setup.exclude_rows)
+      if (x < n && std::find(kept[k].all.begin(), kept[k].all.end(), x) != kept[k].all.end()) pt.excluded_by_list = true;
+    pt.excluded = pt.excluded_by_list;
+  }
+  for (const std::size_t x : setup.exclude_rows)
+    if (x >= n)
+      return r.fail(status::domain, no_row, {}, "exclude_rows",
+                    "row " + std::to_string(x + 1) + " to exclude is past the last reading (" + std::to_string(n) + ")");
+  if (m < 3) return r.fail(status::insufficient_data, no_row, "speed", {}, "fewer than 3 set points after grouping and the steady-state filter");
+  const auto [plev, np] = level_of(dpp);
+  const auto [slev, ns] = level_of(sp);
   res.pressure_levels = np;
   res.speed_levels = ns;
-  {  // A: slope of flow over speed at the lowest pressure level
-    std::vector<double> xs, ys;
-    for (std::size_t i = 0; i < n; ++i)
-      if (plev[i] == 0) {
-        xs.push_back(speed[i]);
-        ys.push_back(q[i]);
-      }
-    res.estimators[0] = displacement_slope(xs.data(), ys.data(), xs.size());
-  }
-  {  // B: zero-pressure intercept at the highest speed level
-    std::vector<double> xs, ys;
-    double nsum = 0;
-    for (std::size_t i = 0; i < n; ++i)
-      if (slev[i] == ns - 1) {
-        xs.push_back(dp[i]);
-        ys.push_back(q[i]);
-        nsum += speed[i];
-      }
-    const double nmean = xs.empty() ? 0.0 : nsum / static_cast<double>(xs.size());
-    res.estimators[1] = displacement_intercept(nmean, xs.data(), ys.data(), xs.size());
-  }
-  {  // C: two-step over the grid, every pressure level with the same number of speeds
-    std::vector<std::vector<std::size_t>> by_level(np);
-    for (std::size_t i = 0; i < n; ++i) by_level[plev[i]].push_back(i);
-    const std::size_t per = by_level.empty() ? 0 : by_level[0].size();
-    bool grid = per > 0;
-    for (const auto& l : by_level) grid = grid && l.size() == per;
-    if (grid) {
-      std::vector<double> xs, ps, ys;
-      for (const auto& l : by_level)
-        for (const std::size_t i : l) {
-          xs.push_back(speed[i]);
-          ps.push_back(dp[i]);
-          ys.push_back(q[i]);
-        }
-      res.estimators[2] = displacement_two_step(xs.data(), ps.data(), ys.data(), np, per);
-    } else {
-      const double nan = std::numeric_limits<double>::quiet_NaN();
-      res.estimators[2] = {nan, nan, nan, nan, nan, n, displacement_estimator::two_step, status::insufficient_data};
-    }
-  }
-  res.displacement_used = setup.displacement;
-  res.displacement_m3_rev = setup.nominal_displacement_m3_rev;
-  res.u_displacement_m3_rev = 0.0;
-  if (setup.displacement != displacement_choice::nominal) {
-    const auto& e = res.estimators[static_cast<std::size_t>(setup.displacement)];
-    if (!is_usable(e.st))
-      return r.fail(e.st, no_row, {}, "displacement",
-                    std::string("the estimator '") + displacement_choice_name(setup.displacement) +
-                        "' found no displacement in these readings: " + sentence(e.st) +
-                        " (choose another estimator or the nominal displacement)");
-    res.displacement_m3_rev = e.v_m3_rev;
-    res.u_displacement_m3_rev = e.u_v_m3_rev;
-  }
-  const double v_used = res.displacement_m3_rev, u_v_used = res.u_displacement_m3_rev;
-
-  // ---- efficiencies with GUM uncertainty per point, and the drain table
-  bool implausible = false;
-  res.points.resize(n);
-  res.drain.resize(n);
-  for (std::size_t i = 0; i < n; ++i) {
-    const double u_dp = pressure_difference_uncertainty(instrument_uncertainty(setup.pressure, p1[i]),
-                                                        instrument_uncertainty(setup.pressure, p2[i]), 0.0)
-                            .value;
-    const efficiency_inputs<double> x{v_used, speed[i], dp[i], q[i], torque[i], u_v_used,
-                                      instrument_uncertainty(setup.speed, speed[i]), u_dp,
-                                      instrument_uncertainty(setup.flow, q_read[i]),
-                                      instrument_uncertainty(setup.torque, torque[i]), 0.0};
-    const auto g = efficiency_gum(setup.kind, x);
-    if (is_error(g.st)) return r.fail(g.st, i, "speed", {}, "no efficiencies for this point: " + sentence(g.st));
-    if (g.st == status::implausible) implausible = true;
-    auto& pt = res.points[i];
-    pt.speed_rev_s = speed[i];
-    pt.dp_pa = dp[i];
-    pt.flow_m3_s = q[i];
-    pt.torque_n_m = torque[i];
-    pt.mu_pa_s = mu[i];
-    pt.eta = g;
-    pt.speed_level = slev[i];
-    pt.pressure_level = plev[i];
-    pt.st = g.st;
-    const double q_th = v_used * speed[i];
-    const double loss = pump ? q_th - q[i] : q[i] - q_th;
-    auto& dr = res.drain[i];
-    dr.drain_flow_m3_s = d.drain_flow_m3_s[i];
-    dr.fraction = d.drain_flow_m3_s[i] / q_th;
-    dr.loss_share = loss > 0 ? d.drain_flow_m3_s[i] / loss : std::numeric_limits<double>::quiet_NaN();
+  for (std::size_t k = 0; k < m; ++k) {
+    res.points[k].speed_level = slev[k];
+    res.points[k].pressure_level = plev[k];
   }
 
-  // ---- loss models
+  // standard uncertainties of each set point's flow and torque (type B with type A), the outlier test's weights
+  auto rss = [](double a, double b) { return std::sqrt(a * a + b * b); };
+  std::vector<double> u_flow(m), u_torque(m);
+  for (std::size_t k = 0; k < m; ++k) {
+    u_flow[k] = rss(instrument_uncertainty(setup.flow, q_read_p[k]), res.points[k].ua_flow_m3_s);
+    u_torque[k] = rss(instrument_uncertainty(setup.torque, tp[k]), res.points[k].ua_torque_n_m);
+    if (!(u_flow[k] > 0)) u_flow[k] = 1e-6 * qp[k] + 1e-300;  // no uncertainty stated: equal relative weights
+    if (!(u_torque[k] > 0)) u_torque[k] = 1e-6 * tp[k] + 1e-300;
+  }
+
+  // ---- displacement, fit, outliers: repeated while the worst outlier is excluded by rule
+  std::vector<double> work(loss_fit_workspace(m));
   const double rho = oil_density_at(oil, t_visc[n / 2], 0.0).value;
   res.fit_density_kg_m3 = rho;
   std::vector<loss_model_kind> kinds = {loss_model_kind::wilson};
   if (setup.fit_schloesser) kinds.push_back(loss_model_kind::schloesser);
-  std::vector<double> work(loss_fit_workspace(n));
+  const std::size_t max_rule = m / 5;
+  std::size_t by_rule = 0;
+  std::string short_note;
   bool ill = false;
-  for (const auto k : kinds) {
-    std::vector<double> rq(n), rt(n);
-    const auto m = fit_loss_model(setup.kind, k, v_used, rho, dp.data(), speed.data(), mu.data(), q.data(),
-                                  torque.data(), n, work.data(), rq.data(), rt.data());
-    if (is_error(m.st))
-      return r.fail(m.st, no_row, {}, {},
-                    std::string("the ") + loss_model_name(k) + " loss model cannot be fitted to these points: " +
-                        sentence(m.st));
-    if (m.st == status::ill_conditioned) ill = true;
-    if (res.models.empty())
-      for (std::size_t i = 0; i < n; ++i) {
-        res.points[i].flow_residual_m3_s = rq[i];
-        res.points[i].torque_residual_n_m = rt[i];
+  for (;;) {
+    std::vector<std::size_t> inc;
+    for (std::size_t k = 0; k < m; ++k)
+      if (!res.points[k].excluded) inc.push_back(k);
+    short_note.clear();
+    estimate_displacement(res, inc, sp, dpp, qp, plev, slev, np, ns, short_note);
+    res.displacement_used = setup.displacement;
+    res.displacement_m3_rev = setup.nominal_displacement_m3_rev;
+    res.u_displacement_m3_rev = 0.0;
+    if (setup.displacement != displacement_choice::nominal) {
+      const auto& e = res.estimators[static_cast<std::size_t>(setup.displacement)];
+      if (!is_usable(e.st))
+        return r.fail(e.st, no_row, {}, "displacement",
+                      std::string("the estimator '") + displacement_choice_name(setup.displacement) +
+                          "' found no displacement in these readings: " + sentence(e.st) +
+                          (short_note.empty() ? "" : " (" + short_note + ")") +
+                          " (choose another estimator or the nominal displacement)");
+      res.displacement_m3_rev = e.v_m3_rev;
+      res.u_displacement_m3_rev = e.u_v_m3_rev;
+    }
+    // fit on the included set points
+    const std::size_t mi = inc.size();
+    std::vector<double> xs(mi), xd(mi), xm(mi), xq(mi), xt(mi), rq(mi), rt(mi), xuq(mi), xut(mi);
+    for (std::size_t j = 0; j < mi; ++j) {
+      xs[j] = sp[inc[j]]; xd[j] = dpp[inc[j]]; xm[j] = mup[inc[j]]; xq[j] = qp[inc[j]]; xt[j] = tp[inc[j]];
+      xuq[j] = u_flow[inc[j]];
+      xut[j] = u_torque[inc[j]];
+    }
+    loss_fit_options<double> opt;
+    opt.flow_terms = setup.flow_terms & 3u;
+    opt.u_displacement_m3_rev = res.u_displacement_m3_rev;
+    res.models.clear();
+    ill = false;
+    std::vector<double> tq_t(mi, 0.0), tt_t(mi, 0.0);
+    for (const auto k : kinds) {
+      const auto mod = fit_loss_model(setup.kind, k, res.displacement_m3_rev, rho, xd.data(), xs.data(), xm.data(),
+                                      xq.data(), xt.data(), mi, work.data(), rq.data(), rt.data(), opt);
+      if (is_error(mod.st))
+        return r.fail(mod.st, no_row, {}, {},
+                      std::string("the ") + loss_model_name(k) + " loss model cannot be fitted to these points: " +
+                          sentence(mod.st));
+      if (mod.st == status::ill_conditioned) ill = true;
+      if (res.models.empty()) {
+        for (std::size_t k2 = 0; k2 < m; ++k2) {
+          // residuals of every set point (excluded ones too) against the fitted model
+          const auto pr = loss_model_predict(mod, dpp[k2], sp[k2], mup[k2]);
+          res.points[k2].flow_residual_m3_s = qp[k2] - pr.flow_m3_s;
+          res.points[k2].torque_residual_n_m = tp[k2] - pr.torque_n_m;
+        }
+        studentized(mod, xd, xs, xm, xq, xt, xuq, xut, tq_t, tt_t);
       }
-    res.models.push_back(m);
+      res.models.push_back(mod);
+    }
+    const double nan = std::numeric_limits<double>::quiet_NaN();
+    for (auto& pt : res.points)  // an excluded set point keeps the flags of the fit that excluded it
+      if (!pt.excluded) pt.t_flow = pt.t_torque = nan, pt.outlier = 0u;
+    double worst_t = 0;
+    std::size_t worst_k = no_row;
+    for (std::size_t j = 0; j < mi; ++j) {
+      auto& pt = res.points[inc[j]];
+      pt.t_flow = tq_t[j];
+      pt.t_torque = tt_t[j];
+      if (std::fabs(tq_t[j]) > setup.outlier_threshold) pt.outlier |= 1u;
+      if (std::fabs(tt_t[j]) > setup.outlier_threshold) pt.outlier |= 2u;
+      const double w = std::max(std::fabs(tq_t[j]), std::fabs(tt_t[j]));
+      if (pt.outlier != 0u && w > worst_t) worst_t = w, worst_k = inc[j];
+    }
+    if (!setup.exclude_outliers || worst_k == no_row || by_rule >= max_rule) break;
+    res.points[worst_k].excluded = true;
+    res.points[worst_k].outlier |= 4u;  // remembered: excluded by the rule
+    ++by_rule;
   }
+  for (std::size_t k = 0; k < m; ++k) {
+    auto& pt = res.points[k];
+    pt.outlier &= 3u;  // bit 4 marked the exclusion by the rule
+    if (pt.outlier != 0u) ++res.outliers;
+    if (pt.excluded) ++res.excluded;
+  }
+  const double v_used = res.displacement_m3_rev, u_v_used = res.u_displacement_m3_rev;
+
+  // ---- efficiencies with GUM uncertainty per set point (type B of the instruments with type A), and the drain table
+  bool implausible = false;
+  for (std::size_t k = 0; k < m; ++k) {
+    auto& pt = res.points[k];
+    const double u_dp_b = pressure_difference_uncertainty(instrument_uncertainty(setup.pressure, p1p[k]),
+                                                          instrument_uncertainty(setup.pressure, p2p[k]), 0.0)
+                              .value;
+    const efficiency_inputs<double> x{v_used, sp[k], dpp[k], qp[k], tp[k], u_v_used,
+                                      rss(instrument_uncertainty(setup.speed, sp[k]), pt.ua_speed_rev_s),
+                                      rss(u_dp_b, pt.ua_dp_pa),
+                                      rss(instrument_uncertainty(setup.flow, q_read_p[k]), pt.ua_flow_m3_s),
+                                      rss(instrument_uncertainty(setup.torque, tp[k]), pt.ua_torque_n_m), 0.0};
+    const auto g = efficiency_gum(setup.kind, x);
+    if (is_error(g.st))
+      return r.fail(g.st, pt.first_row, "speed", {}, "no efficiencies for this set point: " + sentence(g.st));
+    if (g.st == status::implausible) implausible = true;
+    pt.speed_rev_s = sp[k];
+    pt.dp_pa = dpp[k];
+    pt.flow_m3_s = qp[k];
+    pt.torque_n_m = tp[k];
+    pt.mu_pa_s = mup[k];
+    pt.eta = g;
+    pt.st = g.st;
+    const double q_th = v_used * sp[k];
+    const double loss = pump ? q_th - qp[k] : qp[k] - q_th;
+    auto& dr = res.drain[k];
+    dr.drain_flow_m3_s = drp[k];
+    dr.fraction = drp[k] / q_th;
+    dr.loss_share = loss > 0 ? drp[k] / loss : std::numeric_limits<double>::quiet_NaN();
+  }
+  judge_acceptance(setup, res);
 
   // ---- efficiency map from the fitted model(s)
   const auto mu_map = oil_dynamic_viscosity(oil, setup.map_temperature_k, 0.0);
@@ -429,12 +842,12 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
   for (std::size_t i = 0; i < ny; ++i)
     gp[i] = setup.map_dp_lo_pa + (setup.map_dp_hi_pa - setup.map_dp_lo_pa) * static_cast<double>(i) /
                                      static_cast<double>(ny - 1);
-  for (const auto& m : res.models) {
+  for (const auto& fitted : res.models) {
     test_stand_map mp;
-    mp.model = m.model;
+    mp.model = fitted.model;
     mp.eta_t.resize(nx * ny);
     mp.st.resize(nx * ny);
-    loss_model_map(m, mu_map.value, gp.data(), ny, gs.data(), nx, mp.eta_t.data(), mp.st.data());
+    loss_model_map(fitted, mu_map.value, gp.data(), ny, gs.data(), nx, mp.eta_t.data(), mp.st.data());
     res.maps.push_back(std::move(mp));
   }
   for (std::size_t k = 0; k < nx * ny; ++k) {
@@ -458,6 +871,21 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
   if (res.estimators[2].st == status::regime)
     r.report(status::regime,
              "the two-step estimator had fewer than 5 speeds x 5 pressures (ISO 8426-1 asks for that grid)");
+  if (!short_note.empty()) r.report(status::regime, short_note);
+  for (std::size_t k = 0; k < m; ++k) {
+    const auto& pt = res.points[k];
+    if (pt.outlier == 0u && !pt.excluded) continue;
+    char buf[200];
+    std::snprintf(buf, sizeof buf, "set point %zu (reading %zu, %.4g rpm, %.4g bar): %s%s%s", k + 1, pt.first_row + 1,
+                  pt.speed_rev_s * 60, pt.dp_pa / 1e5,
+                  pt.outlier == 0u ? "" : (pt.outlier & 1u) ? ((pt.outlier & 2u) ? "flow and torque outlier" : "flow outlier") : "torque outlier",
+                  pt.outlier != 0u && pt.excluded ? ", " : "",
+                  pt.excluded_by_list ? "excluded from the fit by the setup's list" : pt.excluded ? "excluded from the fit by the outlier rule" : "");
+    r.report(status::implausible, buf);
+  }
+  for (const auto& v : res.acceptance)
+    if (!v.tested)
+      r.report(status::undefined_output, "acceptance criterion not tested: no set point at its stated point");
   if (ill)
     r.report(status::ill_conditioned,
              "the test grid does not separate the loss terms well: the fitted coefficients are uncertain");

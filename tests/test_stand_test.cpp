@@ -245,15 +245,19 @@ TEST(TestStandReduction, MessyInputsAreRefusedWithRowAndColumn) {
     s2.viscosity_at = pumploss::viscosity_temperature::inlet;  // the inlet was measured
     EXPECT_TRUE(pumploss::is_usable(pumploss::reduce_test_stand(s2, r).st));
   }
-  {  // an incomplete grid: no two-step estimate; the report says so when it was asked for
+  {  // an incomplete grid (changed on purpose with issue 16: it used to stop the run): the two-step
+     // estimator uses the complete sub-grid and a report names the short level
     auto r = good;
     for (auto* v : {&r.speed_rev_s, &r.inlet_pressure_pa, &r.outlet_pressure_pa, &r.flow_m3_s, &r.torque_n_m,
                     &r.drain_flow_m3_s, &r.inlet_temperature_k, &r.drain_temperature_k})
       v->erase(v->begin() + 5);
     auto res = pumploss::reduce_test_stand(s, r);
-    EXPECT_TRUE(pumploss::is_error(res.st));
-    EXPECT_EQ(first(res).setting, "displacement");
-    EXPECT_EQ(res.estimators[2].st, status::insufficient_data);
+    ASSERT_TRUE(pumploss::is_usable(res.st));
+    EXPECT_TRUE(pumploss::is_usable(res.estimators[2].st));
+    bool named = false;
+    for (const auto& m : res.messages)
+      named = named || m.text.find("pressure level 6 (250 bar) lacks speed level 1 (500 rpm)") != std::string::npos;
+    EXPECT_TRUE(named);
     auto s2 = s;
     s2.displacement = pumploss::displacement_choice::slope;
     res = pumploss::reduce_test_stand(s2, r);
@@ -295,4 +299,204 @@ TEST(TestStandReduction, InstrumentUncertaintyAddsTheStatedParts) {
   EXPECT_STREQ(pumploss::displacement_choice_name(pumploss::displacement_choice::two_step), "two-step");
   EXPECT_STREQ(pumploss::loss_model_name(pumploss::loss_model_kind::schloesser), "Schloesser");
   EXPECT_STREQ(pumploss::viscosity_temperature_name(pumploss::viscosity_temperature::drain), "drain");
+}
+
+// ---- logged data (issue 16): several rows per set point, the first two still settling, one set
+// point missing, two spoilt (torque +8 %, flow -5 %). Truth: the Wilson pump above (self-calculated,
+// invented for the test).
+namespace {
+
+struct logged {
+  pumploss::test_stand_readings r;
+  std::vector<std::vector<std::size_t>> steady;  // rows of each set point that are steady, in set-point order
+  std::size_t spoilt_torque = 0, spoilt_flow = 0;  // set-point index of the spoilt ones
+};
+
+logged make_logged(const truth& w, const pumploss::oil<double>& oil, unsigned seed = 7) {
+  std::mt19937 rng(seed);
+  std::normal_distribution<double> gauss(0.0, 1.0);
+  logged L;
+  auto& r = L.r;
+  constexpr int rows = 8, settling = 2;
+  std::size_t sp = 0;
+  for (int k = 0; k < 5; ++k)
+    for (int j = 0; j < 6; ++j) {
+      if (k == 2 && j == 4) continue;  // the missing set point: 1000 rpm, 200 bar
+      const double n0 = (500.0 + 250.0 * k) / 60;
+      const double dp0 = (j == 0 ? 20e5 : 50e5 * j);
+      const bool bad_t = k == 3 && j == 3, bad_q = k == 1 && j == 5;
+      if (bad_t) L.spoilt_torque = sp;
+      if (bad_q) L.spoilt_flow = sp;
+      L.steady.emplace_back();
+      for (int row = 0; row < rows; ++row) {
+        const bool settle = row < settling;
+        const double t = 323.15 + (settle ? 4.0 : 0.0) + 0.1 * gauss(rng);
+        const double n = n0 * (1 + 0.001 * gauss(rng));
+        const double dp = dp0 * (1 + 0.002 * gauss(rng));
+        const double mu = pumploss::oil_dynamic_viscosity(oil, t, 0.0).value;
+        const double d = w.v / (2 * kPi);
+        const double slip = w.c_s * d * dp / mu;
+        double q = (w.v * n - slip) * (1 + 0.0015 * gauss(rng));
+        double tq = (d * dp + w.c_v * d * mu * 2 * kPi * n + w.c_f * d * dp + w.t_c) * (1 + 0.0015 * gauss(rng));
+        if (settle) q *= 0.97, tq *= 1.03;
+        if (bad_t) tq *= 1.08;
+        if (bad_q) q *= 0.95;
+        if (!settle) L.steady.back().push_back(r.speed_rev_s.size());
+        r.speed_rev_s.push_back(n);
+        r.inlet_pressure_pa.push_back(0.3e5);
+        r.outlet_pressure_pa.push_back(0.3e5 + dp);
+        r.flow_m3_s.push_back(q);
+        r.torque_n_m.push_back(tq);
+        r.drain_flow_m3_s.push_back(w.drain_share * slip);
+        r.inlet_temperature_k.push_back(t - 3);
+        r.drain_temperature_k.push_back(t);
+      }
+      ++sp;
+    }
+  return L;
+}
+
+double mean_of(const std::vector<double>& v, const std::vector<std::size_t>& rows) {
+  double s = 0;
+  for (const auto i : rows) s += v[i];
+  return s / static_cast<double>(rows.size());
+}
+
+}  // namespace
+
+TEST(TestStandLogged, SetPointsAveragedSettlingDroppedOutliersExcluded) {
+  const truth w;
+  const auto oil = vg46();
+  auto s = setup_for(oil);
+  s.fit_schloesser = false;
+  const auto L = make_logged(w, oil);
+  const auto res = pumploss::reduce_test_stand(s, L.r);
+  ASSERT_TRUE(pumploss::is_usable(res.st)) << res.messages.front().text;
+  // grouping: 29 set points of 8 rows, the two settling rows of each dropped by the ISO 4409 class B limits
+  ASSERT_EQ(res.points.size(), 29u);
+  EXPECT_EQ(res.rows_unsteady, 58u);
+  ASSERT_EQ(res.row_point.size(), L.r.speed_rev_s.size());
+  for (std::size_t k = 0; k < 29; ++k) {
+    const auto& p = res.points[k];
+    EXPECT_EQ(p.rows, 6u) << k;
+    EXPECT_EQ(p.rows_unsteady, 2u) << k;
+    // averaging: the mean of the steady rows (self-calculated here)
+    EXPECT_LT(rel(p.speed_rev_s, mean_of(L.r.speed_rev_s, L.steady[k])), 1e-12) << k;
+    EXPECT_LT(rel(p.torque_n_m, mean_of(L.r.torque_n_m, L.steady[k])), 1e-12) << k;
+    EXPECT_LT(rel(p.flow_m3_s, mean_of(L.r.flow_m3_s, L.steady[k])), 1e-12) << k;
+    // type A: s / sqrt(n) of the steady rows (GUM 4.2.3)
+    double ss = 0;
+    for (const auto i : L.steady[k]) ss += std::pow(L.r.flow_m3_s[i] - p.flow_m3_s, 2);
+    EXPECT_LT(rel(p.ua_flow_m3_s, std::sqrt(ss / 5) / std::sqrt(6.0)), 1e-9) << k;
+    for (const auto i : L.steady[k]) EXPECT_EQ(res.row_point[i], k);
+    EXPECT_EQ(res.row_point[L.steady[k].front() - 1], pumploss::test_stand_message::no_row);
+  }
+  // the type A enters the efficiencies' uncertainty: larger than with the instruments alone
+  // outliers: exactly the two spoilt set points, flagged by the right residual and excluded
+  EXPECT_EQ(res.outliers, 2u);
+  EXPECT_EQ(res.excluded, 2u);
+  EXPECT_EQ(res.points[L.spoilt_torque].outlier, 2u);
+  EXPECT_TRUE(res.points[L.spoilt_torque].excluded);
+  EXPECT_FALSE(res.points[L.spoilt_torque].excluded_by_list);
+  EXPECT_EQ(res.points[L.spoilt_flow].outlier, 1u);
+  EXPECT_TRUE(res.points[L.spoilt_flow].excluded);
+  EXPECT_GT(std::fabs(res.points[L.spoilt_torque].t_torque), 3.0);
+  // the missing set point: the short level is named, the two-step estimate still made
+  bool named = false;
+  for (const auto& m : res.messages)
+    named = named || m.text.find("lacks speed level 3 (1000 rpm)") != std::string::npos;
+  EXPECT_TRUE(named);
+  ASSERT_TRUE(pumploss::is_usable(res.estimators[2].st));
+  // coefficients against the generating values, within 4 standard errors
+  const auto& m = res.models[0];
+  EXPECT_LT(std::fabs(res.displacement_m3_rev - w.v), 4 * res.u_displacement_m3_rev + 1e-3 * w.v);
+  EXPECT_LT(std::fabs(m.c_s - w.c_s), 4 * m.u_c_s) << m.c_s << " +- " << m.u_c_s;
+  EXPECT_LT(std::fabs(m.c_f - w.c_f), 4 * m.u_c_f) << m.c_f << " +- " << m.u_c_f;
+  EXPECT_LT(std::fabs(m.c_v - w.c_v), 4 * m.u_c_v) << m.c_v << " +- " << m.u_c_v;
+  EXPECT_EQ(m.points, 27u);
+
+  // without the rule the spoilt points stay in and are still flagged: C_s is pulled away
+  auto s2 = s;
+  s2.exclude_outliers = false;
+  const auto kept = pumploss::reduce_test_stand(s2, L.r);
+  ASSERT_TRUE(pumploss::is_usable(kept.st));
+  EXPECT_EQ(kept.excluded, 0u);
+  EXPECT_GE(kept.outliers, 1u);
+  EXPECT_GT(std::fabs(kept.models[0].c_s - w.c_s), std::fabs(m.c_s - w.c_s));
+  // the setup's list excludes the same two set points by any of their rows: the same fit
+  s2.exclude_rows = {L.steady[L.spoilt_torque][2], L.steady[L.spoilt_flow][0] - 1};
+  const auto listed = pumploss::reduce_test_stand(s2, L.r);
+  ASSERT_TRUE(pumploss::is_usable(listed.st));
+  EXPECT_EQ(listed.excluded, 2u);
+  EXPECT_TRUE(listed.points[L.spoilt_torque].excluded_by_list);
+  EXPECT_TRUE(listed.points[L.spoilt_flow].excluded_by_list);
+  EXPECT_LT(rel(listed.models[0].c_s, m.c_s), 1e-12);
+  // reported either way
+  std::size_t reported = 0;
+  for (const auto& msg : listed.messages) reported += msg.text.find("excluded from the fit by the setup's list") != std::string::npos;
+  EXPECT_EQ(reported, 2u);
+  // a row past the end of the readings is refused, naming the setting
+  s2.exclude_rows = {L.r.speed_rev_s.size()};
+  EXPECT_EQ(pumploss::reduce_test_stand(s2, L.r).messages.front().setting, "exclude_rows");
+  // without the steady-state filter the settling rows bias the averages (flow low by about 1 %)
+  auto s3 = s;
+  s3.drop_unsteady = false;
+  s3.exclude_outliers = false;
+  const auto raw = pumploss::reduce_test_stand(s3, L.r);
+  ASSERT_TRUE(pumploss::is_usable(raw.st)) << raw.messages.front().text;
+  EXPECT_EQ(raw.rows_unsteady, 0u);
+  EXPECT_LT(raw.points[0].flow_m3_s, res.points[0].flow_m3_s * 0.995);
+}
+
+TEST(TestStandLogged, AcceptanceVerdictsAtAndAroundEachLimit) {
+  const truth w;
+  const auto oil = vg46();
+  auto s = setup_for(oil);
+  const auto L = make_logged(w, oil, 11);
+  const auto base = pumploss::reduce_test_stand(s, L.r);
+  ASSERT_TRUE(pumploss::is_usable(base.st));
+  // the set point of 1500 rpm, 200 bar and the largest drain flow of the test
+  std::size_t k = 0;
+  while (!(std::fabs(base.points[k].speed_rev_s * 60 - 1500) < 20 && std::fabs(base.points[k].dp_pa - 200e5) < 5e5)) ++k;
+  const auto& p = base.points[k];
+  double drain_max = 0;
+  for (const auto& d : base.drain) drain_max = std::max(drain_max, d.drain_flow_m3_s);
+  using q = pumploss::acceptance_quantity;
+  const double eps = 1e-9;
+  const double vals[3] = {p.eta.eta_v.value, p.eta.eta_hm.value, p.eta.eta_t.value};
+  for (int which = 0; which < 3; ++which)
+    for (const double off : {-eps, 0.0, eps}) {
+      s.acceptance = {{static_cast<q>(which), 1500.0 / 60, 200e5, vals[which] + off, "at the limit"}};
+      const auto res = pumploss::reduce_test_stand(s, L.r);
+      ASSERT_EQ(res.acceptance.size(), 1u);
+      const auto& v = res.acceptance[0];
+      EXPECT_TRUE(v.tested);
+      EXPECT_EQ(v.point, k);
+      EXPECT_EQ(v.pass, off <= 0.0) << which << " " << off;  // a minimum: met at and above the limit
+      EXPECT_NEAR(v.margin, -off, 1e-15);
+      EXPECT_GT(v.U, 0.0);
+      EXPECT_EQ(res.accepted, off <= 0.0);
+    }
+  // the stated point 1480 rpm, 205 bar lies within the grouping tolerances of the same set point
+  s.acceptance = {{q::eta_t, 1480.0 / 60, 205e5, 0.5, ""}};
+  EXPECT_EQ(pumploss::reduce_test_stand(s, L.r).acceptance[0].point, k);
+  // maximum drain flow over every set point: met at the limit, failed just below
+  for (const double off : {-1e-12, 0.0, 1e-12}) {
+    s.acceptance = {{q::drain_flow, 0.0, 0.0, drain_max + off, "drain"}};
+    const auto res = pumploss::reduce_test_stand(s, L.r);
+    EXPECT_EQ(res.acceptance[0].pass, off >= 0.0) << off;
+    EXPECT_NEAR(res.acceptance[0].margin, off, 1e-18);
+  }
+  // a stated point not tested (the missing 1000 rpm, 200 bar; and 3000 rpm): not tested, not accepted
+  for (const double n : {1000.0, 3000.0}) {
+    s.acceptance = {{q::eta_t, n / 60, 200e5, 0.5, "not run"}};
+    const auto res = pumploss::reduce_test_stand(s, L.r);
+    EXPECT_FALSE(res.acceptance[0].tested) << n;
+    EXPECT_FALSE(res.acceptance[0].pass);
+    EXPECT_TRUE(std::isnan(res.acceptance[0].margin));
+    EXPECT_FALSE(res.accepted);
+  }
+  // a criterion with a bad limit is refused, naming the setting
+  s.acceptance = {{q::eta_t, 25.0, 200e5, std::nan(""), ""}};
+  EXPECT_EQ(pumploss::reduce_test_stand(s, L.r).messages.front().setting, "acceptance");
 }

@@ -363,6 +363,10 @@ TEST(CliTestStand, DemoMatchesLibrary) {
   const auto r = run({"test-stand", kDemo + "/test_stand.csv", "--setup", kDemo + "/test_stand.toml", "--out", out}, tmp);
   ASSERT_EQ(r.code, 0) << r.err;
   EXPECT_TRUE(has_cautions(slurp(out + "/test_stand.txt")));
+  // the demo has one reading per set point: 30 set points, nothing dropped as settling (issue 16)
+  EXPECT_NE(r.out.find("30 from 30 readings"), std::string::npos) << r.out;
+  EXPECT_NE(r.out.find("0 settling readings dropped"), std::string::npos);
+  EXPECT_NE(r.out.find("Outliers:"), std::string::npos);
 
   // the test's own pipeline: flow at the port, two-step displacement, GUM, Wilson fit
   const auto d = read_csv(kDemo + "/test_stand.csv", stand_columns());
@@ -423,9 +427,14 @@ TEST(CliTestStand, DemoMatchesLibrary) {
 
   const double rho = pumploss::oil_density_at(oil, d.si("drain temperature")[n / 2], 0.0).value;
   std::vector<double> work(pumploss::loss_fit_workspace(n));
-  const auto m = pumploss::fit_loss_model(pumploss::machine::pump, pumploss::loss_model_kind::wilson, v.v_m3_rev, rho,
+  // the reduction offers the constant and compression flow columns (chosen by BIC) and carries the
+  // displacement's uncertainty into the coefficients (issue 16; changed on purpose)
+  pumploss::loss_fit_options<double> opt;
+  opt.flow_terms = 3u;
+  opt.u_displacement_m3_rev = v.u_v_m3_rev;
+  const auto m = pumploss::fit_loss_model<double>(pumploss::machine::pump, pumploss::loss_model_kind::wilson, v.v_m3_rev, rho,
                                           dp.data(), d.si("speed").data(), mu.data(), q.data(), d.si("torque").data(), n,
-                                          work.data());
+                                          work.data(), nullptr, nullptr, opt);
   ASSERT_EQ(m.st, pumploss::status::ok);
   const auto lm = read_out(out + "/test_stand_loss_model.csv");
   EXPECT_LT(rel(std::stod(lm.text(0, "Wilson")), m.c_s), 1e-4);
@@ -436,9 +445,9 @@ TEST(CliTestStand, DemoMatchesLibrary) {
   // the map: a point of the grid predicted by the Schloesser model at 50 degC
   const auto map = read_out(out + "/test_stand_map.csv");
   ASSERT_EQ(map.rows.size(), 29u * 27u);
-  const auto ms = pumploss::fit_loss_model(pumploss::machine::pump, pumploss::loss_model_kind::schloesser, v.v_m3_rev,
+  const auto ms = pumploss::fit_loss_model<double>(pumploss::machine::pump, pumploss::loss_model_kind::schloesser, v.v_m3_rev,
                                            rho, dp.data(), d.si("speed").data(), mu.data(), q.data(),
-                                           d.si("torque").data(), n, work.data());
+                                           d.si("torque").data(), n, work.data(), nullptr, nullptr, opt);
   const std::size_t k = 10 * 29 + 12;  // pressure 10 of 27, speed 12 of 29
   const double pk = map.num(k, "pressure difference [bar]") * 1e5, sk = map.num(k, "speed [rpm]") / 60;
   const auto pr = pumploss::loss_model_predict(ms, pk, sk, pumploss::oil_dynamic_viscosity(oil, 323.15, 0.0).value);
@@ -1065,4 +1074,48 @@ TEST(CliExports, AmbiguousNumbersAreRefusedWithThePlaceAndTheFix) {
   EXPECT_NE(r.err.find(csv + ":5:" + std::to_string(semi + 2) + ":"), std::string::npos) << r.err;
   EXPECT_NE(r.err.find("without thousands grouping"), std::string::npos) << r.err;
   EXPECT_EQ(run({"test-stand", csv, "--setup", kDemo + "/test_stand.toml", "--csv-format", "semicolons"}, tmp).code, 1);
+// Issue 16: [fit] is optional; [outliers] and [[acceptance]] criteria in the setup give a verdict
+// per criterion with its margin (pass, fail, not tested) and an overall one.
+TEST(CliTestStand, AcceptanceCriteriaAndOptionalFit) {
+  temp_dir tmp;
+  std::string setup = slurp(kDemo + "/test_stand.toml");
+  const auto fit = setup.find("[fit]");
+  ASSERT_NE(fit, std::string::npos);
+  setup.erase(fit, setup.find("[map]") - fit);  // no [fit]: Wilson alone
+  const auto oil = setup.find("oil = \"oil.toml\"");
+  ASSERT_NE(oil, std::string::npos);
+  setup.replace(oil, std::string("oil = \"oil.toml\"").size(), "oil = \"" + kDemo + "/oil.toml\"");
+  setup += "\n[job]\ncustomer = \"Acme Mill\"\nserial = \"SN 4711\"\njob_number = \"J-2026-118\"\n"
+           "date = \"2026-12-03\"\noperator = \"R. Meyer\"\nstand = \"Stand 2\"\ninstruments = \"cal. 2026-06\"\n"
+           "oil = \"VG 46 batch 7\"\n";
+  setup += "\n[outliers]\nthreshold = 3.5\nrule = \"exclude\"\n"
+           "\n[[acceptance]]\nlabel = \"overall 1500 rpm 250 bar\"\nquantity = \"overall\"\nspeed = \"1500 rpm\"\n"
+           "pressure = \"250 bar\"\nmin_percent = 50\n"
+           "\n[[acceptance]]\nlabel = \"volumetric 1500 rpm 250 bar\"\nquantity = \"volumetric\"\nspeed = \"1500 rpm\"\n"
+           "pressure = \"250 bar\"\nmin_percent = 99.9\n"
+           "\n[[acceptance]]\nlabel = \"drain\"\nquantity = \"drain_flow\"\nmax = \"100 L/min\"\n"
+           "\n[[acceptance]]\nlabel = \"not run\"\nquantity = \"overall\"\nspeed = \"3000 rpm\"\npressure = \"250 bar\"\n"
+           "min_percent = 50\n";
+  const std::string toml = tmp / "setup.toml", out = tmp / "out";
+  write_file(toml, setup);
+  const auto r = run({"test-stand", kDemo + "/test_stand.csv", "--setup", toml, "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err << r.out;
+  EXPECT_EQ(r.out.find("Schloesser fit"), std::string::npos);  // Wilson alone without [fit]
+  EXPECT_NE(r.out.find("NOT accepted"), std::string::npos) << r.out;
+  for (const char* job : {"Acme Mill", "SN 4711", "J-2026-118", "2026-12-03", "R. Meyer", "Stand 2", "cal. 2026-06",
+                          "VG 46 batch 7"})
+    EXPECT_NE(r.out.find(job), std::string::npos) << job;
+  EXPECT_NE(r.out.find("externally studentized residual above 3.5"), std::string::npos);
+  const auto acc = read_out(out + "/test_stand_acceptance.csv");
+  ASSERT_EQ(acc.rows.size(), 4u);
+  EXPECT_EQ(acc.text(0, "verdict"), "pass");
+  EXPECT_EQ(acc.text(1, "verdict"), "FAIL");
+  EXPECT_EQ(acc.text(2, "verdict"), "pass");
+  EXPECT_EQ(acc.text(3, "verdict"), "NOT TESTED");
+  // a bad criterion is refused with the file's line
+  write_file(toml, setup + "\n[[acceptance]]\nquantity = \"overall\"\nspeed = \"1500 rpm\"\npressure = \"250 bar\"\n"
+                           "min_percent = 150\n");
+  const auto bad = run({"test-stand", kDemo + "/test_stand.csv", "--setup", toml, "--out", out}, tmp);
+  EXPECT_NE(bad.code, 0);
+  EXPECT_NE(bad.err.find("min_percent"), std::string::npos) << bad.err;
 }

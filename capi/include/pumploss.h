@@ -2970,9 +2970,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_message(const pumploss_test_s
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_displacement(const pumploss_test_stand *ts, int which,
                                                                 double *v_m3_rev, double *u_v_m3_rev);
 /**
- * Efficiencies of every reading with their expanded uncertainties (k = 2).
+ * Efficiencies of every set point with their expanded uncertainties (k = 2). Readings are grouped
+ * into set points and averaged (pumploss_test_stand_setup_set_grouping()); with one reading per
+ * set point this is one element per reading.
  * @param ts the handle
- * @param count number of readings (as given to pumploss_test_stand_create())
+ * @param count number of set points (pumploss_test_stand_counts())
  * @param eta_v receives the volumetric efficiencies
  * @param U_eta_v receives their expanded uncertainties
  * @param eta_hm receives the hydromechanical efficiencies
@@ -2990,7 +2992,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_points(const pumploss_test_st
  * What each reading became: the flow at the port, the pressure difference, the viscosity in the
  * gaps and the drain fraction (drain flow over the theoretical flow V_i n).
  * @param ts the handle
- * @param count number of readings
+ * @param count number of set points (pumploss_test_stand_counts())
  * @param flow_m3_s receives the flows at the port, m^3/s
  * @param dp_pa receives the pressure differences, Pa
  * @param mu_pa_s receives the viscosities, Pa s
@@ -3043,6 +3045,125 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map(const pumploss_test_stand
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map_axis(const pumploss_test_stand *ts, int axis, size_t count,
                                                             double values_si[]);
+/* ---- issue 16: logged data (set points, steady state, outliers) and acceptance ---- */
+/**
+ * How rows are grouped into set points and which settling rows are dropped (pumploss::test_stand_setup).
+ * Defaults: speed 3 %, pressure difference 5 % or 5 bar (common practice, no source); steady-state
+ * limits of ISO 4409 class B (speed and torque 1 %, flow and pressure 1.5 %, temperature 2 K; from memory).
+ * @param setup the setup
+ * @param speed_percent a row joins a set point within this per cent of its mean speed (0 < x < 50)
+ * @param dp_percent ... and within this per cent of its mean pressure difference (0 < x < 50)
+ * @param dp_band_pa ... or within this absolute band, Pa (>= 0), whichever is wider
+ * @param steady_speed_percent steady-state limit of the speed about the set point's median, % (> 0)
+ * @param steady_pressure_percent limit of the pressure difference, % (> 0)
+ * @param steady_flow_percent limit of the flow, % (> 0)
+ * @param steady_torque_percent limit of the torque, % (> 0)
+ * @param steady_temperature_k limit of the viscosity temperature, K (> 0)
+ * @param drop_unsteady 1 to drop the settling rows, 0 to average every row
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_grouping(pumploss_test_stand_setup *setup,
+                                                                      double speed_percent, double dp_percent,
+                                                                      double dp_band_pa, double steady_speed_percent,
+                                                                      double steady_pressure_percent,
+                                                                      double steady_flow_percent,
+                                                                      double steady_torque_percent,
+                                                                      double steady_temperature_k, int drop_unsteady);
+#define PUMPLOSS_TS_OUTLIERS_FLAG 0     /**< Outliers are flagged and reported, and stay in the fit. */
+#define PUMPLOSS_TS_OUTLIERS_EXCLUDE 1  /**< Outliers are flagged, reported and excluded from the fit (default). */
+/**
+ * The outlier test: externally studentized residuals of the flow and torque fits above a threshold
+ * (Belsley, Kuh and Welsch 1980).
+ * @param setup the setup
+ * @param threshold |t| above which a set point is an outlier (> 1; default 3)
+ * @param rule PUMPLOSS_TS_OUTLIERS_FLAG or PUMPLOSS_TS_OUTLIERS_EXCLUDE
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_outliers(pumploss_test_stand_setup *setup,
+                                                                      double threshold, int rule);
+/**
+ * Exclude the set point of a reading from the fit (the user's list; reported, kept in the tables).
+ * @param setup the setup
+ * @param row the reading, 0-based (checked against the readings by pumploss_test_stand_create())
+ * @return PUMPLOSS_OK; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_add_exclude_row(pumploss_test_stand_setup *setup, size_t row);
+#define PUMPLOSS_TS_ACCEPT_ETA_V 0       /**< Minimum volumetric efficiency at a stated point. */
+#define PUMPLOSS_TS_ACCEPT_ETA_HM 1      /**< Minimum hydromechanical efficiency at a stated point. */
+#define PUMPLOSS_TS_ACCEPT_ETA_T 2       /**< Minimum overall efficiency at a stated point. */
+#define PUMPLOSS_TS_ACCEPT_DRAIN_FLOW 3  /**< Maximum case drain flow, m^3/s, at a stated point (speed 0: every set point). */
+/**
+ * Add an acceptance criterion, judged at the set point matching (speed, dp) within the grouping tolerances.
+ * @param setup the setup
+ * @param quantity PUMPLOSS_TS_ACCEPT_ETA_V, _ETA_HM, _ETA_T or _DRAIN_FLOW
+ * @param speed_rev_s speed of the stated point, rev/s (>= 0)
+ * @param dp_pa pressure difference of the stated point, Pa (>= 0)
+ * @param limit minimum efficiency (fraction) or maximum drain flow (m^3/s), >= 0
+ * @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN; PUMPLOSS_ENONFINITE; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_add_acceptance(pumploss_test_stand_setup *setup,
+                                                                        int quantity, double speed_rev_s,
+                                                                        double dp_pa, double limit);
+/**
+ * Counts of the reduction: set points (the length of every per-point array), readings dropped as
+ * settling, outliers flagged, set points excluded from the fit, acceptance criteria.
+ * @param ts the handle
+ * @param set_points receives the number of set points
+ * @param rows_unsteady receives the readings dropped by the steady-state criterion
+ * @param outliers receives the set points flagged as outliers
+ * @param excluded receives the set points excluded from the fit (rule or list)
+ * @param criteria receives the number of acceptance criteria
+ * @return PUMPLOSS_OK; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_counts(const pumploss_test_stand *ts, size_t *set_points,
+                                                          size_t *rows_unsteady, size_t *outliers, size_t *excluded,
+                                                          size_t *criteria);
+/**
+ * What each set point was made of: its first reading, the readings averaged and dropped, and the
+ * type A standard uncertainties s/sqrt(n) of its mean flow and torque (GUM 4.2.3; 0 for one reading).
+ * @param ts the handle
+ * @param count number of set points (pumploss_test_stand_counts())
+ * @param first_row receives the first reading of each set point, 0-based
+ * @param rows receives the readings averaged
+ * @param rows_unsteady receives the readings dropped as settling
+ * @param ua_flow_m3_s receives the type A of the mean flow, m^3/s
+ * @param ua_torque_n_m receives the type A of the mean torque, N m
+ * @return PUMPLOSS_OK; PUMPLOSS_EBUFFER when count differs; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_set_points(const pumploss_test_stand *ts, size_t count,
+                                                              size_t first_row[], size_t rows[],
+                                                              size_t rows_unsteady[], double ua_flow_m3_s[],
+                                                              double ua_torque_n_m[]);
+/**
+ * The outlier test of each set point.
+ * @param ts the handle
+ * @param count number of set points
+ * @param t_flow receives the externally studentized residual of the flow fit (NaN under
+ *        PUMPLOSS_WUNDEFINED where too few points leave it undefined)
+ * @param t_torque receives that of the torque fit (likewise)
+ * @param outlier receives 0, 1 (flow), 2 (torque) or 3 (both) for |t| above the threshold
+ * @param excluded receives 0, 1 (by the rule) or 2 (by the setup's list)
+ * @return PUMPLOSS_OK; PUMPLOSS_WUNDEFINED; PUMPLOSS_EBUFFER when count differs; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_outliers(const pumploss_test_stand *ts, size_t count,
+                                                            double t_flow[], double t_torque[], int outlier[],
+                                                            int excluded[]);
+/**
+ * The verdict on one acceptance criterion (in the order added).
+ * @param ts the handle
+ * @param index 0 for the first criterion
+ * @param pass receives 1 when met (margin >= 0), 0 when failed or not tested
+ * @param tested receives 1 when a set point matched the stated point
+ * @param value receives the measured efficiency or drain flow (SI)
+ * @param U receives its expanded uncertainty (k = 2; 0 for the drain flow)
+ * @param margin receives value - limit (minimum) or limit - value (maximum)
+ * @param point receives the set point judged
+ * @return PUMPLOSS_OK; PUMPLOSS_WUNDEFINED when not tested (value, U, margin NaN); PUMPLOSS_EDATA
+ *         past the last criterion; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_acceptance(const pumploss_test_stand *ts, size_t index, int *pass,
+                                                              int *tested, double *value, double *U, double *margin,
+                                                              size_t *point);
 /** @} */
 /* ==== flowtest ==== */
 /** @name Field flow test of any pump

@@ -452,3 +452,143 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map_axis(const pumploss_test_
 }
 
 }  // extern "C"
+
+// ---- issue 16: logged data (set points, steady state, outliers) and acceptance
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_grouping(pumploss_test_stand_setup* setup,
+                                                                      double speed_percent, double dp_percent,
+                                                                      double dp_band_pa, double steady_speed_percent,
+                                                                      double steady_pressure_percent,
+                                                                      double steady_flow_percent,
+                                                                      double steady_torque_percent,
+                                                                      double steady_temperature_k, int drop_unsteady) {
+  if (setup == nullptr) return PUMPLOSS_EMISUSE;
+  if (!finite_all({speed_percent, dp_percent, dp_band_pa, steady_speed_percent, steady_pressure_percent,
+                   steady_flow_percent, steady_torque_percent, steady_temperature_k}))
+    return PUMPLOSS_ENONFINITE;
+  if (!(speed_percent > 0 && speed_percent < 50 && dp_percent > 0 && dp_percent < 50 && dp_band_pa >= 0 &&
+        steady_speed_percent > 0 && steady_pressure_percent > 0 && steady_flow_percent > 0 &&
+        steady_torque_percent > 0 && steady_temperature_k > 0) ||
+      (drop_unsteady != 0 && drop_unsteady != 1))
+    return PUMPLOSS_EDOMAIN;
+  auto& s = setup->s;
+  s.group_speed_fraction = speed_percent / 100;
+  s.group_dp_fraction = dp_percent / 100;
+  s.group_dp_abs_pa = dp_band_pa;
+  s.steady = {steady_speed_percent / 100, steady_pressure_percent / 100, steady_flow_percent / 100,
+              steady_torque_percent / 100, steady_temperature_k};
+  s.drop_unsteady = drop_unsteady == 1;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_outliers(pumploss_test_stand_setup* setup,
+                                                                      double threshold, int rule) {
+  if (setup == nullptr) return PUMPLOSS_EMISUSE;
+  if (!std::isfinite(threshold)) return PUMPLOSS_ENONFINITE;
+  if (!(threshold > 1 && threshold <= 1e6) || (rule != PUMPLOSS_TS_OUTLIERS_FLAG && rule != PUMPLOSS_TS_OUTLIERS_EXCLUDE))
+    return PUMPLOSS_EDOMAIN;
+  setup->s.outlier_threshold = threshold;
+  setup->s.exclude_outliers = rule == PUMPLOSS_TS_OUTLIERS_EXCLUDE;
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_add_exclude_row(pumploss_test_stand_setup* setup, size_t row) {
+  if (setup == nullptr) return PUMPLOSS_EMISUSE;
+  try {
+    setup->s.exclude_rows.push_back(row);
+  } catch (const std::bad_alloc&) {
+    return PUMPLOSS_ENOMEM;
+  }
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_add_acceptance(pumploss_test_stand_setup* setup,
+                                                                        int quantity, double speed_rev_s,
+                                                                        double dp_pa, double limit) {
+  if (setup == nullptr) return PUMPLOSS_EMISUSE;
+  if (!finite_all({speed_rev_s, dp_pa, limit})) return PUMPLOSS_ENONFINITE;
+  if (quantity < PUMPLOSS_TS_ACCEPT_ETA_V || quantity > PUMPLOSS_TS_ACCEPT_DRAIN_FLOW || !(speed_rev_s >= 0) ||
+      !(dp_pa >= 0) || !(limit >= 0))
+    return PUMPLOSS_EDOMAIN;
+  try {
+    setup->s.acceptance.push_back({static_cast<pumploss::acceptance_quantity>(quantity), speed_rev_s, dp_pa, limit, {}});
+  } catch (const std::bad_alloc&) {
+    return PUMPLOSS_ENOMEM;
+  }
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_counts(const pumploss_test_stand* ts, size_t* set_points,
+                                                          size_t* rows_unsteady, size_t* outliers, size_t* excluded,
+                                                          size_t* criteria) {
+  if (ts == nullptr || set_points == nullptr || rows_unsteady == nullptr || outliers == nullptr ||
+      excluded == nullptr || criteria == nullptr)
+    return PUMPLOSS_EMISUSE;
+  *set_points = ts->r.points.size();
+  *rows_unsteady = ts->r.rows_unsteady;
+  *outliers = ts->r.outliers;
+  *excluded = ts->r.excluded;
+  *criteria = ts->r.acceptance.size();
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_set_points(const pumploss_test_stand* ts, size_t count,
+                                                              size_t first_row[], size_t rows[],
+                                                              size_t rows_unsteady[], double ua_flow_m3_s[],
+                                                              double ua_torque_n_m[]) {
+  nan_fill(count, {ua_flow_m3_s, ua_torque_n_m});
+  if (ts == nullptr || first_row == nullptr || rows == nullptr || rows_unsteady == nullptr ||
+      ua_flow_m3_s == nullptr || ua_torque_n_m == nullptr)
+    return PUMPLOSS_EMISUSE;
+  if (count != ts->r.points.size()) return PUMPLOSS_EBUFFER;
+  for (size_t i = 0; i < count; ++i) {
+    const auto& p = ts->r.points[i];
+    first_row[i] = p.first_row;
+    rows[i] = p.rows;
+    rows_unsteady[i] = p.rows_unsteady;
+    ua_flow_m3_s[i] = p.ua_flow_m3_s;
+    ua_torque_n_m[i] = p.ua_torque_n_m;
+  }
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_outliers(const pumploss_test_stand* ts, size_t count,
+                                                            double t_flow[], double t_torque[], int outlier[],
+                                                            int excluded[]) {
+  nan_fill(count, {t_flow, t_torque});
+  if (ts == nullptr || t_flow == nullptr || t_torque == nullptr || outlier == nullptr || excluded == nullptr)
+    return PUMPLOSS_EMISUSE;
+  if (count != ts->r.points.size()) return PUMPLOSS_EBUFFER;
+  int st = PUMPLOSS_OK;
+  for (size_t i = 0; i < count; ++i) {
+    const auto& p = ts->r.points[i];
+    t_flow[i] = p.t_flow;
+    t_torque[i] = p.t_torque;
+    if (std::isnan(p.t_flow) || std::isnan(p.t_torque)) st = PUMPLOSS_WUNDEFINED;
+    outlier[i] = static_cast<int>(p.outlier);
+    excluded[i] = p.excluded_by_list ? 2 : p.excluded ? 1 : 0;
+  }
+  return st;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_acceptance(const pumploss_test_stand* ts, size_t index, int* pass,
+                                                              int* tested, double* value, double* U, double* margin,
+                                                              size_t* point) {
+  for (double* p : {value, U, margin})
+    if (p != nullptr) *p = kNaN;
+  if (ts == nullptr || pass == nullptr || tested == nullptr || value == nullptr || U == nullptr ||
+      margin == nullptr || point == nullptr)
+    return PUMPLOSS_EMISUSE;
+  *pass = *tested = 0;
+  *point = 0;
+  if (index >= ts->r.acceptance.size()) return PUMPLOSS_EDATA;
+  const auto& v = ts->r.acceptance[index];
+  *pass = v.pass ? 1 : 0;
+  *tested = v.tested ? 1 : 0;
+  *point = v.point;
+  if (!v.tested) return PUMPLOSS_WUNDEFINED;
+  *value = v.value;
+  *U = v.U;
+  *margin = v.margin;
+  return PUMPLOSS_OK;
+}

@@ -70,6 +70,38 @@ enum class displacement_choice : int {
   nominal = 3     ///< the maker's nominal displacement (no uncertainty propagated)
 };
 
+/// Steady-state criterion of a reading: the permissible variation of each indicated value about
+/// its set point's median, as a fraction of that median (temperature in K). The defaults are
+/// class B of the table "permissible variations of mean indicated values" of ISO 4409 (speed and
+/// torque 1 %, flow and pressure 1.5 %, temperature 2 K; from memory, not verified against the
+/// 2019 text). A row outside any limit is a settling row: dropped before the set point's average.
+struct steady_state_limits {
+  double speed_fraction = 0.01;      ///< speed
+  double pressure_fraction = 0.015;  ///< pressure difference (the outlet gauge pressure of a pump)
+  double flow_fraction = 0.015;      ///< flow at the port
+  double torque_fraction = 0.01;     ///< torque
+  double temperature_k = 2.0;        ///< the temperature that sets the viscosity, K
+};
+
+/// The quantity an acceptance criterion limits.
+enum class acceptance_quantity : int {
+  eta_v = 0,      ///< minimum volumetric efficiency at a stated point
+  eta_hm = 1,     ///< minimum hydromechanical efficiency at a stated point
+  eta_t = 2,      ///< minimum overall efficiency at a stated point
+  drain_flow = 3  ///< maximum case drain flow (m^3/s) at a stated point, or at every set point (speed 0)
+};
+
+/// One acceptance criterion (the customer's or the maker's figure). The criterion is judged at the
+/// tested set point that matches (speed, dp) within the grouping tolerances; a point not tested is
+/// reported as such (never interpolated).
+struct acceptance_criterion {
+  acceptance_quantity what = acceptance_quantity::eta_t;  ///< the quantity
+  double speed_rev_s = 0;  ///< speed of the stated point, rev/s (drain flow: 0 = every set point)
+  double dp_pa = 0;        ///< pressure difference of the stated point, Pa
+  double limit = 0;        ///< minimum efficiency (fraction) or maximum drain flow (m^3/s)
+  std::string label;       ///< the customer's name for it (e.g. "maker's curve 1500 rpm 250 bar"), may be empty
+};
+
 /// How the test was made: machine, oil, flow meter, instruments, fit and map.
 struct test_stand_setup {
   machine kind = machine::pump;             ///< pump (flow at the outlet) or motor (flow at the inlet)
@@ -91,6 +123,17 @@ struct test_stand_setup {
   double map_temperature_k = 0;             ///< oil temperature of the map, K
   std::size_t map_speeds = 29;              ///< grid columns (2 or more)
   std::size_t map_pressures = 27;           ///< grid rows (2 or more)
+  // ---- logged data: set points, steady state, outliers (defaults are common practice, no source)
+  double group_speed_fraction = 0.03;       ///< a row joins a set point when its speed lies within this fraction of the set point's mean speed
+  double group_dp_fraction = 0.05;          ///< ... and its pressure difference within this fraction of the mean
+  double group_dp_abs_pa = 5e5;             ///< ... or within this absolute band (5 bar), whichever is wider
+  bool drop_unsteady = true;                ///< drop settling rows by the steady-state criterion
+  steady_state_limits steady{};             ///< the steady-state criterion (ISO 4409 class B, from memory)
+  unsigned flow_terms = 3u;                 ///< loss_flow_term bits offered to the flow fit (constant, compression; chosen by BIC)
+  double outlier_threshold = 3.0;           ///< |externally studentized residual| above which a set point is an outlier
+  bool exclude_outliers = true;             ///< exclude flagged set points from the fit, one at a time, worst first
+  std::vector<std::size_t> exclude_rows;    ///< rows (0-based) whose set points are excluded from the fit by the user
+  std::vector<acceptance_criterion> acceptance;  ///< acceptance criteria (may be empty)
 };
 
 /// The readings, one element per operating point (SI). Optional columns are empty when not measured.
@@ -119,7 +162,7 @@ struct test_stand_message {
   bool follows_value = false; ///< the sentence follows the reading's value ("is not a speed above zero ...")
 };
 
-/// One operating point after reduction.
+/// One set point after reduction (its steady readings averaged).
 struct test_stand_point {
   double speed_rev_s = 0;                   ///< speed, rev/s
   double dp_pa = 0;                         ///< pressure difference across the machine, Pa
@@ -132,6 +175,29 @@ struct test_stand_point {
   std::size_t speed_level = 0;              ///< speed set-point level (0 the lowest)
   std::size_t pressure_level = 0;           ///< pressure set-point level (0 the lowest)
   status st = status::ok;                   ///< the point's efficiency status (ok, implausible)
+  std::size_t first_row = 0;                ///< first reading (0-based) of the set point
+  std::size_t rows = 1;                     ///< readings averaged into the set point
+  std::size_t rows_unsteady = 0;            ///< readings dropped by the steady-state criterion
+  double ua_speed_rev_s = 0;                ///< type A standard uncertainty s/sqrt(n) of the mean speed (GUM 4.2; 0 for one reading)
+  double ua_dp_pa = 0;                      ///< type A of the mean pressure difference
+  double ua_flow_m3_s = 0;                  ///< type A of the mean flow
+  double ua_torque_n_m = 0;                 ///< type A of the mean torque
+  double t_flow = 0;                        ///< externally studentized residual of the flow fit (NaN when not defined)
+  double t_torque = 0;                      ///< externally studentized residual of the torque fit
+  unsigned outlier = 0;                     ///< outlier bits: 1 flow, 2 torque (|t| above the threshold)
+  bool excluded = false;                    ///< left out of the displacement estimators and the fits
+  bool excluded_by_list = false;            ///< excluded because setup.exclude_rows names one of its rows
+};
+
+/// The verdict on one acceptance criterion.
+struct acceptance_verdict {
+  acceptance_criterion criterion;  ///< the criterion judged
+  bool tested = false;             ///< a set point matched the stated point
+  bool pass = false;               ///< the criterion is met (margin >= 0); false when not tested
+  double value = 0;                ///< the measured value (efficiency or drain flow, SI); NaN when not tested
+  double U = 0;                    ///< its expanded uncertainty (k = 2; 0 for the drain flow)
+  double margin = 0;               ///< value - limit for a minimum, limit - value for a maximum (NaN when not tested)
+  std::size_t point = 0;           ///< the set point judged (for every set point: the worst)
 };
 
 /// One row of the drain table.
@@ -159,8 +225,8 @@ struct test_stand_result {
   double u_displacement_m3_rev = 0;              ///< its standard uncertainty (0 for the nominal figure)
   displacement_choice displacement_used = displacement_choice::two_step;  ///< where displacement_m3_rev came from
   bool flow_corrected = false;                    ///< the flow was corrected to port conditions
-  std::vector<test_stand_point> points;          ///< per reading
-  std::vector<test_stand_drain> drain;           ///< per reading
+  std::vector<test_stand_point> points;          ///< per set point (readings grouped and averaged)
+  std::vector<test_stand_drain> drain;           ///< per set point
   double fit_density_kg_m3 = 0;                  ///< density the Schloesser terms used (oil at the middle point)
   std::vector<loss_model<double>> models;        ///< Wilson, then Schloesser when asked for
   std::vector<double> map_speed_rev_s;           ///< map grid speeds
@@ -168,9 +234,36 @@ struct test_stand_result {
   double map_mu_pa_s = 0;                        ///< viscosity of the map temperature
   std::vector<test_stand_map> maps;              ///< one per model
   std::size_t map_extrapolated = 0;              ///< grid points outside the tested range (worst over the models)
+  std::vector<std::size_t> row_point;            ///< set point of every reading (test_stand_message::no_row: dropped as settling)
+  std::size_t rows_unsteady = 0;                 ///< readings dropped by the steady-state criterion
+  std::size_t outliers = 0;                      ///< set points flagged as outliers
+  std::size_t excluded = 0;                      ///< set points excluded from the fit (rule or list)
+  std::vector<acceptance_verdict> acceptance;    ///< one verdict per criterion
+  bool accepted = true;                          ///< every criterion tested and passed
 };
 
 /// Reduce a test-stand data set.
+///
+/// Logged data: the rows are grouped into set points (speed within setup.group_speed_fraction of
+/// the set point's running mean, pressure difference within the wider of group_dp_fraction and
+/// group_dp_abs_pa); in each set point the rows outside the steady-state limits about the median
+/// are dropped as settling (setup.steady, ISO 4409 class B from memory); the rest are averaged.
+/// A set point's standard uncertainty of each input combines the instrument's type B (GUM 4.3.7)
+/// with the scatter's type A, s/sqrt(n) (GUM 4.2.3), in quadrature.
+///
+/// Outliers: after each fit, the externally studentized residual
+/// \f$ t_i = e_i / (s_{(i)}\sqrt{1-h_{ii}}) \f$ of the flow and torque regressions,
+/// \f$ s_{(i)}^2 = ((m-p)s^2 - e_i^2/(1-h_{ii}))/(m-p-1) \f$ (Belsley, Kuh and Welsch,
+/// Regression Diagnostics, Wiley 1980, 2.1); a set point with |t| above setup.outlier_threshold
+/// is flagged and, with exclude_outliers, excluded (the worst one, then the fit repeated, at most
+/// a fifth of the set points); setup.exclude_rows excludes set points by the user's list.
+/// Excluded points stay in the tables, flagged.
+///
+/// Incomplete grid: the two-step estimator uses the largest complete sub-grid (dropping the
+/// short speed or pressure level) and a report names the level that was short.
+///
+/// Acceptance: each criterion is judged at the set point matching its stated point; margin and
+/// verdict per criterion, `accepted` when all are tested and pass.
 /// @param setup how the test was made
 /// @param readings the readings (every column of one length; required: speed, pressures, flow,
 ///        torque, drain flow, inlet temperature, and the temperature setup.viscosity_at names;
@@ -201,6 +294,11 @@ PUMPLOSS_CXX_API const char* displacement_choice_name(displacement_choice c) noe
 /// @param t the choice
 /// @return a static string
 PUMPLOSS_CXX_API const char* viscosity_temperature_name(viscosity_temperature t) noexcept;
+
+/// The name of an acceptance quantity ("eta_v", "eta_hm", "eta_t", "drain_flow").
+/// @param q the quantity
+/// @return a static string
+PUMPLOSS_CXX_API const char* acceptance_quantity_name(acceptance_quantity q) noexcept;
 
 /// The name of a loss model ("Wilson", "Schloesser").
 /// @param k the model

@@ -769,8 +769,36 @@ static void test_test_stand(void) {
   CHECK(pumploss_test_stand_setup_set_instrument(s, PUMPLOSS_TS_TORQUE, 0.2, 0.1, PUMPLOSS_TS_LIMITS) == PUMPLOSS_OK);
   CHECK(pumploss_test_stand_setup_set_map(s, 500.0 / 60, 1500.0 / 60, 20e5, 250e5, 323.15, 5, 4) == PUMPLOSS_OK);
   CHECK(pumploss_test_stand_setup_set_map(s, 500.0 / 60, 1500.0 / 60, 20e5, 250e5, 323.15, 1, 4) == PUMPLOSS_EDOMAIN);
+  /* acceptance (issue 16): overall efficiency of at least 0.5 at 1000 rpm, 150 bar; drain flow at most
+     the largest of the data (met with margin 0); a point not tested (3000 rpm) */
+  CHECK(pumploss_test_stand_setup_add_acceptance(s, PUMPLOSS_TS_ACCEPT_ETA_T, 1000.0 / 60, 150e5, 0.5) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_add_acceptance(s, PUMPLOSS_TS_ACCEPT_DRAIN_FLOW, 0.0, 0.0, qd[29]) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_add_acceptance(s, PUMPLOSS_TS_ACCEPT_ETA_V, 50.0, 150e5, 0.9) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_add_acceptance(s, 9, 50.0, 150e5, 0.9) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_test_stand_setup_set_outliers(s, 3.0, PUMPLOSS_TS_OUTLIERS_EXCLUDE) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_set_outliers(s, 0.5, PUMPLOSS_TS_OUTLIERS_EXCLUDE) == PUMPLOSS_EDOMAIN);
+  CHECK(pumploss_test_stand_setup_set_grouping(s, 3.0, 5.0, 5e5, 1.0, 1.5, 1.5, 1.0, 2.0, 1) == PUMPLOSS_OK);
+  CHECK(pumploss_test_stand_setup_set_grouping(s, 3.0, 5.0, 5e5, 1.0, 1.5, 1.5, 1.0, 2.0, 2) == PUMPLOSS_EDOMAIN);
   code = pumploss_test_stand_create(s, 30, n, p1, p2, q, tq, qd, ti, none, td, none, msg, sizeof msg, &t);
   CHECK(!(code > 0 && code < 100) && t != NULL);
+  {
+    size_t np = 0, nu = 9, no = 9, nx = 9, nc = 0, fr0[30], rw[30], ru[30], pt = 99;
+    double uaq[30], uat[30], tfl[30], ttq[30], val, uu, mg;
+    int ol[30], ex[30], pass, tested;
+    CHECK(pumploss_test_stand_counts(t, &np, &nu, &no, &nx, &nc) == PUMPLOSS_OK && np == 30 && nu == 0 && no == 0 &&
+          nx == 0 && nc == 3);
+    CHECK(pumploss_test_stand_set_points(t, 30, fr0, rw, ru, uaq, uat) == PUMPLOSS_OK && fr0[7] == 7 && rw[7] == 1 &&
+          ru[7] == 0 && uaq[7] == 0.0);
+    CHECK(pumploss_test_stand_set_points(t, 29, fr0, rw, ru, uaq, uat) == PUMPLOSS_EBUFFER && is_nan(uaq[0]));
+    CHECK(pumploss_test_stand_outliers(t, 30, tfl, ttq, ol, ex) == PUMPLOSS_OK && ol[5] == 0 && ex[5] == 0);
+    CHECK(pumploss_test_stand_acceptance(t, 0, &pass, &tested, &val, &uu, &mg, &pt) == PUMPLOSS_OK && pass == 1 &&
+          tested == 1 && pt == 15 && near_rel(mg, val - 0.5, 1e-15) && uu > 0.0);
+    CHECK(pumploss_test_stand_acceptance(t, 1, &pass, &tested, &val, &uu, &mg, &pt) == PUMPLOSS_OK && pass == 1 &&
+          val == qd[29] && mg == 0.0 && pt % 6 == 5);
+    CHECK(pumploss_test_stand_acceptance(t, 2, &pass, &tested, &val, &uu, &mg, &pt) == PUMPLOSS_WUNDEFINED &&
+          pass == 0 && tested == 0 && is_nan(mg));
+    CHECK(pumploss_test_stand_acceptance(t, 3, &pass, &tested, &val, &uu, &mg, &pt) == PUMPLOSS_EDATA && is_nan(val));
+  }
   CHECK(pumploss_test_stand_displacement(t, PUMPLOSS_TS_DISPLACEMENT_USED, &v, &u) == PUMPLOSS_OK &&
         near_rel(v, 71e-6, 1e-10));
   CHECK(pumploss_test_stand_displacement(t, PUMPLOSS_TS_DISPLACEMENT_SLOPE, &v, &u) == PUMPLOSS_OK &&

@@ -113,7 +113,15 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     return 0;
   }
   const std::size_t n = r.speed_rev_s.size();
-  check(res.points.size() == n && res.drain.size() == n, "a point missing");
+  // every reading belongs to one set point or was dropped as settling (issue 16: rows are grouped)
+  check(res.row_point.size() == n && res.drain.size() == res.points.size() && !res.points.empty() &&
+            res.points.size() <= n,
+        "a set point missing");
+  std::size_t counted = res.rows_unsteady;
+  for (const auto& p : res.points) counted += p.rows;
+  check(counted == n, "readings lost between the set points and the settling rows");
+  for (const std::size_t k : res.row_point)
+    check(k == pumploss::test_stand_message::no_row || k < res.points.size(), "a reading in no set point");
   check(std::isfinite(res.displacement_m3_rev) && res.displacement_m3_rev > 0, "no displacement");
   for (const auto& p : res.points)
     check(std::isfinite(p.eta.eta_t.value) && std::isfinite(p.eta.eta_t.U) && std::isfinite(p.flow_residual_m3_s),
