@@ -268,14 +268,18 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(const pumploss_line* h, 
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(void) { return pumploss::standard_bore_count; }
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(size_t* count) {
+  if (count == nullptr) return PUMPLOSS_EMISUSE;
+  *count = static_cast<size_t>(pumploss::standard_bore_count);
+  return PUMPLOSS_OK;
+}
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(int index, double* inside_diameter_m, int* kind) {
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(size_t index, double* inside_diameter_m, int* kind) {
   if (inside_diameter_m == nullptr || kind == nullptr) {
     if (inside_diameter_m != nullptr) *inside_diameter_m = kNaN;
     return PUMPLOSS_EMISUSE;
   }
-  if (index < 0 || index >= pumploss::standard_bore_count) {
+  if (index >= static_cast<size_t>(pumploss::standard_bore_count)) {
     *inside_diameter_m = kNaN;
     *kind = 0;
     return PUMPLOSS_EDOMAIN;
@@ -466,7 +470,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_table(
-    const pumploss_line* h, int n_points, const double flow_t_k[], const double flow_q_m3_s[], double peak_volume_m3,
+    const pumploss_line* h, size_t n_points, const double flow_t_k[], const double flow_q_m3_s[], double peak_volume_m3,
     double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
     double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
     double case_pressure_peak_pa[], int pass[], char* verdict, size_t verdict_capacity) {

@@ -294,13 +294,17 @@ inline result<T> health_normalise(const health_reference<T>& ref, const health_r
 
 /// The constant and laminar parts fitted to baseline readings.
 template <class T>
-struct health_constant_fit {
+struct [[nodiscard]] health_constant_fit {
   T constant_m3_s;      ///< fitted constant part q_c, m^3/s
   T laminar_ref_m3_s;   ///< laminar part at the reference state, m^3/s
   T baseline_m3_s;      ///< q_c + laminar part at the reference state, m^3/s
   T rms_m3_s;           ///< RMS residual, m^3/s (0 for two readings)
   pumploss::status st;  ///< ok; implausible when the fitted constant part is negative (then set to 0 and refitted);
                         ///< insufficient_data for fewer than 2 readings or one value of dp/mu
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Fit the constant part and the laminar part to baseline readings of a new pump at two or more
