@@ -34,6 +34,20 @@ pumploss::piston_pump<double> sweep_pump() {
   return p;
 }
 
+// A sweep at 0.5 bar case pressure, 1500 rpm, 50 degC, with the reference at 250 bar.
+pumploss::pump_sweep sweep_from(double from_pa, double to_pa, double step_pa) {
+  pumploss::pump_sweep s;
+  s.from_pa = from_pa;
+  s.to_pa = to_pa;
+  s.step_pa = step_pa;
+  s.case_pa = 0.5e5;
+  s.speed_rev_s = 25;
+  s.temperature_k = 323.15;
+  s.with_reference = true;
+  s.reference = {250.5e5, 0.5e5, 25.0, 1.0, 323.15};
+  return s;
+}
+
 }  // namespace
 
 TEST(OilTable, RowsLimitsAndGrade) {
@@ -73,15 +87,7 @@ TEST(OilTable, RowsLimitsAndGrade) {
 TEST(PumpSweep, EveryPressureAsTheBudgetGivesIt) {
   const auto p = sweep_pump();
   const auto oil = vg46();
-  pumploss::pump_sweep s;
-  s.from_pa = 20e5;
-  s.to_pa = 260e5;
-  s.step_pa = 20e5;
-  s.case_pa = 0.5e5;
-  s.speed_rev_s = 25;
-  s.temperature_k = 323.15;
-  s.with_reference = true;
-  s.reference = {250.5e5, 0.5e5, 25.0, 1.0, 323.15};
+  const auto s = sweep_from(20e5, 260e5, 20e5);
   const auto r = pumploss::sweep_piston_pump(p, oil, s);
   ASSERT_TRUE(pumploss::is_usable(r.st));
   ASSERT_EQ(r.points.size(), 13u);  // 20 to 260 bar in steps of 20, both ends included
@@ -119,17 +125,9 @@ TEST(PumpSweep, FlowLossAndReferenceAsTheirFunctionsGiveThem) {
   // functions they run, evaluated with the sweep's inlet pressure and film temperature rise.
   const auto p = sweep_pump();
   const auto oil = vg46();
-  pumploss::pump_sweep s;
-  s.from_pa = 50e5;
-  s.to_pa = 250e5;
-  s.step_pa = 100e5;
-  s.case_pa = 0.5e5;
-  s.speed_rev_s = 25;
-  s.temperature_k = 323.15;
+  auto s = sweep_from(50e5, 250e5, 100e5);
   s.inlet_pa = 0.3e5;
   s.film_temperature_rise_k = 7;
-  s.with_reference = true;
-  s.reference = {250.5e5, 0.5e5, 25.0, 1.0, 323.15};
   s.reference.inlet_pa = 0.3e5;
   s.reference.film_temperature_rise_k = 7;
   const auto plain = pumploss::sweep_piston_pump(p, oil, s);
