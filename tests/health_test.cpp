@@ -358,8 +358,9 @@ TEST(HealthPlausibility, EveryRefusalAndFlag) {
     EXPECT_TRUE(std::isnan(a.fraction_at_reference)) << c.what;
     EXPECT_STRNE(pumploss::health_refusal_text(c.want), pumploss::health_refusal_text(0)) << c.what;
     // the plausibility check alone (the fraction above one is found later, when scoring)
-    if (c.want != pumploss::refuse_fraction_above_one)
+    if (c.want != pumploss::refuse_fraction_above_one) {
       EXPECT_EQ(pumploss::health_check_reading(ref, bands, c.r).st, status::out_of_validity) << c.what;
+    }
   }
   // the plausibility check of an accepted reading: ok, or implausible with a flag (still usable)
   const auto clean = pumploss::health_check_reading(ref, bands, {q, kDpRef, 0.0, kTRef, kN});
