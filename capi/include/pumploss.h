@@ -23,7 +23,10 @@
  *   as pumploss_standard_bore_count() does) is a size_t. An int is kept where the number is not
  *   the length of an array: the number of pistons of pumploss_piston_pump_create() (a physical
  *   design figure, 3 to 15) and element indexes of a line, where an output uses -1 for "none"
- *   (pumploss_line_size_drain_flow()'s dominant_element). NULL is never a valid array, whatever
+ *   (pumploss_line_size_drain_flow()'s dominant_element). One array count is an int: the points
+ *   of the drain-flow table of pumploss_line_drain_check_table() (1 to 16), because that
+ *   function's outputs have the length of its size_t n_temps, and the bindings generator reads
+ *   every size_t of a function as a dimension of its output arrays. NULL is never a valid array, whatever
  *   the count: a NULL array gives PUMPLOSS_EMISUSE, also with n = 0. With valid arrays and
  *   n = 0 a batch function returns PUMPLOSS_OK and writes nothing; a function that needs data
  *   (a fit, a calibration, a check over temperatures) returns its documented error for too few
@@ -1283,7 +1286,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
  *  @return as pumploss_line_drain_check_flow(); PUMPLOSS_EDOMAIN for a bad table.
  *  @sa pumploss::drain_flow_table */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_table(
-    const pumploss_line *line, size_t n_points, const double flow_t_k[], const double flow_q_m3_s[],
+    const pumploss_line *line, int n_points, const double flow_t_k[], const double flow_q_m3_s[],
     double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
     double p_allowed_pa, double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
     double case_pressure_peak_pa[], int pass[], char *verdict, size_t verdict_capacity);
