@@ -11,6 +11,7 @@
 #include "inputs.hpp"
 #include "pumploss/piston_pump.hpp"
 #include "pumploss/version.hpp"
+#include "pumploss/workflows.hpp"
 #include "svg.hpp"
 
 namespace plcli {
@@ -40,12 +41,34 @@ int run_budget(const budget_options& o) {
   q("--from", o.from, p.sweep_from_pa);
   q("--to", o.to, p.sweep_to_pa);
   q("--step", o.step, p.sweep_step_pa);
-  if (!(p.sweep_step_pa > 0) || !(p.sweep_to_pa > p.sweep_from_pa) || !(p.sweep_from_pa > p.sweep_case_pa) ||
-      (p.sweep_to_pa - p.sweep_from_pa) / p.sweep_step_pa > 1000)
+  const auto& g = p.geometry;
+
+  // the one library call: the sweep and everything at the health reference state
+  pumploss::pump_sweep sw;
+  sw.from_pa = p.sweep_from_pa;
+  sw.to_pa = p.sweep_to_pa;
+  sw.step_pa = p.sweep_step_pa;
+  sw.case_pa = p.sweep_case_pa;
+  sw.speed_rev_s = p.sweep_speed_rev_s;
+  sw.displacement_fraction = p.sweep_displacement_fraction;
+  sw.temperature_k = p.sweep_temperature_k;
+  sw.inlet_pa = p.sweep_inlet_pa;
+  sw.film_temperature_rise_k = p.sweep_film_rise_k;
+  sw.with_reference = true;
+  sw.reference = {p.reference_dp_pa + p.sweep_case_pa, p.sweep_case_pa, p.reference_speed_rev_s, 1.0,
+                  p.reference_temperature_k};
+  sw.reference.inlet_pa = p.sweep_inlet_pa;
+  sw.reference.film_temperature_rise_k = p.sweep_film_rise_k;
+  for (int k = 0; k < pumploss::pump_gap_count; ++k) sw.u_gap_m[k] = p.gap_tolerance[k];
+  const auto res = pumploss::sweep_piston_pump(g, p.oil.props, sw);
+  if (res.st == status::domain && res.failed_point == static_cast<std::size_t>(-1))
     throw std::invalid_argument(
         "budget: need step > 0, to > from > the case pressure, and at most 1000 pressures");
-  const auto& g = p.geometry;
-  const auto& oil = p.oil.props;
+  if (pumploss::is_error(res.st))
+    throw std::runtime_error(
+        o.pump + ": no leakage budget at " +
+        show_quantity(p.sweep_from_pa + static_cast<double>(res.failed_point) * p.sweep_step_pa, D::pressure, du) +
+        ": " + pumploss::status_message(static_cast<int>(res.st)));
 
   // the paths the description has (a path with no geometry is left out of the tables)
   using pumploss::leakage_path;
@@ -114,24 +137,12 @@ int run_budget(const budget_options& o) {
   svg::stack st;
   for (const int k : paths) st.names.push_back(pumploss::leakage_path_name(static_cast<leakage_path>(k)));
   st.layers.resize(paths.size());
-  status worst_st = status::ok;
-  double max_re = 0;
   const double one_um_flow = du.show(1.0, D::volume_flow) * 1e-6;  // display flow per m^3/s, times 1 um
-  for (int i = 0;; ++i) {
-    const double pout = p.sweep_from_pa + i * p.sweep_step_pa;
-    if (pout > p.sweep_to_pa * (1 + 1e-12)) break;
-    pumploss::pump_operating_point<double> op{pout, p.sweep_case_pa, p.sweep_speed_rev_s,
-                                              p.sweep_displacement_fraction, p.sweep_temperature_k};
-    op.inlet_pa = p.sweep_inlet_pa;
-    op.film_temperature_rise_k = p.sweep_film_rise_k;
-    const auto b = pumploss::piston_pump_budget(g, oil, op);
-    const auto fl = pumploss::piston_pump_flow_loss(g, oil, op);
-    if (pumploss::is_error(b.st))
-      throw std::runtime_error(o.pump + ": no leakage budget at " + show_quantity(pout, D::pressure, du) + ": " +
-                               pumploss::status_message(static_cast<int>(b.st)));
-    const auto s = pumploss::piston_pump_sensitivity(g, oil, op);
-    worst_st = pumploss::worst(worst_st, b.st);
-    max_re = std::max(max_re, b.max_gap_reynolds);
+  for (const auto& pt : res.points) {
+    const double pout = pt.outlet_pa;
+    const auto& b = pt.budget;
+    const auto& fl = pt.flow_loss;
+    const auto& s = pt.sensitivity;
     std::vector<cell> rf = {pout}, rs = {pout}, rz = {pout};
     for (std::size_t j = 0; j < paths.size(); ++j) {
       rf.emplace_back(b.flow_m3_s[paths[j]]);
@@ -171,9 +182,8 @@ int run_budget(const budget_options& o) {
                                             show_quantity(p.sweep_temperature_k, D::temperature, du, 3),
                                             100 * p.sweep_displacement_fraction));
   // the budget at the health reference state, next to the measured baseline
-  const pumploss::pump_operating_point<double> ref_op{p.reference_dp_pa + p.sweep_case_pa, p.sweep_case_pa,
-                                                      p.reference_speed_rev_s, 1.0, p.reference_temperature_k};
-  const auto br = pumploss::piston_pump_budget(g, oil, ref_op);
+  const auto& ref = res.at_reference;
+  const auto& br = ref.budget;
   if (pumploss::is_usable(br.st))
     r.facts.emplace_back("At the health reference",
                          fmt::format("{} predicted at {}, {}, {}; measured baseline {} ({:+.0f} %)",
@@ -185,9 +195,8 @@ int run_budget(const budget_options& o) {
                                      100 * (p.baseline_drain_m3_s / br.total_m3_s - 1)));
   // force balance, viscosity band, deadhead and the reconciliation at the reference state
   {
-    const auto full = pumploss::piston_pump_kinematics(g, 1.0);
-    const auto b1 = pumploss::piston_pump_balance(g, full.tan_beta, p.reference_dp_pa);
-    const auto b0 = pumploss::piston_pump_balance(g, 0.0, p.reference_dp_pa);
+    const auto& b1 = ref.balance_full;
+    const auto& b0 = ref.balance_zero;
     if (g.slipper_gap_m > 0)
       r.facts.emplace_back(
           "Slipper balance",
@@ -204,12 +213,8 @@ int run_budget(const budget_options& o) {
     if ((b1.warnings | b0.warnings) != 0u)
       r.notes.push_back("FORCE BALANCE outside its design window: the stated films are not the ones this geometry "
                         "would run at; the budget's shares are not credible until the geometry is corrected");
-    pumploss::pump_operating_point<double> op{p.reference_dp_pa + p.sweep_case_pa, p.sweep_case_pa,
-                                              p.reference_speed_rev_s, 1.0, p.reference_temperature_k};
-    op.inlet_pa = p.sweep_inlet_pa;
-    op.film_temperature_rise_k = p.sweep_film_rise_k;
-    const auto fl = pumploss::piston_pump_flow_loss(g, oil, op);
-    const auto bb = pumploss::piston_pump_budget(g, oil, op);
+    const auto& fl = ref.flow_loss;
+    const auto& bb = ref.budget;
     if (pumploss::is_usable(fl.st)) {
       r.facts.emplace_back(
           "Flow loss at the reference",
@@ -228,8 +233,7 @@ int run_budget(const budget_options& o) {
                       show_quantity(bb.total_m3_s, D::volume_flow, du, 3),
                       show_quantity(bb.total_film_m3_s, D::volume_flow, du, 3), p.sweep_film_rise_k));
     }
-    op.mode = pumploss::controller_mode::deadhead;
-    const auto dh = pumploss::piston_pump_budget(g, oil, op);
+    const auto& dh = ref.deadhead;
     if (pumploss::is_usable(dh.st))
       r.facts.emplace_back("Deadhead (compensating at zero stroke)",
                            fmt::format("{} to the case, of which the controller {} (metering {} into the control "
@@ -239,11 +243,8 @@ int run_budget(const budget_options& o) {
                                                      D::volume_flow, du, 3),
                                        show_quantity(dh.metering_flow_m3_s, D::volume_flow, du, 3),
                                        show_quantity(dh.flow_m3_s[0], D::volume_flow, du, 3)));
-    bool any_tol = false;
-    for (double t : p.gap_tolerance) any_tol = any_tol || t > 0;
-    if (any_tol) {
-      op.mode = pumploss::controller_mode::on_stroke;
-      const auto u = pumploss::piston_pump_budget_uncertainty(g, oil, op, p.gap_tolerance);
+    if (ref.with_uncertainty) {
+      const auto& u = ref.uncertainty;
       if (pumploss::is_usable(u.st)) {
         table tu;
         tu.name = "share_uncertainty";
@@ -261,12 +262,12 @@ int run_budget(const budget_options& o) {
       }
     }
   }
-  r.facts.emplace_back("Largest gap Reynolds number", fmt::format("{:.3g} (laminar below about 2000)", max_re));
+  r.facts.emplace_back("Largest gap Reynolds number", fmt::format("{:.3g} (laminar below about 2000)", res.max_gap_reynolds));
   r.tables.push_back(std::move(tf));
   r.tables.push_back(std::move(ts));
   r.tables.push_back(std::move(tz));
   r.tables.push_back(std::move(tl));
-  if (worst_st != status::ok)
+  if (res.st != status::ok)
     r.notes.push_back("some paths were evaluated outside their model's assumptions (see the status column)");
   r.notes.push_back("laminar clearance flows; 'total' with the oil at the sweep temperature and case pressure "
                     "(isoviscous), 'total film viscosity' with the pressure-viscosity over the film and the stated "

@@ -120,7 +120,7 @@ pumploss::drain_flow<double> flow_model(const drain_line_spec& d, const std::str
       ts.push_back(t);
       qs.push_back(q);
     }
-    const auto r = pumploss::drain_flow_table(static_cast<int>(ts.size()), ts.data(), qs.data());
+    const auto r = pumploss::drain_flow_table(ts.size(), ts.data(), qs.data());
     if (!r.usable()) throw std::runtime_error(file + ": [flow] table: " + pumploss::status_message(static_cast<int>(r.st)));
     f = r.value;
   } else {

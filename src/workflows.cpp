@@ -58,7 +58,9 @@ pump_sweep_result sweep_piston_pump(const piston_pump<double>& p, const oil<doub
   for (int i = 0;; ++i) {
     const double pout = s.from_pa + i * s.step_pa;
     if (pout > s.to_pa * (1 + 1e-12)) break;
-    const pump_operating_point<double> op{pout, s.case_pa, s.speed_rev_s, s.displacement_fraction, s.temperature_k};
+    pump_operating_point<double> op{pout, s.case_pa, s.speed_rev_s, s.displacement_fraction, s.temperature_k};
+    op.inlet_pa = s.inlet_pa;
+    op.film_temperature_rise_k = s.film_temperature_rise_k;
     pump_sweep_point pt;
     pt.outlet_pa = pout;
     pt.budget = piston_pump_budget(p, o, op);
@@ -68,11 +70,24 @@ pump_sweep_result sweep_piston_pump(const piston_pump<double>& p, const oil<doub
       return r;
     }
     pt.sensitivity = piston_pump_sensitivity(p, o, op);
+    pt.flow_loss = piston_pump_flow_loss(p, o, op);
     r.st = worst(r.st, pt.budget.st);
     r.max_gap_reynolds = std::max(r.max_gap_reynolds, pt.budget.max_gap_reynolds);
     r.points.push_back(pt);
   }
-  if (s.with_reference) r.reference = piston_pump_budget(p, o, s.reference);
+  if (s.with_reference) {
+    auto& a = r.at_reference;
+    a.budget = r.reference = piston_pump_budget(p, o, s.reference);
+    a.flow_loss = piston_pump_flow_loss(p, o, s.reference);
+    auto dh = s.reference;
+    dh.mode = controller_mode::deadhead;
+    a.deadhead = piston_pump_budget(p, o, dh);
+    const double dp = s.reference.outlet_pa - s.reference.case_pa;
+    a.balance_full = piston_pump_balance(p, piston_pump_kinematics(p, 1.0).tan_beta, dp);
+    a.balance_zero = piston_pump_balance(p, 0.0, dp);
+    for (const double u : s.u_gap_m) a.with_uncertainty = a.with_uncertainty || u > 0;
+    if (a.with_uncertainty) a.uncertainty = piston_pump_budget_uncertainty(p, o, s.reference, s.u_gap_m);
+  }
   return r;
 }
 

@@ -81,7 +81,14 @@ static_assert(all_follow<result<double>, result<mp50>, pumploss::pipe_flow<doubl
                          pumploss::efficiency_point<double>, pumploss::displacement_result<double>,
                          pumploss::efficiency_uncertainty<double>, pumploss::line_drop<double>,
                          pumploss::drain_point<double>, pumploss::drain_summary<double>,
-                         pumploss::drain_sizing<double>>());
+                         pumploss::drain_sizing<double>, pumploss::health_constant_fit<double>,
+                         pumploss::health_plausibility<double>,
+                         pumploss::clearance_budget<double>, pumploss::clearance_sensitivity<double>,
+                         pumploss::flow_test_result<double>, pumploss::motor_drain_result<double>,
+                         pumploss::motor_creep_result<double>, pumploss::inlet_point<double>,
+                         pumploss::shaft_seal_result<double>, pumploss::swash_kinematics<double>,
+                         pumploss::pump_balance<double>, pumploss::pump_flow_loss<double>,
+                         pumploss::budget_uncertainty<double>>());
 
 }  // namespace
 
@@ -93,6 +100,23 @@ TEST(MixedArguments, IntLiteralBesideDoublesEqualsAllDoubleCall) {
   const auto annulus = pumploss::gap_annulus_flow(250e5, 0.040, 0.02002, 0.02, 0.030, 0);
   EXPECT_EQ(annulus.value, pumploss::gap_annulus_flow(250e5, 0.040, 0.02002, 0.02, 0.030, 0.0).value);
   EXPECT_EQ(pumploss::friction_colebrook(100000, 1e-4).value, pumploss::friction_colebrook(1e5, 1e-4).value);
+}
+
+TEST(MixedArguments, HeadersMergedLaterPromoteToo) {
+  // drain_check.hpp, inlet.hpp, motor.hpp: an int literal beside doubles is the all-double call
+  const auto f = pumploss::drain_flow_parts(0, 3.7e-3 / 60, 323.15);
+  EXPECT_EQ(f.laminar_ref_m3_s, pumploss::drain_flow_parts(0.0, 3.7e-3 / 60, 323.15).laminar_ref_m3_s);
+  EXPECT_EQ(f.constant_m3_s, 0.0);
+  const auto seal = pumploss::shaft_seal_check(0.5e5, 4e5, 1e5, 300000);  // 3 bar peak rating, 4 bar peak: fails
+  const auto seal_d = pumploss::shaft_seal_check(0.5e5, 4e5, 1e5, 3e5);
+  ASSERT_TRUE(seal.ok());
+  EXPECT_EQ(seal.margin_peak_pa, seal_d.margin_peak_pa);
+  EXPECT_FALSE(seal.pass_peak);
+  const auto creep = pumploss::motor_creep(100e-6, 500, 0.9, 1e-6, 100e5, 0.03, 0.03, 0);
+  const auto creep_d = pumploss::motor_creep(100e-6, 500.0, 0.9, 1e-6, 100e5, 0.03, 0.03, 0.0);
+  ASSERT_TRUE(creep.usable());
+  EXPECT_EQ(creep.creep_speed_rev_s, creep_d.creep_speed_rev_s);
+  EXPECT_EQ(creep.holding_pressure_pa, creep_d.holding_pressure_pa);
 }
 
 TEST(MixedArguments, FloatBesideIntComputesInDouble) {

@@ -358,7 +358,18 @@ TEST(HealthPlausibility, EveryRefusalAndFlag) {
     EXPECT_EQ(a.refused, c.want) << c.what;
     EXPECT_TRUE(std::isnan(a.fraction_at_reference)) << c.what;
     EXPECT_STRNE(pumploss::health_refusal_text(c.want), pumploss::health_refusal_text(0)) << c.what;
+    // the plausibility check alone (the fraction above one is found later, when scoring)
+    if (c.want != pumploss::refuse_fraction_above_one) {
+      EXPECT_EQ(pumploss::health_check_reading(ref, bands, c.r).st, status::out_of_validity) << c.what;
+    }
   }
+  // the plausibility check of an accepted reading: ok, or implausible with a flag (still usable)
+  const auto clean = pumploss::health_check_reading(ref, bands, {q, kDpRef, 0.0, kTRef, kN});
+  EXPECT_TRUE(clean.ok());
+  const auto flagged = pumploss::health_check_reading(ref, bands, {q, kDpRef, 0.0, kTRef, 1.2 * kN});
+  EXPECT_EQ(flagged.st, status::implausible);
+  EXPECT_TRUE(flagged.usable());
+  EXPECT_EQ(flagged.refused, 0u);
   // flags: scored, with the reason
   auto a = pumploss::assess_health(ref, bands, {q, kDpRef, 0.0, kTRef, 1.2 * kN});
   EXPECT_EQ(a.st, status::ok);

@@ -317,7 +317,10 @@ TEST(LineCapi, HandleLifecycleAndCalls) {
   EXPECT_EQ(height, 2.0);
   pumploss_line_destroy(h);
   int kind = 0;
-  EXPECT_EQ(pumploss_standard_bore(pumploss_standard_bore_count(), &d, &kind), PUMPLOSS_EDOMAIN);
+  std::size_t nb = 0;
+  EXPECT_EQ(pumploss_standard_bore_count(&nb), PUMPLOSS_OK);
+  EXPECT_EQ(nb, static_cast<std::size_t>(pumploss::standard_bore_count));
+  EXPECT_EQ(pumploss_standard_bore(nb, &d, &kind), PUMPLOSS_EDOMAIN);
   EXPECT_EQ(pumploss_standard_bore(0, &d, &kind), PUMPLOSS_OK);
   EXPECT_EQ(d, 0.004);
 }

@@ -19,9 +19,14 @@
  *   function documents as undefined for those inputs is NaN. A usable status never comes with
  *   an infinite output. Test with the macros, not with number ranges.
  * - A NULL output pointer is an error (PUMPLOSS_EMISUSE), never a crash.
- * - Arrays and counts: every array length, and every count given out through a pointer, is a
- *   size_t (pumploss_standard_bore_count() returns its small constant as the int value of the
- *   call; the number of pistons is a design figure, an int). NULL is never a valid array, whatever
+ * - Arrays and counts: every array length and every count (given in, or out through a pointer,
+ *   as pumploss_standard_bore_count() does) is a size_t. An int is kept where the number is not
+ *   the length of an array: the number of pistons of pumploss_piston_pump_create() (a physical
+ *   design figure, 3 to 15) and element indexes of a line, where an output uses -1 for "none"
+ *   (pumploss_line_size_drain_flow()'s dominant_element). One array count is an int: the points
+ *   of the drain-flow table of pumploss_line_drain_check_table() (1 to 16), because that
+ *   function's outputs have the length of its size_t n_temps, and the bindings generator reads
+ *   every size_t of a function as a dimension of its output arrays. NULL is never a valid array, whatever
  *   the count: a NULL array gives PUMPLOSS_EMISUSE, also with n = 0. With valid arrays and
  *   n = 0 a batch function returns PUMPLOSS_OK and writes nothing; a function that needs data
  *   (a fit, a calibration, a check over temperatures) returns its documented error for too few
@@ -1134,15 +1139,16 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(const pumploss_line *lin
                                                         double *diameter_m, double *velocity_m_s,
                                                         double *worst_margin_pa);
 /** Number of standard bores.
- *  @return the count. */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(void);
+ *  @param count receives the count
+ *  @return PUMPLOSS_OK; PUMPLOSS_EMISUSE for NULL. */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(size_t *count);
 /** A standard bore (ascending inside diameter).
- *  @param index 0 to pumploss_standard_bore_count()-1
+ *  @param index 0 to the count of pumploss_standard_bore_count() - 1
  *  @param inside_diameter_m receives the inside diameter, m
  *  @param kind receives PUMPLOSS_BORE_TUBE (metric tube) or PUMPLOSS_BORE_HOSE (hose, dash
  *         size = ID in sixteenths of an inch)
  *  @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN for a bad index; PUMPLOSS_EMISUSE for NULL. */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(int index, double *inside_diameter_m, int *kind);
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(size_t index, double *inside_diameter_m, int *kind);
 /** Fully turbulent friction factor f_T of clean commercial steel, used by the equivalent-length
  *  fitting method K = f_T (L/D)_eq (f_T table of Crane Technical Paper 410, 2009).
  *  @param diameter_m inside diameter, m, > 0

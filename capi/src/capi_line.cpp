@@ -268,14 +268,18 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(const pumploss_line* h, 
   });
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(void) { return pumploss::standard_bore_count; }
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore_count(size_t* count) {
+  if (count == nullptr) return PUMPLOSS_EMISUSE;
+  *count = static_cast<size_t>(pumploss::standard_bore_count);
+  return PUMPLOSS_OK;
+}
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(int index, double* inside_diameter_m, int* kind) {
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_standard_bore(size_t index, double* inside_diameter_m, int* kind) {
   if (inside_diameter_m == nullptr || kind == nullptr) {
     if (inside_diameter_m != nullptr) *inside_diameter_m = kNaN;
     return PUMPLOSS_EMISUSE;
   }
-  if (index < 0 || index >= pumploss::standard_bore_count) {
+  if (index >= static_cast<size_t>(pumploss::standard_bore_count)) {
     *inside_diameter_m = kNaN;
     *kind = 0;
     return PUMPLOSS_EDOMAIN;
@@ -473,7 +477,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_table(
   auto make_flow = [&] {
     if (flow_t_k == nullptr || flow_q_m3_s == nullptr)
       return pumploss::result<pumploss::drain_flow<double>>{{}, status::misuse};
-    auto f = pumploss::drain_flow_table(n_points, flow_t_k, flow_q_m3_s);
+    auto f = pumploss::drain_flow_table(n_points < 0 ? std::size_t{0} : static_cast<std::size_t>(n_points), flow_t_k, flow_q_m3_s);
     f.value = pumploss::with_destroke_peak(f.value, peak_volume_m3, peak_time_s);
     return f;
   };

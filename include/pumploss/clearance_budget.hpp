@@ -31,7 +31,7 @@ struct rotary_operating_point {
 /// The internal leakage (slip) budget of a gear or vane pump at one operating point: every
 /// path returns oil from the outlet to the inlet side.
 template <class T>
-struct clearance_budget {
+struct [[nodiscard]] clearance_budget {
   T flow_m3_s[clearance_path_count];  ///< each path's leakage, m^3/s (a tip path may be negative: drag exceeds pressure flow)
   T share[clearance_path_count];      ///< each path's flow over the gross leakage sum |q_i| (in [-1, 1]; NaN when all are 0)
   T total_m3_s;                       ///< total internal leakage, m^3/s
@@ -41,14 +41,22 @@ struct clearance_budget {
   T rho_kg_m3;                        ///< density used, kg/m^3
   T max_gap_reynolds;                 ///< largest gap Reynolds number of the paths
   pumploss::status st;                ///< ok; regime when a path is not laminar (Re > 2000); errors
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Sensitivity of the total leakage of a gear or vane budget to each clearance.
 template <class T>
-struct clearance_sensitivity {
+struct [[nodiscard]] clearance_sensitivity {
   T d_total_d_gap[clearance_path_count];  ///< dQ/dh for each clearance, (m^3/s)/m (0 when the path is absent)
   T elasticity[clearance_path_count];     ///< (h / Q) dQ/dh (3 for a purely pressure-driven laminar path)
   pumploss::status st;                    ///< status of the budget
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 namespace detail {

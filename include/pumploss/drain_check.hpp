@@ -17,6 +17,7 @@
 
 #include "fluid.hpp"
 #include "line.hpp"
+#include "promote.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 
@@ -70,16 +71,17 @@ inline drain_flow<T> drain_flow_parts(T constant_m3_s, T laminar_ref_m3_s, T t_r
 /// @return the model; status::domain for a bad count, NULL data, non-increasing temperatures or
 ///         negative flows; status::nonfinite for NaN or inf.
 template <class T>
-inline result<drain_flow<T>> drain_flow_table(int n, const T* t_k, const T* q_m3_s) {
+inline result<drain_flow<T>> drain_flow_table(std::size_t n, const T* t_k, const T* q_m3_s) {
   drain_flow<T> f;
-  if (n < 1 || n > drain_flow_max_points || t_k == nullptr || q_m3_s == nullptr) return {f, status::domain};
-  for (int i = 0; i < n; ++i) {
+  if (n < 1 || n > static_cast<std::size_t>(drain_flow_max_points) || t_k == nullptr || q_m3_s == nullptr)
+    return {f, status::domain};
+  for (std::size_t i = 0; i < n; ++i) {
     if (!detail::all_finite(t_k[i], q_m3_s[i])) return {f, status::nonfinite};
     if (!(t_k[i] > T(0)) || !(q_m3_s[i] >= T(0)) || (i > 0 && !(t_k[i] > t_k[i - 1]))) return {f, status::domain};
-    f.table_t_k[static_cast<std::size_t>(i)] = t_k[i];
-    f.table_q_m3_s[static_cast<std::size_t>(i)] = q_m3_s[i];
+    f.table_t_k[i] = t_k[i];
+    f.table_q_m3_s[i] = q_m3_s[i];
   }
-  f.n_table = n;
+  f.n_table = static_cast<int>(n);  // at most drain_flow_max_points
   return {f, status::ok};
 }
 
@@ -756,6 +758,10 @@ inline drain_sizing<T> size_drain_line(const line<T>& l, const oil<T>& o, T q_dr
                          v_max_m_s, kinds_mask);
 }
 /// @}
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(drain_flow_parts)
 
 }  // namespace pumploss
 

@@ -96,7 +96,7 @@ struct flow_test_setup {
 
 /// Result of a flow test evaluation.
 template <class T>
-struct flow_test_result {
+struct [[nodiscard]] flow_test_result {
   T speed_no_load_rev_s;      ///< drive speed at the no-load reading, rev/s (measured or from the motor)
   T speed_loaded_rev_s;       ///< drive speed at the loaded reading, rev/s
   T displacement_m3_rev;      ///< displacement used, m^3/rev (stated, or derived)
@@ -110,6 +110,10 @@ struct flow_test_result {
   T percent_of_new;           ///< volumetric_efficiency_ref / new_volumetric_efficiency (fraction)
   flow_verdict verdict;       ///< pass, watch or fail against the limit
   pumploss::status st;        ///< ok, or a report (regime, extrapolated, implausible) or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Evaluate a field flow test of a pump: two readings (no load and loaded), the drive speed at

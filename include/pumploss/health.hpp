@@ -294,13 +294,17 @@ inline result<T> health_normalise(const health_reference<T>& ref, const health_r
 
 /// The constant and laminar parts fitted to baseline readings.
 template <class T>
-struct health_constant_fit {
+struct [[nodiscard]] health_constant_fit {
   T constant_m3_s;      ///< fitted constant part q_c, m^3/s
   T laminar_ref_m3_s;   ///< laminar part at the reference state, m^3/s
   T baseline_m3_s;      ///< q_c + laminar part at the reference state, m^3/s
   T rms_m3_s;           ///< RMS residual, m^3/s (0 for two readings)
   pumploss::status st;  ///< ok; implausible when the fitted constant part is negative (then set to 0 and refitted);
                         ///< insufficient_data for fewer than 2 readings or one value of dp/mu
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Fit the constant part and the laminar part to baseline readings of a new pump at two or more
@@ -411,9 +415,16 @@ inline health_constant_fit<T> health_fit_constant(const health_reference<T>& ref
 
 /// Plausibility of one reading: refusals (not scored) and flags (scored, with a reason).
 template <class T>
-struct health_plausibility {
+struct [[nodiscard]] health_plausibility {
   unsigned refused;  ///< health_refusal bits (0: accepted)
   unsigned flags;    ///< health_reason flag bits (speed off rated, low pressure, drain colder, state differs)
+  /// ok: accepted, no flag; implausible: accepted with a flag (scored, with a reason);
+  /// out_of_validity: refused (not scored)
+  pumploss::status st;
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the reading may be scored (accepted, flagged or not).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Check one reading against what the oil and the pump can be at.
@@ -427,14 +438,14 @@ struct health_plausibility {
 /// @param ref the pump description
 /// @param bands the limits
 /// @param r the reading
-/// @return the bits
+/// @return the bits and their status (ok, implausible when flagged, out_of_validity when refused)
 /// @par Source
 /// Limits are our defaults, no source; configurable in health_bands.
 template <class T>
 inline health_plausibility<T> health_check_reading(const health_reference<T>& ref, const health_bands<T>& bands,
                                                    const health_reading<T>& r) {
   using std::abs;
-  health_plausibility<T> p{0u, 0u};
+  health_plausibility<T> p{0u, 0u, status::ok};
   if (!detail::finite(r.drain_flow_m3_s) || !(r.drain_flow_m3_s > T(0))) p.refused |= refuse_drain_not_positive;
   else if (r.drain_flow_m3_s < ref.constant_m3_s) p.refused |= refuse_drain_below_constant;
   auto t_bad = [&](T t) { return !(t >= bands.oil_t_min_k) || !(t <= bands.oil_t_max_k); };
@@ -450,6 +461,7 @@ inline health_plausibility<T> health_check_reading(const health_reference<T>& re
   if (detail::all_finite(r.drain_t_k, r.inlet_t_k) && r.drain_t_k < r.inlet_t_k - bands.drain_colder_k)
     p.flags |= reason_drain_colder;
   if (r.state != ref.baseline_state && r.state != operating_state::unknown) p.flags |= reason_state_differs;
+  p.st = p.refused != 0u ? status::out_of_validity : (p.flags != 0u ? status::implausible : status::ok);
   return p;
 }
 

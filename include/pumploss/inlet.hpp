@@ -13,6 +13,7 @@
 
 #include "fluid.hpp"
 #include "line.hpp"
+#include "promote.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 
@@ -20,13 +21,17 @@ namespace pumploss {
 
 /// Result of the inlet check at one temperature.
 template <class T>
-struct inlet_point {
+struct [[nodiscard]] inlet_point {
   T t_k;              ///< oil temperature, K
   T nu_m2_s;          ///< kinematic viscosity at t_k, m^2/s
   T inlet_pa;         ///< absolute static pressure at the pump's inlet port, Pa
   T margin_pa;        ///< inlet pressure minus the maker's minimum, Pa (>= 0 passes)
   bool pass;          ///< margin >= 0
   pumploss::status st;///< status at this temperature
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Absolute pressure at a pump's inlet port at one oil temperature (Bernoulli from the oil at
@@ -170,12 +175,16 @@ inline result<T> inlet_min_temperature(const line<T>& l, const oil<T>& o, T q_m3
 
 /// Result of the case pressure check against the shaft seal.
 template <class T>
-struct shaft_seal_result {
+struct [[nodiscard]] shaft_seal_result {
   T margin_continuous_pa;  ///< continuous rating minus continuous case pressure, Pa
   T margin_peak_pa;        ///< peak rating minus peak case pressure, Pa
   bool pass_continuous;    ///< margin_continuous >= 0
   bool pass_peak;          ///< margin_peak >= 0
   pumploss::status st;     ///< ok; implausible when the peak case pressure is below the continuous one; errors
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Case pressure against the shaft seal's ratings (gauge, against atmosphere outside the seal):
@@ -208,6 +217,10 @@ inline shaft_seal_result<T> shaft_seal_check(T case_continuous_pa, T case_peak_p
   const T mp = seal_peak_pa - case_peak_pa;
   return {mc, mp, mc >= T(0), mp >= T(0), case_peak_pa < case_continuous_pa ? status::implausible : status::ok};
 }
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(shaft_seal_check)
 
 }  // namespace pumploss
 

@@ -9,6 +9,7 @@
 
 #include <cmath>
 
+#include "promote.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 
@@ -37,11 +38,15 @@ struct motor_drain_bands {
 
 /// Result of a motor case drain reading.
 template <class T>
-struct motor_drain_result {
+struct [[nodiscard]] motor_drain_result {
   T fraction;              ///< q_drain / q_inlet
   T volumetric_efficiency; ///< 1 - fraction (external leakage only; cross-port leakage not seen by the drain)
   motor_drain_band band;   ///< the band of the fraction
   pumploss::status st;     ///< ok; implausible when the drain exceeds the inlet flow; errors
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Judge a hydraulic motor's case drain against its inlet flow.
@@ -80,12 +85,16 @@ inline motor_drain_result<T> motor_drain_check(T drain_m3_s, T inlet_m3_s, const
 
 /// Result of a creep (held load) estimate.
 template <class T>
-struct motor_creep_result {
+struct [[nodiscard]] motor_creep_result {
   T holding_pressure_pa;  ///< pressure the held load makes in the loaded port, Pa
   T leakage_m3_s;         ///< leakage out of the loaded port at that pressure and viscosity, m^3/s
   T creep_speed_rev_s;    ///< shaft creep speed, rev/s
   T load_speed_m_s;       ///< creep of the load (creep speed times travel per revolution), m/s (0 without travel)
   pumploss::status st;    ///< ok; extrapolated when the holding pressure exceeds 1.25 times the leak test pressure; errors
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Creep of a hydraulic motor holding a load with its ports blocked (no brake): the load makes a
@@ -149,6 +158,10 @@ inline const char* motor_drain_band_name(motor_drain_band b) noexcept {
   }
   return "unknown";
 }
+
+// Mixed argument types (an int literal beside doubles), promoted as Boost.Math promotes:
+// one line per public template whose parameters are all scalars (promote.hpp).
+PUMPLOSS_PROMOTE(motor_creep)
 
 }  // namespace pumploss
 

@@ -195,7 +195,7 @@ inline piston_pump_check<T> validate_piston_pump(const piston_pump<T>& p) {
 
 /// Swash-plate kinematics at one displacement setting (piston_pump_kinematics()).
 template <class T>
-struct swash_kinematics {
+struct [[nodiscard]] swash_kinematics {
   T tan_beta;            ///< tangent of the swash angle, x tan(beta_max)
   T stroke_m;            ///< piston stroke 2 R tan(beta), m
   T engaged_odc_m;       ///< engaged piston-bore length at outer dead centre (shortest), m
@@ -204,6 +204,10 @@ struct swash_kinematics {
   T effective_length_m;  ///< length that gives the mean annulus leakage over the delivery stroke, m
   T dead_volume_m3;      ///< chamber volume at inner dead centre, m^3
   pumploss::status st;   ///< ok; domain / nonfinite as validate_piston_pump() or for x outside [0, 1]
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Kinematics of a swash-plate pump whose plate tilts about a pivot line at distance e from the
@@ -413,11 +417,16 @@ constexpr bool path_is_laminar(leakage_path path) noexcept {
 
 /// Force balance of the slipper and of the barrel on the valve plate (every budget reports it).
 template <class T>
-struct pump_balance {
+struct [[nodiscard]] pump_balance {
   T slipper_balance;  ///< \f$ F_{hs} \cos\beta / (\Delta p A_K) \f$ at the stated film
   T slipper_film_m;   ///< film at which the slipper balance is 1 (capillary feed), m; 0 when none
   T barrel_balance;   ///< \f$ F_{sep} / F_{hold} \f$
   unsigned warnings;  ///< budget_warning bits
+  pumploss::status st;  ///< ok; implausible when a ratio leaves its design window (warnings); nonfinite input
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as implausible).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Balance ratios of a pump at one displacement (independent of pressure and viscosity: every
@@ -440,7 +449,8 @@ struct pump_balance {
 /// @param p the pump
 /// @param tan_beta tangent of the swash angle
 /// @param dp_pa pressure difference, Pa (>= 0; the spring's share vanishes as dp grows)
-/// @return the ratios (NaN where the path is absent) and warnings
+/// @return the ratios (NaN where the path is absent) and warnings; status implausible when a
+///         warning is set, nonfinite (NaN ratios) for a non-finite tan_beta or dp_pa
 /// @par Validity
 /// Static, parallel films; the kidney's end regions and the barrel's tilting moment are left out.
 /// @par Source
@@ -453,7 +463,11 @@ inline pump_balance<T> piston_pump_balance(const piston_pump<T>& p, T tan_beta, 
   using std::log1p;
   using std::sqrt;
   const T nan = scalar_traits<T>::nan();
-  pump_balance<T> r{nan, nan, nan, 0u};
+  pump_balance<T> r{nan, nan, nan, 0u, status::ok};
+  if (!detail::all_finite(tan_beta, dp_pa)) {
+    r.st = status::nonfinite;
+    return r;
+  }
   const T pi = detail::pi<T>();
   const T area = pi * p.piston_diameter_m * p.piston_diameter_m / 4;
   const T cos_beta = T(1) / sqrt(T(1) + tan_beta * tan_beta);
@@ -488,6 +502,7 @@ inline pump_balance<T> piston_pump_balance(const piston_pump<T>& p, T tan_beta, 
     if (r.barrel_balance > T(barrel_balance_max)) r.warnings |= warn_barrel_lifts;
     if (r.barrel_balance < T(barrel_balance_min)) r.warnings |= warn_barrel_overclamped;
   }
+  if (r.warnings != 0u) r.st = status::implausible;
   return r;
 }
 
@@ -662,7 +677,7 @@ inline leakage_budget<T> piston_pump_budget(const piston_pump<T>& p, const oil<T
 
 /// Flow losses of a piston pump that never reach the case, beside the drain budget.
 template <class T>
-struct pump_flow_loss {
+struct [[nodiscard]] pump_flow_loss {
   T theoretical_m3_s;  ///< x V_max n, m^3/s
   T drain_m3_s;        ///< case drain (piston_pump_budget(), isoviscous), m^3/s
   T compression_m3_s;  ///< compression of the delivered oil (swept volume), m^3/s
@@ -671,6 +686,10 @@ struct pump_flow_loss {
   T total_m3_s;        ///< the test stand's flow loss: theoretical minus outlet flow (at outlet pressure), m^3/s
   T delivered_m3_s;    ///< outlet flow at outlet pressure and the given temperature, m^3/s
   pumploss::status st; ///< status of the budget, or an error
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// The test stand's flow loss split into the case drain and the losses that never reach the
@@ -832,7 +851,7 @@ inline budget_sensitivity<T> piston_pump_sensitivity(const piston_pump<T>& p, co
 
 /// Standard uncertainty of every path's flow and share from the tolerances of the gaps.
 template <class T>
-struct budget_uncertainty {
+struct [[nodiscard]] budget_uncertainty {
   T flow_m3_s[leakage_path_count];    ///< nominal flow of each path, m^3/s
   T share[leakage_path_count];        ///< nominal share of each path
   T u_flow_m3_s[leakage_path_count];  ///< standard uncertainty of each path's flow, m^3/s
@@ -840,6 +859,10 @@ struct budget_uncertainty {
   T total_m3_s;                       ///< nominal total, m^3/s
   T u_total_m3_s;                     ///< standard uncertainty of the total, m^3/s
   pumploss::status st;                ///< status of the budget; domain for a negative tolerance
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
 };
 
 /// Uncertainty of the budget's flows and shares propagated from independent standard

@@ -47,12 +47,16 @@ struct oil_property_row {
 };
 
 /// An oil's properties over temperature.
-struct oil_property_table {
+struct [[nodiscard]] oil_property_table {
   status st = status::ok;                      ///< ok, regime (some row outside a stated range), or the first error
   std::size_t failed_row = static_cast<std::size_t>(-1);  ///< the temperature that failed (on an error)
   std::vector<oil_property_row> rows;          ///< one per temperature (up to the failed one)
   double nu40_m2_s = 0;                        ///< viscosity at 40 degC (for the grade check)
   bool inside_grade = false;                   ///< nu40 inside the ISO 3448 band of the grade given
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return is_usable(st); }
 };
 
 /// Tabulate an oil over temperatures and check each against the maker's limits.
@@ -76,34 +80,60 @@ struct pump_sweep {
   double speed_rev_s = 0;                      ///< rev/s
   double displacement_fraction = 1;            ///< 0..1
   double temperature_k = 0;                    ///< oil temperature, K
+  double inlet_pa = 0;                         ///< inlet gauge pressure of every point, Pa (compression, cross-port)
+  double film_temperature_rise_k = 0;          ///< film above bulk temperature of every point, K (film-viscosity total)
   bool with_reference = false;                 ///< also evaluate `reference`
-  pump_operating_point<double> reference{};    ///< e.g. the health reference state
+  pump_operating_point<double> reference{};    ///< e.g. the health reference state (its own inlet_pa and film rise)
+  /// standard uncertainty of each pump_gap, m (>= 0; all 0: no share uncertainty at the reference)
+  double u_gap_m[pump_gap_count] = {0, 0, 0, 0};
 };
 
 /// One pressure of a sweep.
 struct pump_sweep_point {
   double outlet_pa = 0;                     ///< outlet pressure, Pa
-  leakage_budget<double> budget{};          ///< flow of every path, shares, total
+  leakage_budget<double> budget{};          ///< flow of every path, shares, total (isoviscous and film viscosity)
   budget_sensitivity<double> sensitivity{}; ///< elasticities and derivatives to each gap
+  pump_flow_loss<double> flow_loss{};       ///< the test stand's flow loss: drain and what never reaches the case
+};
+
+/// What the sweep evaluates at its reference operating point (with_reference).
+struct pump_sweep_reference {
+  leakage_budget<double> budget{};           ///< the budget: isoviscous and film-viscosity totals (the viscosity band)
+  pump_flow_loss<double> flow_loss{};        ///< the flow loss split
+  leakage_budget<double> deadhead{};         ///< the budget compensating at zero stroke (controller_mode::deadhead)
+  pump_balance<double> balance_full{};       ///< force balance at full stroke and the reference pressure difference
+  pump_balance<double> balance_zero{};       ///< the same at zero stroke
+  bool with_uncertainty = false;             ///< a gap uncertainty was given
+  budget_uncertainty<double> uncertainty{};  ///< shares with their uncertainty from u_gap_m (when with_uncertainty)
 };
 
 /// A sweep's results.
-struct pump_sweep_result {
+struct [[nodiscard]] pump_sweep_result {
   status st = status::ok;                   ///< ok, a report of some point (worst), or the first error
   std::size_t failed_point = static_cast<std::size_t>(-1);  ///< the pressure that failed (on an error)
   std::vector<pump_sweep_point> points;     ///< one per pressure
   double max_gap_reynolds = 0;              ///< largest gap Reynolds number of the sweep
-  leakage_budget<double> reference{};       ///< the budget at the reference (when asked for)
+  leakage_budget<double> reference{};       ///< the budget at the reference (when asked for; = at_reference.budget)
+  pump_sweep_reference at_reference{};      ///< everything at the reference (when asked for; each part has its status)
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == status::ok; }
+  /// @return true when the points are usable (ok or a report such as regime).
+  bool usable() const noexcept { return is_usable(st); }
 };
 
 /// The leakage budget and its gap sensitivities over a pressure sweep (at most 1001 pressures).
 /// @param p the pump (validate_piston_pump() it first)
 /// @param o the oil
 /// @param s the sweep
+/// Every point also gets piston_pump_flow_loss(); with `with_reference` the reference gets its
+/// budget, flow loss, deadhead budget, balance at full and zero stroke (pressure difference
+/// outlet - case) and, when a gap uncertainty is given, piston_pump_budget_uncertainty().
 /// @return the results; status::domain for a sweep that is not step > 0, to > from > case
-///         pressure and at most 1000 steps
+///         pressure and at most 1000 steps; the reference's parts carry their own statuses
+///         (the sweep's status is the points')
 /// @par Source
-/// piston_pump_budget() and piston_pump_sensitivity() (docs/pages/theory_pump.md).
+/// piston_pump_budget(), piston_pump_sensitivity(), piston_pump_flow_loss(), piston_pump_balance(),
+/// piston_pump_budget_uncertainty() (docs/pages/theory_pump.md).
 PUMPLOSS_CXX_API pump_sweep_result sweep_piston_pump(const piston_pump<double>& p, const oil<double>& o, const pump_sweep& s);
 
 }  // namespace pumploss

@@ -305,9 +305,14 @@ static void test_line(void) {
   CHECK(pumploss_line_size_drain(h, 10e-3 / 60, 273.15, 323.15, 6, 0.0, -1.0, 1.5, 3, &d, &v, &worst) ==
             PUMPLOSS_EVALIDITY && is_nan(d));
   pumploss_line_destroy(h);
-  CHECK(pumploss_standard_bore_count() > 10);
-  CHECK(pumploss_standard_bore(0, &d, &kind) == PUMPLOSS_OK && d > 0.0 && (kind == 1 || kind == 2));
-  CHECK(pumploss_standard_bore(-1, &d, &kind) == PUMPLOSS_EDOMAIN && is_nan(d));
+  {
+    size_t nb = 0;
+    CHECK(pumploss_standard_bore_count(&nb) == PUMPLOSS_OK && nb > 10);
+    CHECK(pumploss_standard_bore_count(NULL) == PUMPLOSS_EMISUSE);
+    CHECK(pumploss_standard_bore(0, &d, &kind) == PUMPLOSS_OK && d > 0.0 && (kind == 1 || kind == 2));
+    CHECK(pumploss_standard_bore(nb, &d, &kind) == PUMPLOSS_EDOMAIN && is_nan(d));
+    CHECK(pumploss_standard_bore((size_t)-1, &d, &kind) == PUMPLOSS_EDOMAIN && is_nan(d));
+  }
   /* fluids_fittings (fluids documentation) */
   CHECK(pumploss_friction_factor_ft(0.1, &k) == PUMPLOSS_OK && fabs(k - 0.0162885) < 1e-7);
   CHECK(pumploss_friction_factor_ft(-0.1, &k) == PUMPLOSS_EDOMAIN && is_nan(k));
