@@ -1074,6 +1074,8 @@ TEST(CliExports, AmbiguousNumbersAreRefusedWithThePlaceAndTheFix) {
   EXPECT_NE(r.err.find(csv + ":5:" + std::to_string(semi + 2) + ":"), std::string::npos) << r.err;
   EXPECT_NE(r.err.find("without thousands grouping"), std::string::npos) << r.err;
   EXPECT_EQ(run({"test-stand", csv, "--setup", kDemo + "/test_stand.toml", "--csv-format", "semicolons"}, tmp).code, 1);
+}
+
 // Issue 16: [fit] is optional; [outliers] and [[acceptance]] criteria in the setup give a verdict
 // per criterion with its margin (pass, fail, not tested) and an overall one.
 TEST(CliTestStand, AcceptanceCriteriaAndOptionalFit) {
