@@ -842,6 +842,7 @@ class health_cusum {
   static constexpr std::size_t min_before = 3;     ///< readings of the regime before a candidate jump
   static constexpr std::size_t window_before = 12; ///< readings before a candidate jump in its fit, at most
   /// Critical value of the jump's z statistic.
+  /// @return 5 (two-sided, Bonferroni over up to 32 candidates: see the class text)
   static T z_abrupt() { return detail::constant<T>(5.0L, "5.0"); }
 
   /// Start with a target and a noise level.
