@@ -197,7 +197,7 @@ TEST(TableReaderExports, BomCrlfDegreeSignsAndParentheses) {
   const std::string rows = "250.5,12.25,45.3,\"a; b\"\r\n-0.35,0.5,-12.75,x\r\n1500,3,40,\r\n";
   const char* const headers[] = {
       "\xEF\xBB\xBFp [bar],q [L/min],t [degC],note\r\n",
-      "p (bar),q (l/min),t (\xC2\xB0" "C),note\r\n",       // parentheses, UTF-8 degree sign
+      "p (bar),q (l/min),t (\xC2\xB0\x43),note\r\n",     // parentheses, UTF-8 degree sign, C
       "P [bar],Q [lpm],T [\xE2\x84\x83],Note\r\n",        // U+2103 DEGREE CELSIUS
       "p [bar],q [LPM],t [deg C],note\n",
   };
