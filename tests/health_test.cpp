@@ -875,7 +875,8 @@ TEST(HealthCapi, MonitorAndVersion2Functions) {
   double st[PUMPLOSS_HEALTH_MONITOR_STATE_COUNT];
   EXPECT_EQ(pumploss_health_monitor_save(m, st, 3), PUMPLOSS_EBUFFER);
   EXPECT_TRUE(std::isnan(st[0]));
-  ASSERT_EQ(pumploss_health_monitor_save(m, st, PUMPLOSS_HEALTH_MONITOR_STATE_COUNT), PUMPLOSS_OK);
+  const int saved = pumploss_health_monitor_save(m, st, PUMPLOSS_HEALTH_MONITOR_STATE_COUNT);
+  ASSERT_TRUE(saved == PUMPLOSS_OK || saved == PUMPLOSS_WUNDEFINED) << saved;  // NaN: not learned yet
   EXPECT_EQ(pumploss_health_monitor_restore(m, st, PUMPLOSS_HEALTH_MONITOR_STATE_COUNT), PUMPLOSS_OK);
   EXPECT_EQ(pumploss_health_monitor_feed(m, 13, 0.0, 250e5, 0.0, kTRef, kN, kNaN, kNaN, PUMPLOSS_STATE_ON_STROKE,
                                          &level, &raw, &events, &qn),

@@ -23,10 +23,7 @@
  *   as pumploss_standard_bore_count() does) is a size_t. An int is kept where the number is not
  *   the length of an array: the number of pistons of pumploss_piston_pump_create() (a physical
  *   design figure, 3 to 15) and element indexes of a line, where an output uses -1 for "none"
- *   (pumploss_line_size_drain_flow()'s dominant_element). One array count is an int: the points
- *   of the drain-flow table of pumploss_line_drain_check_table() (1 to 16), because that
- *   function's outputs have the length of its size_t n_temps, and the bindings generator reads
- *   every size_t of a function as a dimension of its output arrays. NULL is never a valid array, whatever
+ *   (pumploss_line_size_drain_flow()'s dominant_element). NULL is never a valid array, whatever
  *   the count: a NULL array gives PUMPLOSS_EMISUSE, also with n = 0. With valid arrays and
  *   n = 0 a batch function returns PUMPLOSS_OK and writes nothing; a function that needs data
  *   (a fit, a calibration, a check over temperatures) returns its documented error for too few
@@ -1261,35 +1258,6 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
     double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
     double p_allowed_pa, double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
     double case_pressure_peak_pa[], int pass[], char *verdict, size_t verdict_capacity);
-/** Case drain check as pumploss_line_drain_check_flow(), with the drain flow given at temperatures
- *  (e.g. from a normalisation model), interpolated linearly, the end values held outside (then
- *  PUMPLOSS_WEXTRAPOLATED).
- *  @param line the drain line (oil set)
- *  @param n_points number of table points, 1 to 16 (a count of the table, not of the outputs)
- *  @param flow_t_k n_points temperatures, K, increasing
- *  @param flow_q_m3_s n_points drain flows, m^3/s, >= 0
- *  @param peak_volume_m3 control volume dumped into the case on destroke, m^3 (0: no peak)
- *  @param peak_time_s time over which it is dumped, s
- *  @param t_cold_k cold-start temperature, K
- *  @param t_max_k maximum temperature, K, >= t_cold_k
- *  @param n_temps number of temperatures, 1 to 1000 (the length of the output arrays)
- *  @param p_tank_pa tank pressure at the outlet, Pa
- *  @param p_allowed_pa allowed continuous case pressure, Pa
- *  @param p_allowed_peak_pa allowed peak case pressure, Pa (used with a peak)
- *  @param t_k receives n_temps temperatures, K
- *  @param q_m3_s receives n_temps continuous drain flows, m^3/s
- *  @param case_pressure_pa receives n_temps continuous case pressures, Pa
- *  @param case_pressure_peak_pa receives n_temps peak case pressures, Pa
- *  @param pass receives n_temps flags: bit 0 continuous passes, bit 1 peak passes
- *  @param verdict receives the verdict naming the failing temperature ranges (degC), or "" on error
- *  @param verdict_capacity size of verdict in bytes
- *  @return as pumploss_line_drain_check_flow(); PUMPLOSS_EDOMAIN for a bad table.
- *  @sa pumploss::drain_flow_table */
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_table(
-    const pumploss_line *line, int n_points, const double flow_t_k[], const double flow_q_m3_s[],
-    double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
-    double p_allowed_pa, double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
-    double case_pressure_peak_pa[], int pass[], char *verdict, size_t verdict_capacity);
 /** Lowest start temperature: the line passes the continuous and peak limits from there up to
  *  t_max, and the oil is no thicker than the maker's largest start viscosity (inverse ASTM D341).
  *  Drain flow and limits as pumploss_line_drain_check_flow().
@@ -2293,9 +2261,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_state(const pumploss_heal
 /**
  * Save the monitor's dynamic state (versioned layout) to a caller buffer.
  * @param m the monitor
- * @param state receives PUMPLOSS_HEALTH_MONITOR_STATE_COUNT values (NaN on error)
+ * @param state receives PUMPLOSS_HEALTH_MONITOR_STATE_COUNT values (NaN on error; with
+ *        PUMPLOSS_WUNDEFINED, NaN elements are values the monitor has not learned yet)
  * @param capacity length of state, >= PUMPLOSS_HEALTH_MONITOR_STATE_COUNT
- * @return PUMPLOSS_OK, PUMPLOSS_EBUFFER, PUMPLOSS_EMISUSE.
+ * @return PUMPLOSS_OK, PUMPLOSS_WUNDEFINED (a saved state with values still to be learned),
+ *         PUMPLOSS_EBUFFER, PUMPLOSS_EMISUSE.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_save(const pumploss_health_monitor *m, double state[],
                                                             size_t capacity);

@@ -469,22 +469,6 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
                           q_m3_s, case_pressure_pa, case_pressure_peak_pa, pass, verdict, verdict_capacity);
 }
 
-PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_table(
-    const pumploss_line* h, int n_points, const double flow_t_k[], const double flow_q_m3_s[], double peak_volume_m3,
-    double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
-    double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
-    double case_pressure_peak_pa[], int pass[], char* verdict, size_t verdict_capacity) {
-  auto make_flow = [&] {
-    if (flow_t_k == nullptr || flow_q_m3_s == nullptr)
-      return pumploss::result<pumploss::drain_flow<double>>{{}, status::misuse};
-    auto f = pumploss::drain_flow_table(n_points < 0 ? std::size_t{0} : static_cast<std::size_t>(n_points), flow_t_k, flow_q_m3_s);
-    f.value = pumploss::with_destroke_peak(f.value, peak_volume_m3, peak_time_s);
-    return f;
-  };
-  return drain_check_into(h, make_flow, t_cold_k, t_max_k, n_temps, p_tank_pa, p_allowed_pa, p_allowed_peak_pa, t_k,
-                          q_m3_s, case_pressure_pa, case_pressure_peak_pa, pass, verdict, verdict_capacity);
-}
-
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_start(
     const pumploss_line* h, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k, double peak_volume_m3,
     double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,

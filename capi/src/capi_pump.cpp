@@ -390,9 +390,15 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_state(const pumploss_heal
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_save(const pumploss_health_monitor* m, double state[],
                                                             size_t capacity) {
   if (state == nullptr) return PUMPLOSS_EMISUSE;
-  const int st = m == nullptr ? PUMPLOSS_EMISUSE : static_cast<int>(m->m.save(state, capacity));
-  if (st != PUMPLOSS_OK)
+  int st = m == nullptr ? PUMPLOSS_EMISUSE : static_cast<int>(m->m.save(state, capacity));
+  if (st != PUMPLOSS_OK) {
     for (size_t i = 0; i < capacity; ++i) state[i] = kNaN;
+    return st;
+  }
+  // A value the monitor has not learned yet is saved as NaN: a usable status with a NaN output
+  // is PUMPLOSS_WUNDEFINED by the header's rule, and restore() takes the state as it is.
+  for (size_t i = 0; i < PUMPLOSS_HEALTH_MONITOR_STATE_COUNT && i < capacity; ++i)
+    if (std::isnan(state[i])) st = PUMPLOSS_WUNDEFINED;
   return st;
 }
 
