@@ -76,6 +76,9 @@ namespace plcapi {
 constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
 constexpr double kInf = std::numeric_limits<double>::infinity();
 constexpr double kSentinel = 777.25;  ///< pre-filled into outputs to see what was written
+/// Storage behind an empty but valid input array (never read: its count is 0).
+inline const double kEmptyDoubles[1] = {0.0};
+inline const int kEmptyInts[1] = {0};
 inline void* const kHandleSentinel = reinterpret_cast<void*>(static_cast<std::uintptr_t>(0x10));
 
 inline bool is_error(int c) { return c > 0 && c < 100; }
@@ -188,8 +191,9 @@ struct Exec {
         case K_IIN: s.i = a.i; break;
         case K_SIZE: s.z = c.n; break;
         case K_BUFLEN: s.z = 256; break;
-        case K_DARR: s.cpd = a.null ? nullptr : a.darr.data(); break;
-        case K_IARR: s.cpi = a.null ? nullptr : a.iarr.data(); break;
+        // a valid array is never NULL, also when it is empty (an empty vector's data() may be)
+        case K_DARR: s.cpd = a.null ? nullptr : (a.darr.empty() ? &kEmptyDoubles[0] : a.darr.data()); break;
+        case K_IARR: s.cpi = a.null ? nullptr : (a.iarr.empty() ? &kEmptyInts[0] : a.iarr.data()); break;
         case K_STR: s.s = a.null ? nullptr : a.s.c_str(); break;
         case K_DOUT:
           dbuf[p].assign(len == 0 ? 1 : len, kSentinel);
