@@ -230,8 +230,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(const pumploss_line* h,
   }
   return line_call(h, {worst_margin_pa}, [&] {
     if (!arrays) return status::misuse;
-    if (!h->has_oil) return status::misuse;
     if (n_temps < 1 || n_temps > 1000) return status::domain;
+    if (!h->has_oil) return status::misuse;
     std::vector<pumploss::drain_point<double>> pts(static_cast<std::size_t>(n_temps));
     const auto s = pumploss::drain_check(h->line, h->oil, q_drain_m3_s, t_cold_k, t_max_k, static_cast<int>(n_temps), p_tank_pa,
                                          p_allowed_pa, pts.data());
@@ -257,8 +257,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(const pumploss_line* h, 
                                                         double* diameter_m, double* velocity_m_s,
                                                         double* worst_margin_pa) {
   return line_call(h, {diameter_m, velocity_m_s, worst_margin_pa}, [&] {
+    if (n_temps < 2 || n_temps > 1000) return status::domain;  // the documented range, 2 to 1000
     if (!h->has_oil) return status::misuse;
-    if (n_temps > 1000) return status::domain;  // the documented range, 2 to 1000
     const auto s = pumploss::size_drain_line(h->line, h->oil, q_drain_m3_s, t_cold_k, t_max_k, static_cast<int>(n_temps), p_tank_pa,
                                              p_allowed_pa, v_max_m_s, kinds_mask);
     *diameter_m = s.diameter_m;
@@ -420,8 +420,8 @@ int drain_check_into(const pumploss_line* h, MakeFlow&& make_flow, double t_cold
   double worst = 0.0;  // the smallest margin: gives call() one scalar output to guard
   double* const outs[] = {&worst};
   const int code = call(outs, [&] {
+    if (n_temps < 1 || n_temps > 1000) return status::domain;  // before the handle's state: n = 0 is too few points
     if (!h->has_oil) return status::misuse;
-    if (n_temps < 1 || n_temps > 1000) return status::domain;
     const pumploss::result<pumploss::drain_flow<double>> f = make_flow();
     if (is_error(f.st)) return f.st;
     const pumploss::drain_limits<double> lim{p_tank_pa, p_allowed_pa, p_allowed_peak_pa};
@@ -479,8 +479,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_start(
     return PUMPLOSS_EMISUSE;
   }
   return call(outs, [&] {
-    if (!h->has_oil) return status::misuse;
     if (n_temps < 2 || n_temps > 1000) return status::domain;
+    if (!h->has_oil) return status::misuse;
     const auto r = pumploss::drain_start_temperature(
         h->line, h->oil, flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s),
         pumploss::drain_limits<double>{p_tank_pa, p_allowed_pa, p_allowed_peak_pa}, t_cold_k, t_max_k,
@@ -505,8 +505,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain_flow(
     return PUMPLOSS_EMISUSE;
   }
   return call(outs, [&] {
-    if (!h->has_oil) return status::misuse;
     if (n_temps < 2 || n_temps > 1000) return status::domain;
+    if (!h->has_oil) return status::misuse;
     const auto z = pumploss::size_drain_line(
         h->line, h->oil, flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s),
         pumploss::drain_limits<double>{p_tank_pa, p_allowed_pa, p_allowed_peak_pa}, t_cold_k, t_max_k,
