@@ -442,13 +442,14 @@ int calibrate(pumploss_piston_pump* h, size_t n, const double* drain_m3_s, const
               const double* speed_rev_s, const double* displacement_fraction, const double* t_k, const int* mode,
               double* rms_residual_m3_s) {
   return call({rms_residual_m3_s}, [&] {
-    const status s = operating_checks(h);
-    if (is_error(s)) return s;
-    // NULL is never a valid array, also with n = 0 (pumploss.h); no points: too few data
+    // NULL is never a valid array, also with n = 0 (pumploss.h); no points: too few data, whatever
+    // the state of the handle
     if (drain_m3_s == nullptr || outlet_pa == nullptr || case_pa == nullptr || speed_rev_s == nullptr ||
         displacement_fraction == nullptr || t_k == nullptr)
       return status::misuse;
-    if (n == 0) return status::insufficient_data;
+    if (h != nullptr && n == 0) return status::insufficient_data;
+    const status s = operating_checks(h);
+    if (is_error(s)) return s;
     std::vector<pumploss::drain_measurement> m(n);
     for (size_t i = 0; i < n; ++i) {
       if (mode != nullptr && (mode[i] < 0 || mode[i] >= pumploss::controller_mode_count)) return status::domain;
