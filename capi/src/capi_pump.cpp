@@ -834,9 +834,11 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_piston_pump_share_uncertainty(const pump
                                                                double displacement_fraction, double t_k,
                                                                double* share, double* u_share) {
   return call({share, u_share}, [&] {
+    if (u_gap_m == nullptr || h == nullptr) return status::misuse;
+    if (n_gaps != pumploss::pump_gap_count) return status::domain;  // before the handle's state
     const status s = operating_checks(h);
-    if (is_error(s) || u_gap_m == nullptr) return status::misuse;
-    if (path < 0 || path >= pumploss::leakage_path_count || n_gaps != pumploss::pump_gap_count) return status::domain;
+    if (is_error(s)) return s;
+    if (path < 0 || path >= pumploss::leakage_path_count) return status::domain;
     double u[pumploss::pump_gap_count];
     for (int g = 0; g < pumploss::pump_gap_count; ++g) u[g] = u_gap_m[g];
     const auto r = pumploss::piston_pump_budget_uncertainty(
