@@ -140,7 +140,7 @@ cmake --preset ci-windows-x64 -B "$out/win64-cxx" -DPUMPLOSS_SELF_CONTAINED=OFF 
 cmake --build "$out/win64-cxx" -j "$jobs" --target pumploss_cxx
 cxx_exports="$(x86_64-w64-mingw32-objdump -p "$out/win64-cxx/pumploss_cxx.dll" |
   awk '/\[Ordinal\/Name Pointer\] Table/ {t = 1; next} t && /^\t\[/ {print $NF; next} t {t = 0}')"
-if [ -z "$cxx_exports" ] || printf '%s\n' "$cxx_exports" | grep -qv '^_ZN8pumploss'; then
+if [ -z "$cxx_exports" ] || printf '%s\n' "$cxx_exports" | grep -qv '^_ZNK\{0,1\}8pumploss'; then
   echo "pumploss_cxx.dll must export pumploss:: functions only; it exports:"; echo "$cxx_exports"; exit 1
 fi
 echo "pumploss_cxx.dll exports $(printf '%s\n' "$cxx_exports" | wc -l) pumploss:: functions, nothing else"
