@@ -16,7 +16,7 @@ parameter kinds and status codes the C tests know.
 
 Calling convention of the ES module (stated in the .d.ts and docs/pages/web.md):
 - inputs in the order of the C declaration, outputs left out; size_t counts stay explicit;
-- the result is an object of the named outputs (numbers, Float64Array / Int32Array for arrays,
+- the result is an object of the named outputs (numbers, Float64Array / Int32Array / Uint32Array for arrays,
   strings for text buffers) plus `status`: 0, or a report code >= 100 whose outputs are valid;
 - an error code (1-99) throws PumplossError {fn, status, message}; no NaN leaves a call unnoticed;
 - create functions return a Handle; destroy functions take it and mark it destroyed.
@@ -224,15 +224,13 @@ def js_function(f):
         elif k in ("DOUT", "IOUT", "ZOUT"):
             key = "element_status" if p.name == "status" else p.name  # `status` is the call's
             if p.array:
-                if k == "ZOUT":
-                    raise SystemExit(f"gen_web.py: {f.name}: size_t arrays are not supported")
-                size = 8 if k == "DOUT" else 4
+                size = 8 if k == "DOUT" else 4  # size_t: 32 bits in wasm32
                 L.append(f"    const n_{p.name} = {n_expr};")
                 L.append(f"    const p_{p.name} = n_{p.name} > 0 ? m._malloc({size} * n_{p.name}) : 0;")
                 frees.append(f"p_{p.name}")
                 args.append(f"p_{p.name}")
-                view = "HEAPF64" if k == "DOUT" else "HEAP32"
-                arr = "Float64Array" if k == "DOUT" else "Int32Array"
+                view = {"DOUT": "HEAPF64", "IOUT": "HEAP32", "ZOUT": "HEAPU32"}[k]
+                arr = {"DOUT": "Float64Array", "IOUT": "Int32Array", "ZOUT": "Uint32Array"}[k]
                 sh = 3 if k == "DOUT" else 2
                 reads.append(f"{key}: {arr}.from(m.{view}.subarray(p_{p.name} >> {sh}, (p_{p.name} >> {sh}) + n_{p.name}))")
             else:
@@ -320,7 +318,7 @@ def write_dts(funcs, handles, codes, out, consts=()):
                 elif p.kind == "IOUT":
                     fields.append(f"{key}: {'Int32Array' if p.array else 'number'}")
                 elif p.kind == "ZOUT":
-                    fields.append(f"{key}: number")
+                    fields.append(f"{key}: {'Uint32Array' if p.array else 'number'}")
                 elif p.kind == "CBUF":
                     fields.append(f"{p.name}: string")
             ret = "{ " + "; ".join(fields + ["status: number"]) + " }"
