@@ -1,4 +1,4 @@
-// pumploss drain-line: the case pressure a drain line causes from cold start to hot, with the
+// pumploss drain-line (one library call, pumploss::check_drain_line()): the case pressure a drain line causes from cold start to hot, with the
 // drain flow over temperature and an optional destroke peak, against the maker's continuous and
 // peak case pressure limits (the failing temperature ranges named), the share of each element,
 // the lowest start temperature, and with --size the smallest standard bore that passes (or why
@@ -9,6 +9,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <functional>
 
 #include "commands.hpp"
 #include "common.hpp"
@@ -16,6 +17,7 @@
 #include "pumploss/drain_check.hpp"
 #include "pumploss/line.hpp"
 #include "pumploss/version.hpp"
+#include "pumploss/workflows.hpp"
 #include "svg.hpp"
 
 namespace plcli {
@@ -162,25 +164,48 @@ std::string verdict_text(const pumploss::drain_summary<double>& s, double t0, do
                          show_quantity(t1, D::temperature, du, 3));
 }
 
+/// The fixed elements that alone exceed a limit, each named: "filter [component] (1.2 bar at 0 degC), the static height (...)"
+std::string fixed_alone_text(const pumploss::drain_line_result& w, const std::function<std::string(int)>& element_name,
+                             const display_units& du) {
+  std::string s;
+  int n = 0;
+  for (const auto& a : w.fixed_alone) {
+    if (!a.usable() || !a.exceeds) continue;
+    s += (s.empty() ? "" : ", ") + element_name(a.element) + " (" + show_quantity(a.dp_pa, D::pressure, du, 3) +
+         " at " + show_quantity(a.t_k, D::temperature, du, 3) + (a.at_peak ? " on destroke" : "") + ")";
+    ++n;
+  }
+  if (n == 0) return "none of them alone exceeds a limit, only together";
+  return (n == 1 ? "alone above the limit: " : fmt::format("each alone above the limit ({} of them): ", n)) + s;
+}
+
 int run_drain_line(const drain_options& o) {
   const display_units du = make_units(o.out);
   const auto d = read_drain_line(o.file);
-  const auto& oil = d.oil.props;
   std::vector<std::string> names;
-  const auto l = build_line(d, o.file, names);
-  const auto flow = flow_model(d, o.file);
+  pumploss::drain_line_case c;
+  c.drain_line = build_line(d, o.file, names);
+  c.fluid = d.oil.props;
+  c.flow = flow_model(d, o.file);
   const bool peak = d.peak_volume_m3 > 0;
-  const pumploss::drain_limits<double> lim{d.tank_pressure_pa, d.max_case_pressure_pa,
-                                           d.max_peak_case_pressure_pa.value_or(d.max_case_pressure_pa)};
+  c.limits = {d.tank_pressure_pa, d.max_case_pressure_pa, d.max_peak_case_pressure_pa.value_or(d.max_case_pressure_pa)};
   const auto temps = d.temperatures.values();
-  const double t0 = temps.front(), t1 = temps.back();
-  const int n = static_cast<int>(temps.size());
-
-  std::vector<pumploss::drain_point<double>> pts(temps.size());
-  const auto sum = pumploss::drain_check(l, oil, flow, lim, t0, t1, n, pts.data());
-  if (pumploss::is_error(sum.st))
+  c.t_cold_k = temps.front();
+  c.t_max_k = temps.back();
+  c.n_temps = static_cast<int>(temps.size());
+  c.max_start_viscosity_m2_s = d.max_start_viscosity_m2_s.value_or(0.0);
+  c.size = o.size;
+  if (d.max_velocity_m_s) c.max_velocity_m_s = *d.max_velocity_m_s;
+  c.sizing_kinds = d.sizing_kinds;
+  const auto w = pumploss::check_drain_line(c);  // the one library call
+  if (pumploss::is_error(w.st))
     throw std::runtime_error(o.file + ": the drain line cannot be evaluated: " +
-                             pumploss::status_message(static_cast<int>(sum.st)));
+                             pumploss::status_message(static_cast<int>(w.st)));
+  const auto& l = c.drain_line;
+  const auto& lim = c.limits;
+  const auto& sum = w.summary;
+  const auto& pts = w.points;
+  const double t0 = c.t_cold_k, t1 = c.t_max_k;
 
   report r;
   r.title = "Case drain line check: " + d.pump_name;
@@ -216,9 +241,7 @@ int run_drain_line(const drain_options& o) {
                            " (tank " + show_quantity(d.tank_pressure_pa, D::pressure, du, 3) + ")");
   r.facts.emplace_back("Verdict", verdict_text(sum, t0, t1, du));
 
-  // lowest start temperature: the line passes from there up, and the oil meets the start limit
-  const auto start = pumploss::drain_start_temperature(l, oil, flow, lim, t0, t1, std::max(2, n),
-                                                       d.max_start_viscosity_m2_s.value_or(0.0));
+  const auto& start = w.start;
   if (start.st == status::out_of_validity) {
     r.facts.emplace_back("Lowest start temperature",
                          "none up to " + show_quantity(t1, D::temperature, du, 3) + ": the line fails at the top");
@@ -233,12 +256,9 @@ int run_drain_line(const drain_options& o) {
                          show_quantity(start.t_start_k, D::temperature, du, 3) + " (" + why + ")");
   }
   std::string vel;
-  double q_max = 0;
-  for (const auto& p : pts) q_max = std::max(q_max, p.q_m3_s);
-  for (const auto& s : d.segments) {
-    const auto v = pumploss::pipe_velocity(q_max, s.inside_diameter_m);
-    vel += (vel.empty() ? "" : "; ") + s.name + " " + show_quantity(v.value, D::velocity, du, 3);
-  }
+  for (std::size_t k = 0; k < d.segments.size() && k < w.pipe_velocity_m_s.size(); ++k)
+    vel += (vel.empty() ? "" : "; ") + d.segments[k].name + " " +
+           show_quantity(w.pipe_velocity_m_s[k], D::velocity, du, 3);
   r.facts.emplace_back("Mean velocity", vel + " (largest continuous drain flow)");
 
   table t;
@@ -275,36 +295,27 @@ int run_drain_line(const drain_options& o) {
     described_peak.y.push_back(du.show(p.case_pressure_peak_pa, D::pressure));
   }
 
-  // share of each element at the coldest temperature (the worst case for a laminar line)
-  std::vector<double> edp(l.elements.size());
-  std::vector<status> est(l.elements.size(), status::ok);
-  const auto rho0 = pumploss::oil_density_at(oil, t0, 0.0);
-  const auto mu0 = pumploss::oil_dynamic_viscosity(oil, t0, 0.0);
-  const double q0 = pts.front().q_m3_s + pts.front().q_peak_m3_s;
-  const auto drop = pumploss::line_pressure_drop(l.elements.data(), l.elements.size(), l.height_m, q0, rho0.value,
-                                                 mu0.value, edp.data(), 0.0, est.data());
   table te;
   te.name = "elements";
-  te.title = "Pressure drop of each element at " + show_quantity(t0, D::temperature, du, 3) + " and " +
-             show_quantity(q0, D::volume_flow, du, 3) + (peak ? " (with the destroke peak)" : "");
+  te.title = "Pressure drop of each element at " + show_quantity(w.element_t_k, D::temperature, du, 3) + " and " +
+             show_quantity(w.element_q_m3_s, D::volume_flow, du, 3) + (peak ? " (with the destroke peak)" : "");
   te.cols = {{"element", cell_kind::text, D::pressure, 0},
              {"pressure drop", cell_kind::quantity, D::pressure, 3},
              {"share", cell_kind::percent, D::pressure, 3},
              {"status", cell_kind::text, D::pressure, 0}};
   std::string constant_k_low;
-  for (std::size_t k = 0; k < l.elements.size(); ++k) {
-    te.rows.push_back({names[k], edp[k], drop.dp_pa > 0 ? edp[k] / drop.dp_pa : 0.0, short_status(est[k])});
-    if (est[k] == status::regime && l.elements[k].kind == pumploss::line_element_kind::fitting_k)
-      constant_k_low += (constant_k_low.empty() ? "" : ", ") + names[k];
+  for (std::size_t k = 0; k < w.elements.size(); ++k) {
+    const auto& e = w.elements[k];
+    te.rows.push_back({names[k], e.dp_pa, e.share, short_status(e.st)});
+    if (e.constant_k_laminar) constant_k_low += (constant_k_low.empty() ? "" : ", ") + names[k];
   }
-  te.rows.push_back({std::string("static height"), drop.dp_static_pa,
-                     drop.dp_pa > 0 ? drop.dp_static_pa / drop.dp_pa : 0.0, std::string("ok")});
+  te.rows.push_back({std::string("static height"), w.dp_static_pa,
+                     w.dp_total_pa > 0 ? w.dp_static_pa / w.dp_total_pa : 0.0, std::string("ok")});
 
   svg::plot p;
   p.title = "Case pressure of " + d.pump_name + " over oil temperature";
-  p.subtitle = fmt::format("drain flow {} to {}{}; pumploss {}",
-                           show_quantity(std::min_element(pts.begin(), pts.end(), [](auto& a, auto& b) { return a.q_m3_s < b.q_m3_s; })->q_m3_s, D::volume_flow, du, 3),
-                           show_quantity(q_max, D::volume_flow, du, 3),
+  p.subtitle = fmt::format("drain flow {} to {}{}; pumploss {}", show_quantity(w.q_min_m3_s, D::volume_flow, du, 3),
+                           show_quantity(w.q_max_m3_s, D::volume_flow, du, 3),
                            peak ? ", destroke peak " + show_quantity(d.peak_volume_m3 / d.peak_time_s, D::volume_flow, du, 3) : "",
                            pumploss::version_string);
   p.x.label = std::string("oil temperature [") + du.of(D::temperature).symbol + "]";
@@ -318,22 +329,23 @@ int run_drain_line(const drain_options& o) {
                         "peak allowed " + show_quantity(lim.p_allowed_peak_pa, D::pressure, du, 3)});
   for (const char* line : drain_caution) p.footer.emplace_back(line);
 
-  if (o.size) {
-    const double v_max =
-        d.max_velocity_m_s.value_or(pumploss::recommended_velocity(pumploss::line_service::drain).max_m_s);
-    const auto z = pumploss::size_drain_line(l, oil, flow, lim, t0, t1, std::max(2, n), v_max, d.sizing_kinds);
+  if (w.sized) {
+    const auto& z = w.sizing;
+    const double v_max = c.max_velocity_m_s;
     const char* kinds = d.sizing_kinds == 1 ? "tubes" : (d.sizing_kinds == 2 ? "hoses" : "tubes and hoses");
     if (pumploss::is_error(z.st) && z.st != status::out_of_validity)
       throw std::runtime_error(o.file + ": sizing failed: " + pumploss::status_message(static_cast<int>(z.st)));
-    auto element_name = [&](int k) { return k < 0 ? std::string("the static height") : names[static_cast<std::size_t>(k)]; };
+    const std::function<std::string(int)> element_name = [&](int k) {
+      return k < 0 ? std::string("the static height") : names[static_cast<std::size_t>(k)];
+    };
     if (z.fixed_exceeds) {
       r.facts.emplace_back(
           "Smallest standard bore",
           fmt::format("none can pass: the elements the bore does not change alone cause {} at {} (above the limit); "
-                      "the largest of them is {}: resize or replace it first (as its maker allows); no pipe or fitting "
-                      "bore can make up for it",
+                      "{}; the largest of them is {}: resize or replace it first (as its maker allows); no pipe or "
+                      "fitting bore can make up for it",
                       show_quantity(z.fixed_dp_pa, D::pressure, du, 3), show_quantity(z.fixed_t_k, D::temperature, du, 3),
-                      element_name(z.fixed_dominant_element)));
+                      fixed_alone_text(w, element_name, du), element_name(z.fixed_dominant_element)));
     } else if (z.st == status::out_of_validity) {
       r.facts.emplace_back("Smallest standard bore",
                            fmt::format("none of the standard {} passes at most {}{}", kinds,
@@ -356,12 +368,7 @@ int run_drain_line(const drain_options& o) {
                       show_quantity(v_max, D::velocity, du, 3), element_name(z.dominant_element),
                       show_quantity(z.dominant_dp_pa, D::pressure, du, 3),
                       show_quantity(z.worst_t_k, D::temperature, du, 3)));
-      auto l2 = l;
-      for (auto& e : l2.elements)
-        if (pumploss::detail::has_bore(e)) e.diameter_m = z.diameter_m;
-      std::vector<pumploss::drain_point<double>> p2(pts.size());
-      // the summary is in the sizing result already; each point carries its own status here
-      static_cast<void>(pumploss::drain_check(l2, oil, flow, lim, t0, t1, n, p2.data()));
+      const auto& p2 = w.sized_points;
       svg::series sized{std::string("continuous with ") + b.name, {}, {}, true, true, false};
       t.cols.insert(t.cols.end() - 1, {std::string("case pressure ") + b.name, cell_kind::quantity, D::pressure, 3});
       for (std::size_t i = 0; i < p2.size(); ++i) {

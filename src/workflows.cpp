@@ -1,4 +1,4 @@
-// The oil table and the piston-pump pressure sweep (workflows.hpp).
+// The oil table, the piston-pump pressure sweep and the case drain line check (workflows.hpp).
 #include "pumploss/workflows.hpp"
 
 #include <algorithm>
@@ -87,6 +87,73 @@ pump_sweep_result sweep_piston_pump(const piston_pump<double>& p, const oil<doub
     a.balance_zero = piston_pump_balance(p, 0.0, dp);
     for (const double u : s.u_gap_m) a.with_uncertainty = a.with_uncertainty || u > 0;
     if (a.with_uncertainty) a.uncertainty = piston_pump_budget_uncertainty(p, o, s.reference, s.u_gap_m);
+  }
+  return r;
+}
+
+drain_line_result check_drain_line(const drain_line_case& c) {
+  drain_line_result r;
+  const auto& l = c.drain_line;
+  if (l.elements.empty() || c.n_temps < 1 || c.n_temps > 1000) {
+    r.st = status::domain;
+    return r;
+  }
+  const int n = c.n_temps;
+  const double t0 = c.t_cold_k, t1 = c.t_max_k;
+  r.points.resize(static_cast<std::size_t>(n));
+  r.summary = drain_check(l, c.fluid, c.flow, c.limits, t0, t1, n, r.points.data());
+  r.st = r.summary.st;
+  if (is_error(r.st)) {
+    r.points.clear();
+    return r;
+  }
+  r.q_min_m3_s = r.q_max_m3_s = r.points.front().q_m3_s;
+  for (const auto& p : r.points) {
+    r.q_min_m3_s = std::min(r.q_min_m3_s, p.q_m3_s);
+    r.q_max_m3_s = std::max(r.q_max_m3_s, p.q_m3_s);
+  }
+  for (const auto& e : l.elements)
+    if (e.kind == line_element_kind::pipe) r.pipe_velocity_m_s.push_back(pipe_velocity(r.q_max_m3_s, e.diameter_m).value);
+
+  // the lowest start temperature: the line passes from there up, and the oil meets the start limit
+  r.start = drain_start_temperature(l, c.fluid, c.flow, c.limits, t0, t1, std::max(2, n), c.max_start_viscosity_m2_s);
+
+  // share of each element at the coldest temperature (the worst case for a laminar line)
+  std::vector<double> edp(l.elements.size());
+  std::vector<status> est(l.elements.size(), status::ok);
+  const auto rho0 = oil_density_at(c.fluid, t0, 0.0);
+  const auto mu0 = oil_dynamic_viscosity(c.fluid, t0, 0.0);
+  r.element_t_k = t0;
+  r.element_q_m3_s = r.points.front().q_m3_s + r.points.front().q_peak_m3_s;
+  const auto drop = line_pressure_drop(l.elements.data(), l.elements.size(), l.height_m, r.element_q_m3_s, rho0.value,
+                                       mu0.value, edp.data(), 0.0, est.data());
+  r.elements_st = drop.st;
+  r.dp_static_pa = drop.dp_static_pa;
+  r.dp_total_pa = drop.dp_pa;
+  for (std::size_t k = 0; k < l.elements.size(); ++k) {
+    drain_element_drop e;
+    e.dp_pa = edp[k];
+    e.share = drop.dp_pa > 0 ? edp[k] / drop.dp_pa : 0.0;
+    e.st = est[k];
+    e.constant_k_laminar = est[k] == status::regime && l.elements[k].kind == line_element_kind::fitting_k;
+    r.elements.push_back(e);
+  }
+
+  if (c.size) {
+    r.sized = true;
+    r.sizing = size_drain_line(l, c.fluid, c.flow, c.limits, t0, t1, std::max(2, n), c.max_velocity_m_s, c.sizing_kinds);
+    if (r.sizing.fixed_exceeds) {
+      for (int k = -1; k < static_cast<int>(l.elements.size()); ++k)
+        if (k < 0 || !detail::has_bore(l.elements[static_cast<std::size_t>(k)]))
+          r.fixed_alone.push_back(drain_fixed_alone(l, c.fluid, c.flow, c.limits, t0, t1, std::max(2, n), k));
+    } else if (r.sizing.bore_index >= 0 && !is_error(r.sizing.st)) {
+      auto l2 = l;
+      for (auto& e : l2.elements)
+        if (detail::has_bore(e)) e.diameter_m = r.sizing.diameter_m;
+      r.sized_points.resize(r.points.size());
+      // the summary is in the sizing result already; each point carries its own status here
+      static_cast<void>(drain_check(l2, c.fluid, c.flow, c.limits, t0, t1, n, r.sized_points.data()));
+    }
   }
   return r;
 }

@@ -708,3 +708,226 @@ TEST(DrainStart, LowestStartTemperatureFromTheLineAndTheViscosityLimit) {
             PUMPLOSS_EMISUSE);
   EXPECT_TRUE(std::isnan(ts));
 }
+
+namespace {
+/// A drain line with two lumped components that each alone exceed 1 bar cold (a filter and a
+/// cooler, laminar media: dp = dp1 (q/q1) (nu/nu_ref), one curve point each), a check valve that
+/// does not, a 12.7 mm hose and 0.5 m of height (invented data).
+pumploss::line<double> two_culprits_line() {
+  pumploss::line<double> l;
+  l.height_m = 0.5;
+  l.elements.push_back(pumploss::line_pipe(0.0127, 5.0, 5e-6));
+  const double q1[1] = {10.0 / 60000}, filter[1] = {0.8e5}, cooler[1] = {0.7e5}, check[1] = {0.05e5};
+  l.elements.push_back(pumploss::line_component_points(1, q1, filter, 46e-6, 1.0).value);
+  l.elements.push_back(pumploss::line_component_points(1, q1, cooler, 46e-6, 1.0).value);
+  l.elements.push_back(pumploss::line_component_points(1, q1, check, 46e-6, 0.0).value);
+  return l;
+}
+}  // namespace
+
+TEST(DrainSizing, NamesEachFixedElementThatAloneExceedsTheLimit) {
+  const auto l = two_culprits_line();
+  const auto o = vg46();
+  const double q = 8.0 / 60000;
+  const auto f = pumploss::drain_flow_parts(q, 0.0, 0.0);
+  const pumploss::drain_limits<double> lim{0.0, 1e5, 1e5};
+  const auto z = pumploss::size_drain_line(l, o, f, lim, 273.15, 343.15, 8, 1.5, 3);
+  EXPECT_EQ(z.st, status::out_of_validity);
+  EXPECT_TRUE(z.fixed_exceeds);
+  EXPECT_EQ(z.n_fixed_alone, 2);           // the filter and the cooler, each alone
+  EXPECT_EQ(z.fixed_dominant_element, 1);  // the filter is the larger
+  // each element alone against the laminar-media law evaluated here (self-calculated): the
+  // worst case is the coldest temperature, dp = dp1 (q/q1) (nu(0 degC)/46 mm2/s)
+  const double nu_cold = pumploss::oil_kinematic_viscosity(o, 273.15).value;
+  const double want[3] = {0.8e5 * 0.8 * nu_cold / 46e-6, 0.7e5 * 0.8 * nu_cold / 46e-6, 0.05e5 * 0.8};
+  for (int k = 1; k <= 3; ++k) {
+    const auto a = pumploss::drain_fixed_alone(l, o, f, lim, 273.15, 343.15, 8, k);
+    ASSERT_TRUE(a.usable()) << k;
+    EXPECT_EQ(a.element, k);
+    EXPECT_NEAR(a.dp_pa, want[k - 1], 1e-9 * want[k - 1]) << k;
+    EXPECT_EQ(a.exceeds, k != 3) << k;
+    EXPECT_NEAR(a.excess_pa, want[k - 1] - 1e5, 1e-9 * want[k - 1]) << k;
+    EXPECT_FALSE(a.at_peak);
+    if (k != 3) EXPECT_EQ(a.t_k, 273.15) << k;
+  }
+  const auto h = pumploss::drain_fixed_alone(l, o, f, lim, 273.15, 343.15, 8, -1);  // the static height
+  ASSERT_TRUE(h.usable());
+  EXPECT_FALSE(h.exceeds);
+  EXPECT_NEAR(h.dp_pa, pumploss::oil_density_at(o, 273.15, 0.0).value * 9.80665 * 0.5, 1e-9);
+  // a peak limit of its own: the check valve alone exceeds it at continuous + peak flow
+  const auto fp = pumploss::with_destroke_peak(f, 25e-6, 0.1);  // + 15 L/min
+  const pumploss::drain_limits<double> tight{0.0, 1e5, 0.1e5};
+  const auto cv = pumploss::drain_fixed_alone(l, o, fp, tight, 273.15, 343.15, 8, 3);
+  ASSERT_TRUE(cv.usable());
+  EXPECT_TRUE(cv.exceeds);
+  EXPECT_TRUE(cv.at_peak);
+  EXPECT_NEAR(cv.dp_pa, 0.05e5 * 23.0 / 10.0, 1e-6);
+  // bad input: a pipe, an index out of range, NaN, a bad grid
+  EXPECT_EQ(pumploss::drain_fixed_alone(l, o, f, lim, 273.15, 343.15, 8, 0).st, status::domain);
+  EXPECT_EQ(pumploss::drain_fixed_alone(l, o, f, lim, 273.15, 343.15, 8, 4).st, status::domain);
+  EXPECT_EQ(pumploss::drain_fixed_alone(l, o, f, lim, 273.15, 343.15, 8, -2).st, status::domain);
+  EXPECT_EQ(pumploss::drain_fixed_alone(l, o, f, lim, 273.15, 343.15, 1, 1).st, status::domain);
+  const auto bad = pumploss::drain_fixed_alone(l, o, f, lim, kNaN, 343.15, 8, 1);
+  EXPECT_EQ(bad.st, status::nonfinite);
+  EXPECT_TRUE(std::isnan(bad.dp_pa));
+  EXPECT_FALSE(bad.exceeds);
+  // the 50-digit evaluation of the same template (cold end only: the worst case)
+  pumploss::line<mp50> lm;
+  lm.height_m = mp50("0.5");
+  for (const auto& e : l.elements) {
+    pumploss::line_element<mp50> m;
+    m.kind = e.kind;
+    m.diameter_m = mp50(e.diameter_m);
+    m.length_m = mp50(e.length_m);
+    m.roughness_m = mp50(e.roughness_m);
+    m.n_points = e.n_points;
+    m.q_points[0] = mp50(e.q_points[0]);
+    m.dp_points[0] = mp50(e.dp_points[0]);
+    m.nu_ref_m2_s = mp50(e.nu_ref_m2_s);
+    m.nu_exponent = mp50(e.nu_exponent);
+    lm.elements.push_back(m);
+  }
+  const auto om = pumploss::typical_mineral_oil(pumploss::d341_fit(mp50("313.15"), mp50("46e-6"), mp50("373.15"),
+                                                                   mp50("6.9e-6")).value);
+  const auto am = pumploss::drain_fixed_alone(lm, om, pumploss::drain_flow_parts(mp50(q), mp50(0), mp50(0)),
+                                              pumploss::drain_limits<mp50>{mp50(0), mp50(1e5), mp50(1e5)},
+                                              mp50("273.15"), mp50("343.15"), 8, 1);
+  ASSERT_TRUE(am.usable());
+  const double a1 = pumploss::drain_fixed_alone(l, o, f, lim, 273.15, 343.15, 8, 1).dp_pa;
+  EXPECT_LT(std::fabs(a1 - static_cast<double>(am.dp_pa)) / a1, 1e-12);
+}
+
+TEST(DrainSizing, CApiNamesEachFixedElement) {
+  pumploss_line* h = nullptr;
+  ASSERT_EQ(pumploss_line_create(&h), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_add_pipe(h, 0.0127, 5.0, 5e-6), PUMPLOSS_OK);
+  const double q1[1] = {10.0 / 60000}, filter[1] = {0.8e5}, cooler[1] = {0.7e5}, check[1] = {0.05e5};
+  ASSERT_EQ(pumploss_line_add_component_points(h, 1, q1, filter, 46e-6, 1.0), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_add_component_points(h, 1, q1, cooler, 46e-6, 1.0), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_add_component_points(h, 1, q1, check, 46e-6, 0.0), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_set_height(h, 0.5), PUMPLOSS_OK);
+  const auto o = vg46();
+  ASSERT_EQ(pumploss_line_set_oil(h, 313.15, 46e-6, 373.15, 6.9e-6, o.rho_ref_kg_m3, o.t_ref_k), PUMPLOSS_OK);
+  double d = 0, fixed = 0;
+  int dom = 0, exceeds = 0;
+  EXPECT_EQ(pumploss_line_size_drain_flow(h, 8.0 / 60000, 0, 0, 0, 0, 273.15, 343.15, 8, 0.0, 1e5, 1e5, 1.5, 3, &d,
+                                          &fixed, &dom, &exceeds),
+            PUMPLOSS_EVALIDITY);
+  EXPECT_EQ(exceeds, 1);
+  // every element and the static height, as an embedder would loop: the filter and the cooler
+  std::vector<int> culprits;
+  size_t count = 0;
+  ASSERT_EQ(pumploss_line_element_count(h, &count), PUMPLOSS_OK);
+  const auto l = two_culprits_line();
+  const auto f = pumploss::drain_flow_parts(8.0 / 60000, 0.0, 0.0);
+  for (int k = -1; k < static_cast<int>(count); ++k) {
+    double dp = 0, t = 0;
+    int alone = -1;
+    const int code = pumploss_line_drain_fixed_alone(h, 8.0 / 60000, 0, 0, 0, 0, 273.15, 343.15, 8, 0.0, 1e5, 1e5, k,
+                                                     &dp, &t, &alone);
+    if (k == 0) {  // the hose: its drop depends on the bore
+      EXPECT_EQ(code, PUMPLOSS_EDOMAIN);
+      EXPECT_TRUE(std::isnan(dp));
+      EXPECT_EQ(alone, 0);
+      continue;
+    }
+    EXPECT_FALSE(PUMPLOSS_IS_ERROR(code)) << k;
+    const auto a = pumploss::drain_fixed_alone(l, o, f, pumploss::drain_limits<double>{0.0, 1e5, 1e5}, 273.15, 343.15,
+                                               8, k);
+    EXPECT_EQ(dp, a.dp_pa) << k;
+    if (alone == 1) culprits.push_back(k);
+  }
+  EXPECT_EQ(culprits, (std::vector<int>{1, 2}));
+  double dp = 0, t = 0;
+  int alone = 0;
+  EXPECT_EQ(pumploss_line_drain_fixed_alone(nullptr, 8.0 / 60000, 0, 0, 0, 0, 273.15, 343.15, 8, 0.0, 1e5, 1e5, 1, &dp,
+                                            &t, &alone),
+            PUMPLOSS_EMISUSE);
+  EXPECT_EQ(pumploss_line_drain_fixed_alone(h, 8.0 / 60000, 0, 0, 0, 0, 273.15, 343.15, 8, 0.0, 1e5, 1e5, 1, &dp, &t,
+                                            nullptr),
+            PUMPLOSS_EMISUSE);
+  EXPECT_TRUE(std::isnan(dp));
+  pumploss_line_destroy(h);
+}
+
+TEST(DrainCheck, CApiDrainTableSetterGivesTheTableCheck) {
+  const auto l = drain_demo_line();
+  const auto o = vg46();
+  // a drain flow table from the constant + laminar truth model at five temperatures
+  const auto truth = pumploss::drain_flow_parts(0.5 / 60000, 7.5 / 60000, 323.15);
+  double tt[5], qq[5];
+  for (int i = 0; i < 5; ++i) {
+    tt[i] = 273.15 + 17.5 * i;
+    qq[i] = pumploss::drain_flow_at(truth, o, tt[i]).value;
+  }
+  const auto table = pumploss::with_destroke_peak(pumploss::drain_flow_table(5, tt, qq).value, 25e-6, 0.1);
+  const pumploss::drain_limits<double> lim{0.0, 1e5, 2e5};
+  pumploss::drain_point<double> pts[10];
+  const auto s = pumploss::drain_check(l, o, table, lim, 253.15, 343.15, 10, pts);
+  ASSERT_TRUE(s.usable());
+  pumploss_line* h = nullptr;
+  ASSERT_EQ(pumploss_line_create(&h), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_add_pipe(h, 0.0127, 1.8, 5e-6), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_add_pipe(h, 0.013, 4.5, 1.5e-6), PUMPLOSS_OK);
+  for (int i = 0; i < 3; ++i)
+    ASSERT_EQ(pumploss_line_add_fitting_named(h, 0.0, PUMPLOSS_FITTING_BEND_90_R2, PUMPLOSS_FITTING_METHOD_DARBY_3K),
+              PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_add_exit(h, 0.0), PUMPLOSS_OK);
+  const double qc[2] = {10.0 / 60000, 20.0 / 60000}, pc[2] = {0.05e5, 0.12e5};
+  ASSERT_EQ(pumploss_line_add_component_points(h, 2, qc, pc, 32e-6, 1.0), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_set_height(h, 0.6), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_set_oil(h, 313.15, 46e-6, 373.15, 6.9e-6, o.rho_ref_kg_m3, o.t_ref_k), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_line_set_drain_table(h, 5, tt, qq), PUMPLOSS_OK);
+  double t[10], q[10], p[10], pp[10];
+  int pass[10];
+  char verdict[200];
+  auto check = [&](double q_constant, double q_laminar) {
+    return pumploss_line_drain_check_flow(h, q_constant, q_laminar, 323.15, 25e-6, 0.1, 253.15, 343.15, 10, 0.0, 1e5,
+                                          2e5, t, q, p, pp, pass, verdict, sizeof verdict);
+  };
+  EXPECT_EQ(check(0.0, 0.0), static_cast<int>(s.st));
+  for (int i = 0; i < 10; ++i) {  // the same numbers as the C++ check with the table
+    EXPECT_EQ(q[i], pts[i].q_m3_s) << i;
+    EXPECT_EQ(p[i], pts[i].case_pressure_pa) << i;
+    EXPECT_EQ(pp[i], pts[i].case_pressure_peak_pa) << i;
+  }
+  EXPECT_EQ(q[0], qq[0]);  // below the table: its first value held
+  // the start temperature and the sizing read the table too
+  const auto st = pumploss::drain_start_temperature(l, o, table, lim, 253.15, 343.15, 10, 1000e-6);
+  double ts = 0, tl = 0, tv = 0;
+  EXPECT_EQ(pumploss_line_drain_start(h, 0, 0, 0, 25e-6, 0.1, 253.15, 343.15, 10, 0.0, 1e5, 2e5, 1000e-6, &ts, &tl, &tv),
+            static_cast<int>(st.st));
+  EXPECT_EQ(ts, st.t_start_k);
+  const auto z = pumploss::size_drain_line(l, o, table, lim, 273.15, 343.15, 10, 1.5, 3);
+  double d = 0, fixed = 0;
+  int dom = 0, exceeds = 0;
+  EXPECT_EQ(pumploss_line_size_drain_flow(h, 0, 0, 0, 25e-6, 0.1, 273.15, 343.15, 10, 0.0, 1e5, 2e5, 1.5, 3, &d, &fixed,
+                                          &dom, &exceeds),
+            static_cast<int>(z.st));
+  EXPECT_EQ(d, z.diameter_m);
+  // two flow models at once: a misuse, NaN outputs
+  EXPECT_EQ(check(0.5 / 60000, 0.0), PUMPLOSS_EMISUSE);
+  EXPECT_TRUE(std::isnan(p[3]));
+  EXPECT_EQ(pumploss_line_drain_start(h, 0, 7.5 / 60000, 323.15, 25e-6, 0.1, 253.15, 343.15, 10, 0.0, 1e5, 2e5, 0.0,
+                                      &ts, &tl, &tv),
+            PUMPLOSS_EMISUSE);
+  // a refused table leaves the table as it was
+  const double t_bad[2] = {300.0, 290.0}, q_bad[2] = {1e-4, 1e-4}, q_nan[2] = {1e-4, kNaN}, q_neg[2] = {1e-4, -1e-4};
+  const double t17[17] = {}, q17[17] = {};
+  EXPECT_EQ(pumploss_line_set_drain_table(h, 2, t_bad, q_bad), PUMPLOSS_EDOMAIN);
+  EXPECT_EQ(pumploss_line_set_drain_table(h, 2, tt, q_nan), PUMPLOSS_ENONFINITE);
+  EXPECT_EQ(pumploss_line_set_drain_table(h, 2, tt, q_neg), PUMPLOSS_EDOMAIN);
+  EXPECT_EQ(pumploss_line_set_drain_table(h, 17, t17, q17), PUMPLOSS_EDOMAIN);
+  EXPECT_EQ(pumploss_line_set_drain_table(h, 2, nullptr, q_bad), PUMPLOSS_EMISUSE);
+  EXPECT_EQ(pumploss_line_set_drain_table(nullptr, 2, tt, qq), PUMPLOSS_EMISUSE);
+  EXPECT_NE(std::string(pumploss_line_last_message(h)), "no error");
+  EXPECT_EQ(check(0.0, 0.0), static_cast<int>(s.st));
+  EXPECT_EQ(p[9], pts[9].case_pressure_pa);
+  // count 0 removes the table: the parts are read again
+  ASSERT_EQ(pumploss_line_set_drain_table(h, 0, tt, qq), PUMPLOSS_OK);
+  const auto parts = pumploss::drain_check(l, o, pumploss::with_destroke_peak(truth, 25e-6, 0.1), lim, 253.15, 343.15,
+                                           10, pts);
+  EXPECT_EQ(check(0.5 / 60000, 7.5 / 60000), static_cast<int>(parts.st));
+  EXPECT_EQ(p[9], pts[9].case_pressure_pa);
+  pumploss_line_destroy(h);
+}

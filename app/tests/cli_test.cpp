@@ -511,6 +511,34 @@ TEST(CliDrainLine, DemoMatchesLibrary) {
   EXPECT_TRUE(has_cautions(r.out));
 }
 
+TEST(CliDrainLine, NoBoreCanPassNamesEachFixedElement) {
+  // the demo line with a return filter and a cooler in the drain (invented), each alone above
+  // the 1 bar limit when cold: the report names both, and the larger as the one to resize first
+  temp_dir tmp;
+  write_file(tmp / "oil.toml", slurp(kDemo + "/oil.toml"));
+  std::string text = slurp(kDemo + "/drain_line.toml");
+  const auto at = text.find("[sizing]");
+  ASSERT_NE(at, std::string::npos);
+  text.insert(at,
+              "[[component]]\nname = \"return filter\"\ncurve = [[\"0 L/min\", \"0 bar\"], [\"10 L/min\", \"0.8 bar\"]]\n"
+              "curve_viscosity = \"46 cSt\"\nscaling = \"laminar\"\n\n"
+              "[[component]]\nname = \"drain cooler\"\ncurve = [[\"0 L/min\", \"0 bar\"], [\"10 L/min\", \"0.7 bar\"]]\n"
+              "curve_viscosity = \"46 cSt\"\nscaling = \"laminar\"\n\n");
+  write_file(tmp / "drain_line.toml", text);
+  const std::string out = tmp / "out";
+  const auto r = run({"drain-line", tmp / "drain_line.toml", "--size", "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  const auto line = r.out.find("Smallest standard bore:");
+  ASSERT_NE(line, std::string::npos) << r.out;
+  const std::string fact = r.out.substr(line, r.out.find("\n", line) - line);
+  EXPECT_NE(fact.find("none can pass"), std::string::npos) << fact;
+  EXPECT_NE(fact.find("each alone above the limit (2 of them): return filter [component]"), std::string::npos) << fact;
+  EXPECT_NE(fact.find("drain cooler [component]"), std::string::npos) << fact;
+  EXPECT_EQ(fact.find("tank-lid diffuser [component] ("), std::string::npos) << fact;  // below the limit alone
+  EXPECT_NE(fact.find("the largest of them is return filter"), std::string::npos) << fact;
+  EXPECT_TRUE(has_cautions(r.out));
+}
+
 TEST(CliHealth, DemoMatchesLibrary) {
   temp_dir tmp;
   const std::string out = tmp / "out";
@@ -799,6 +827,8 @@ TEST(CliMalformed, EveryCommandNamesTheLineAndWritesNothing) {
       {"budget", "pump_p31.toml", "pistons = 9", "pistons = 99", ":12:11:", "between 3 and 15"},
       {"drain-line", "drain_line.toml", "length = \"4.5 m\"", "length = \"4.5 furlong\"", ":", "unknown unit 'furlong'"},
       {"drain-line", "drain_line.toml", "k = 0.5", "k = -0.5", ":", "must not be negative"},
+      {"drain-line", "drain_line.toml", "length = \"4.5 m\"", "length = \"0 m\"", ":", "must be above zero"},
+      {"drain-line", "drain_line.toml", "length = \"4.5 m\"", "length = \"-4.5 m\"", ":", "must be above zero"},
       {"drain-line", "drain_line.toml",
        "[[segment.fitting]]                 # fittings follow the segment they are written under", "[[fitting]]", ":",
        "say which segment this fitting follows"},

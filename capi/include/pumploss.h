@@ -1314,6 +1314,51 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain_flow(
     double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
     double p_allowed_pa, double p_allowed_peak_pa, double v_max_m_s, int kinds_mask, double *diameter_m,
     double *fixed_dp_pa, int *dominant_element, int *fixed_exceeds);
+/** Set the drain flow over temperature as a table on the line (e.g. from a normalisation model),
+ *  interpolated linearly, the end values held outside (then PUMPLOSS_WEXTRAPOLATED). While a table
+ *  is set, pumploss_line_drain_check_flow(), pumploss_line_drain_start(),
+ *  pumploss_line_size_drain_flow() and pumploss_line_drain_fixed_alone() take the continuous
+ *  drain flow from it: pass q_constant_m3_s = q_laminar_ref_m3_s = 0 to them (anything else is
+ *  PUMPLOSS_EMISUSE: two flow models; t_ref_k is not read); the destroke peak still comes from
+ *  their arguments. Changes the handle: not thread-safe against evaluations of the same handle.
+ *  @param line the handle
+ *  @param count number of points, 1 to 16; 0 (valid arrays) removes the table
+ *  @param temperature_k count temperatures, K, > 0, strictly increasing
+ *  @param drain_m3_s count drain flows, m^3/s, >= 0
+ *  @return PUMPLOSS_OK; PUMPLOSS_EDOMAIN (more than 16 points, temperatures not increasing, a
+ *          negative flow), PUMPLOSS_ENONFINITE, PUMPLOSS_EMISUSE (NULL): then the table is
+ *          unchanged. @sa pumploss::drain_flow_table */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_drain_table(pumploss_line *line, size_t count,
+                                                             const double temperature_k[], const double drain_m3_s[]);
+/** One element the sizing cannot change (a lumped component, or the static height), alone:
+ *  whether p_tank plus its drop exceeds the continuous limit at the continuous drain flow, or
+ *  the peak limit at continuous plus peak flow, anywhere in the temperature range, whatever bore
+ *  the pipes and fittings get. When pumploss_line_size_drain_flow() says no bore can pass
+ *  (fixed_exceeds), call this for index -1 and every element to name each culprit.
+ *  Drain flow and limits as pumploss_line_size_drain_flow().
+ *  @param line the drain line (oil set)
+ *  @param q_constant_m3_s constant part, m^3/s
+ *  @param q_laminar_ref_m3_s laminar part at t_ref_k, m^3/s
+ *  @param t_ref_k reference temperature, K
+ *  @param peak_volume_m3 destroke control volume, m^3 (0: none)
+ *  @param peak_time_s dump time, s
+ *  @param t_cold_k cold-start temperature, K
+ *  @param t_max_k maximum temperature, K
+ *  @param n_temps grid, 2 to 1000
+ *  @param p_tank_pa tank pressure, Pa
+ *  @param p_allowed_pa allowed continuous case pressure, Pa
+ *  @param p_allowed_peak_pa allowed peak case pressure, Pa
+ *  @param index element index (0 to count - 1) of a component, or -1 for the static height
+ *  @param dp_pa receives its drop where it comes closest to (or goes furthest over) a limit, Pa
+ *  @param t_k receives the temperature of that drop, K
+ *  @param exceeds receives 1 when the element alone exceeds a limit (no bore can help), else 0
+ *  @return PUMPLOSS_OK or a report; PUMPLOSS_EDOMAIN for an index out of range or of a pipe or
+ *          fitting (their drop depends on the bore); errors with NaN outputs.
+ *  @sa pumploss::drain_fixed_alone */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_fixed_alone(
+    const pumploss_line *line, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k,
+    double peak_volume_m3, double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa,
+    double p_allowed_pa, double p_allowed_peak_pa, int index, double *dp_pa, double *t_k, int *exceeds);
 /** @} */
 
 /* ==== efficiency ==== */

@@ -23,6 +23,7 @@ struct pumploss_line {
   pumploss::line<double> line;
   pumploss::oil<double> oil = pumploss::typical_mineral_oil<double>({0.0, 0.0});
   bool has_oil = false;
+  pumploss::drain_flow<double> drain_table{};  ///< the drain flow table (n_table 0: none)
   std::string message = "no error";
 };
 
@@ -330,9 +331,17 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_equivalent_length(double k, double diame
 
 namespace {
 
-pumploss::drain_flow<double> flow_of(double q_constant, double q_laminar_ref, double t_ref, double v_peak,
-                                     double t_peak) {
-  return pumploss::with_destroke_peak(pumploss::drain_flow_parts(q_constant, q_laminar_ref, t_ref), v_peak, t_peak);
+/// The drain flow of an evaluation: the handle's table when one is set (then the parts must be
+/// 0: two flow models are a misuse), else the parts; the peak from the arguments.
+pumploss::result<pumploss::drain_flow<double>> flow_of(const pumploss_line* h, double q_constant,
+                                                       double q_laminar_ref, double t_ref, double v_peak,
+                                                       double t_peak) {
+  if (h->drain_table.n_table > 0) {
+    if (q_constant != 0.0 || q_laminar_ref != 0.0) return {pumploss::drain_flow<double>{}, status::misuse};
+    return {pumploss::with_destroke_peak(h->drain_table, v_peak, t_peak), status::ok};
+  }
+  return {pumploss::with_destroke_peak(pumploss::drain_flow_parts(q_constant, q_laminar_ref, t_ref), v_peak, t_peak),
+          status::ok};
 }
 
 /// "PASS ..." or "FAIL ..." naming the failing ranges in degC, into a caller buffer.
@@ -461,10 +470,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check_flow(
     double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
     double p_allowed_peak_pa, double t_k[], double q_m3_s[], double case_pressure_pa[],
     double case_pressure_peak_pa[], int pass[], char* verdict, size_t verdict_capacity) {
-  auto make_flow = [&] {
-    return pumploss::result<pumploss::drain_flow<double>>{
-        flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s), status::ok};
-  };
+  auto make_flow = [&] { return flow_of(h, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s); };
   return drain_check_into(h, make_flow, t_cold_k, t_max_k, n_temps, p_tank_pa, p_allowed_pa, p_allowed_peak_pa, t_k,
                           q_m3_s, case_pressure_pa, case_pressure_peak_pa, pass, verdict, verdict_capacity);
 }
@@ -481,8 +487,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_start(
   return call(outs, [&] {
     if (n_temps < 2 || n_temps > 1000) return status::domain;
     if (!h->has_oil) return status::misuse;
+    const auto f = flow_of(h, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
+    if (is_error(f.st)) return f.st;
     const auto r = pumploss::drain_start_temperature(
-        h->line, h->oil, flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s),
+        h->line, h->oil, f.value,
         pumploss::drain_limits<double>{p_tank_pa, p_allowed_pa, p_allowed_peak_pa}, t_cold_k, t_max_k,
         static_cast<int>(n_temps), nu_max_start_m2_s);
     *t_start_k = r.t_start_k;
@@ -507,8 +515,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain_flow(
   return call(outs, [&] {
     if (n_temps < 2 || n_temps > 1000) return status::domain;
     if (!h->has_oil) return status::misuse;
+    const auto f = flow_of(h, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
+    if (is_error(f.st)) return f.st;
     const auto z = pumploss::size_drain_line(
-        h->line, h->oil, flow_of(q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s),
+        h->line, h->oil, f.value,
         pumploss::drain_limits<double>{p_tank_pa, p_allowed_pa, p_allowed_peak_pa}, t_cold_k, t_max_k,
         static_cast<int>(n_temps), v_max_m_s, kinds_mask);
     *diameter_m = z.diameter_m;
@@ -516,6 +526,49 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain_flow(
     *dominant_element = z.dominant_element;
     *fixed_exceeds = z.fixed_exceeds ? 1 : 0;
     return z.st;
+  });
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_set_drain_table(pumploss_line* h, size_t count,
+                                                             const double temperature_k[], const double drain_m3_s[]) {
+  if (h == nullptr) return PUMPLOSS_EMISUSE;
+  if (temperature_k == nullptr || drain_m3_s == nullptr) return set_message(h, status::misuse, "set_drain_table");
+  fp_guard guard;
+  if (count == 0) {  // valid arrays and no points: the table is removed
+    h->drain_table = pumploss::drain_flow<double>{};
+    h->message = "no error";
+    return PUMPLOSS_OK;
+  }
+  if (count > static_cast<size_t>(pumploss::drain_flow_max_points)) return set_message(h, status::domain, "set_drain_table");
+  const auto f = pumploss::drain_flow_table(count, temperature_k, drain_m3_s);
+  if (is_error(f.st)) return set_message(h, f.st, "set_drain_table");
+  h->drain_table = f.value;
+  h->message = "no error";
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_fixed_alone(
+    const pumploss_line* h, double q_constant_m3_s, double q_laminar_ref_m3_s, double t_ref_k, double peak_volume_m3,
+    double peak_time_s, double t_cold_k, double t_max_k, size_t n_temps, double p_tank_pa, double p_allowed_pa,
+    double p_allowed_peak_pa, int index, double* dp_pa, double* t_k, int* exceeds) {
+  double* const outs[] = {dp_pa, t_k};
+  if (exceeds != nullptr) *exceeds = 0;
+  if (h == nullptr || exceeds == nullptr) {
+    for (double* p : outs) if (p != nullptr) *p = kNaN;
+    return PUMPLOSS_EMISUSE;
+  }
+  return call(outs, [&] {
+    if (n_temps < 2 || n_temps > 1000) return status::domain;
+    if (!h->has_oil) return status::misuse;
+    const auto f = flow_of(h, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
+    if (is_error(f.st)) return f.st;
+    const auto a = pumploss::drain_fixed_alone(h->line, h->oil, f.value,
+                                               pumploss::drain_limits<double>{p_tank_pa, p_allowed_pa, p_allowed_peak_pa},
+                                               t_cold_k, t_max_k, static_cast<int>(n_temps), index);
+    *dp_pa = a.dp_pa;
+    *t_k = a.t_k;
+    *exceeds = a.usable() && a.exceeds ? 1 : 0;
+    return a.st;
   });
 }
 

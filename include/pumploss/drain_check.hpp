@@ -587,6 +587,8 @@ struct [[nodiscard]] drain_sizing {
   T fixed_t_k;             ///< temperature of that largest fixed drop, K
   bool fixed_exceeds;      ///< the fixed elements alone exceed a limit somewhere: no bore can pass
   int fixed_dominant_element;  ///< the component with the largest drop there (-1: the static height)
+  int n_fixed_alone = 0;   ///< how many fixed elements (the static height counted) each alone exceed a
+                           ///< limit somewhere (drain_fixed_alone(); 0 unless fixed_exceeds)
   /// @return true when the status is exactly ok.
   bool ok() const noexcept { return st == pumploss::status::ok; }
   /// @return true when the results are usable (ok or a report such as regime).
@@ -614,6 +616,96 @@ inline void dominant_at(const line<T>& l, T q, T rho, T mu, T d_override, bool f
 
 }  // namespace detail
 
+/// One element the sizing cannot change (a component, or the static height), taken alone.
+template <class T>
+struct [[nodiscard]] drain_fixed_element {
+  int element;          ///< index in the line; -1 for the static height
+  T dp_pa;              ///< its drop where it comes closest to (or goes furthest over) a limit, Pa
+  T t_k;                ///< temperature of that drop, K
+  T excess_pa;          ///< p_tank + dp_pa minus the limit there, Pa (> 0: it alone exceeds it)
+  bool exceeds;         ///< excess_pa > 0: this element alone exceeds a limit, whatever the bore
+  bool at_peak;         ///< that worst case is the peak flow against the peak limit
+  pumploss::status st;  ///< status
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == pumploss::status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return pumploss::is_usable(st); }
+};
+
+/// Whether one element the sizing cannot change (a lumped component, or the static height)
+/// alone exceeds the continuous or the peak case pressure limit somewhere in the temperature
+/// range, whatever bore the pipes and fittings get:
+/// \f[ e = \max_{\theta,\ q \in \{q(\theta),\ q(\theta)+V/t\}} \left(p_\mathrm{tank} + \Delta p_i(q, \theta) - p_\mathrm{allowed}(q)\right) \f]
+/// (the continuous flow against the continuous limit, the peak flow against the peak limit);
+/// \f$ e > 0 \f$: it alone exceeds. When no bore can pass (drain_sizing::fixed_exceeds), calling
+/// this for every component and for the static height names each culprit, not only the largest.
+/// @param l the drain line
+/// @param o the oil
+/// @param f drain flow over temperature and destroke peak
+/// @param lim tank pressure and limits
+/// @param t_cold_k cold-start temperature, K
+/// @param t_max_k maximum oil temperature, K, >= t_cold_k
+/// @param n_temps number of temperatures checked, 2 to 1000
+/// @param index element index of a component, or -1 for the static height \f$ \rho g \Delta z \f$
+/// @return the worst case of that element; status::domain for an index out of range, a pipe or
+///         fitting (its drop depends on the bore the sizing picks), bad counts or ranges;
+///         oil, flow and element errors (NaN outputs).
+/// @par Validity
+/// As drain_check(); grid points only (the worst case between two points is not searched).
+/// @par Accuracy
+/// As line_pressure_drop().
+/// @par Source
+/// Definition; component curves and the static part as line_pressure_drop().
+template <class T>
+inline drain_fixed_element<T> drain_fixed_alone(const line<T>& l, const oil<T>& o, const drain_flow<T>& f,
+                                                const drain_limits<T>& lim, T t_cold_k, T t_max_k, int n_temps,
+                                                int index) {
+  const T nan = scalar_traits<T>::nan();
+  drain_fixed_element<T> r{index, nan, nan, nan, false, false, status::ok};
+  auto fail = [&](status s) {
+    r.dp_pa = r.t_k = r.excess_pa = nan;
+    r.exceeds = r.at_peak = false;
+    r.st = s;
+    return r;
+  };
+  if (!detail::all_finite(t_cold_k, t_max_k, lim.p_tank_pa, lim.p_allowed_pa)) return fail(status::nonfinite);
+  if (!(t_cold_k > T(0)) || !(t_max_k >= t_cold_k) || n_temps < 2 || n_temps > 1000 || index < -1 ||
+      (index >= 0 && (static_cast<std::size_t>(index) >= l.elements.size() ||
+                      detail::has_bore(l.elements[static_cast<std::size_t>(index)]))))
+    return fail(status::domain);
+  const auto qp = drain_peak_flow(f);
+  if (is_error(qp.st)) return fail(qp.st);
+  if (qp.value > T(0) && !detail::finite(lim.p_allowed_peak_pa)) return fail(status::nonfinite);
+  for (int i = 0; i < n_temps; ++i) {
+    const T t = t_cold_k + (t_max_k - t_cold_k) * T(i) / T(n_temps - 1);
+    const auto rho = oil_density_at(o, t, T(0));
+    const auto mu = oil_dynamic_viscosity(o, t, T(0));
+    const auto q = drain_flow_at(f, o, t);
+    for (status s : {rho.st, mu.st, q.st})
+      if (is_error(s)) return fail(s);
+    r.st = worst(r.st, worst(rho.st, worst(mu.st, q.st)));
+    for (int peak = 0; peak < (qp.value > T(0) ? 2 : 1); ++peak) {
+      T dp = rho.value * standard_gravity<T>() * l.height_m;
+      if (index >= 0) {
+        const auto e = detail::element_dp(l.elements[static_cast<std::size_t>(index)],
+                                          q.value + (peak != 0 ? qp.value : T(0)), rho.value, mu.value, T(0));
+        if (is_error(e.st)) return fail(e.st);
+        r.st = worst(r.st, e.st);
+        dp = e.value;
+      }
+      const T excess = lim.p_tank_pa + dp - (peak != 0 ? lim.p_allowed_peak_pa : lim.p_allowed_pa);
+      if ((i == 0 && peak == 0) || excess > r.excess_pa) {
+        r.excess_pa = excess;
+        r.dp_pa = dp;
+        r.t_k = t;
+        r.at_peak = peak != 0;
+      }
+    }
+  }
+  r.exceeds = r.excess_pa > T(0);
+  return r;
+}
+
 /// Smallest standard bore for a case drain line that passes the drain check (continuous and
 /// peak limits) over the whole temperature range and keeps the mean velocity at the largest
 /// continuous drain flow at or below v_max; with the element that dominates, and whether the
@@ -633,7 +725,8 @@ inline void dominant_at(const line<T>& l, T q, T rho, T mu, T d_override, bool f
 ///        (recommended_velocity(line_service::drain).max_m_s = 1.5 m/s, common practice)
 /// @param kinds_mask 1 tubes, 2 hoses, 3 both
 /// @return the bore with margins, velocity and the dominant element; status::out_of_validity
-///         when none passes (then fixed_exceeds says whether any bore could).
+///         when none passes (then fixed_exceeds says whether any bore could, and n_fixed_alone
+///         how many fixed elements each alone exceed a limit: drain_fixed_alone() names them).
 /// @par Validity
 /// As drain_check(). Engineering estimate: the maker's limits govern.
 /// @par Accuracy
@@ -646,7 +739,7 @@ inline drain_sizing<T> size_drain_line(const line<T>& l, const oil<T>& o, const 
                                        const drain_limits<T>& lim, T t_cold_k, T t_max_k, int n_temps, T v_max_m_s,
                                        int kinds_mask) {
   const T nan = scalar_traits<T>::nan();
-  auto fail = [&](status s) { return drain_sizing<T>{-1, nan, nan, nan, nan, s, nan, -1, nan, nan, nan, false, -1}; };
+  auto fail = [&](status s) { return drain_sizing<T>{-1, nan, nan, nan, nan, s, nan, -1, nan, nan, nan, false, -1, 0}; };
   if (!detail::all_finite(t_cold_k, t_max_k, lim.p_tank_pa, lim.p_allowed_pa, v_max_m_s))
     return fail(status::nonfinite);
   if (!(t_cold_k > T(0)) || !(t_max_k >= t_cold_k) || n_temps < 2 || n_temps > 1000 || !(v_max_m_s > T(0)) ||
@@ -689,6 +782,13 @@ inline drain_sizing<T> size_drain_line(const line<T>& l, const oil<T>& o, const 
         z.fixed_dp_pa = fixed;
         z.fixed_t_k = t;
       }
+    }
+  }
+  if (z.fixed_exceeds) {  // each culprit alone, not only the largest
+    for (int k = -1; k < static_cast<int>(l.elements.size()); ++k) {
+      if (k >= 0 && detail::has_bore(l.elements[static_cast<std::size_t>(k)])) continue;
+      const auto a = drain_fixed_alone(l, o, f, lim, t_cold_k, t_max_k, n_temps, k);
+      if (a.usable() && a.exceeds) ++z.n_fixed_alone;
     }
   }
   int tried = -1;
@@ -749,9 +849,9 @@ inline drain_sizing<T> size_drain_line(const line<T>& l, const oil<T>& o, T q_dr
                                        int n_temps, T p_tank_pa, T p_allowed_pa, T v_max_m_s, int kinds_mask) {
   const T nan = scalar_traits<T>::nan();
   if (!detail::finite(q_drain_m3_s))
-    return drain_sizing<T>{-1, nan, nan, nan, nan, status::nonfinite, nan, -1, nan, nan, nan, false, -1};
+    return drain_sizing<T>{-1, nan, nan, nan, nan, status::nonfinite, nan, -1, nan, nan, nan, false, -1, 0};
   if (!(q_drain_m3_s > T(0)))
-    return drain_sizing<T>{-1, nan, nan, nan, nan, status::domain, nan, -1, nan, nan, nan, false, -1};
+    return drain_sizing<T>{-1, nan, nan, nan, nan, status::domain, nan, -1, nan, nan, nan, false, -1, 0};
   drain_flow<T> f;
   f.constant_m3_s = q_drain_m3_s;
   return size_drain_line(l, o, f, drain_limits<T>{p_tank_pa, p_allowed_pa, p_allowed_pa}, t_cold_k, t_max_k, n_temps,

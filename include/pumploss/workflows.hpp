@@ -1,7 +1,8 @@
 /// @file workflows.hpp
 /// @brief Small workflows behind the program's reports, callable by an embedder: an oil's
-/// property table over temperature checked against the pump maker's viscosity limits, and the
-/// leakage budget of a described piston pump over a pressure sweep.
+/// property table over temperature checked against the pump maker's viscosity limits, the
+/// leakage budget of a described piston pump over a pressure sweep, and the case drain line
+/// check (over temperature, element shares, start temperature, sizing) in one call.
 ///
 /// Each takes SI inputs and returns a struct with a status (the first error stops it and says
 /// where) and the rows a report shows. Nothing throws except std::bad_alloc. Results are
@@ -13,6 +14,7 @@
 #include <limits>
 #include <vector>
 
+#include "drain_check.hpp"
 #include "export.hpp"
 #include "fluid.hpp"
 #include "piston_pump.hpp"
@@ -135,6 +137,74 @@ struct [[nodiscard]] pump_sweep_result {
 /// piston_pump_budget(), piston_pump_sensitivity(), piston_pump_flow_loss(), piston_pump_balance(),
 /// piston_pump_budget_uncertainty() (docs/pages/theory_pump.md).
 PUMPLOSS_CXX_API pump_sweep_result sweep_piston_pump(const piston_pump<double>& p, const oil<double>& o, const pump_sweep& s);
+
+/// A case drain line to check: the line, the oil, the drain flow and the limits, the temperature
+/// grid, and what else to work out.
+struct drain_line_case {
+  line<double> drain_line;               ///< from the case port to the tank (pipes, fittings, components, height)
+  oil<double> fluid;                     ///< the oil
+  drain_flow<double> flow;               ///< drain flow over temperature, with an optional destroke peak
+  drain_limits<double> limits{};         ///< tank pressure, allowed continuous and peak case pressures, Pa
+  double t_cold_k = 0;                   ///< coldest (start) temperature, K
+  double t_max_k = 0;                    ///< hottest temperature, K, >= t_cold_k
+  int n_temps = 0;                       ///< temperatures checked, 1 to 1000 (start and sizing use at least 2)
+  double max_start_viscosity_m2_s = 0;   ///< the maker's largest start viscosity, m^2/s (0: none)
+  bool size = false;                     ///< also size the line from standard_bores
+  double max_velocity_m_s = recommended_velocity(line_service::drain).max_m_s;  ///< sizing: largest velocity, m/s
+  int sizing_kinds = 3;                  ///< sizing: 1 tubes, 2 hoses, 3 both
+};
+
+/// The drop of one element in the element table of a drain line check.
+struct drain_element_drop {
+  double dp_pa = 0;          ///< pressure drop, Pa
+  double share = 0;          ///< dp over the line's total drop (0 when the total is not positive)
+  status st = status::ok;    ///< the element's status (regime: a method outside its range)
+  bool constant_k_laminar = false;  ///< a constant-K fitting used below its turbulent range (status regime)
+};
+
+/// Everything a drain line report shows.
+struct [[nodiscard]] drain_line_result {
+  status st = status::ok;                      ///< the check's status (worst report), or its error
+  drain_summary<double> summary{};             ///< verdict, margins and failing ranges
+  std::vector<drain_point<double>> points;     ///< one per temperature
+  double q_min_m3_s = 0;                       ///< smallest continuous drain flow of the points, m^3/s
+  double q_max_m3_s = 0;                       ///< largest continuous drain flow of the points, m^3/s
+  std::vector<double> pipe_velocity_m_s;       ///< mean velocity in each pipe (line order) at q_max, m/s
+  drain_start<double> start{};                 ///< lowest start temperature (its own status)
+  double element_t_k = 0;                      ///< temperature of the element table (t_cold), K
+  double element_q_m3_s = 0;                   ///< flow of the element table (continuous + peak at t_cold), m^3/s
+  std::vector<drain_element_drop> elements;    ///< one per line element, line order
+  double dp_static_pa = 0;                     ///< static part rho g dz of the element table, Pa
+  double dp_total_pa = 0;                      ///< total drop of the element table, Pa
+  status elements_st = status::ok;             ///< status of the element table
+  bool sized = false;                          ///< sizing was asked for
+  drain_sizing<double> sizing{};               ///< the sizing (its own status; out_of_validity: no bore passes)
+  std::vector<drain_point<double>> sized_points;  ///< the check with the chosen bore (when one passes)
+  /// every fixed element (static height first, then each component) taken alone, when no bore
+  /// can pass (sizing.fixed_exceeds); those with `exceeds` each alone exceed a limit
+  std::vector<drain_fixed_element<double>> fixed_alone;
+  /// @return true when the status is exactly ok.
+  bool ok() const noexcept { return st == status::ok; }
+  /// @return true when the results are usable (ok or a report such as regime).
+  bool usable() const noexcept { return is_usable(st); }
+};
+
+/// The case drain line check behind `pumploss drain-line`, in one call: drain_check() over the
+/// temperature grid, the drop of each element at the coldest temperature and the continuous
+/// plus peak flow there, the mean velocity of each pipe at the largest continuous flow,
+/// drain_start_temperature(), and on request size_drain_line() with the check at the chosen bore,
+/// or, when no bore can pass, drain_fixed_alone() for every fixed element.
+/// @param c the line, oil, flow, limits, grid and options (SI)
+/// @return the tables; st is the check's status: on an error (status::domain for a grid of
+///         n_temps outside 1 to 1000, an empty line, a peak without a peak limit; oil, flow and
+///         line errors) only st is set. The start and the sizing carry their own statuses.
+/// @par Validity
+/// As drain_check(), drain_start_temperature() and size_drain_line(). Engineering estimate: the
+/// maker's case pressure limits and instructions govern; never block, cap or valve a case drain.
+/// @par Source
+/// drain_check(), line_pressure_drop(), drain_start_temperature() (ASTM D341-20 inverse),
+/// size_drain_line(), drain_fixed_alone(); @ref theory_friction.
+PUMPLOSS_CXX_API drain_line_result check_drain_line(const drain_line_case& c);
 
 }  // namespace pumploss
 
