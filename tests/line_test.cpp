@@ -748,7 +748,9 @@ TEST(DrainSizing, NamesEachFixedElementThatAloneExceedsTheLimit) {
     EXPECT_EQ(a.exceeds, k != 3) << k;
     EXPECT_NEAR(a.excess_pa, want[k - 1] - 1e5, 1e-9 * want[k - 1]) << k;
     EXPECT_FALSE(a.at_peak);
-    if (k != 3) EXPECT_EQ(a.t_k, 273.15) << k;
+    if (k != 3) {
+      EXPECT_EQ(a.t_k, 273.15) << k;
+    }
   }
   const auto h = pumploss::drain_fixed_alone(l, o, f, lim, 273.15, 343.15, 8, -1);  // the static height
   ASSERT_TRUE(h.usable());
