@@ -502,6 +502,27 @@ pumploss::line<double> drain_demo_line() {
 pumploss::oil<double> vg46() {
   return pumploss::typical_mineral_oil(pumploss::d341_fit(313.15, 46e-6, 373.15, 6.9e-6).value);
 }
+/// drain_demo_line() through the C API, with vg46()'s oil (NULL when the API refuses a step).
+pumploss_line* drain_demo_handle() {
+  pumploss_line* h = nullptr;
+  if (pumploss_line_create(&h) != PUMPLOSS_OK) return nullptr;
+  const double qc[2] = {10.0 / 60000, 20.0 / 60000}, pc[2] = {0.05e5, 0.12e5};
+  const auto o = vg46();
+  bool ok = pumploss_line_add_pipe(h, 0.0127, 1.8, 5e-6) == PUMPLOSS_OK &&
+            pumploss_line_add_pipe(h, 0.013, 4.5, 1.5e-6) == PUMPLOSS_OK;
+  for (int i = 0; i < 3; ++i)
+    ok = ok && pumploss_line_add_fitting_named(h, 0.0, PUMPLOSS_FITTING_BEND_90_R2, PUMPLOSS_FITTING_METHOD_DARBY_3K) ==
+                   PUMPLOSS_OK;
+  ok = ok && pumploss_line_add_exit(h, 0.0) == PUMPLOSS_OK &&
+       pumploss_line_add_component_points(h, 2, qc, pc, 32e-6, 1.0) == PUMPLOSS_OK &&
+       pumploss_line_set_height(h, 0.6) == PUMPLOSS_OK &&
+       pumploss_line_set_oil(h, 313.15, 46e-6, 373.15, 6.9e-6, o.rho_ref_kg_m3, o.t_ref_k) == PUMPLOSS_OK;
+  if (!ok) {
+    pumploss_line_destroy(h);
+    return nullptr;
+  }
+  return h;
+}
 /// Case pressure of the truth model at t: constant + laminar flow (+ peak) through the line.
 double case_pressure_truth(const pumploss::line<double>& l, const pumploss::oil<double>& o, double qc, double ql,
                            double t_ref, double q_peak, double t) {
@@ -662,18 +683,8 @@ TEST(DrainStart, LowestStartTemperatureFromTheLineAndTheViscosityLimit) {
   std::printf("[start] line passes from %.2f degC, oil at 1000 cSt at %.2f degC: start from %.2f degC\n",
               st.t_line_k - 273.15, st.t_viscosity_k - 273.15, st.t_start_k - 273.15);
   // C API: the same figures
-  pumploss_line* h = nullptr;
-  ASSERT_EQ(pumploss_line_create(&h), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_line_add_pipe(h, 0.0127, 1.8, 5e-6), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_line_add_pipe(h, 0.013, 4.5, 1.5e-6), PUMPLOSS_OK);
-  for (int i = 0; i < 3; ++i)
-    EXPECT_EQ(pumploss_line_add_fitting_named(h, 0.0, PUMPLOSS_FITTING_BEND_90_R2, PUMPLOSS_FITTING_METHOD_DARBY_3K),
-              PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_line_add_exit(h, 0.0), PUMPLOSS_OK);
-  const double qc[2] = {10.0 / 60000, 20.0 / 60000}, pc[2] = {0.05e5, 0.12e5};
-  EXPECT_EQ(pumploss_line_add_component_points(h, 2, qc, pc, 32e-6, 1.0), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_line_set_height(h, 0.6), PUMPLOSS_OK);
-  EXPECT_EQ(pumploss_line_set_oil(h, 313.15, 46e-6, 373.15, 6.9e-6, o.rho_ref_kg_m3, o.t_ref_k), PUMPLOSS_OK);
+  pumploss_line* h = drain_demo_handle();
+  ASSERT_NE(h, nullptr);
   double ts = 0, tl = 0, tv = 0;
   const int code = pumploss_line_drain_start(h, 0.5 / 60000, 7.5 / 60000, 323.15, 25e-6, 0.1, 253.15, 343.15, 10, 0.0,
                                              1e5, 2e5, 1000e-6, &ts, &tl, &tv);
@@ -867,18 +878,8 @@ TEST(DrainCheck, CApiDrainTableSetterGivesTheTableCheck) {
   pumploss::drain_point<double> pts[10];
   const auto s = pumploss::drain_check(l, o, table, lim, 253.15, 343.15, 10, pts);
   ASSERT_TRUE(s.usable());
-  pumploss_line* h = nullptr;
-  ASSERT_EQ(pumploss_line_create(&h), PUMPLOSS_OK);
-  ASSERT_EQ(pumploss_line_add_pipe(h, 0.0127, 1.8, 5e-6), PUMPLOSS_OK);
-  ASSERT_EQ(pumploss_line_add_pipe(h, 0.013, 4.5, 1.5e-6), PUMPLOSS_OK);
-  for (int i = 0; i < 3; ++i)
-    ASSERT_EQ(pumploss_line_add_fitting_named(h, 0.0, PUMPLOSS_FITTING_BEND_90_R2, PUMPLOSS_FITTING_METHOD_DARBY_3K),
-              PUMPLOSS_OK);
-  ASSERT_EQ(pumploss_line_add_exit(h, 0.0), PUMPLOSS_OK);
-  const double qc[2] = {10.0 / 60000, 20.0 / 60000}, pc[2] = {0.05e5, 0.12e5};
-  ASSERT_EQ(pumploss_line_add_component_points(h, 2, qc, pc, 32e-6, 1.0), PUMPLOSS_OK);
-  ASSERT_EQ(pumploss_line_set_height(h, 0.6), PUMPLOSS_OK);
-  ASSERT_EQ(pumploss_line_set_oil(h, 313.15, 46e-6, 373.15, 6.9e-6, o.rho_ref_kg_m3, o.t_ref_k), PUMPLOSS_OK);
+  pumploss_line* h = drain_demo_handle();
+  ASSERT_NE(h, nullptr);
   ASSERT_EQ(pumploss_line_set_drain_table(h, 5, tt, qq), PUMPLOSS_OK);
   double t[10], q[10], p[10], pp[10];
   int pass[10];

@@ -282,7 +282,7 @@ TEST(DrainLineWorkflow, SameNumbersAsTheSeparateCalls) {
 
 TEST(DrainLineWorkflow, RecoversTheCrossingOfAGeneratedLine) {
   // Truth: one smooth 8 mm tube, 4 m, laminar at every temperature (Hagen-Poiseuille,
-  // dp = 128 mu L q / (pi d^4); F. M. White, Fluid Mechanics, 7th ed., 2011, eq. 6.12), no
+  // dp = 128 mu L q / (pi d^4); F. M. White, Fluid Mechanics, 7th ed., 2011, Sec. 6.4), no
   // height, vented tank; drain flow q = qc + ql mu_ref/mu. Then
   // p(T) = K (qc mu(T) + ql mu_ref) with K = 128 L / (pi d^4), and the line fails below the T*
   // where mu(T*) = (p_allowed / K - ql mu_ref) / qc (self-calculated).

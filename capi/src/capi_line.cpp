@@ -344,6 +344,16 @@ pumploss::result<pumploss::drain_flow<double>> flow_of(const pumploss_line* h, d
           status::ok};
 }
 
+/// What every drain evaluation over a grid checks first (2 to 1000 temperatures, an oil set),
+/// then its drain flow (flow_of()).
+pumploss::result<pumploss::drain_flow<double>> grid_flow_of(const pumploss_line* h, size_t n_temps, double q_constant,
+                                                            double q_laminar_ref, double t_ref, double v_peak,
+                                                            double t_peak) {
+  if (n_temps < 2 || n_temps > 1000) return {pumploss::drain_flow<double>{}, status::domain};
+  if (!h->has_oil) return {pumploss::drain_flow<double>{}, status::misuse};
+  return flow_of(h, q_constant, q_laminar_ref, t_ref, v_peak, t_peak);
+}
+
 /// "PASS ..." or "FAIL ..." naming the failing ranges in degC, into a caller buffer.
 void write_verdict(const pumploss::drain_summary<double>& s, char* out, size_t cap) {
   if (out == nullptr || cap == 0) return;
@@ -485,9 +495,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_start(
     return PUMPLOSS_EMISUSE;
   }
   return call(outs, [&] {
-    if (n_temps < 2 || n_temps > 1000) return status::domain;
-    if (!h->has_oil) return status::misuse;
-    const auto f = flow_of(h, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
+    const auto f = grid_flow_of(h, n_temps, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
     if (is_error(f.st)) return f.st;
     const auto r = pumploss::drain_start_temperature(
         h->line, h->oil, f.value,
@@ -513,9 +521,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain_flow(
     return PUMPLOSS_EMISUSE;
   }
   return call(outs, [&] {
-    if (n_temps < 2 || n_temps > 1000) return status::domain;
-    if (!h->has_oil) return status::misuse;
-    const auto f = flow_of(h, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
+    const auto f = grid_flow_of(h, n_temps, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
     if (is_error(f.st)) return f.st;
     const auto z = pumploss::size_drain_line(
         h->line, h->oil, f.value,
@@ -558,9 +564,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_fixed_alone(
     return PUMPLOSS_EMISUSE;
   }
   return call(outs, [&] {
-    if (n_temps < 2 || n_temps > 1000) return status::domain;
-    if (!h->has_oil) return status::misuse;
-    const auto f = flow_of(h, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
+    const auto f = grid_flow_of(h, n_temps, q_constant_m3_s, q_laminar_ref_m3_s, t_ref_k, peak_volume_m3, peak_time_s);
     if (is_error(f.st)) return f.st;
     const auto a = pumploss::drain_fixed_alone(h->line, h->oil, f.value,
                                                pumploss::drain_limits<double>{p_tank_pa, p_allowed_pa, p_allowed_peak_pa},
