@@ -195,9 +195,12 @@ struct [[nodiscard]] drain_line_result {
 /// drain_start_temperature(), and on request size_drain_line() with the check at the chosen bore,
 /// or, when no bore can pass, drain_fixed_alone() for every fixed element.
 /// @param c the line, oil, flow, limits, grid and options (SI)
-/// @return the tables; st is the check's status: on an error (status::domain for a grid of
-///         n_temps outside 1 to 1000, an empty line, a peak without a peak limit; oil, flow and
-///         line errors) only st is set. The start and the sizing carry their own statuses.
+/// @return the tables; st is the check's status: on an error (status::domain for n_temps
+///         outside 1 to 1000, a line without elements, a temperature range upside down;
+///         status::nonfinite for a NaN temperature or limit, also a destroke peak without a
+///         finite peak limit; oil, flow and line errors) only st is set. The start and the
+///         sizing carry their own statuses (the sizing status::out_of_validity when no bore
+///         passes; then fixed_alone says which fixed elements alone exceed a limit).
 /// @par Validity
 /// As drain_check(), drain_start_temperature() and size_drain_line(). Engineering estimate: the
 /// maker's case pressure limits and instructions govern; never block, cap or valve a case drain.
