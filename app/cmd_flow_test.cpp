@@ -10,6 +10,7 @@
 #include "common.hpp"
 #include "config.hpp"
 #include "inputs.hpp"
+#include "pump_file.hpp"
 #include "pumploss/flow_test.hpp"
 #include "pumploss/version.hpp"
 
@@ -60,16 +61,13 @@ pumploss::flow_reading<double> read_reading(section& r, bool measured) {
 }
 
 flow_test_file read_flow_test(const std::string& path, bool& limit_given) {
-  auto root = load_config(path);
+  auto file = open_pump_file(path, {"gear", "vane", "sweep"});  // the clearances of rotary-budget
+  auto& root = file.root;
+  auto& p = file.pump;
   flow_test_file f;
-  f.oil = read_oil_ref(root);
-  (void)root.table_opt("gear");  // the clearance description of rotary-budget may share the file
-  (void)root.table_opt("vane");
-  (void)root.table_opt("sweep");
-
-  auto p = root.table("pump");
-  f.pump_name = p.text("name");
-  f.pump_kind = p.choice("kind", {"gear", "vane", "piston", "other"});
+  f.oil = std::move(file.oil);
+  f.pump_name = std::move(file.name);
+  f.pump_kind = std::move(file.kind);
   auto& s = f.setup;
   s.displacement_m3_rev = p.quantity_opt("displacement", D::displacement).value_or(0.0);
   if (!(s.displacement_m3_rev >= 0)) throw p.error("displacement", "must be above zero");

@@ -12,6 +12,7 @@
 #include "common.hpp"
 #include "config.hpp"
 #include "inputs.hpp"
+#include "pump_file.hpp"
 #include "pumploss/gear_pump.hpp"
 #include "pumploss/vane_pump.hpp"
 
@@ -99,15 +100,13 @@ void read_vane(section& s, pumploss::vane_pump<double>& v) {
 }
 
 rotary_file read_rotary(const std::string& path) {
-  auto root = load_config(path);
+  auto file = open_pump_file(path, {"drive", "test", "verdict"});  // the flow test of flow-test
+  auto& root = file.root;
+  auto& p = file.pump;
   rotary_file f;
-  f.oil = read_oil_ref(root);
-  (void)root.table_opt("drive");  // the flow test of flow-test may share the file
-  (void)root.table_opt("test");
-  (void)root.table_opt("verdict");
-  auto p = root.table("pump");
-  f.name = p.text("name");
-  f.kind = p.choice("kind", {"gear", "vane", "piston", "other"});
+  f.oil = std::move(file.oil);
+  f.name = std::move(file.name);
+  f.kind = std::move(file.kind);
   if (f.kind != "gear" && f.kind != "vane")
     throw p.error("kind", "rotary-budget describes gear and vane pumps (use 'budget' for a piston pump)");
   f.gear = f.kind == "gear";
