@@ -30,26 +30,26 @@ def sector(dp, mu, ri, ro, h, arc):
     return arc * h**3 * dp / (12 * mu * log(ro / ri))
 
 
+def tip_terms(v, pump, per, count, dp, mu, b, h, land, u):
+    """The pressure and drag terms of one tip slot and the tip path of `count` slots."""
+    v[f"{pump} tip pressure term per {per}"] = plates(dp, mu, b, h, land, 0)
+    v[f"{pump} tip drag term per {per}"] = -plates(0, mu, b, h, land, -u)
+    v[f"{pump} tip path"] = count * plates(dp, mu, b, h, land, -u)
+
+
 def mpmath_values():
     mu, dp, n = mpf(870) * mpf("32e-6"), mpf("100e5"), mpf(25)
     v = {}
     # gear: b 20 mm, h_t 20 um, 4 lands of 1.5 mm, r_a 20 mm, r_f 15 mm, r_s 10 mm, end float 40 um
-    b, ht, land, ra = mpf("0.020"), mpf("20e-6"), 4 * mpf("1.5e-3"), mpf("0.020")
-    u = 2 * pi * n * ra
-    v["gear tip pressure term per gear"] = plates(dp, mu, b, ht, land, 0)
-    v["gear tip drag term per gear"] = -plates(0, mu, b, ht, land, -u)
-    v["gear tip path"] = 2 * plates(dp, mu, b, ht, land, -u)
+    tip_terms(v, "gear", "gear", 2, dp, mu, mpf("0.020"), mpf("20e-6"), 4 * mpf("1.5e-3"), 2 * pi * n * mpf("0.020"))
     v["gear lateral per face"] = sector(dp, mu, mpf("0.010"), mpf("0.015"), mpf("20e-6"), pi)
     v["gear lateral path"] = 4 * v["gear lateral per face"]
     v["gear total"] = v["gear tip path"] + v["gear lateral path"]
     v["gear eta_v"] = 1 - v["gear total"] / (mpf("10e-6") * n)
     # vane: b 25 mm, h_v 15 um, 2 arcs of one 2 mm land, r_c 36 mm, r_r 35 mm, r_h 15 mm, side 15 um,
     # 3 vanes in suction, slot 10 mm, slot clearance 10 um
-    b, hv, land, rc = mpf("0.025"), mpf("15e-6"), mpf("2e-3"), mpf("0.036")
-    u = 2 * pi * n * rc
-    v["vane tip pressure term per arc"] = plates(dp, mu, b, hv, land, 0)
-    v["vane tip drag term per arc"] = -plates(0, mu, b, hv, land, -u)
-    v["vane tip path"] = 2 * plates(dp, mu, b, hv, land, -u)
+    b = mpf("0.025")
+    tip_terms(v, "vane", "arc", 2, dp, mu, b, mpf("15e-6"), mpf("2e-3"), 2 * pi * n * mpf("0.036"))
     v["vane side per face"] = sector(dp, mu, mpf("0.015"), mpf("0.035"), mpf("15e-6"), pi)
     v["vane side path"] = 2 * v["vane side per face"]
     v["vane slot per vane"] = plates(dp, mu, b, mpf("10e-6"), mpf("0.010"), 0)
@@ -62,7 +62,7 @@ def mpmath_values():
 def test_hand_worked_rows_match_mpmath():
     table = rows()
     values = mpmath_values()
-    assert set(values) <= set(table)
+    assert set(values) == set(table) - {"esposito gear eta_v"}  # every hand row is repeated
     for name, exact in values.items():
         expected, tol = table[name]
         assert abs(expected / exact - 1) <= tol, (name, expected, exact)

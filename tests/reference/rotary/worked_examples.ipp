@@ -9,8 +9,8 @@
 // hand_rotary_worked_example (self-calculated): the gap laws of theory_rotary written out by hand
 //   for the pumps of docs/pages/theory_rotary.md (section "Worked examples"), mu = 870 x 32e-6
 //   = 0.02784 Pa s (the test oil at 40 degC), dp = 100 bar, n = 25 rev/s, each step rounded to
-//   four digits; repeated in mpmath (tests/python/test_flow_test.py). Tolerance 1e-3: the hand
-//   rounding (a difference of two rounded terms for the tips).
+//   four digits; repeated in mpmath (tests/python/test_rotary_worked_examples.py). Tolerance
+//   1e-3: the hand rounding (a difference of two rounded terms for the tips).
 {"esposito_gear_example", "esposito gear eta_v", 0.915, 0.0005 / 0.915},
 // gear: b 20 mm, h_t 20 um, 4 tip lands of 1.5 mm in series, r_a 20 mm, r_f 15 mm, r_s 10 mm,
 // side plates with end float 40 um centred (20 um each side), arc pi, mesh sealed, V 10 cm3/rev
