@@ -7,6 +7,7 @@
 #include <cstring>
 #include <string>
 
+#include "pumploss.h"
 #include "pumploss/flow_test.hpp"
 #include "pumploss/gap.hpp"
 #include "pumploss/gear_pump.hpp"
@@ -204,6 +205,42 @@ TEST(RotaryWorkedExample, VanePumpByHand) {
   expect_worked(b.total_m3_s, "vane total");
   const auto& e = worked("vane eta_v");
   EXPECT_NEAR(b.volumetric_efficiency, e.expected, e.tol);
+}
+
+// The same hand-worked pumps through the C handles (the oil's first D341 point at 15 degC, where
+// its density is the stated 870 kg/m3, so that mu = 870 x 32e-6 Pa s there).
+TEST(RotaryWorkedExample, CHandlesGiveTheHandWorkedPaths) {
+  const double t = 288.15;
+  pumploss_gear_pump* g = nullptr;
+  ASSERT_EQ(pumploss_gear_pump_create(10e-6, 0.010, 0.005, 0.005, 0.020, 1.5e-3, 4, 20e-6, 40e-6, &g), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_gear_pump_set_oil(g, t, 32e-6, 373.15, 5.4e-6, 870), PUMPLOSS_OK);
+  double q = 0, total = 0, eta = 0, dqdh = 0, el = 0;
+  ASSERT_EQ(pumploss_gear_pump_path(g, PUMPLOSS_GEAR_PATH_TIP, 100e5, 0, 25, t, &q, &total, &eta, &dqdh, &el),
+            PUMPLOSS_OK);
+  expect_worked(q, "gear tip path");
+  expect_worked(total, "gear total");
+  EXPECT_NEAR(eta, worked("gear eta_v").expected, worked("gear eta_v").tol);
+  ASSERT_EQ(pumploss_gear_pump_path(g, PUMPLOSS_GEAR_PATH_LATERAL, 100e5, 0, 25, t, &q, &total, &eta, &dqdh, &el),
+            PUMPLOSS_OK);
+  expect_worked(q, "gear lateral path");
+  pumploss_gear_pump_destroy(g);
+
+  pumploss_vane_pump* v = nullptr;
+  ASSERT_EQ(pumploss_vane_pump_create(16e-6, 0.015, 0.020, 0.001, 0.025, 2, 1, 2e-3, 15e-6, 15e-6, &v), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_vane_pump_set_oil(v, t, 32e-6, 373.15, 5.4e-6, 870), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_vane_pump_set_slots(v, 3, 0.010, 10e-6), PUMPLOSS_OK);
+  const struct {
+    int path;
+    const char* row;
+  } paths[] = {{PUMPLOSS_VANE_PATH_TIP, "vane tip path"},
+               {PUMPLOSS_VANE_PATH_SIDE, "vane side path"},
+               {PUMPLOSS_VANE_PATH_SLOT, "vane slot path"}};
+  for (const auto& p : paths) {
+    ASSERT_EQ(pumploss_vane_pump_path(v, p.path, 100e5, 0, 25, t, &q, &total, &eta, &dqdh, &el), PUMPLOSS_OK);
+    expect_worked(q, p.row);
+  }
+  expect_worked(total, "vane total");
+  pumploss_vane_pump_destroy(v);
 }
 
 TEST(RotaryBudget, AgreesWithTheFiftyDigitEvaluation) {
