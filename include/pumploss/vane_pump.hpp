@@ -100,7 +100,8 @@ inline clearance_budget<T> vane_pump_budget(const vane_pump<T>& v, const oil<T>&
     // vane tips in each sealing arc: pressure flow back to the inlet, drag forward
     const T u = 2 * detail::pi<T>() * op.speed_rev_s * v.cam_radius_m;
     status st = detail::clearance_tip_path(b, static_cast<int>(vane_path::tip), T(v.sealing_arcs), dp,
-                                           v.rotor_width_m, v.tip_clearance_m, T(v.vanes_per_arc) * v.vane_tip_land_m, u);
+                                           v.rotor_width_m, v.tip_clearance_m,
+                                           T(v.vanes_per_arc) * v.vane_tip_land_m, u);
     if (is_error(st)) return st;
     // both rotor faces against the side plates
     const auto qs = detail::clearance_face_flow(b, dp, v.hub_radius_m, v.rotor_radius_m, v.side_clearance_m,
