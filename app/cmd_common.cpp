@@ -1,6 +1,7 @@
 #include <CLI/CLI.hpp>
 
 #include <cstdio>
+#include <memory>
 
 #include "commands.hpp"
 #include "common.hpp"
@@ -15,6 +16,20 @@ void add_output_options(CLI::App& sub, output_options& o) {
                  "'pumploss units --list' lists them)")
       ->option_text("UNIT");
   sub.footer(cautions);
+}
+
+void add_file_command(CLI::App& app, int& rc, const std::string& name, const std::string& help,
+                      const std::string& file_help,
+                      std::function<int(const std::string& file, const output_options& out)> run) {
+  struct options {
+    std::string file;
+    output_options out;
+  };
+  auto o = std::make_shared<options>();
+  auto* sub = app.add_subcommand(name, help);
+  sub->add_option("file", o->file, file_help)->required()->check(CLI::ExistingFile);
+  add_output_options(*sub, o->out);
+  sub->callback([o, &rc, run = std::move(run)] { rc = run(o->file, o->out); });
 }
 
 display_units make_units(const output_options& o) {

@@ -10,6 +10,7 @@
 #include "common.hpp"
 #include "config.hpp"
 #include "inputs.hpp"
+#include "pump_file.hpp"
 #include "pumploss/flow_test.hpp"
 #include "pumploss/version.hpp"
 
@@ -19,11 +20,6 @@ namespace {
 
 using D = pumploss::dimension;
 using pumploss::status;
-
-struct flow_test_options {
-  std::string file;
-  output_options out;
-};
 
 // What the flow test file holds, in SI.
 struct flow_test_file {
@@ -60,16 +56,13 @@ pumploss::flow_reading<double> read_reading(section& r, bool measured) {
 }
 
 flow_test_file read_flow_test(const std::string& path, bool& limit_given) {
-  auto root = load_config(path);
+  auto file = open_pump_file(path, {"gear", "vane", "sweep"});  // the clearances of rotary-budget
+  auto& root = file.root;
+  auto& p = file.pump;
   flow_test_file f;
-  f.oil = read_oil_ref(root);
-  (void)root.table_opt("gear");  // the clearance description of rotary-budget may share the file
-  (void)root.table_opt("vane");
-  (void)root.table_opt("sweep");
-
-  auto p = root.table("pump");
-  f.pump_name = p.text("name");
-  f.pump_kind = p.choice("kind", {"gear", "vane", "piston", "other"});
+  f.oil = std::move(file.oil);
+  f.pump_name = std::move(file.name);
+  f.pump_kind = std::move(file.kind);
   auto& s = f.setup;
   s.displacement_m3_rev = p.quantity_opt("displacement", D::displacement).value_or(0.0);
   if (!(s.displacement_m3_rev >= 0)) throw p.error("displacement", "must be above zero");
@@ -118,15 +111,15 @@ flow_test_file read_flow_test(const std::string& path, bool& limit_given) {
   return f;
 }
 
-int run_flow_test(const flow_test_options& o) {
-  const display_units du = make_units(o.out);
+int run_flow_test(const std::string& file, const output_options& out) {
+  const display_units du = make_units(out);
   bool limit_given = false;
-  const auto f = read_flow_test(o.file, limit_given);
+  const auto f = read_flow_test(file, limit_given);
   const auto& s = f.setup;
 
   const auto r = pumploss::flow_test_evaluate(f.no_load, f.loaded, s);  // the one library call
   if (pumploss::is_error(r.st))
-    throw std::runtime_error(o.file + ": the flow test cannot be evaluated: " +
+    throw std::runtime_error(file + ": the flow test cannot be evaluated: " +
                              pumploss::status_message(static_cast<int>(r.st)));
 
   const auto q = [&](double v, D dim, int digits = 4) { return show_quantity(v, dim, du, digits); };
@@ -201,20 +194,17 @@ int run_flow_test(const flow_test_options& o) {
                       "temperature and keep the test short; never close the loading valve fully on a fixed pump "
                       "without a relief valve between pump and valve");
 
-  emit(rep, output_set{}, o.out, du, "flow_test");
+  emit(rep, output_set{}, out, du, "flow_test");
   return exit_ok;
 }
 
 }  // namespace
 
 void add_flow_test(CLI::App& app, int& rc) {
-  auto o = std::make_shared<flow_test_options>();
-  auto* sub = app.add_subcommand("flow-test",
-                                 "Judge any pump from a field flow test (no-load and loaded flow), with the drive's "
-                                 "speed fall taken out and the leakage corrected to the rated state");
-  sub->add_option("file", o->file, "Flow test file (TOML)")->required()->check(CLI::ExistingFile);
-  add_output_options(*sub, o->out);
-  sub->callback([o, &rc] { rc = run_flow_test(*o); });
+  add_file_command(app, rc, "flow-test",
+                   "Judge any pump from a field flow test (no-load and loaded flow), with the drive's speed fall "
+                   "taken out and the leakage corrected to the rated state",
+                   "Flow test file (TOML)", run_flow_test);
 }
 
 }  // namespace plcli

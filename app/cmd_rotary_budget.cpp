@@ -12,6 +12,7 @@
 #include "common.hpp"
 #include "config.hpp"
 #include "inputs.hpp"
+#include "pump_file.hpp"
 #include "pumploss/gear_pump.hpp"
 #include "pumploss/vane_pump.hpp"
 
@@ -23,11 +24,6 @@ using D = pumploss::dimension;
 using pumploss::status;
 
 constexpr double kPi = 3.14159265358979323846;
-
-struct rotary_options {
-  std::string file;
-  output_options out;
-};
 
 struct rotary_file {
   std::string name, kind;
@@ -99,15 +95,13 @@ void read_vane(section& s, pumploss::vane_pump<double>& v) {
 }
 
 rotary_file read_rotary(const std::string& path) {
-  auto root = load_config(path);
+  auto file = open_pump_file(path, {"drive", "test", "verdict"});  // the flow test of flow-test
+  auto& root = file.root;
+  auto& p = file.pump;
   rotary_file f;
-  f.oil = read_oil_ref(root);
-  (void)root.table_opt("drive");  // the flow test of flow-test may share the file
-  (void)root.table_opt("test");
-  (void)root.table_opt("verdict");
-  auto p = root.table("pump");
-  f.name = p.text("name");
-  f.kind = p.choice("kind", {"gear", "vane", "piston", "other"});
+  f.oil = std::move(file.oil);
+  f.name = std::move(file.name);
+  f.kind = std::move(file.kind);
   if (f.kind != "gear" && f.kind != "vane")
     throw p.error("kind", "rotary-budget describes gear and vane pumps (use 'budget' for a piston pump)");
   f.gear = f.kind == "gear";
@@ -140,9 +134,9 @@ rotary_file read_rotary(const std::string& path) {
   return f;
 }
 
-int run_rotary(const rotary_options& o) {
-  const display_units du = make_units(o.out);
-  const auto f = read_rotary(o.file);
+int run_rotary(const std::string& file, const output_options& out) {
+  const display_units du = make_units(out);
+  const auto f = read_rotary(file);
   const auto& oil = f.oil.props;
   const char* gap_names_gear[3] = {"tip clearance", "lateral clearance", "mesh clearance"};
   const char* gap_names_vane[3] = {"tip clearance", "side clearance", "slot clearance"};
@@ -176,7 +170,7 @@ int run_rotary(const rotary_options& o) {
     const auto b = f.gear ? pumploss::gear_pump_budget(f.g, oil, op) : pumploss::vane_pump_budget(f.v, oil, op);
     const auto s = f.gear ? pumploss::gear_pump_sensitivity(f.g, oil, op) : pumploss::vane_pump_sensitivity(f.v, oil, op);
     if (pumploss::is_error(b.st))
-      throw std::runtime_error(o.file + ": no leakage budget at " + show_quantity(pout, D::pressure, du) + ": " +
+      throw std::runtime_error(file + ": no leakage budget at " + show_quantity(pout, D::pressure, du) + ": " +
                                pumploss::status_message(static_cast<int>(b.st)));
     worst_st = pumploss::worst(worst_st, b.st);
     max_re = std::max(max_re, b.max_gap_reynolds);
@@ -225,22 +219,17 @@ int run_rotary(const rotary_options& o) {
   r.notes.push_back("laminar clearance flows at one viscosity; the tips drag oil towards the outlet against the "
                     "pressure flow (a tip path can be negative at low pressure); clearances are those under load; a "
                     "model of the described geometry, not a measurement");
-  emit(r, output_set{}, o.out, du, f.gear ? "gear_budget" : "vane_budget");
+  emit(r, output_set{}, out, du, f.gear ? "gear_budget" : "vane_budget");
   return exit_ok;
 }
 
 }  // namespace
 
 void add_rotary_budget(CLI::App& app, int& rc) {
-  auto o = std::make_shared<rotary_options>();
-  auto* sub = app.add_subcommand("rotary-budget",
-                                 "Internal leakage budget of a gear or vane pump from its clearances over a pressure "
-                                 "sweep, with the sensitivity to each clearance");
-  sub->add_option("file", o->file, "Pump file with a [gear] or [vane] table and a [sweep] (TOML)")
-      ->required()
-      ->check(CLI::ExistingFile);
-  add_output_options(*sub, o->out);
-  sub->callback([o, &rc] { rc = run_rotary(*o); });
+  add_file_command(app, rc, "rotary-budget",
+                   "Internal leakage budget of a gear or vane pump from its clearances over a pressure sweep, with "
+                   "the sensitivity to each clearance",
+                   "Pump file with a [gear] or [vane] table and a [sweep] (TOML)", run_rotary);
 }
 
 }  // namespace plcli

@@ -3,6 +3,7 @@
 #ifndef PUMPLOSS_CLI_COMMANDS_HPP
 #define PUMPLOSS_CLI_COMMANDS_HPP
 
+#include <functional>
 #include <string>
 #include <vector>
 
@@ -31,6 +32,11 @@ struct output_options {
 };
 /// Add --out and --unit to a subcommand.
 void add_output_options(CLI::App& sub, output_options& o);
+/// A subcommand that reads one input file and writes a report (file, --out, --unit):
+/// `run(file, out)` does the job and returns the exit code.
+void add_file_command(CLI::App& app, int& rc, const std::string& name, const std::string& help,
+                      const std::string& file_help,
+                      std::function<int(const std::string& file, const output_options& out)> run);
 /// Display units from --unit (throws std::invalid_argument).
 display_units make_units(const output_options& o);
 /// Print the report, write the files when --out is given, print where they are.

@@ -32,37 +32,33 @@ BASE = {
 
 
 class CheckCitations(unittest.TestCase):
+    def fails_with(self, path, text, message):
+        """The base tree with `path` holding `text` fails, and the output names `message`."""
+        files = dict(BASE)
+        files[path] = text
+        code, out = run(files)
+        self.assertEqual(code, 1, out)
+        self.assertIn(message, out)
+
     def test_resolving_citations_pass(self):
         code, out = run(BASE)
         self.assertEqual(code, 0, out)
 
     def test_dangling_citation_in_a_comment_fails(self):
-        files = dict(BASE)
-        files["include/pumploss/orifice.hpp"] = "// Source: docs/pages/theory_orifice.md (missing)\nint x;\n"
-        code, out = run(files)
-        self.assertEqual(code, 1, out)
-        self.assertIn("include/pumploss/orifice.hpp:1: cites docs/pages/theory_orifice.md", out)
+        self.fails_with("include/pumploss/orifice.hpp", "// Source: docs/pages/theory_orifice.md (missing)\nint x;\n",
+                        "include/pumploss/orifice.hpp:1: cites docs/pages/theory_orifice.md")
 
     def test_dangling_bare_name_in_a_block_comment_fails(self):
-        files = dict(BASE)
-        files["tests/gap_test.cpp"] = "int a;\n/* check values:\n   from notes.md section 6 */\n"
-        code, out = run(files)
-        self.assertEqual(code, 1, out)
-        self.assertIn("tests/gap_test.cpp:3: cites notes.md", out)
+        self.fails_with("tests/gap_test.cpp", "int a;\n/* check values:\n   from notes.md section 6 */\n",
+                        "tests/gap_test.cpp:3: cites notes.md")
 
     def test_dangling_citation_in_a_page_fails(self):
-        files = dict(BASE)
-        files["docs/pages/capi.md"] = "Handles: see docs/pages/handles.md.\n"
-        code, out = run(files)
-        self.assertEqual(code, 1, out)
-        self.assertIn("docs/pages/capi.md:1: cites docs/pages/handles.md", out)
+        self.fails_with("docs/pages/capi.md", "Handles: see docs/pages/handles.md.\n",
+                        "docs/pages/capi.md:1: cites docs/pages/handles.md")
 
     def test_note_outside_the_tree_fails(self):
-        files = dict(BASE)
-        files["include/pumploss/fluid.hpp"] = "/// @par Source\n/// The design note, section 9.\n"
-        code, out = run(files)
-        self.assertEqual(code, 1, out)
-        self.assertIn("outside the repository", out)
+        self.fails_with("include/pumploss/fluid.hpp", "/// @par Source\n/// The design note, section 9.\n",
+                        "outside the repository")
 
     def test_code_strings_urls_outputs_and_placeholders_pass(self):
         files = dict(BASE)

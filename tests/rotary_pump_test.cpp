@@ -7,6 +7,9 @@
 #include <cstring>
 #include <string>
 
+#include "pumploss.h"
+#include "pumploss/flow_test.hpp"
+#include "pumploss/gap.hpp"
 #include "pumploss/gear_pump.hpp"
 #include "pumploss/vane_pump.hpp"
 #include "rotary_support.hpp"
@@ -27,6 +30,23 @@ struct rotary_row {
 const rotary_row kRows[] = {
 #include "reference/rotary/gap_law_selfcalc.ipp"
 };
+
+const pltest::named_row kWorkedRows[] = {
+#include "reference/rotary/worked_examples.ipp"
+};
+
+/// The worked-example row of a quantity (tests/reference/rotary/worked_examples.ipp).
+const pltest::named_row& worked(const char* quantity) {
+  for (const auto& r : kWorkedRows)
+    if (std::strcmp(r.quantity, quantity) == 0) return r;
+  ADD_FAILURE() << "no row " << quantity;
+  return kWorkedRows[0];
+}
+
+void expect_worked(double got, const char* quantity) {
+  const auto& r = worked(quantity);
+  EXPECT_NEAR(got / r.expected, 1.0, r.tol) << r.key << ": " << quantity << " = " << got;
+}
 
 template <class T>
 pumploss::gear_pump<T> test_gear() {
@@ -96,6 +116,131 @@ TEST(RotaryBudget, EachPathMatchesItsLaminarGapLaw) {
   EXPECT_NEAR(gb.total_m3_s, gb.flow_m3_s[0] + gb.flow_m3_s[1] + gb.flow_m3_s[2], 1e-20);
   EXPECT_NEAR(gb.volumetric_efficiency, 1 - gb.total_m3_s / (12e-6 * 25), 1e-15);
   EXPECT_NEAR(gb.share[0] + gb.share[1] + gb.share[2], 1.0, 1e-15);  // all positive at 150 bar
+}
+
+// Esposito's gear pump example (from memory, tests/reference/SOURCES.md): the volumetric efficiency
+// of a gear pump from its geometric displacement and the flow it gives, through the flow test
+// (speed measured, the no-load flow the geometric flow).
+TEST(RotaryWorkedExample, EspositoGearPumpVolumetricEfficiency) {
+  const double in = 0.0254, gpm = 231 * in * in * in / 60;  // US gallon = 231 in^3
+  const double v = pumploss::detail::pi<double>() / 4 * (3 * 3 - 2 * 2) * in * in * in;  // 3.93 in^3
+  const double n = 1800.0 / 60;
+  pumploss::flow_test_setup<double> s{};
+  s.displacement_m3_rev = v;
+  s.mu_test_pa_s = s.mu_ref_pa_s = 0.03;
+  s.ref_pressure_pa = 100e5;
+  s.ref_speed_rev_s = n;
+  s.new_volumetric_efficiency = 0.95;
+  s.limit = pumploss::flow_test_default_limit;
+  s.watch_band = pumploss::flow_test_default_watch_band;
+  const pumploss::flow_reading<double> no_load{v * n, 0.0, n}, loaded{28 * gpm, 100e5, n};
+  const auto r = pumploss::flow_test_evaluate(no_load, loaded, s);
+  ASSERT_EQ(r.st, status::ok);
+  EXPECT_NEAR(v * n / gpm, 30.6, 0.05);  // the book's theoretical flow
+  expect_worked(r.volumetric_efficiency, "esposito gear eta_v");
+  EXPECT_NEAR(r.leakage_m3_s / gpm, 30.6 - 28, 0.05);
+}
+
+// The hand-worked examples of docs/pages/theory_rotary.md (self-calculated): each step of the
+// written calculation, from the gap primitives and from the budgets.
+TEST(RotaryWorkedExample, GearPumpByHand) {
+  const auto o = pltest::rotary_test_oil<double>();
+  pumploss::gear_pump<double> g;
+  g.displacement_m3_rev = 10e-6;
+  g.tip_radius_m = 0.020;
+  g.root_radius_m = 0.015;
+  g.shaft_radius_m = 0.010;
+  g.face_width_m = 0.020;
+  g.tip_land_m = 1.5e-3;
+  g.teeth_sealing = 4;
+  g.tip_clearance_m = 20e-6;
+  g.lateral_clearance_m = 40e-6;
+  g.lateral_arc_rad = pumploss::detail::pi<double>();
+  const pumploss::rotary_operating_point<double> op{100e5, 0.0, 25.0, 313.15};
+  const double mu = 870 * 32e-6, u = 2 * pumploss::detail::pi<double>() * 25 * 0.020;
+  expect_worked(pumploss::gap_plates_flow(100e5, mu, 0.020, 20e-6, 4 * 1.5e-3, 0.0).value,
+                "gear tip pressure term per gear");
+  expect_worked(-pumploss::gap_plates_flow(0.0, mu, 0.020, 20e-6, 4 * 1.5e-3, -u).value, "gear tip drag term per gear");
+  expect_worked(pumploss::gap_radial_sector_flow(100e5, mu, 0.010, 0.015, 20e-6, pumploss::detail::pi<double>()).value,
+                "gear lateral per face");
+  const auto b = pumploss::gear_pump_budget(g, o, op);
+  ASSERT_EQ(b.st, status::ok);
+  expect_worked(b.flow_m3_s[static_cast<int>(pumploss::gear_path::tip)], "gear tip path");
+  expect_worked(b.flow_m3_s[static_cast<int>(pumploss::gear_path::lateral)], "gear lateral path");
+  EXPECT_EQ(b.flow_m3_s[static_cast<int>(pumploss::gear_path::mesh)], 0.0);
+  expect_worked(b.total_m3_s, "gear total");
+  const auto& e = worked("gear eta_v");
+  EXPECT_NEAR(b.volumetric_efficiency, e.expected, e.tol);
+}
+
+TEST(RotaryWorkedExample, VanePumpByHand) {
+  const auto o = pltest::rotary_test_oil<double>();
+  pumploss::vane_pump<double> v;
+  v.displacement_m3_rev = 16e-6;
+  v.rotor_width_m = 0.025;
+  v.cam_radius_m = 0.036;
+  v.rotor_radius_m = 0.035;
+  v.hub_radius_m = 0.015;
+  v.sealing_arcs = 2;
+  v.vanes_per_arc = 1;
+  v.vane_tip_land_m = 2e-3;
+  v.tip_clearance_m = 15e-6;
+  v.side_clearance_m = 15e-6;
+  v.pressure_arc_rad = pumploss::detail::pi<double>();
+  v.vanes_in_suction = 3;
+  v.slot_length_m = 0.010;
+  v.slot_clearance_m = 10e-6;
+  const pumploss::rotary_operating_point<double> op{100e5, 0.0, 25.0, 313.15};
+  const double mu = 870 * 32e-6, u = 2 * pumploss::detail::pi<double>() * 25 * 0.036;
+  expect_worked(pumploss::gap_plates_flow(100e5, mu, 0.025, 15e-6, 2e-3, 0.0).value, "vane tip pressure term per arc");
+  expect_worked(-pumploss::gap_plates_flow(0.0, mu, 0.025, 15e-6, 2e-3, -u).value, "vane tip drag term per arc");
+  expect_worked(pumploss::gap_radial_sector_flow(100e5, mu, 0.015, 0.035, 15e-6, pumploss::detail::pi<double>()).value,
+                "vane side per face");
+  expect_worked(pumploss::gap_plates_flow(100e5, mu, 0.025, 10e-6, 0.010, 0.0).value, "vane slot per vane");
+  const auto b = pumploss::vane_pump_budget(v, o, op);
+  ASSERT_EQ(b.st, status::ok);
+  expect_worked(b.flow_m3_s[static_cast<int>(pumploss::vane_path::tip)], "vane tip path");
+  expect_worked(b.flow_m3_s[static_cast<int>(pumploss::vane_path::side)], "vane side path");
+  expect_worked(b.flow_m3_s[static_cast<int>(pumploss::vane_path::slot)], "vane slot path");
+  expect_worked(b.total_m3_s, "vane total");
+  const auto& e = worked("vane eta_v");
+  EXPECT_NEAR(b.volumetric_efficiency, e.expected, e.tol);
+}
+
+// The same hand-worked pumps through the C handles (the oil's first D341 point at 15 degC, where
+// its density is the stated 870 kg/m3, so that mu = 870 x 32e-6 Pa s there).
+TEST(RotaryWorkedExample, CHandlesGiveTheHandWorkedPaths) {
+  const double t = 288.15;
+  pumploss_gear_pump* g = nullptr;
+  ASSERT_EQ(pumploss_gear_pump_create(10e-6, 0.010, 0.005, 0.005, 0.020, 1.5e-3, 4, 20e-6, 40e-6, &g), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_gear_pump_set_oil(g, t, 32e-6, 373.15, 5.4e-6, 870), PUMPLOSS_OK);
+  double q = 0, total = 0, eta = 0, dqdh = 0, el = 0;
+  ASSERT_EQ(pumploss_gear_pump_path(g, PUMPLOSS_GEAR_PATH_TIP, 100e5, 0, 25, t, &q, &total, &eta, &dqdh, &el),
+            PUMPLOSS_OK);
+  expect_worked(q, "gear tip path");
+  expect_worked(total, "gear total");
+  EXPECT_NEAR(eta, worked("gear eta_v").expected, worked("gear eta_v").tol);
+  ASSERT_EQ(pumploss_gear_pump_path(g, PUMPLOSS_GEAR_PATH_LATERAL, 100e5, 0, 25, t, &q, &total, &eta, &dqdh, &el),
+            PUMPLOSS_OK);
+  expect_worked(q, "gear lateral path");
+  pumploss_gear_pump_destroy(g);
+
+  pumploss_vane_pump* v = nullptr;
+  ASSERT_EQ(pumploss_vane_pump_create(16e-6, 0.015, 0.020, 0.001, 0.025, 2, 1, 2e-3, 15e-6, 15e-6, &v), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_vane_pump_set_oil(v, t, 32e-6, 373.15, 5.4e-6, 870), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_vane_pump_set_slots(v, 3, 0.010, 10e-6), PUMPLOSS_OK);
+  const struct {
+    int path;
+    const char* row;
+  } paths[] = {{PUMPLOSS_VANE_PATH_TIP, "vane tip path"},
+               {PUMPLOSS_VANE_PATH_SIDE, "vane side path"},
+               {PUMPLOSS_VANE_PATH_SLOT, "vane slot path"}};
+  for (const auto& p : paths) {
+    ASSERT_EQ(pumploss_vane_pump_path(v, p.path, 100e5, 0, 25, t, &q, &total, &eta, &dqdh, &el), PUMPLOSS_OK);
+    expect_worked(q, p.row);
+  }
+  expect_worked(total, "vane total");
+  pumploss_vane_pump_destroy(v);
 }
 
 TEST(RotaryBudget, AgreesWithTheFiftyDigitEvaluation) {

@@ -175,6 +175,17 @@ inline int call_batch_fast(std::size_t n, double* const (&outs)[N], int* status_
   return failed ? PUMPLOSS_EPARTIAL : summary;
 }
 
+/// The wrapper of a function with one result<T>: `make()` returns it, its value goes to *out
+/// (through call(): null check, FP guard, NaN on an error status).
+template <class Make>
+inline int call_value(double* out, Make&& make) noexcept {
+  return call({out}, [&] {
+    const auto r = make();
+    *out = r.value;
+    return r.st;
+  });
+}
+
 }  // namespace pumploss::capi
 
 #endif

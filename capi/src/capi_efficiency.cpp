@@ -10,6 +10,7 @@
 #include "pumploss/thermal.hpp"
 
 using pumploss::capi::call;
+using pumploss::capi::call_value;
 using pumploss::capi::call_batch;
 using pumploss::capi::call_batch_fast;
 
@@ -22,6 +23,19 @@ int efficiency_scalar(F&& f, double v, double n, double dp, double q, double t, 
     *eta_v = r.eta_v;
     *eta_hm = r.eta_hm;
     *eta_t = r.eta_t;
+    return r.st;
+  });
+}
+
+template <class F>
+int efficiency_powers(F&& f, double v, double n, double dp, double q, double t, double* q_th_m3_s,
+                      double* torque_th_n_m, double* p_hyd_w, double* p_mech_w) {
+  return call({q_th_m3_s, torque_th_n_m, p_hyd_w, p_mech_w}, [&] {
+    const auto r = f(v, n, dp, q, t);
+    *q_th_m3_s = r.q_th;
+    *torque_th_n_m = r.torque_th;
+    *p_hyd_w = r.p_hyd;
+    *p_mech_w = r.p_mech;
     return r.st;
   });
 }
@@ -124,14 +138,6 @@ const auto kMotor = [](double v, double n, double dp, double q, double t) {
   return pumploss::motor_efficiency(v, n, dp, q, t);
 };
 
-template <class R>
-int scalar_out(double* out, R&& make) {
-  return call({out}, [&] {
-    const auto r = make();
-    *out = r.value;
-    return r.st;
-  });
-}
 }  // namespace
 
 extern "C" {
@@ -170,34 +176,22 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_batch(size_t n, const d
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_pump_powers(double displacement_m3_rev, double speed_rev_s, double dp_pa,
                                                     double flow_m3_s, double torque_n_m, double* q_th_m3_s,
                                                     double* torque_th_n_m, double* p_hyd_w, double* p_mech_w) {
-  return call({q_th_m3_s, torque_th_n_m, p_hyd_w, p_mech_w}, [&] {
-    const auto r = pumploss::pump_efficiency(displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m);
-    *q_th_m3_s = r.q_th;
-    *torque_th_n_m = r.torque_th;
-    *p_hyd_w = r.p_hyd;
-    *p_mech_w = r.p_mech;
-    return r.st;
-  });
+  return efficiency_powers(kPump, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, q_th_m3_s,
+                           torque_th_n_m, p_hyd_w, p_mech_w);
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_powers(double displacement_m3_rev, double speed_rev_s, double dp_pa,
                                                      double flow_m3_s, double torque_n_m, double* q_th_m3_s,
                                                      double* torque_th_n_m, double* p_hyd_w, double* p_mech_w) {
-  return call({q_th_m3_s, torque_th_n_m, p_hyd_w, p_mech_w}, [&] {
-    const auto r = pumploss::motor_efficiency(displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m);
-    *q_th_m3_s = r.q_th;
-    *torque_th_n_m = r.torque_th;
-    *p_hyd_w = r.p_hyd;
-    *p_mech_w = r.p_mech;
-    return r.st;
-  });
+  return efficiency_powers(kMotor, displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m, q_th_m3_s,
+                           torque_th_n_m, p_hyd_w, p_mech_w);
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_flow_at_port(double q_meter_m3_s, double p_meter_pa, double t_meter_k,
                                                      double p_port_pa, double t_port_k, double rho_ref_kg_m3,
                                                      double t_ref_k, double alpha_per_k, double bulk_modulus_pa,
                                                      double* q_port_m3_s) {
-  return scalar_out(q_port_m3_s, [&] {
+  return call_value(q_port_m3_s, [&] {
     return pumploss::flow_at_port(q_meter_m3_s, p_meter_pa, t_meter_k, p_port_pa, t_port_k, rho_ref_kg_m3, t_ref_k,
                                   alpha_per_k, bulk_modulus_pa);
   });
@@ -206,7 +200,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_flow_at_port(double q_meter_m3_s, double
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_flow_at_port_linear(double q_meter_m3_s, double p_meter_pa, double t_meter_k,
                                                             double p_port_pa, double t_port_k, double alpha_per_k,
                                                             double bulk_modulus_pa, double* q_port_m3_s) {
-  return scalar_out(q_port_m3_s, [&] {
+  return call_value(q_port_m3_s, [&] {
     return pumploss::flow_at_port_linear(q_meter_m3_s, p_meter_pa, t_meter_k, p_port_pa, t_port_k, alpha_per_k,
                                          bulk_modulus_pa);
   });
@@ -214,7 +208,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_flow_at_port_linear(double q_meter_m3_s,
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale(double q_ref_m3_s, double dp_ref_pa, double mu_ref_pa_s,
                                                       double dp_pa, double mu_pa_s, double* q_m3_s) {
-  return scalar_out(q_m3_s, [&] { return pumploss::leakage_scale(q_ref_m3_s, dp_ref_pa, mu_ref_pa_s, dp_pa, mu_pa_s); });
+  return call_value(q_m3_s, [&] {
+    return pumploss::leakage_scale(q_ref_m3_s, dp_ref_pa, mu_ref_pa_s, dp_pa, mu_pa_s);
+  });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale_batch(size_t n, const double* q_ref_m3_s, const double* dp_ref_pa,
@@ -232,7 +228,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale_batch(size_t n, const doub
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_scale_power_law(double q_ref_m3_s, double dp_ref_pa,
                                                                 double mu_ref_pa_s, double dp_pa, double mu_pa_s,
                                                                 double a, double b, double* q_m3_s) {
-  return scalar_out(q_m3_s, [&] {
+  return call_value(q_m3_s, [&] {
     return pumploss::leakage_scale_power_law(q_ref_m3_s, dp_ref_pa, mu_ref_pa_s, dp_pa, mu_pa_s, a, b);
   });
 }
@@ -241,7 +237,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_normalise(double q_m3_s, double 
                                                           double t_ref_k, double t1_k, double nu1_m2_s, double t2_k,
                                                           double nu2_m2_s, double alpha_per_k, double a, double b,
                                                           double* q_ref_m3_s) {
-  return scalar_out(q_ref_m3_s, [&]() -> pumploss::result<double> {
+  return call_value(q_ref_m3_s, [&]() -> pumploss::result<double> {
     const auto line = pumploss::d341_fit(t1_k, nu1_m2_s, t2_k, nu2_m2_s);
     if (is_error(line.st)) return pumploss::detail::fail<double>(line.st);
     // The density's reference value cancels in the viscosity ratio; expand about t_ref_k.
@@ -257,29 +253,29 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_normalise(double q_m3_s, double 
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_leakage_series(double r_lam_pa_s_m3, double r_t_pa_s2_m6, double dp_pa,
                                                        double* q_m3_s) {
-  return scalar_out(q_m3_s, [&] { return pumploss::leakage_series(r_lam_pa_s_m3, r_t_pa_s2_m6, dp_pa); });
+  return call_value(q_m3_s, [&] { return pumploss::leakage_series(r_lam_pa_s_m3, r_t_pa_s2_m6, dp_pa); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_throttle_temperature_rise(double dp_pa, double rho_kg_m3, double cp_j_kg_k,
                                                                   double* dt_k) {
-  return scalar_out(dt_k, [&] { return pumploss::throttle_temperature_rise(dp_pa, rho_kg_m3, cp_j_kg_k); });
+  return call_value(dt_k, [&] { return pumploss::throttle_temperature_rise(dp_pa, rho_kg_m3, cp_j_kg_k); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_throttle_temperature_rise_isenthalpic(double dp_pa, double rho_kg_m3,
                                                                               double cp_j_kg_k, double alpha_per_k,
                                                                               double t_k, double* dt_k) {
-  return scalar_out(dt_k, [&] {
+  return call_value(dt_k, [&] {
     return pumploss::throttle_temperature_rise_isenthalpic(dp_pa, rho_kg_m3, cp_j_kg_k, alpha_per_k, t_k);
   });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_heat_load(double input_power_w, double eta_t, double* heat_w) {
-  return scalar_out(heat_w, [&] { return pumploss::heat_load(input_power_w, eta_t); });
+  return call_value(heat_w, [&] { return pumploss::heat_load(input_power_w, eta_t); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_case_drain_temperature(double t_inlet_k, double power_w, double drain_flow_m3_s,
                                                                double rho_kg_m3, double cp_j_kg_k, double* t_drain_k) {
-  return scalar_out(t_drain_k, [&] {
+  return call_value(t_drain_k, [&] {
     return pumploss::case_drain_temperature(t_inlet_k, power_w, drain_flow_m3_s, rho_kg_m3, cp_j_kg_k);
   });
 }
@@ -288,7 +284,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_case_drain_temperature_from_leakage(doub
                                                                             double drain_flow_m3_s,
                                                                             double extra_power_w, double rho_kg_m3,
                                                                             double cp_j_kg_k, double* t_drain_k) {
-  return scalar_out(t_drain_k, [&] {
+  return call_value(t_drain_k, [&] {
     return pumploss::case_drain_temperature_from_leakage(t_inlet_k, dp_pa, drain_flow_m3_s, extra_power_w, rho_kg_m3,
                                                          cp_j_kg_k);
   });

@@ -3,16 +3,13 @@
 #include "pumploss/fluid.hpp"
 
 using pumploss::capi::call;
+using pumploss::capi::call_value;
 
 extern "C" {
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_viscosity_d341(double t1_k, double nu1_m2_s, double t2_k,
                                                        double nu2_m2_s, double t_k, double* nu_m2_s) {
-  return call({nu_m2_s}, [&] {
-    const auto r = pumploss::viscosity_d341(t1_k, nu1_m2_s, t2_k, nu2_m2_s, t_k);
-    *nu_m2_s = r.value;
-    return r.st;
-  });
+  return call_value(nu_m2_s, [&] { return pumploss::viscosity_d341(t1_k, nu1_m2_s, t2_k, nu2_m2_s, t_k); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_d341_coefficients(double t1_k, double nu1_m2_s, double t2_k,
@@ -26,11 +23,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_d341_coefficients(double t1_k, double nu
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_d341_temperature(double a, double b, double nu_m2_s, double* t_k) {
-  return call({t_k}, [&] {
-    const auto r = pumploss::d341_temperature(pumploss::d341_line<double>{a, b}, nu_m2_s);
-    *t_k = r.value;
-    return r.st;
-  });
+  return call_value(t_k, [&] { return pumploss::d341_temperature(pumploss::d341_line<double>{a, b}, nu_m2_s); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_iso_vg(int grade, double* mid_m2_s, double* min_m2_s,
@@ -45,54 +38,32 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_iso_vg(int grade, double* mid_m2_s, doub
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_sus_from_kinematic(double nu_m2_s, double* sus) {
-  return call({sus}, [&] {
-    const auto r = pumploss::sus_from_kinematic(nu_m2_s);
-    *sus = r.value;
-    return r.st;
-  });
+  return call_value(sus, [&] { return pumploss::sus_from_kinematic(nu_m2_s); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_kinematic_from_sus(double sus, double* nu_m2_s) {
-  return call({nu_m2_s}, [&] {
-    const auto r = pumploss::kinematic_from_sus(sus);
-    *nu_m2_s = r.value;
-    return r.st;
-  });
+  return call_value(nu_m2_s, [&] { return pumploss::kinematic_from_sus(sus); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_dynamic_viscosity(double nu_m2_s, double rho_kg_m3, double* mu_pa_s) {
-  return call({mu_pa_s}, [&] {
-    const auto r = pumploss::dynamic_viscosity(nu_m2_s, rho_kg_m3);
-    *mu_pa_s = r.value;
-    return r.st;
-  });
+  return call_value(mu_pa_s, [&] { return pumploss::dynamic_viscosity(nu_m2_s, rho_kg_m3); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_kinematic_viscosity(double mu_pa_s, double rho_kg_m3, double* nu_m2_s) {
-  return call({nu_m2_s}, [&] {
-    const auto r = pumploss::kinematic_viscosity(mu_pa_s, rho_kg_m3);
-    *nu_m2_s = r.value;
-    return r.st;
-  });
+  return call_value(nu_m2_s, [&] { return pumploss::kinematic_viscosity(mu_pa_s, rho_kg_m3); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_oil_density(double rho_ref_kg_m3, double t_ref_k, double alpha_per_k,
                                                     double bulk_modulus_pa, double t_k, double p_pa,
                                                     double* rho_kg_m3) {
-  return call({rho_kg_m3}, [&] {
-    const auto r = pumploss::oil_density(rho_ref_kg_m3, t_ref_k, alpha_per_k, bulk_modulus_pa, t_k, p_pa);
-    *rho_kg_m3 = r.value;
-    return r.st;
+  return call_value(rho_kg_m3, [&] {
+    return pumploss::oil_density(rho_ref_kg_m3, t_ref_k, alpha_per_k, bulk_modulus_pa, t_k, p_pa);
   });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_viscosity_barus(double mu0_pa_s, double alpha_per_pa, double p_pa,
                                                         double* mu_pa_s) {
-  return call({mu_pa_s}, [&] {
-    const auto r = pumploss::viscosity_barus(mu0_pa_s, alpha_per_pa, p_pa);
-    *mu_pa_s = r.value;
-    return r.st;
-  });
+  return call_value(mu_pa_s, [&] { return pumploss::viscosity_barus(mu0_pa_s, alpha_per_pa, p_pa); });
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_typical_mineral_oil(double* rho_kg_m3, double* t_ref_k,

@@ -11,6 +11,7 @@
 
 #include "dual.hpp"
 #include "fluid.hpp"
+#include "gap.hpp"
 #include "scalar_traits.hpp"
 #include "status.hpp"
 
@@ -99,6 +100,40 @@ inline void clearance_reynolds(clearance_budget<T>& b, T q_m3_s, T width_m) {
   if (re > b.max_gap_reynolds) b.max_gap_reynolds = re;
 }
 
+/// A tip path: slots of width w, height h and sealing length L (tip lands in series) whose moving
+/// wall drags oil at speed u towards the outlet, against the pressure flow; `count` such slots in
+/// parallel. Records the flow and the drag Reynolds numbers.
+template <class T>
+inline status clearance_tip_path(clearance_budget<T>& b, int path, T count, T dp, T width_m, T height_m, T length_m,
+                                 T u_m_s) {
+  const auto q = gap_plates_flow(dp, b.mu_pa_s, width_m, height_m, length_m, -u_m_s);
+  if (is_error(q.st)) return q.st;
+  b.flow_m3_s[path] = count * q.value;
+  clearance_reynolds(b, q.value, width_m);
+  const T re_drag = b.rho_kg_m3 * u_m_s * height_m / b.mu_pa_s;  // rho U h / mu of the dragged film
+  if (re_drag > b.max_gap_reynolds) b.max_gap_reynolds = re_drag;
+  return status::ok;
+}
+
+/// A still slot path (no moving wall): `count` slots of width w, height h and length L in parallel.
+template <class T>
+inline status clearance_slot_path(clearance_budget<T>& b, int path, T count, T dp, T width_m, T height_m, T length_m) {
+  const auto q = gap_plates_flow(dp, b.mu_pa_s, width_m, height_m, length_m, T(0));
+  if (is_error(q.st)) return q.st;
+  b.flow_m3_s[path] = count * q.value;
+  clearance_reynolds(b, q.value, width_m);
+  return status::ok;
+}
+
+/// One face of a radial path: inward flow over an arc from r_out to the drained r_in; records its
+/// Reynolds number at the inner radius, where the flow is fastest.
+template <class T>
+inline result<T> clearance_face_flow(clearance_budget<T>& b, T dp, T r_in_m, T r_out_m, T height_m, T arc_rad) {
+  const auto q = gap_radial_sector_flow(dp, b.mu_pa_s, r_in_m, r_out_m, height_m, arc_rad);
+  if (!is_error(q.st)) clearance_reynolds(b, q.value, arc_rad * r_in_m);
+  return q;
+}
+
 /// Totals, shares, volumetric efficiency and the laminar check at the end of a budget.
 template <class T>
 inline clearance_budget<T> clearance_budget_finish(clearance_budget<T> b, T displacement_m3_rev, T speed_rev_s) {
@@ -117,6 +152,20 @@ inline clearance_budget<T> clearance_budget_finish(clearance_budget<T> b, T disp
   if (!finite(b.total_m3_s) || !finite(b.volumetric_efficiency)) return clearance_budget_fail<T>(status::overflow);
   if (b.volumetric_efficiency < T(0)) b.st = worst(b.st, status::implausible);
   return b;
+}
+
+/// A whole budget: the description's check, the common start, the pump's paths
+/// (`paths(budget&, dp) -> status`) and the common finish.
+template <class T, class Paths>
+inline clearance_budget<T> clearance_budget_of(status check, const oil<T>& o, const rotary_operating_point<T>& op,
+                                               T displacement_m3_rev, Paths paths) {
+  if (is_error(check)) return clearance_budget_fail<T>(check);
+  T dp{};
+  auto b = clearance_budget_start(o, op, dp);
+  if (is_error(b.st)) return b;
+  const status st = paths(b, dp);
+  if (is_error(st)) return clearance_budget_fail<T>(st);
+  return clearance_budget_finish(b, displacement_m3_rev, op.speed_rev_s);
 }
 
 /// An oil converted to another scalar type (constant: no derivatives).
@@ -141,6 +190,17 @@ inline clearance_sensitivity<T> clearance_sensitivity_from(const clearance_budge
     s.elasticity[i] = b.total_m3_s.val != T(0) ? gaps[i] * b.total_m3_s.d[i] / b.total_m3_s.val : T(0);
   }
   return s;
+}
+
+/// Sensitivities of a budget to the three clearances: `seeded` is the pump in dual numbers with
+/// its clearances seeded in path order, `budget(pump, oil, op)` the budget template.
+template <class T, class Pump, class Budget>
+inline clearance_sensitivity<T> clearance_sensitivity_through(const Pump& seeded, const oil<T>& o,
+                                                              const rotary_operating_point<T>& op,
+                                                              const T (&gaps)[clearance_path_count], Budget budget) {
+  using D = dual<T, clearance_path_count>;
+  const rotary_operating_point<D> opd{D(op.outlet_pa), D(op.inlet_pa), D(op.speed_rev_s), D(op.t_k)};
+  return clearance_sensitivity_from<T>(budget(seeded, oil_cast<D>(o), opd), gaps);
 }
 
 }  // namespace detail

@@ -90,7 +90,7 @@ inline status gear_pump_check(const gear_pump<T>& g) {
 /// A tip path can be negative at low pressure (drag exceeds pressure flow).
 /// @par Accuracy
 /// Each path as its gap law (a few ulp; tests/rotary_pump_test.cpp against self-calculated mpmath
-/// values).
+/// values, and the hand-worked example of @ref theory_rotary to its four digits).
 /// @par Source
 /// Plane Poiseuille-Couette slot and radial disc flow (gap_plates_flow(), gap_radial_sector_flow();
 /// Rabie, Fluid Power Engineering, McGraw-Hill 2009, ch. 2); the path breakdown of external
@@ -98,46 +98,32 @@ inline status gear_pump_check(const gear_pump<T>& g) {
 /// memory); see @ref theory_rotary.
 template <class T>
 inline clearance_budget<T> gear_pump_budget(const gear_pump<T>& g, const oil<T>& o, const rotary_operating_point<T>& op) {
-  const status chk = detail::gear_pump_check(g);
-  if (is_error(chk)) return detail::clearance_budget_fail<T>(chk);
-  T dp{};
-  auto b = detail::clearance_budget_start(o, op, dp);
-  if (is_error(b.st)) return b;
-  const T two_pi = 2 * detail::pi<T>();
-  const T u = two_pi * op.speed_rev_s * g.tip_radius_m;
-  // tooth tips: pressure flow back to the inlet, drag forward (wall speed against the flow)
-  const auto qt = gap_plates_flow(dp, b.mu_pa_s, g.face_width_m, g.tip_clearance_m,
-                                  T(g.teeth_sealing) * g.tip_land_m, -u);
-  if (is_error(qt.st)) return detail::clearance_budget_fail<T>(qt.st);
-  b.flow_m3_s[static_cast<int>(gear_path::tip)] = 2 * qt.value;
-  detail::clearance_reynolds(b, qt.value, g.face_width_m);
-  {  // drag Reynolds number rho U h / mu of the tip slot
-    const T re_drag = b.rho_kg_m3 * u * g.tip_clearance_m / b.mu_pa_s;
-    if (re_drag > b.max_gap_reynolds) b.max_gap_reynolds = re_drag;
-  }
-  // lateral gaps
-  T h1 = g.lateral_clearance_m, h2 = g.lateral_clearance_m;
-  if (!g.balanced_bushings) {
-    h1 = g.lateral_clearance_m * (T(1) + g.lateral_offset) / 2;
-    h2 = g.lateral_clearance_m * (T(1) - g.lateral_offset) / 2;
-  }
-  T q_lat = T(0);
-  for (const T& h : {h1, h2}) {
-    if (!(h > T(0))) continue;
-    const auto q = gap_radial_sector_flow(dp, b.mu_pa_s, g.shaft_radius_m, g.root_radius_m, h, g.lateral_arc_rad);
-    if (is_error(q.st)) return detail::clearance_budget_fail<T>(q.st);
-    q_lat += q.value;
-    detail::clearance_reynolds(b, q.value, g.lateral_arc_rad * g.shaft_radius_m);
-  }
-  b.flow_m3_s[static_cast<int>(gear_path::lateral)] = 2 * q_lat;
-  // mesh (stated estimate)
-  if (g.mesh_clearance_m > T(0)) {
-    const auto qm = gap_plates_flow(dp, b.mu_pa_s, g.face_width_m, g.mesh_clearance_m, g.mesh_length_m, T(0));
-    if (is_error(qm.st)) return detail::clearance_budget_fail<T>(qm.st);
-    b.flow_m3_s[static_cast<int>(gear_path::mesh)] = qm.value;
-    detail::clearance_reynolds(b, qm.value, g.face_width_m);
-  }
-  return detail::clearance_budget_finish(b, g.displacement_m3_rev, op.speed_rev_s);
+  return detail::clearance_budget_of(detail::gear_pump_check(g), o, op, g.displacement_m3_rev, [&](auto& b, T dp) {
+    // tooth tips of both gears: pressure flow back to the inlet, drag forward
+    const T u = 2 * detail::pi<T>() * op.speed_rev_s * g.tip_radius_m;
+    status st = detail::clearance_tip_path(b, static_cast<int>(gear_path::tip), T(2), dp, g.face_width_m,
+                                           g.tip_clearance_m, T(g.teeth_sealing) * g.tip_land_m, u);
+    if (is_error(st)) return st;
+    // lateral gaps: both faces of a gear (side plates: the end float split by the offset)
+    T h1 = g.lateral_clearance_m, h2 = g.lateral_clearance_m;
+    if (!g.balanced_bushings) {
+      h1 = g.lateral_clearance_m * (T(1) + g.lateral_offset) / 2;
+      h2 = g.lateral_clearance_m * (T(1) - g.lateral_offset) / 2;
+    }
+    T q_lat = T(0);
+    for (const T& h : {h1, h2}) {
+      if (!(h > T(0))) continue;
+      const auto q = detail::clearance_face_flow(b, dp, g.shaft_radius_m, g.root_radius_m, h, g.lateral_arc_rad);
+      if (is_error(q.st)) return q.st;
+      q_lat += q.value;
+    }
+    b.flow_m3_s[static_cast<int>(gear_path::lateral)] = 2 * q_lat;
+    // mesh (stated estimate)
+    if (g.mesh_clearance_m > T(0))
+      st = detail::clearance_slot_path(b, static_cast<int>(gear_path::mesh), T(1), dp, g.face_width_m,
+                                       g.mesh_clearance_m, g.mesh_length_m);
+    return st;
+  });
 }
 
 /// A gear pump description converted to another scalar type (for dual-number sensitivities).
@@ -180,10 +166,10 @@ inline clearance_sensitivity<T> gear_pump_sensitivity(const gear_pump<T>& g, con
   gd.tip_clearance_m = D::variable(g.tip_clearance_m, 0);
   gd.lateral_clearance_m = D::variable(g.lateral_clearance_m, 1);
   gd.mesh_clearance_m = D::variable(g.mesh_clearance_m, 2);
-  const rotary_operating_point<D> opd{D(op.outlet_pa), D(op.inlet_pa), D(op.speed_rev_s), D(op.t_k)};
-  const auto b = gear_pump_budget(gd, detail::oil_cast<D>(o), opd);
   const T gaps[clearance_path_count] = {g.tip_clearance_m, g.lateral_clearance_m, g.mesh_clearance_m};
-  return detail::clearance_sensitivity_from<T>(b, gaps);
+  return detail::clearance_sensitivity_through(gd, o, op, gaps, [](const auto& p, const auto& od, const auto& x) {
+    return gear_pump_budget(p, od, x);
+  });
 }
 
 /// Short name of a gear pump path ("tooth-tip", "lateral", "mesh"), "unknown" otherwise.

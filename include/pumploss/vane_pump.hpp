@@ -88,7 +88,7 @@ inline status vane_pump_check(const vane_pump<T>& v) {
 /// A tip path can be negative at low pressure (drag exceeds pressure flow).
 /// @par Accuracy
 /// Each path as its gap law (a few ulp; tests/rotary_pump_test.cpp against self-calculated mpmath
-/// values).
+/// values, and the hand-worked example of @ref theory_rotary to its four digits).
 /// @par Source
 /// Plane Poiseuille-Couette slot and radial disc flow (gap_plates_flow(), gap_radial_sector_flow();
 /// Rabie, Fluid Power Engineering, McGraw-Hill 2009, ch. 2); the vane pump path breakdown
@@ -96,33 +96,24 @@ inline status vane_pump_check(const vane_pump<T>& v) {
 /// 2001 (from memory); see @ref theory_rotary.
 template <class T>
 inline clearance_budget<T> vane_pump_budget(const vane_pump<T>& v, const oil<T>& o, const rotary_operating_point<T>& op) {
-  const status chk = detail::vane_pump_check(v);
-  if (is_error(chk)) return detail::clearance_budget_fail<T>(chk);
-  T dp{};
-  auto b = detail::clearance_budget_start(o, op, dp);
-  if (is_error(b.st)) return b;
-  const T u = 2 * detail::pi<T>() * op.speed_rev_s * v.cam_radius_m;
-  const auto qt = gap_plates_flow(dp, b.mu_pa_s, v.rotor_width_m, v.tip_clearance_m,
-                                  T(v.vanes_per_arc) * v.vane_tip_land_m, -u);
-  if (is_error(qt.st)) return detail::clearance_budget_fail<T>(qt.st);
-  b.flow_m3_s[static_cast<int>(vane_path::tip)] = T(v.sealing_arcs) * qt.value;
-  detail::clearance_reynolds(b, qt.value, v.rotor_width_m);
-  {
-    const T re_drag = b.rho_kg_m3 * u * v.tip_clearance_m / b.mu_pa_s;
-    if (re_drag > b.max_gap_reynolds) b.max_gap_reynolds = re_drag;
-  }
-  const auto qs = gap_radial_sector_flow(dp, b.mu_pa_s, v.hub_radius_m, v.rotor_radius_m, v.side_clearance_m,
-                                         v.pressure_arc_rad);
-  if (is_error(qs.st)) return detail::clearance_budget_fail<T>(qs.st);
-  b.flow_m3_s[static_cast<int>(vane_path::side)] = 2 * qs.value;
-  detail::clearance_reynolds(b, qs.value, v.pressure_arc_rad * v.hub_radius_m);
-  if (v.slot_clearance_m > T(0) && v.vanes_in_suction > 0) {
-    const auto ql = gap_plates_flow(dp, b.mu_pa_s, v.rotor_width_m, v.slot_clearance_m, v.slot_length_m, T(0));
-    if (is_error(ql.st)) return detail::clearance_budget_fail<T>(ql.st);
-    b.flow_m3_s[static_cast<int>(vane_path::slot)] = T(v.vanes_in_suction) * ql.value;
-    detail::clearance_reynolds(b, ql.value, v.rotor_width_m);
-  }
-  return detail::clearance_budget_finish(b, v.displacement_m3_rev, op.speed_rev_s);
+  return detail::clearance_budget_of(detail::vane_pump_check(v), o, op, v.displacement_m3_rev, [&](auto& b, T dp) {
+    // vane tips in each sealing arc: pressure flow back to the inlet, drag forward
+    const T u = 2 * detail::pi<T>() * op.speed_rev_s * v.cam_radius_m;
+    status st = detail::clearance_tip_path(b, static_cast<int>(vane_path::tip), T(v.sealing_arcs), dp,
+                                           v.rotor_width_m, v.tip_clearance_m,
+                                           T(v.vanes_per_arc) * v.vane_tip_land_m, u);
+    if (is_error(st)) return st;
+    // both rotor faces against the side plates
+    const auto qs = detail::clearance_face_flow(b, dp, v.hub_radius_m, v.rotor_radius_m, v.side_clearance_m,
+                                                v.pressure_arc_rad);
+    if (is_error(qs.st)) return qs.st;
+    b.flow_m3_s[static_cast<int>(vane_path::side)] = 2 * qs.value;
+    // vanes in their slots with the undervane oil at outlet pressure facing a suction chamber
+    if (v.slot_clearance_m > T(0) && v.vanes_in_suction > 0)
+      st = detail::clearance_slot_path(b, static_cast<int>(vane_path::slot), T(v.vanes_in_suction), dp,
+                                       v.rotor_width_m, v.slot_clearance_m, v.slot_length_m);
+    return st;
+  });
 }
 
 /// A vane pump description converted to another scalar type (for dual-number sensitivities).
@@ -164,10 +155,10 @@ inline clearance_sensitivity<T> vane_pump_sensitivity(const vane_pump<T>& v, con
   vd.tip_clearance_m = D::variable(v.tip_clearance_m, 0);
   vd.side_clearance_m = D::variable(v.side_clearance_m, 1);
   vd.slot_clearance_m = D::variable(v.slot_clearance_m, 2);
-  const rotary_operating_point<D> opd{D(op.outlet_pa), D(op.inlet_pa), D(op.speed_rev_s), D(op.t_k)};
-  const auto b = vane_pump_budget(vd, detail::oil_cast<D>(o), opd);
   const T gaps[clearance_path_count] = {v.tip_clearance_m, v.side_clearance_m, v.slot_clearance_m};
-  return detail::clearance_sensitivity_from<T>(b, gaps);
+  return detail::clearance_sensitivity_through(vd, o, op, gaps, [](const auto& p, const auto& od, const auto& x) {
+    return vane_pump_budget(p, od, x);
+  });
 }
 
 /// Short name of a vane pump path ("vane-tip", "side-plates", "rotor-slots"), "unknown" otherwise.
