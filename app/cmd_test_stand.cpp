@@ -411,7 +411,8 @@ int run_test_stand(const stand_options& o) {
     const std::string verdict = res.acceptance.empty() ? std::string("No acceptance criteria stated")
                                 : res.accepted          ? std::string("ACCEPTED: every criterion met")
                                                         : std::string("NOT ACCEPTED: a criterion failed or was not tested");
-    files.add("test_stand_report.html", render_html(r, du, figs, verdict, res.acceptance.empty() || res.accepted));
+    files.add("test_stand_report.html", render_html(r, du, figs, verdict, res.acceptance.empty() || res.accepted,
+                                                     res.acceptance.empty() ? 0 : 1));
   }
   emit(r, files, o.out, du, "test_stand");
   return exit_ok;

@@ -261,7 +261,7 @@ h2 { break-after: avoid; page-break-after: avoid; }
 }  // namespace
 
 std::string render_html(const report& r, const display_units& u, const std::vector<html_figure>& figures,
-                        const std::string& verdict, bool pass) {
+                        const std::string& verdict, bool pass, std::size_t lead_tables) {
   std::string o = "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>" +
                   html_escape(r.title) + "</title>\n<style>" + kHtmlStyle + "</style>\n</head>\n<body>\n";
   o += "<header><h1>" + html_escape(r.title) + "</h1>\n";
@@ -271,14 +271,7 @@ std::string render_html(const report& r, const display_units& u, const std::vect
   for (const auto& f : r.facts)
     o += "<tr><td>" + html_escape(f.first) + "</td><td>" + html_escape(f.second) + "</td></tr>\n";
   o += "</table></section>\n";
-  if (!figures.empty()) {
-    o += "<section class=\"figures\">\n";
-    for (const auto& f : figures)
-      o += "<figure id=\"" + html_escape(f.id) + "\">" + inline_svg(f.svg, f.id) + "<figcaption>" +
-           html_escape(f.caption) + "</figcaption></figure>\n";
-    o += "</section>\n";
-  }
-  for (const auto& t : r.tables) {
+  auto put_table = [&](const table& t) {
     o += "<section class=\"block\"><h2>" + html_escape(t.title.empty() ? t.name : t.title) + "</h2>\n";
     o += "<table data-name=\"" + html_escape(t.name) + "\">\n<thead><tr>";
     for (const auto& c : t.cols) o += "<th>" + html_escape(heading(c, u)) + "</th>";
@@ -301,7 +294,16 @@ std::string render_html(const report& r, const display_units& u, const std::vect
       o += "</tr>\n";
     }
     o += "</tbody></table></section>\n";
+  };
+  for (std::size_t k = 0; k < r.tables.size() && k < lead_tables; ++k) put_table(r.tables[k]);
+  if (!figures.empty()) {
+    o += "<section class=\"figures\">\n";
+    for (const auto& f : figures)
+      o += "<figure id=\"" + html_escape(f.id) + "\">" + inline_svg(f.svg, f.id) + "<figcaption>" +
+           html_escape(f.caption) + "</figcaption></figure>\n";
+    o += "</section>\n";
   }
+  for (std::size_t k = lead_tables; k < r.tables.size(); ++k) put_table(r.tables[k]);
   if (!r.notes.empty()) {
     o += "<section class=\"block notes\"><h2>Notes</h2><ul>\n";
     for (const auto& n : r.notes) o += "<li>" + html_escape(n) + "</li>\n";

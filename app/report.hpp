@@ -90,8 +90,9 @@ struct html_figure {
 /// in a data-value attribute exactly as the CSV writes it), notes, the cautions; print CSS for A4
 /// with tables and figures kept whole on a page. `verdict` (may be empty) is shown under the
 /// title, `pass` colours it.
+/// The first `lead_tables` tables come before the figures (e.g. the acceptance verdicts).
 std::string render_html(const report& r, const display_units& u, const std::vector<html_figure>& figures,
-                        const std::string& verdict = {}, bool pass = true);
+                        const std::string& verdict = {}, bool pass = true, std::size_t lead_tables = 0);
 
 /// Files to write at the end, so that nothing is written when a step fails.
 class output_set {
