@@ -572,11 +572,11 @@ TEST(TestStandMap, DefaultsToTheTestedEnvelopeAtTheTestedViscosityTemperature) {
   EXPECT_TRUE(said);
   // a stated range still governs; one half of a range is refused, naming the setting
   s.map_temperature_k = 0;
-  s.map_speed_hi_rev_s = 1800.0 / 60;
+  s.map_speed_lo_rev_s = 1800.0 / 60;  // a low end without a high one
   const auto half = pumploss::reduce_test_stand(s, r);
   ASSERT_TRUE(pumploss::is_error(half.st));
   EXPECT_EQ(half.messages.front().setting, "map_speed_lo_rev_s");
   s.map_temperature_k = -1;
-  s.map_speed_hi_rev_s = 0;
+  s.map_speed_lo_rev_s = 0;
   EXPECT_EQ(pumploss::reduce_test_stand(s, r).messages.front().setting, "map_temperature_k");
 }
