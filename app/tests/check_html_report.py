@@ -253,6 +253,38 @@ def main():
                               f"{t['name']} row {i + 1} col {j + 1}: shown {shown} is not {value} rounded")
         check(len(rep.tables) >= 6, f"tables: {names}")
 
+        # ---- a spoilt set point (torque +8 % at 1250 rpm, 100 bar: the demo's 21st data row) and a
+        # criterion that fails: the row is flagged and highlighted, ringed in the figures, the verdict fails
+        lines = open(os.path.join(a.demo, "test_stand.csv")).read().splitlines(True)
+        data_rows = [i for i, l in enumerate(lines) if l[:1].isdigit()]
+        cells = lines[data_rows[20]].split(",")
+        check(cells[0].startswith("1250") and cells[2].startswith("99.9"), f"the spoilt row is not 1250 rpm, 100 bar: {cells[:3]}")
+        cells[4] = f"{float(cells[4]) * 1.08:.1f}"
+        lines[data_rows[20]] = ",".join(cells)
+        spoilt_csv = os.path.join(tmp, "spoilt.csv")
+        open(spoilt_csv, "w").write("".join(lines))
+        setup = open(os.path.join(a.demo, "test_stand.toml")).read()
+        setup = setup.replace('oil = "oil.toml"', f'oil = "{os.path.join(os.path.abspath(a.demo), "oil.toml")}"')
+        setup = setup.replace("min_percent = 93", "min_percent = 99")  # the volumetric criterion now fails
+        spoilt_toml = os.path.join(tmp, "spoilt.toml")
+        open(spoilt_toml, "w").write(setup)
+        out2 = os.path.join(tmp, "out2")
+        subprocess.run([a.cli, "test-stand", spoilt_csv, "--setup", spoilt_toml, "--out", out2], check=True,
+                       stdout=subprocess.DEVNULL)
+        rep2 = Report()
+        rep2.feed(open(os.path.join(out2, "test_stand_report.html"), encoding="utf-8").read())
+        check(rep2.verdict is not None and rep2.verdict[0].startswith("NOT ACCEPTED") and "fail" in rep2.verdict[1],
+              f"spoilt: verdict {rep2.verdict}")
+        pts = next(t for t in rep2.tables if t["name"] == "points")
+        flagged = [i for i, c in enumerate(rep2.row_classes["points"]) if c]
+        check(flagged == [20] and rep2.row_classes["points"][20] == "excluded", f"spoilt: highlighted rows {flagged}")
+        flag_col = pts["head"].index("flag")
+        check("torque outlier" in pts["rows"][20][flag_col][0], f"spoilt: flag {pts['rows'][20][flag_col][0]}")
+        check(rep2.row_classes["acceptance"] == ["", "fail", ""], f"spoilt: acceptance rows {rep2.row_classes['acceptance']}")
+        for fid in ("fig-eta-t", "fig-eta-v", "fig-eta-hm", "fig-drain", "fig-map"):
+            check((fid, "series", "outlier or excluded") in rep2.svg_groups, f"spoilt: {fid} does not ring the outlier")
+        check(any("set point 21" in t and "torque outlier" in t for t in [" ".join(rep2.text)]), "spoilt: no outlier note")
+
         # ---- headless Chromium: screenshot and PDF
         browser = shutil.which("chromium") or shutil.which("chromium-browser")
         if browser is None:
