@@ -323,7 +323,7 @@ def main():
             check(p0 and p1 and bool(set(p0) & set(p1)), f"table '{first[:40]}' split over pages {p0} / {p1}")
         fig_page = {}
         for f in rep.figures:
-            cap = f["caption"][-40:]
+            cap = f["caption"]  # whole: the tails of the three efficiency captions are alike
             title = {"fig-map": "Overall efficiency of P-"}.get(f["id"], f["caption"].split(" of each")[0] + " over pressure")
             p0, p1 = pages_with(title), pages_with(cap)
             check(p0 and p1 and bool(set(p0) & set(p1)), f"figure {f['id']} split over pages {p0} / {p1}")
