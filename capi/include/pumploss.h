@@ -2787,13 +2787,16 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_instrument(pumploss
                                                                         int instrument, double reading_percent,
                                                                         double absolute_si, int distribution);
 /**
- * The grid of the overall-efficiency map and its oil temperature.
+ * The grid of the overall-efficiency map and its oil temperature. Optional: without it the map
+ * spans the tested speeds and pressures at the mean of the temperature that sets the viscosity
+ * (pumploss_test_stand_map_temperature() reads back the one used).
  * @param setup the handle
  * @param speed_lo_rev_s lowest speed, rev/s (>= 0)
  * @param speed_hi_rev_s highest speed, rev/s (> speed_lo_rev_s)
  * @param dp_lo_pa lowest pressure difference, Pa (>= 0)
  * @param dp_hi_pa highest pressure difference, Pa (> dp_lo_pa)
- * @param t_k oil temperature of the map, K
+ * @param t_k oil temperature of the map, K: read as the temperature that sets the viscosity
+ *        (outside its tested range every map point is extrapolated, and reported)
  * @param speeds number of grid speeds (2 to 10000)
  * @param pressures number of grid pressures (2 to 10000)
  * @return PUMPLOSS_OK or an error (the setup is unchanged on error).
@@ -2907,7 +2910,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_map(const pumploss_
  *        or the first report), "" when there is none; may be NULL with message_capacity 0
  * @param message_capacity size of message in bytes
  * @param out receives the handle on success and on reports; NULL on every error
- * @return PUMPLOSS_OK; a report (PUMPLOSS_WEXTRAPOLATED map points, PUMPLOSS_WREGIME,
+ * @return PUMPLOSS_OK; a report (PUMPLOSS_WOUTLIER set points flagged by the outlier test, which
+ *         comes first; PUMPLOSS_WEXTRAPOLATED map points, PUMPLOSS_WREGIME,
  *         PUMPLOSS_WILLCONDITIONED, PUMPLOSS_WIMPLAUSIBLE); PUMPLOSS_EDOMAIN (a reading out of
  *         range, pressures the wrong way round), PUMPLOSS_EDATA (too few readings, a needed
  *         temperature missing, no displacement from the chosen estimator), PUMPLOSS_EMISUSE,
