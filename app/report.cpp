@@ -238,6 +238,8 @@ th { background: #eee; font-weight: bold; text-align: center; }
 td.num { text-align: right; white-space: nowrap; font-variant-numeric: tabular-nums; }
 table.facts td { font-size: 9pt; }
 table.facts td:first-child { font-weight: bold; white-space: nowrap; }
+table.wide { font-size: 6.5pt; }
+table.wide th, table.wide td { padding: 1px 2px; }
 tr.outlier td { background: #fff1cc; }
 tr.excluded td { background: #ffe0e0; }
 tr.fail td { background: #ffd6d6; font-weight: bold; }
@@ -273,7 +275,9 @@ std::string render_html(const report& r, const display_units& u, const std::vect
   o += "</table></section>\n";
   auto put_table = [&](const table& t) {
     o += "<section class=\"block\"><h2>" + html_escape(t.title.empty() ? t.name : t.title) + "</h2>\n";
-    o += "<table data-name=\"" + html_escape(t.name) + "\">\n<thead><tr>";
+    // more than ten columns: a smaller font, so that the table fits the width of an A4 page
+    o += "<table data-name=\"" + html_escape(t.name) + "\"" + (t.cols.size() > 10 ? " class=\"wide\"" : "") +
+         ">\n<thead><tr>";
     for (const auto& c : t.cols) o += "<th>" + html_escape(heading(c, u)) + "</th>";
     o += "</tr></thead>\n<tbody>\n";
     std::vector<int> dec(t.cols.size());

@@ -329,6 +329,24 @@ def main():
             check(p0 and p1 and bool(set(p0) & set(p1)), f"figure {f['id']} split over pages {p0} / {p1}")
             fig_page[f["id"]] = sorted(set(p0) & set(p1))
         check(pages_with("Cautions") == [len(pages) - 1], "the cautions are not on the last page")
+        # nothing wider than an A4 page: the blocks measured in a window of the printable width (186 mm
+        # = 703 CSS px; the screen's fonts are the larger ones), a copy of the page with a measuring script
+        js = ("<script>window.onload=function(){var o=[];document.querySelectorAll('table,figure').forEach("
+              "function(t){o.push((t.getAttribute('data-name')||t.id||'facts')+':'+Math.ceil("
+              "t.getBoundingClientRect().width));});var p=document.createElement('pre');p.id='m';"
+              "p.textContent=o.join(' ')+' body:'+document.body.clientWidth;document.body.appendChild(p);}</script>")
+        measure = os.path.join(tmp, "measure.html")
+        open(measure, "w", encoding="utf-8").write(src.replace("</body>", js + "</body>"))
+        dom = subprocess.run(base + ["--user-data-dir=" + os.path.join(tmp, "p3"), "--window-size=703,1000",
+                                     "--dump-dom", "file://" + measure], capture_output=True, text=True,
+                             timeout=120).stdout
+        m = re.search(r'<pre id="m">([^<]*)', dom)
+        check(m is not None, "no width measurement")
+        if m:
+            widths = dict(x.rsplit(":", 1) for x in m.group(1).split())
+            body = int(widths.pop("body"))
+            wide = {k: v for k, v in widths.items() if int(v) > body}
+            check(len(widths) >= 10 and not wide, f"wider than the page ({body} px): {wide}")
         summary = []
         for i in range(len(pages)):
             heads = [h for h in ["Job and test"] + [t["title"] for t in rep.tables if t["name"]] + ["Notes", "Cautions"]
