@@ -285,6 +285,24 @@ def main():
             check((fid, "series", "outlier or excluded") in rep2.svg_groups, f"spoilt: {fid} does not ring the outlier")
         check(any("set point 21" in t and "torque outlier" in t for t in [" ".join(rep2.text)]), "spoilt: no outlier note")
 
+        # ---- no [map] (issue 16: optional): the tested envelope at the tested mean drain temperature
+        bare = setup[:setup.index("[map]")]
+        bare_toml = os.path.join(tmp, "nomap.toml")
+        open(bare_toml, "w").write(bare)
+        out3 = os.path.join(tmp, "out3")
+        run3 = subprocess.run([a.cli, "test-stand", os.path.join(a.demo, "test_stand.csv"), "--setup", bare_toml,
+                               "--out", out3], capture_output=True, text=True)
+        check(run3.returncode == 0, f"no [map]: exit {run3.returncode} {run3.stderr}")
+        check("the tested mean (no map temperature stated)" in run3.stdout, "no [map]: the map temperature note")
+        if run3.returncode == 0:
+            rep3 = Report()
+            rep3.feed(open(os.path.join(out3, "test_stand_report.html"), encoding="utf-8").read())
+            check(any(fid == "fig-map" and cls == "contour" for (fid, cls, _) in rep3.svg_groups),
+                  "no [map]: no default contour levels")
+            _, map_rows = read_csv(os.path.join(out3, "test_stand_map.csv"))
+            speeds = sorted({float(r[1]) for r in map_rows})
+            check(abs(speeds[0] - 499.4) < 1.5 and abs(speeds[-1] - 1500) < 1.5, f"no [map]: speeds {speeds[0]}..{speeds[-1]}")
+
         # ---- headless Chromium: screenshot and PDF
         browser = shutil.which("chromium") or shutil.which("chromium-browser")
         if browser is None:
