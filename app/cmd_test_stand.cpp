@@ -3,6 +3,8 @@
 // returns: efficiencies per operating point with their expanded uncertainty, the derived
 // displacement by three estimators, the fitted loss models, the drain table and the
 // overall-efficiency map (CSV and SVG contour plot).
+#include <algorithm>
+#include <cmath>
 #include <limits>
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
@@ -25,7 +27,60 @@ std::string point_flag(const pumploss::test_stand_point& p) {
                   : (p.outlier & 2u)                   ? "torque outlier"
                                                        : "";
   if (p.excluded) f += std::string(f.empty() ? "" : ", ") + (p.excluded_by_list ? "excluded (list)" : "excluded (rule)");
+  if (pumploss::is_error(p.fit_st)) f += std::string(f.empty() ? "" : ", ") + "no fit here";
   return f;
+}
+
+// ---- s16-report: the figures of the HTML report (issue 16, Deliver 8)
+// One series per speed level of a quantity over the pressure difference, the outliers and the
+// excluded set points as their own marker series.
+svg::plot per_speed_plot(const pumploss::test_stand_result& res, const display_units& du, const std::string& title,
+                         const std::string& ylabel, double (*value)(const pumploss::test_stand_result&, std::size_t),
+                         double scale) {
+  using D = pumploss::dimension;
+  svg::plot p;
+  p.title = title;
+  p.x.label = std::string("pressure difference [") + du.of(D::pressure).symbol + "]";
+  p.y.label = ylabel;
+  svg::series flagged{"outlier or excluded", {}, {}, false, true, false};
+  for (std::size_t lev = 0; lev < res.speed_levels; ++lev) {
+    std::vector<std::size_t> idx;
+    for (std::size_t k = 0; k < res.points.size(); ++k)
+      if (res.points[k].speed_level == lev) idx.push_back(k);
+    if (idx.empty()) continue;
+    std::sort(idx.begin(), idx.end(), [&](std::size_t a, std::size_t b) { return res.points[a].dp_pa < res.points[b].dp_pa; });
+    double mean_n = 0;
+    for (const auto k : idx) mean_n += res.points[k].speed_rev_s / static_cast<double>(idx.size());
+    svg::series s{show_quantity(mean_n, D::rotational_speed, du, 4), {}, {}, true, true, false};
+    for (const auto k : idx) {
+      const double y = value(res, k) * scale;
+      if (!std::isfinite(y)) continue;
+      s.x.push_back(du.show(res.points[k].dp_pa, D::pressure));
+      s.y.push_back(y);
+      if (res.points[k].outlier != 0u || res.points[k].excluded) {
+        flagged.x.push_back(s.x.back());
+        flagged.y.push_back(y);
+      }
+    }
+    p.lines.push_back(std::move(s));
+  }
+  if (!flagged.x.empty()) p.lines.push_back(std::move(flagged));
+  return p;
+}
+
+// Contour levels when the setup names none: nice steps inside the map's range (in per cent).
+std::vector<double> default_levels(const pumploss::test_stand_map& mp) {
+  double lo = 1e300, hi = -1e300;
+  for (std::size_t k = 0; k < mp.eta_t.size(); ++k)
+    if (mp.st[k] == pumploss::status::ok && std::isfinite(mp.eta_t[k])) lo = std::min(lo, mp.eta_t[k]), hi = std::max(hi, mp.eta_t[k]);
+  if (!(hi > lo))
+    for (const double v : mp.eta_t)
+      if (std::isfinite(v)) lo = std::min(lo, v), hi = std::max(hi, v);
+  std::vector<double> out;
+  if (!(hi > lo)) return out;
+  for (const double t : svg::nice_ticks(100 * lo, 100 * hi, 7))
+    if (t > 100 * lo && t < 100 * hi) out.push_back(t);
+  return out;
 }
 
 using D = pumploss::dimension;
@@ -140,6 +195,7 @@ int run_test_stand(const stand_options& o) {
                        g.eta_v.value, g.eta_v.U, g.eta_hm.value, g.eta_hm.U, g.eta_t.value, g.eta_t.U,
                        status_text(p.st), p.flow_residual_m3_s, p.torque_residual_n_m, static_cast<double>(p.rows),
                        point_flag(p)});
+    tp.row_classes.push_back(p.excluded ? "excluded" : p.outlier != 0u ? "outlier" : "");
     measured.x.push_back(du.show(p.speed_rev_s, D::rotational_speed));
     measured.y.push_back(du.show(p.dp_pa, D::pressure));
   }
@@ -234,8 +290,8 @@ int run_test_stand(const stand_options& o) {
 
   svg::plot p;
   p.title = "Overall efficiency of " + setup.machine_name;
-  p.subtitle = fmt::format("{} loss model at {}; pumploss {}", map_model,
-                           show_quantity(s.map_temperature_k, D::temperature, du, 3), pumploss::version_string);
+  p.subtitle = fmt::format("{} loss model at {} ({} temperature); pumploss {}", map_model,
+                           show_quantity(res.map_temperature_k, D::temperature, du, 3), vt, pumploss::version_string);
   p.x.label = std::string("speed [") + du.of(D::rotational_speed).symbol + "]";
   p.y.label = std::string("pressure difference [") + du.of(D::pressure).symbol + "]";
   svg::contour c;
@@ -247,9 +303,34 @@ int run_test_stand(const stand_options& o) {
     c.z.push_back(row);
   }
   for (const double l : setup.map_levels) c.levels.push_back(l * 100.0);
-  c.level_format = "{:.0f} %";
+  if (c.levels.empty()) c.levels = default_levels(res.maps.back());  // [map] levels_percent not given
+  c.level_format = "{:g} %";
   p.contours = c;
   p.lines.push_back(measured);
+  {  // s16-report: the extrapolated cells shaded, the test envelope drawn, the outliers marked
+    svg::shade sh{"extrapolated by the model", {}};
+    const auto& st = res.maps.back().st;
+    auto cell_out = [&](std::size_t i, std::size_t j) { return st[i * nx + j] != status::ok; };
+    for (std::size_t i = 0; i < ny; ++i)
+      for (std::size_t j = 0; j < nx; ++j) {
+        if (!cell_out(i, j)) continue;  // a half cell about each extrapolated grid point
+        const double x0 = c.x[j > 0 ? j - 1 : 0], x1 = c.x[j + 1 < nx ? j + 1 : nx - 1];
+        const double y0 = c.y[i > 0 ? i - 1 : 0], y1 = c.y[i + 1 < ny ? i + 1 : ny - 1];
+        sh.rects.push_back({(x0 + c.x[j]) / 2, (y0 + c.y[i]) / 2, (x1 + c.x[j]) / 2, (y1 + c.y[i]) / 2});
+      }
+    if (!sh.rects.empty()) p.shades.push_back(std::move(sh));
+    const double sx0 = du.show(res.tested_speed_lo_rev_s, D::rotational_speed);
+    const double sx1 = du.show(res.tested_speed_hi_rev_s, D::rotational_speed);
+    const double sy0 = du.show(res.tested_dp_lo_pa, D::pressure), sy1 = du.show(res.tested_dp_hi_pa, D::pressure);
+    p.lines.push_back({"test envelope", {sx0, sx1, sx1, sx0, sx0}, {sy0, sy0, sy1, sy1, sy0}, true, false, true});
+    svg::series fl{"outlier or excluded", {}, {}, false, true, false};
+    for (const auto& pt : res.points)
+      if (pt.outlier != 0u || pt.excluded) {
+        fl.x.push_back(du.show(pt.speed_rev_s, D::rotational_speed));
+        fl.y.push_back(du.show(pt.dp_pa, D::pressure));
+      }
+    if (!fl.x.empty()) p.lines.push_back(std::move(fl));
+  }
 
   if (!res.acceptance.empty()) {  // the acceptance verdicts, one row per criterion
     table ta;
@@ -275,6 +356,7 @@ int run_test_stand(const stand_options& o) {
                          v.tested ? shown(v.value) + (drain ? "" : fmt::format(" +- {:.2f} %", 100 * v.U)) : "not tested",
                          v.tested ? shown(v.margin) : "-",
                          std::string(!v.tested ? "NOT TESTED" : v.pass ? "pass" : "FAIL")});
+      ta.row_classes.push_back(v.tested && v.pass ? "" : "fail");
     }
     r.tables.push_back(std::move(ta));
     r.facts.emplace_back("Acceptance", res.accepted ? "every criterion met (see the acceptance table)"
@@ -284,10 +366,15 @@ int run_test_stand(const stand_options& o) {
   r.tables.push_back(std::move(tm));
   r.tables.push_back(std::move(tp));
   r.tables.push_back(std::move(tdr));
-  r.facts.emplace_back("Efficiency map", fmt::format("{} speeds x {} pressures at {}, {} model; in test_stand_map.csv "
-                                                     "and test_stand_map.svg",
-                                                     nx, ny, show_quantity(s.map_temperature_k, D::temperature, du, 3),
-                                                     map_model));
+  r.facts.emplace_back("Efficiency map",
+                       fmt::format("{} speeds x {} pressures at {} of the {} temperature (it sets the viscosity; tested "
+                                   "{} to {}{}), {} model; {} of {} points extrapolated; in test_stand_map.csv and "
+                                   "test_stand_map.svg",
+                                   nx, ny, show_quantity(res.map_temperature_k, D::temperature, du, 4), vt,
+                                   show_quantity(res.tested_temperature_lo_k, D::temperature, du, 4),
+                                   show_quantity(res.tested_temperature_hi_k, D::temperature, du, 4),
+                                   s.map_temperature_k == 0 ? ", the tested mean: no [map] temperature given" : "",
+                                   map_model, res.map_extrapolated, nx * ny));
   r.notes.push_back("uncertainties: the stated instrument limits (per cent of reading plus absolute) as rectangular "
                     "distributions (GUM 4.3.7) unless given as standard; u(V_i) is the estimator's standard error; "
                     "flow and V_i taken as uncorrelated (JCGM 100:2008, first order)");
@@ -295,7 +382,38 @@ int run_test_stand(const stand_options& o) {
 
   output_set files;
   files.add("test_stand_map.csv", render_csv(tmap, du));
-  files.add("test_stand_map.svg", p.render());
+  const std::string map_svg = p.render();
+  files.add("test_stand_map.svg", map_svg);
+  {  // ---- s16-report: the customer's HTML report beside the text report (issue 16, Deliver 8)
+    std::vector<html_figure> figs;
+    const struct { const char* id; const char* name; double (*f)(const pumploss::test_stand_result&, std::size_t); } effs[] = {
+        {"fig-eta-t", "Overall efficiency", +[](const pumploss::test_stand_result& rr, std::size_t k) { return rr.points[k].eta.eta_t.value; }},
+        {"fig-eta-v", "Volumetric efficiency", +[](const pumploss::test_stand_result& rr, std::size_t k) { return rr.points[k].eta.eta_v.value; }},
+        {"fig-eta-hm", "Hydromechanical efficiency", +[](const pumploss::test_stand_result& rr, std::size_t k) { return rr.points[k].eta.eta_hm.value; }}};
+    for (const auto& e : effs) {
+      auto pe = per_speed_plot(res, du, std::string(e.name) + " over pressure, per speed", std::string(e.name) + " [%]", e.f, 100.0);
+      figs.push_back({e.id, std::string(e.name) + " of each set point (averaged steady readings) over the pressure "
+                            "difference, one line per speed; outliers and excluded set points ringed.",
+                      pe.render(860, 440)});
+    }
+    auto pd = per_speed_plot(res, du, "Case drain flow over pressure, per speed",
+                             std::string("drain flow [") + du.of(D::volume_flow).symbol + "]",
+                             +[](const pumploss::test_stand_result& rr, std::size_t k) { return rr.drain[k].drain_flow_m3_s; },
+                             du.show(1.0, D::volume_flow));
+    figs.push_back({"fig-drain", "Case drain flow of each set point over the pressure difference, one line per speed.",
+                    pd.render(860, 440)});
+    figs.push_back({"fig-map", fmt::format("Overall-efficiency map of the {} model at {} of the {} temperature (the "
+                                           "temperature that sets the viscosity); grey: extrapolated by the model "
+                                           "({} of {} grid points); dashed: the test envelope.",
+                                           map_model, show_quantity(res.map_temperature_k, D::temperature, du, 4), vt,
+                                           res.map_extrapolated, nx * ny),
+                    map_svg});
+    const std::string verdict = res.acceptance.empty() ? std::string("No acceptance criteria stated")
+                                : res.accepted          ? std::string("ACCEPTED: every criterion met")
+                                                        : std::string("NOT ACCEPTED: a criterion failed or was not tested");
+    files.add("test_stand_report.html", render_html(r, du, figs, verdict, res.acceptance.empty() || res.accepted,
+                                                     res.acceptance.empty() ? 0 : 1));
+  }
   emit(r, files, o.out, du, "test_stand");
   return exit_ok;
 }

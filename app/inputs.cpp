@@ -287,15 +287,22 @@ stand_setup read_stand_setup(const std::string& path) {
     a.finish();
     r.acceptance.push_back(c);
   }
-  auto map = root.table("map");
-  std::tie(r.map_speed_lo_rev_s, r.map_speed_hi_rev_s) = range_pair(map, "speeds", D::rotational_speed);
-  std::tie(r.map_dp_lo_pa, r.map_dp_hi_pa) = range_pair(map, "pressures", D::pressure);
-  r.map_temperature_k = map.quantity("temperature", D::temperature);
-  for (const double p : map.number_list("levels_percent")) {
-    if (!(p > 0 && p < 100)) throw map.error("levels_percent", "each level must lie between 0 and 100 %");
-    s.map_levels.push_back(p / 100.0);
+  // [map] optional (issue 16): every key defaults; the library takes the tested envelope and the
+  // tested mean of the viscosity temperature, the contour levels come from the map itself
+  if (auto map = root.table_opt("map")) {
+    if (map->has("speeds"))
+      std::tie(r.map_speed_lo_rev_s, r.map_speed_hi_rev_s) = range_pair(*map, "speeds", D::rotational_speed);
+    if (map->has("pressures")) std::tie(r.map_dp_lo_pa, r.map_dp_hi_pa) = range_pair(*map, "pressures", D::pressure);
+    if (const auto t = map->quantity_opt("temperature", D::temperature)) {
+      if (!(*t > 0)) throw map->error("temperature", "must lie above absolute zero");
+      r.map_temperature_k = *t;
+    }
+    for (const double p : map->has("levels_percent") ? map->number_list("levels_percent") : std::vector<double>{}) {
+      if (!(p > 0 && p < 100)) throw map->error("levels_percent", "each level must lie between 0 and 100 %");
+      s.map_levels.push_back(p / 100.0);
+    }
+    map->finish();
   }
-  map.finish();
   root.finish();
   return s;
 }

@@ -193,4 +193,146 @@ std::vector<std::string> output_set::write_all(const std::string& dir) const {
   return written;
 }
 
+// ---- s16-report: the HTML report (issue 16, Deliver 8)
+namespace {
+
+std::string html_escape(const std::string& s) {
+  std::string o;
+  o.reserve(s.size());
+  for (const char c : s) {
+    switch (c) {
+      case '&': o += "&amp;"; break;
+      case '<': o += "&lt;"; break;
+      case '>': o += "&gt;"; break;
+      case '"': o += "&quot;"; break;
+      default: o += c;
+    }
+  }
+  return o;
+}
+
+// An SVG document inlined: without its XML declaration, its clip paths renamed per figure (ids are
+// unique in one HTML document), scaled to the page width.
+std::string inline_svg(const std::string& svg, const std::string& id) {
+  std::string s = svg;
+  if (s.rfind("<?xml", 0) == 0) s.erase(0, s.find("?>") + 2);
+  auto replace_all = [&](const std::string& from, const std::string& to) {
+    for (std::size_t p = s.find(from); p != std::string::npos; p = s.find(from, p + to.size())) s.replace(p, from.size(), to);
+  };
+  replace_all("\"plotarea\"", "\"" + id + "-area\"");
+  replace_all("url(#plotarea)", "url(#" + id + "-area)");
+  replace_all("<svg ", "<svg class=\"plot\" preserveAspectRatio=\"xMidYMid meet\" ");
+  return s;
+}
+
+constexpr const char* kHtmlStyle = R"css(
+body { font-family: "DejaVu Sans", Arial, Helvetica, sans-serif; font-size: 10pt; color: #111; margin: 16px auto; max-width: 1000px; }
+h1 { font-size: 16pt; margin: 0 0 4px 0; }
+h2 { font-size: 11.5pt; margin: 14px 0 4px 0; }
+.verdict { font-size: 13pt; font-weight: bold; padding: 4px 8px; display: inline-block; border: 2px solid; }
+.verdict.pass { color: #0b6b0b; border-color: #0b6b0b; }
+.verdict.fail { color: #b00000; border-color: #b00000; }
+table { border-collapse: collapse; margin: 4px 0 10px 0; font-size: 8pt; }
+th, td { border: 1px solid #bbb; padding: 1px 4px; vertical-align: top; }
+th { background: #eee; font-weight: bold; text-align: center; }
+td.num { text-align: right; white-space: nowrap; font-variant-numeric: tabular-nums; }
+table.facts td { font-size: 9pt; }
+table.facts td:first-child { font-weight: bold; white-space: nowrap; }
+table.wide { font-size: 6.5pt; }
+table.wide th, table.wide td { padding: 1px 2px; }
+tr.outlier td { background: #fff1cc; }
+tr.excluded td { background: #ffe0e0; }
+tr.fail td { background: #ffd6d6; font-weight: bold; }
+figure { margin: 8px 0; }
+figcaption { font-size: 9pt; color: #333; }
+svg.plot { width: 100%; height: auto; }
+.notes li { font-size: 8.5pt; }
+.cautions { border: 2px solid #7a2e00; padding: 6px 10px; margin-top: 12px; font-size: 9pt; }
+.cautions h2 { color: #7a2e00; margin-top: 0; }
+section.block, figure, table, .cautions { break-inside: avoid; page-break-inside: avoid; }
+h2 { break-after: avoid; page-break-after: avoid; }
+@page { size: A4; margin: 12mm; }
+@media print {
+  body { margin: 0; max-width: none; font-size: 9pt; }
+  table { font-size: 7pt; }
+  svg.plot { max-height: 120mm; }
+  section.figures { break-before: page; }
+}
+)css";
+
+}  // namespace
+
+std::string render_html(const report& r, const display_units& u, const std::vector<html_figure>& figures,
+                        const std::string& verdict, bool pass, std::size_t lead_tables) {
+  std::string o = "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>" +
+                  html_escape(r.title) + "</title>\n<style>" + kHtmlStyle + "</style>\n</head>\n<body>\n";
+  o += "<header><h1>" + html_escape(r.title) + "</h1>\n";
+  if (!verdict.empty())
+    o += fmt::format("<p class=\"verdict {}\" id=\"verdict\">{}</p>\n", pass ? "pass" : "fail", html_escape(verdict));
+  o += "</header>\n<section class=\"block\" id=\"facts\"><h2>Job and test</h2>\n<table class=\"facts\">\n";
+  for (const auto& f : r.facts)
+    o += "<tr><td>" + html_escape(f.first) + "</td><td>" + html_escape(f.second) + "</td></tr>\n";
+  o += "</table></section>\n";
+  auto put_table = [&](const table& t) {
+    o += "<section class=\"block\"><h2>" + html_escape(t.title.empty() ? t.name : t.title) + "</h2>\n";
+    // more than ten columns: a smaller font, so that the table fits the width of an A4 page
+    o += "<table data-name=\"" + html_escape(t.name) + "\"" + (t.cols.size() > 10 ? " class=\"wide\"" : "") +
+         ">\n<thead><tr>";
+    for (const auto& c : t.cols) o += "<th>" + html_escape(heading(c, u)) + "</th>";
+    o += "</tr></thead>\n<tbody>\n";
+    std::vector<int> dec(t.cols.size());
+    for (std::size_t j = 0; j < t.cols.size(); ++j) dec[j] = column_decimals(t, j, u);
+    for (std::size_t i = 0; i < t.rows.size(); ++i) {
+      const std::string cls = i < t.row_classes.size() ? t.row_classes[i] : std::string();
+      o += cls.empty() ? "<tr>" : "<tr class=\"" + html_escape(cls) + "\">";
+      for (std::size_t j = 0; j < t.rows[i].size(); ++j) {
+        const auto& c = t.rows[i][j];
+        if (const auto* s = std::get_if<std::string>(&c)) {
+          o += "<td>" + html_escape(*s) + "</td>";
+        } else {
+          const double v = shown_value(t.cols[j], std::get<double>(c), u);
+          o += std::isfinite(v) ? fmt::format("<td class=\"num\" data-value=\"{:.10g}\">{:.{}f}</td>", v, v, dec[j])
+                                : std::string("<td class=\"num\" data-value=\"\">-</td>");
+        }
+      }
+      o += "</tr>\n";
+    }
+    o += "</tbody></table></section>\n";
+  };
+  for (std::size_t k = 0; k < r.tables.size() && k < lead_tables; ++k) put_table(r.tables[k]);
+  if (!figures.empty()) {
+    o += "<section class=\"figures\">\n";
+    for (const auto& f : figures)
+      o += "<figure id=\"" + html_escape(f.id) + "\">" + inline_svg(f.svg, f.id) + "<figcaption>" +
+           html_escape(f.caption) + "</figcaption></figure>\n";
+    o += "</section>\n";
+  }
+  for (std::size_t k = lead_tables; k < r.tables.size(); ++k) put_table(r.tables[k]);
+  if (!r.notes.empty()) {
+    o += "<section class=\"block notes\"><h2>Notes</h2><ul>\n";
+    for (const auto& n : r.notes) o += "<li>" + html_escape(n) + "</li>\n";
+    o += "</ul></section>\n";
+  }
+  // the cautions: the program's own, line by line, and the case drain's
+  o += "<section class=\"cautions\" id=\"cautions\"><h2>Cautions</h2><ul>\n";
+  std::string item;
+  const std::string c = cautions;
+  std::size_t pos = c.find('\n') + 1;  // after the heading line
+  while (pos < c.size()) {
+    const auto nl = c.find('\n', pos);
+    const std::string line = c.substr(pos, nl - pos);
+    pos = nl == std::string::npos ? c.size() : nl + 1;
+    if (line.rfind("- ", 0) == 0) {
+      if (!item.empty()) o += "<li>" + html_escape(item) + "</li>\n";
+      item = line.substr(2);
+    } else {
+      item += " " + std::string(trim(line));
+    }
+  }
+  if (!item.empty()) o += "<li>" + html_escape(item) + "</li>\n";
+  o += "<li>Never block or throttle a case drain line: the case pressure rises at once and can burst the shaft "
+       "seal or the housing.</li>\n</ul></section>\n</body>\n</html>\n";
+  return o;
+}
+
 }  // namespace plcli

@@ -54,6 +54,7 @@ struct table {
   std::string title;
   std::vector<column> cols;
   std::vector<std::vector<cell>> rows;
+  std::vector<std::string> row_classes;  ///< HTML only: a class per row ("outlier", "fail"), may be empty
 };
 
 /// A report: title, facts (label: value), tables and notes, with the cautions at the foot.
@@ -76,6 +77,22 @@ std::string render_text(const report& r, const display_units& u);
 /// One table as CSV (header 'name [unit]', full precision), cautions as '#' lines at the foot.
 /// The CSV reads back with read_csv().
 std::string render_csv(const table& t, const display_units& u);
+
+// ---- s16-report: the HTML report (issue 16, Deliver 8)
+/// A figure of an HTML report: an SVG document as svg::plot::render() gives it, with a caption.
+struct html_figure {
+  std::string id;       ///< unique in the report (used for the figure's element id and its clip paths)
+  std::string caption;
+  std::string svg;
+};
+/// The report as one self-contained HTML file (inline CSS and SVG, no script, no external
+/// resource): title, facts, the figures, the tables (the text table's digits; every number also
+/// in a data-value attribute exactly as the CSV writes it), notes, the cautions; print CSS for A4
+/// with tables and figures kept whole on a page. `verdict` (may be empty) is shown under the
+/// title, `pass` colours it.
+/// The first `lead_tables` tables come before the figures (e.g. the acceptance verdicts).
+std::string render_html(const report& r, const display_units& u, const std::vector<html_figure>& figures,
+                        const std::string& verdict = {}, bool pass = true, std::size_t lead_tables = 0);
 
 /// Files to write at the end, so that nothing is written when a step fails.
 class output_set {

@@ -279,6 +279,16 @@ std::string plot::render(int width, int height) const {
     }
   }
 
+  for (const auto& sh : shades) {  // shaded areas: grey, under the contours and lines
+    std::string d;
+    for (const auto& q : sh.rects)
+      d += fmt::format("M{},{} H{} V{} H{} Z ", num(mx(q[0])), num(my(q[1])), num(mx(q[2])), num(my(q[3])), num(mx(q[0])));
+    o += fmt::format("<g class=\"shade\" data-name=\"{}\" clip-path=\"url(#plotarea)\"><path d=\"{}\" fill=\"#9a9a9a\" "
+                     "fill-opacity=\"0.35\" stroke=\"none\"/></g>\n",
+                     xml_escape(sh.name), d);
+    legend.push_back({sh.name, "#9a9a9a", "area", false});
+  }
+
   if (contours) {
     const auto& c = *contours;
     for (std::size_t k = 0; k < c.levels.size(); ++k) {

@@ -5,6 +5,7 @@
 #ifndef PUMPLOSS_CLI_SVG_HPP
 #define PUMPLOSS_CLI_SVG_HPP
 
+#include <array>
 #include <optional>
 #include <string>
 #include <vector>
@@ -49,6 +50,13 @@ struct contour {
   std::string level_format = "{:.2f}";  ///< fmt format of a level label
 };
 
+/// Shaded rectangles in data coordinates {x0, y0, x1, y1}, drawn under the lines and contours
+/// (e.g. the extrapolated cells of a map); a <g class="shade"> with the name in data-name.
+struct shade {
+  std::string name;
+  std::vector<std::array<double, 4>> rects;
+};
+
 /// A plot.
 struct plot {
   std::string title;
@@ -58,6 +66,7 @@ struct plot {
   std::vector<limit_line> limits;
   std::optional<stack> areas;
   std::optional<contour> contours;
+  std::vector<shade> shades;        ///< shaded areas (grey), under everything else drawn
   std::vector<std::string> footer;  ///< lines below the plot (cautions), the drawing grows to hold them
 
   /// The SVG document (UTF-8). Throws std::invalid_argument when there is nothing to draw or a

@@ -25,6 +25,7 @@ const char* status_message(int code) noexcept {
     case status::extrapolated: return "Value extrapolated beyond the data or table it is based on.";
     case status::partial: return "Some elements of a batch call failed; the per-element status says which elements hold values.";
     case status::undefined_output: return "Valid, but an output that is undefined for these inputs (for example the friction factor at zero flow) is NaN; the other outputs are usable.";
+    case status::outlier: return "Valid, but some data points failed the outlier test; they are flagged (and excluded from the fit where the rule says so).";
     case status::implausible: return "Value is physically implausible (for example an efficiency above 1); check the measurements.";
   }
   return "Unknown status code.";

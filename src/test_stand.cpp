@@ -65,6 +65,10 @@ struct run {
     res.st = worst(res.st, s);
     res.messages.push_back({s, no_row, {}, {}, std::move(text), false});
   }
+  // A note (status ok): a fact the report states, not a caution on the results.
+  void note(std::string setting, std::string text) {
+    res.messages.push_back({status::ok, no_row, {}, std::move(setting), std::move(text), false});
+  }
 };
 
 struct column_ref {
@@ -109,10 +113,16 @@ bool setup_ok(const test_stand_setup& s, run& r) {
       return bad("instruments", "instrument limits must be finite and not negative (reading part below 50 %)");
   if (!s.meter_at_port && !(s.meter_pressure_pa > -1e5 && s.meter_pressure_pa < 1e8))
     return bad("meter_pressure_pa", "the flow meter's pressure must be a gauge pressure between -1 bar and 1000 bar");
-  if (!(s.map_speed_lo_rev_s >= 0 && s.map_speed_hi_rev_s > s.map_speed_lo_rev_s && std::isfinite(s.map_speed_hi_rev_s)))
-    return bad("map_speed_lo_rev_s", "the map's speeds must be [low, high] with 0 <= low < high");
-  if (!(s.map_dp_lo_pa >= 0 && s.map_dp_hi_pa > s.map_dp_lo_pa && std::isfinite(s.map_dp_hi_pa)))
-    return bad("map_dp_lo_pa", "the map's pressures must be [low, high] with 0 <= low < high");
+  // the map's ranges: both 0 for the tested envelope (the default), else 0 <= low < high
+  const bool speeds_default = s.map_speed_lo_rev_s == 0 && s.map_speed_hi_rev_s == 0;
+  const bool dps_default = s.map_dp_lo_pa == 0 && s.map_dp_hi_pa == 0;
+  if (!speeds_default &&
+      !(s.map_speed_lo_rev_s >= 0 && s.map_speed_hi_rev_s > s.map_speed_lo_rev_s && std::isfinite(s.map_speed_hi_rev_s)))
+    return bad("map_speed_lo_rev_s", "the map's speeds must be [low, high] with 0 <= low < high (or both 0: the tested range)");
+  if (!dps_default && !(s.map_dp_lo_pa >= 0 && s.map_dp_hi_pa > s.map_dp_lo_pa && std::isfinite(s.map_dp_hi_pa)))
+    return bad("map_dp_lo_pa", "the map's pressures must be [low, high] with 0 <= low < high (or both 0: the tested range)");
+  if (!(s.map_temperature_k == 0 || (s.map_temperature_k > 0 && std::isfinite(s.map_temperature_k))))
+    return bad("map_temperature_k", "the map's temperature must be above 0 K (or 0: the tested mean)");
   if (!(s.group_speed_fraction > 0 && s.group_speed_fraction < 0.5 && s.group_dp_fraction > 0 &&
         s.group_dp_fraction < 0.5 && s.group_dp_abs_pa >= 0 && std::isfinite(s.group_dp_abs_pa)))
     return bad("group_speed_fraction", "the grouping tolerances must be fractions between 0 and 0.5 and a band >= 0");
@@ -653,7 +663,7 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
     if (!k.rows.empty()) kept.push_back(std::move(k));
   }
   const std::size_t m = kept.size();
-  std::vector<double> sp(m), dpp(m), qp(m), tp(m), mup(m), drp(m), q_read_p(m), p1p(m), p2p(m);
+  std::vector<double> sp(m), dpp(m), qp(m), tp(m), mup(m), drp(m), q_read_p(m), p1p(m), p2p(m), tvp(m);
   res.points.resize(m);
   res.drain.resize(m);
   for (std::size_t k = 0; k < m; ++k) {
@@ -671,6 +681,7 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
     pt.ua_flow_m3_s = mq.second / sq;
     pt.ua_torque_n_m = mt.second / sq;
     mup[k] = mean_sd(rows, mu).first;
+    tvp[k] = mean_sd(rows, t_visc).first;
     drp[k] = mean_sd(rows, d.drain_flow_m3_s).first;
     q_read_p[k] = mean_sd(rows, q_read).first;
     p1p[k] = mean_sd(rows, p1).first;
@@ -759,8 +770,13 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
         for (std::size_t k2 = 0; k2 < m; ++k2) {
           // residuals of every set point (excluded ones too) against the fitted model
           const auto pr = loss_model_predict(mod, dpp[k2], sp[k2], mup[k2]);
-          res.points[k2].flow_residual_m3_s = qp[k2] - pr.flow_m3_s;
-          res.points[k2].torque_residual_n_m = tp[k2] - pr.torque_n_m;
+          auto& pt = res.points[k2];
+          pt.fit_st = pr.st;  // an error leaves the residuals NaN, and says so per point
+          pt.flow_residual_m3_s = qp[k2] - pr.flow_m3_s;
+          pt.torque_residual_n_m = tp[k2] - pr.torque_n_m;
+          if (is_usable(pt.fit_st) && !(std::isfinite(pt.flow_residual_m3_s) && std::isfinite(pt.torque_residual_n_m)))
+            pt.fit_st = status::overflow;  // never a NaN residual under a usable status
+          if (is_error(pt.fit_st)) pt.flow_residual_m3_s = pt.torque_residual_n_m = std::numeric_limits<double>::quiet_NaN();
         }
         studentized(mod, xd, xs, xm, xq, xt, xuq, xut, tq_t, tt_t);
       }
@@ -825,23 +841,53 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
   }
   judge_acceptance(setup, res);
 
-  // ---- efficiency map from the fitted model(s)
-  const auto mu_map = oil_dynamic_viscosity(oil, setup.map_temperature_k, 0.0);
+  // ---- the test envelope (included set points) and the map's defaults (issue 16)
+  {
+    bool first = true;
+    for (std::size_t k = 0; k < m; ++k) {
+      if (res.points[k].excluded) continue;
+      auto widen = [&](double& lo, double& hi, double v) {
+        lo = first ? v : std::min(lo, v);
+        hi = first ? v : std::max(hi, v);
+      };
+      widen(res.tested_speed_lo_rev_s, res.tested_speed_hi_rev_s, sp[k]);
+      widen(res.tested_dp_lo_pa, res.tested_dp_hi_pa, dpp[k]);
+      widen(res.tested_temperature_lo_k, res.tested_temperature_hi_k, tvp[k]);
+      first = false;
+    }
+  }
+  double t_map = setup.map_temperature_k;
+  if (t_map == 0) {  // the default: the mean of the viscosity temperature over the included set points
+    double sum = 0;
+    std::size_t cnt = 0;
+    for (std::size_t k = 0; k < m; ++k)
+      if (!res.points[k].excluded) sum += tvp[k], ++cnt;
+    t_map = sum / static_cast<double>(cnt);
+  }
+  res.map_temperature_k = t_map;
+  // a stated map temperature is read as the viscosity temperature; outside its tested range (with 0.5 K of
+  // slack for the rounding of a stated figure) every map point is extrapolated in viscosity
+  res.map_temperature_tested = t_map >= res.tested_temperature_lo_k - 0.5 && t_map <= res.tested_temperature_hi_k + 0.5;
+  const auto mu_map = oil_dynamic_viscosity(oil, t_map, 0.0);
   if (!mu_map.usable())
     return r.fail(mu_map.st, no_row, {}, "map_temperature_k",
                   "no oil viscosity at the map temperature: " + sentence(mu_map.st));
   res.map_mu_pa_s = mu_map.value;
   const std::size_t nx = setup.map_speeds, ny = setup.map_pressures;
+  const bool speeds_default = setup.map_speed_lo_rev_s == 0 && setup.map_speed_hi_rev_s == 0;
+  const bool dps_default = setup.map_dp_lo_pa == 0 && setup.map_dp_hi_pa == 0;
+  double s_lo = speeds_default ? res.tested_speed_lo_rev_s : setup.map_speed_lo_rev_s;
+  double s_hi = speeds_default ? res.tested_speed_hi_rev_s : setup.map_speed_hi_rev_s;
+  double d_lo = dps_default ? res.tested_dp_lo_pa : setup.map_dp_lo_pa;
+  double d_hi = dps_default ? res.tested_dp_hi_pa : setup.map_dp_hi_pa;
+  if (!(s_hi > s_lo)) s_lo *= 0.9, s_hi *= 1.1;  // one tested speed: a band about it
+  if (!(d_hi > d_lo)) d_lo *= 0.9, d_hi = d_hi * 1.1 + 1e5;
   auto& gs = res.map_speed_rev_s;
   auto& gp = res.map_dp_pa;
   gs.resize(nx);
   gp.resize(ny);
-  for (std::size_t j = 0; j < nx; ++j)
-    gs[j] = setup.map_speed_lo_rev_s + (setup.map_speed_hi_rev_s - setup.map_speed_lo_rev_s) * static_cast<double>(j) /
-                                           static_cast<double>(nx - 1);
-  for (std::size_t i = 0; i < ny; ++i)
-    gp[i] = setup.map_dp_lo_pa + (setup.map_dp_hi_pa - setup.map_dp_lo_pa) * static_cast<double>(i) /
-                                     static_cast<double>(ny - 1);
+  for (std::size_t j = 0; j < nx; ++j) gs[j] = s_lo + (s_hi - s_lo) * static_cast<double>(j) / static_cast<double>(nx - 1);
+  for (std::size_t i = 0; i < ny; ++i) gp[i] = d_lo + (d_hi - d_lo) * static_cast<double>(i) / static_cast<double>(ny - 1);
   for (const auto& fitted : res.models) {
     test_stand_map mp;
     mp.model = fitted.model;
@@ -856,12 +902,39 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
     if (w == status::extrapolated) ++res.map_extrapolated;
   }
 
-  // ---- reports, in the order a report lists them
+  // ---- reports, in the order a report lists them: the outliers first (st is then outlier)
+  for (std::size_t k = 0; k < m; ++k) {
+    const auto& pt = res.points[k];
+    if (pt.outlier == 0u && !pt.excluded) continue;
+    char buf[200];
+    std::snprintf(buf, sizeof buf, "set point %zu (reading %zu, %.4g rpm, %.4g bar): %s%s%s", k + 1, pt.first_row + 1,
+                  pt.speed_rev_s * 60, pt.dp_pa / 1e5,
+                  pt.outlier == 0u ? "" : (pt.outlier & 1u) ? ((pt.outlier & 2u) ? "flow and torque outlier" : "flow outlier") : "torque outlier",
+                  pt.outlier != 0u && pt.excluded ? ", " : "",
+                  pt.excluded_by_list ? "excluded from the fit by the setup's list" : pt.excluded ? "excluded from the fit by the outlier rule" : "");
+    if (pt.outlier != 0u)
+      r.report(status::outlier, buf);
+    else
+      r.note("exclude_rows", buf);
+  }
+  char t_note[400];  // which temperature the map is drawn at: a report when outside the tests, else a note at the end
+  {
+    char* buf = t_note;
+    std::snprintf(buf, sizeof t_note,
+                  "the map is drawn at %.4g degC of the %s, the temperature that sets the viscosity in the gaps "
+                  "(tested %.4g to %.4g degC)%s",
+                  t_map - 273.15, tvisc, res.tested_temperature_lo_k - 273.15, res.tested_temperature_hi_k - 273.15,
+                  setup.map_temperature_k == 0 ? ", the tested mean (no map temperature stated)"
+                  : res.map_temperature_tested ? ""
+                                               : ": outside the tested range, so every map point is extrapolated in "
+                                                 "viscosity (state the map temperature as that temperature)");
+    if (!res.map_temperature_tested) r.report(status::extrapolated, buf);
+  }
   if (res.map_extrapolated > 0)
     r.report(status::extrapolated,
              std::to_string(res.map_extrapolated) + " of " + std::to_string(nx * ny) +
                  " map points lie outside the tested pressures, speeds or viscosities: extrapolated by the model, "
-                 "marked in the map CSV");
+                 "marked in the map CSV and shaded in the plot");
   if (implausible)
     r.report(status::implausible,
              "some efficiencies exceed 100 % (status 'implausible'): check the displacement used and the flow "
@@ -872,23 +945,13 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
     r.report(status::regime,
              "the two-step estimator had fewer than 5 speeds x 5 pressures (ISO 8426-1 asks for that grid)");
   if (!short_note.empty()) r.report(status::regime, short_note);
-  for (std::size_t k = 0; k < m; ++k) {
-    const auto& pt = res.points[k];
-    if (pt.outlier == 0u && !pt.excluded) continue;
-    char buf[200];
-    std::snprintf(buf, sizeof buf, "set point %zu (reading %zu, %.4g rpm, %.4g bar): %s%s%s", k + 1, pt.first_row + 1,
-                  pt.speed_rev_s * 60, pt.dp_pa / 1e5,
-                  pt.outlier == 0u ? "" : (pt.outlier & 1u) ? ((pt.outlier & 2u) ? "flow and torque outlier" : "flow outlier") : "torque outlier",
-                  pt.outlier != 0u && pt.excluded ? ", " : "",
-                  pt.excluded_by_list ? "excluded from the fit by the setup's list" : pt.excluded ? "excluded from the fit by the outlier rule" : "");
-    r.report(status::implausible, buf);
-  }
   for (const auto& v : res.acceptance)
     if (!v.tested)
       r.report(status::undefined_output, "acceptance criterion not tested: no set point at its stated point");
   if (ill)
     r.report(status::ill_conditioned,
              "the test grid does not separate the loss terms well: the fitted coefficients are uncertain");
+  if (res.map_temperature_tested) r.note("map_temperature_k", t_note);
   return res;
 }
 

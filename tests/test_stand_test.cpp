@@ -500,3 +500,83 @@ TEST(TestStandLogged, AcceptanceVerdictsAtAndAroundEachLimit) {
   s.acceptance = {{q::eta_t, 25.0, 200e5, std::nan(""), ""}};
   EXPECT_EQ(pumploss::reduce_test_stand(s, L.r).messages.front().setting, "acceptance");
 }
+
+// ---- s16-report (issue 16): the outlier status, the fit status per point, the map's defaults and
+// its temperature. Truth: the Wilson pump above (self-calculated, invented for the test).
+TEST(TestStandLogged, OutliersHaveTheirOwnStatusAndEveryPointItsFitStatus) {
+  const truth w;
+  const auto oil = vg46();
+  auto s = setup_for(oil);
+  s.fit_schloesser = false;
+  const auto L = make_logged(w, oil);
+  const auto res = pumploss::reduce_test_stand(s, L.r);
+  ASSERT_EQ(res.outliers, 2u);
+  EXPECT_EQ(res.st, status::outlier);  // the outliers' reports come first
+  std::size_t flagged = 0;
+  for (const auto& m : res.messages) flagged += m.st == status::outlier ? 1u : 0u;
+  EXPECT_EQ(flagged, 2u);
+  EXPECT_STREQ(pumploss::status_message(status::outlier), pumploss::status_message(107));  // PUMPLOSS_WOUTLIER
+  for (const auto& p : res.points) {  // a fitted model: every point has a residual and a usable fit status
+    EXPECT_TRUE(pumploss::is_usable(p.fit_st));
+    EXPECT_TRUE(std::isfinite(p.flow_residual_m3_s) && std::isfinite(p.torque_residual_n_m));
+  }
+  // a point of a failed reduction has no fit: its status says so, its residuals are NaN
+  const pumploss::test_stand_point none{};
+  EXPECT_EQ(none.fit_st, status::insufficient_data);
+  EXPECT_TRUE(std::isnan(none.flow_residual_m3_s));
+  // no outlier: no outlier status
+  const auto clean = pumploss::reduce_test_stand(s, make_readings(w, oil, [](std::size_t) { return 323.15; }, 0.0));
+  EXPECT_EQ(clean.outliers, 0u);
+  for (const auto& m : clean.messages) EXPECT_NE(m.st, status::outlier);
+}
+
+TEST(TestStandMap, DefaultsToTheTestedEnvelopeAtTheTestedViscosityTemperature) {
+  const truth w;
+  const auto oil = vg46();
+  auto s = setup_for(oil);
+  s.map_speed_lo_rev_s = s.map_speed_hi_rev_s = s.map_dp_lo_pa = s.map_dp_hi_pa = s.map_temperature_k = 0;
+  // drain temperatures 321.15 to 325.15 K over the grid: the tested mean is 323.15 K
+  const auto r = make_readings(w, oil, [](std::size_t i) { return 321.15 + 4.0 * static_cast<double>(i % 2); }, 0.0);
+  const auto res = pumploss::reduce_test_stand(s, r);
+  ASSERT_TRUE(pumploss::is_usable(res.st)) << res.messages.front().text;
+  EXPECT_NEAR(res.map_temperature_k, 323.15, 1e-9);
+  EXPECT_TRUE(res.map_temperature_tested);
+  EXPECT_NEAR(res.tested_temperature_lo_k, 321.15, 1e-9);
+  EXPECT_NEAR(res.tested_temperature_hi_k, 325.15, 1e-9);
+  // the grid spans exactly the tested speeds (500 to 1500 rpm) and pressures (20 to 250 bar)
+  EXPECT_NEAR(res.map_speed_rev_s.front(), 500.0 / 60, 1e-12);
+  EXPECT_NEAR(res.map_speed_rev_s.back(), 1500.0 / 60, 1e-12);
+  EXPECT_NEAR(res.map_dp_pa.front(), 20e5, 1e-6);
+  EXPECT_NEAR(res.map_dp_pa.back(), 250e5, 1e-6);
+  EXPECT_EQ(res.tested_speed_lo_rev_s, res.map_speed_rev_s.front());
+  EXPECT_EQ(res.tested_dp_hi_pa, res.map_dp_pa.back());
+  // inside the envelope at a tested viscosity: not one map point extrapolated, no extrapolation report
+  EXPECT_EQ(res.map_extrapolated, 0u);
+  for (const auto& m : res.messages) EXPECT_NE(m.st, status::extrapolated) << m.text;
+  // the note says which temperature sets the viscosity and that it is the tested mean
+  ASSERT_FALSE(res.messages.empty());
+  EXPECT_EQ(res.messages.back().st, status::ok);
+  EXPECT_NE(res.messages.back().text.find("drain temperature"), std::string::npos) << res.messages.back().text;
+  EXPECT_NE(res.messages.back().text.find("tested mean"), std::string::npos);
+
+  // the map asked at the inlet temperature (3 K below the drain's, issue 16): not silent
+  s.map_temperature_k = 318.15;
+  const auto cold = pumploss::reduce_test_stand(s, r);
+  ASSERT_TRUE(pumploss::is_usable(cold.st));
+  EXPECT_FALSE(cold.map_temperature_tested);
+  EXPECT_EQ(cold.map_extrapolated, 29u * 27u);  // every point outside the tested viscosities
+  bool said = false;
+  for (const auto& m : cold.messages)
+    said = said || (m.st == status::extrapolated && m.text.find("outside the tested range") != std::string::npos &&
+                    m.text.find("drain temperature") != std::string::npos);
+  EXPECT_TRUE(said);
+  // a stated range still governs; one half of a range is refused, naming the setting
+  s.map_temperature_k = 0;
+  s.map_speed_lo_rev_s = 1800.0 / 60;  // a low end without a high one
+  const auto half = pumploss::reduce_test_stand(s, r);
+  ASSERT_TRUE(pumploss::is_error(half.st));
+  EXPECT_EQ(half.messages.front().setting, "map_speed_lo_rev_s");
+  s.map_temperature_k = -1;
+  s.map_speed_lo_rev_s = 0;
+  EXPECT_EQ(pumploss::reduce_test_stand(s, r).messages.front().setting, "map_temperature_k");
+}

@@ -24,7 +24,7 @@ TEST(Status, EveryCodeHasItsOwnSentence) {
                        PUMPLOSS_EBUFFER, PUMPLOSS_ENOMEM, PUMPLOSS_EINTERNAL, PUMPLOSS_EVALIDITY,
                        PUMPLOSS_EDATA, PUMPLOSS_WREGIME, PUMPLOSS_WTRANSITION, PUMPLOSS_WILLCONDITIONED,
                        PUMPLOSS_WEXTRAPOLATED, PUMPLOSS_EPARTIAL, PUMPLOSS_WIMPLAUSIBLE,
-                       PUMPLOSS_WUNDEFINED, PUMPLOSS_WPARTIAL};
+                       PUMPLOSS_WUNDEFINED, PUMPLOSS_WPARTIAL, PUMPLOSS_WOUTLIER};
   const std::string unknown = pumploss_status_message(-1);
   EXPECT_EQ(unknown, pumploss_status_message(99));
   EXPECT_EQ(unknown, pumploss_status_message(1 << 30));

@@ -1113,7 +1113,10 @@ TEST(CliTestStand, AcceptanceCriteriaAndOptionalFit) {
   std::string setup = slurp(kDemo + "/test_stand.toml");
   const auto fit = setup.find("[fit]");
   ASSERT_NE(fit, std::string::npos);
-  setup.erase(fit, setup.find("[map]") - fit);  // no [fit]: Wilson alone
+  setup.erase(fit, setup.find("[map]") - fit);  // no [fit]: Wilson alone (and none of the demo's [[acceptance]])
+  const auto job_at = setup.find("[job]");         // the demo's [job], replaced below
+  ASSERT_NE(job_at, std::string::npos);
+  setup.erase(job_at, setup.find("[machine]") - job_at);
   const auto oil = setup.find("oil = \"oil.toml\"");
   ASSERT_NE(oil, std::string::npos);
   setup.replace(oil, std::string("oil = \"oil.toml\"").size(), "oil = \"" + kDemo + "/oil.toml\"");

@@ -137,6 +137,9 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_version_number(void);
  *  gap change of a calibration group without a gap); every other output is usable and finite.
  *  The one report that may come with a NaN output. */
 #define PUMPLOSS_WUNDEFINED 106
+/** Valid, but some data points failed an outlier test: they are flagged (and excluded from a fit
+ *  where the rule says so); e.g. the set points of pumploss_test_stand_create(). */
+#define PUMPLOSS_WOUTLIER 107
 
 /** True for an error status (1-99): the outputs are NaN (see PUMPLOSS_EPARTIAL for batches). */
 #define PUMPLOSS_IS_ERROR(st) ((st) > 0 && (st) < 100)
@@ -2829,13 +2832,16 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_set_instrument(pumploss
                                                                         int instrument, double reading_percent,
                                                                         double absolute_si, int distribution);
 /**
- * The grid of the overall-efficiency map and its oil temperature.
+ * The grid of the overall-efficiency map and its oil temperature. Optional: without it the map
+ * spans the tested speeds and pressures at the mean of the temperature that sets the viscosity
+ * (pumploss_test_stand_map_temperature() reads back the one used).
  * @param setup the handle
  * @param speed_lo_rev_s lowest speed, rev/s (>= 0)
  * @param speed_hi_rev_s highest speed, rev/s (> speed_lo_rev_s)
  * @param dp_lo_pa lowest pressure difference, Pa (>= 0)
  * @param dp_hi_pa highest pressure difference, Pa (> dp_lo_pa)
- * @param t_k oil temperature of the map, K
+ * @param t_k oil temperature of the map, K: read as the temperature that sets the viscosity
+ *        (outside its tested range every map point is extrapolated, and reported)
  * @param speeds number of grid speeds (2 to 10000)
  * @param pressures number of grid pressures (2 to 10000)
  * @return PUMPLOSS_OK or an error (the setup is unchanged on error).
@@ -2949,7 +2955,8 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_setup_get_map(const pumploss_
  *        or the first report), "" when there is none; may be NULL with message_capacity 0
  * @param message_capacity size of message in bytes
  * @param out receives the handle on success and on reports; NULL on every error
- * @return PUMPLOSS_OK; a report (PUMPLOSS_WEXTRAPOLATED map points, PUMPLOSS_WREGIME,
+ * @return PUMPLOSS_OK; a report (PUMPLOSS_WOUTLIER set points flagged by the outlier test, which
+ *         comes first; PUMPLOSS_WEXTRAPOLATED map points, PUMPLOSS_WREGIME,
  *         PUMPLOSS_WILLCONDITIONED, PUMPLOSS_WIMPLAUSIBLE); PUMPLOSS_EDOMAIN (a reading out of
  *         range, pressures the wrong way round), PUMPLOSS_EDATA (too few readings, a needed
  *         temperature missing, no displacement from the chosen estimator), PUMPLOSS_EMISUSE,
@@ -3185,6 +3192,35 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_outliers(const pumploss_test_
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_acceptance(const pumploss_test_stand *ts, size_t index, int *pass,
                                                               int *tested, double *value, double *U, double *margin,
                                                               size_t *point);
+/* ---- s16-report: the fit status per set point, the map's temperature (issue 16) ---- */
+/**
+ * The fit status of each set point: the status of the first fitted model's prediction there.
+ * A point whose residuals (pumploss_test_stand_points()) are NaN has an error status here saying
+ * why; PUMPLOSS_WEXTRAPOLATED for a point outside the fitted range (e.g. an excluded one).
+ * @param ts the handle (only read)
+ * @param count number of set points
+ * @param fit_status receives PUMPLOSS_OK, a report code, or the error that left the residuals NaN
+ * @return PUMPLOSS_OK; PUMPLOSS_EBUFFER when count differs; PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_point_fit(const pumploss_test_stand *ts, size_t count,
+                                                             int fit_status[]);
+/**
+ * The temperature of the map: the setup's (pumploss_test_stand_setup_set_map(), read as the
+ * temperature that sets the viscosity, PUMPLOSS_TS_VISCOSITY_AT_*) or, when none was stated
+ * (a setup without set_map), the mean of that temperature over the set points; and the tested
+ * range of that temperature.
+ * @param ts the handle (only read)
+ * @param t_k receives the map temperature, K
+ * @param mu_pa_s receives the oil viscosity at it, Pa s
+ * @param tested_lo_k receives the lowest set-point mean of the viscosity temperature, K
+ * @param tested_hi_k receives the highest, K
+ * @return PUMPLOSS_OK; PUMPLOSS_WEXTRAPOLATED when the map temperature lies outside the tested
+ *         range (every map point is then extrapolated in viscosity); PUMPLOSS_EMISUSE.
+ */
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map_temperature(const pumploss_test_stand *ts, double *t_k,
+                                                                   double *mu_pa_s, double *tested_lo_k,
+                                                                   double *tested_hi_k);
+/* ---- end s16-report ---- */
 /** @} */
 /* ==== flowtest ==== */
 /** @name Field flow test of any pump

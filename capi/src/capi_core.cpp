@@ -24,6 +24,7 @@ PUMPLOSS_SAME(PUMPLOSS_WILLCONDITIONED, ill_conditioned);
 PUMPLOSS_SAME(PUMPLOSS_WEXTRAPOLATED, extrapolated);
 PUMPLOSS_SAME(PUMPLOSS_EPARTIAL, partial);
 PUMPLOSS_SAME(PUMPLOSS_WUNDEFINED, undefined_output);
+PUMPLOSS_SAME(PUMPLOSS_WOUTLIER, outlier);
 PUMPLOSS_SAME(PUMPLOSS_WIMPLAUSIBLE, implausible);
 #undef PUMPLOSS_SAME
 static_assert(PUMPLOSS_VERSION_NUMBER == pumploss::version_number, "pumploss.h and version.hpp disagree");

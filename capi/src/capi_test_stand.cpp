@@ -592,3 +592,26 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_acceptance(const pumploss_tes
   *margin = v.margin;
   return PUMPLOSS_OK;
 }
+
+// ---- s16-report: the fit status per set point, the map's temperature (issue 16)
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_point_fit(const pumploss_test_stand* ts, size_t count,
+                                                             int fit_status[]) {
+  if (ts == nullptr || fit_status == nullptr) return PUMPLOSS_EMISUSE;
+  if (count != ts->r.points.size()) return PUMPLOSS_EBUFFER;
+  for (size_t i = 0; i < count; ++i) fit_status[i] = static_cast<int>(ts->r.points[i].fit_st);
+  return PUMPLOSS_OK;
+}
+
+PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map_temperature(const pumploss_test_stand* ts, double* t_k,
+                                                                   double* mu_pa_s, double* tested_lo_k,
+                                                                   double* tested_hi_k) {
+  return call({t_k, mu_pa_s, tested_lo_k, tested_hi_k}, [&] {
+    if (ts == nullptr) return status::misuse;
+    const auto& r = ts->r;
+    *t_k = r.map_temperature_k;
+    *mu_pa_s = r.map_mu_pa_s;
+    *tested_lo_k = r.tested_temperature_lo_k;
+    *tested_hi_k = r.tested_temperature_hi_k;
+    return r.map_temperature_tested ? status::ok : status::extrapolated;
+  });
+}

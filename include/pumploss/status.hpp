@@ -41,7 +41,8 @@ enum class status : int {
   extrapolated = 103,    ///< Valid value, extrapolated beyond the data or table it came from.
   // 104 is retired (it was "partial" as a report code, which came with NaN outputs).
   implausible = 105,     ///< Valid value that is physically implausible (e.g. an efficiency above 1).
-  undefined_output = 106 ///< Valid, but an output undefined for these inputs (named in its documentation) is NaN.
+  undefined_output = 106,///< Valid, but an output undefined for these inputs (named in its documentation) is NaN.
+  outlier = 107          ///< Valid, but some data points failed an outlier test (flagged, and excluded from a fit where the rule says so).
 };
 
 /// True for error codes (1-99): every output is NaN.

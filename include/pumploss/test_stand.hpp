@@ -33,6 +33,7 @@
 
 #include <array>
 #include <cstddef>
+#include <limits>
 #include <string>
 #include <vector>
 
@@ -116,11 +117,15 @@ struct test_stand_setup {
   instrument_limits flow;                   ///< flow meter's stated limits (absolute part in m^3/s)
   instrument_limits torque;                 ///< torque meter's stated limits (absolute part in N m)
   bool fit_schloesser = false;              ///< also fit the Schloesser extension
-  double map_speed_lo_rev_s = 0;            ///< lowest map speed, rev/s
+  // ---- the map (issue 16): every field optional. Speeds and pressures both 0 (the default): the
+  // tested envelope, the lowest to the highest set point; a temperature of 0: the mean over the set
+  // points of the temperature that sets the viscosity (viscosity_at), so the map is not
+  // extrapolated in viscosity. A stated temperature is read as that same temperature.
+  double map_speed_lo_rev_s = 0;            ///< lowest map speed, rev/s (0 and 0: the tested range)
   double map_speed_hi_rev_s = 0;            ///< highest map speed, rev/s
-  double map_dp_lo_pa = 0;                  ///< lowest map pressure difference, Pa
+  double map_dp_lo_pa = 0;                  ///< lowest map pressure difference, Pa (0 and 0: the tested range)
   double map_dp_hi_pa = 0;                  ///< highest map pressure difference, Pa
-  double map_temperature_k = 0;             ///< oil temperature of the map, K
+  double map_temperature_k = 0;             ///< the viscosity_at temperature of the map, K (0: the tested mean)
   std::size_t map_speeds = 29;              ///< grid columns (2 or more)
   std::size_t map_pressures = 27;           ///< grid rows (2 or more)
   // ---- logged data: set points, steady state, outliers (defaults are common practice, no source)
@@ -170,8 +175,11 @@ struct test_stand_point {
   double torque_n_m = 0;                    ///< torque, N m
   double mu_pa_s = 0;                       ///< viscosity in the gaps, Pa s
   efficiency_uncertainty<double> eta{};     ///< efficiencies with their GUM uncertainties (U = k u, k = 2)
-  double flow_residual_m3_s = 0;            ///< residual of the first fitted model's flow
-  double torque_residual_n_m = 0;           ///< residual of the first fitted model's torque
+  double flow_residual_m3_s = std::numeric_limits<double>::quiet_NaN();   ///< residual of the first fitted model's flow (NaN when fit_st is an error)
+  double torque_residual_n_m = std::numeric_limits<double>::quiet_NaN();  ///< residual of the first fitted model's torque (NaN when fit_st is an error)
+  status fit_st = status::insufficient_data;              ///< the first model's prediction at this point: ok, a report
+                                            ///< (extrapolated: outside the fitted range, e.g. an excluded point), or the
+                                            ///< error that left the residuals NaN (insufficient_data: no model fitted)
   std::size_t speed_level = 0;              ///< speed set-point level (0 the lowest)
   std::size_t pressure_level = 0;           ///< pressure set-point level (0 the lowest)
   status st = status::ok;                   ///< the point's efficiency status (ok, implausible)
@@ -217,7 +225,7 @@ struct test_stand_map {
 /// Everything a reduction gives.
 struct test_stand_result {
   status st = status::ok;                        ///< worst status of the run (error: the reduction stopped)
-  std::vector<test_stand_message> messages;      ///< errors and reports, in the order they arose
+  std::vector<test_stand_message> messages;      ///< errors, reports and notes (status ok: e.g. the map's temperature), in the order they arose
   std::size_t speed_levels = 0;                  ///< speed set-point levels found
   std::size_t pressure_levels = 0;               ///< pressure set-point levels found
   std::array<displacement_result<double>, 3> estimators{};  ///< slope, intercept, two-step
@@ -231,12 +239,20 @@ struct test_stand_result {
   std::vector<loss_model<double>> models;        ///< Wilson, then Schloesser when asked for
   std::vector<double> map_speed_rev_s;           ///< map grid speeds
   std::vector<double> map_dp_pa;                 ///< map grid pressure differences
+  double map_temperature_k = 0;                  ///< the map's temperature (setup's, or the tested mean), K
   double map_mu_pa_s = 0;                        ///< viscosity of the map temperature
+  bool map_temperature_tested = true;            ///< the map temperature lies within the tested range (below)
+  double tested_speed_lo_rev_s = 0;              ///< test envelope: lowest included set-point speed, rev/s
+  double tested_speed_hi_rev_s = 0;              ///< ... highest
+  double tested_dp_lo_pa = 0;                    ///< ... lowest pressure difference, Pa
+  double tested_dp_hi_pa = 0;                    ///< ... highest
+  double tested_temperature_lo_k = 0;            ///< lowest set-point mean of the viscosity temperature, K
+  double tested_temperature_hi_k = 0;            ///< ... highest
   std::vector<test_stand_map> maps;              ///< one per model
   std::size_t map_extrapolated = 0;              ///< grid points outside the tested range (worst over the models)
   std::vector<std::size_t> row_point;            ///< set point of every reading (test_stand_message::no_row: dropped as settling)
   std::size_t rows_unsteady = 0;                 ///< readings dropped by the steady-state criterion
-  std::size_t outliers = 0;                      ///< set points flagged as outliers
+  std::size_t outliers = 0;                      ///< set points flagged as outliers (then st is outlier: their reports come first)
   std::size_t excluded = 0;                      ///< set points excluded from the fit (rule or list)
   std::vector<acceptance_verdict> acceptance;    ///< one verdict per criterion
   bool accepted = true;                          ///< every criterion tested and passed
@@ -272,7 +288,9 @@ struct test_stand_result {
 ///         failing step's code) when the reduction could not be made, with the reason first in
 ///         messages; else ok or a report: regime (a flow correction across more than 150 K, or a
 ///         grid smaller than 5 x 5 for the two-step estimator), ill_conditioned (a fit),
-///         extrapolated (map points outside the tests), implausible (an efficiency above 1).
+///         extrapolated (map points outside the tests, or a map temperature outside the tested
+///         range of the viscosity temperature), implausible (an efficiency above 1), outlier (set
+///         points flagged by the outlier test; each has its own message).
 /// @par Source
 /// ISO 4409:2019 (test method), ISO 8426-1 (derived displacement), JCGM 100:2008 (uncertainty),
 /// Wilson and Schloesser loss models as in docs/pages/theory_efficiency.md.

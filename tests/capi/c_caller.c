@@ -804,6 +804,31 @@ static void test_test_stand(void) {
           pass == 0 && tested == 0 && is_nan(mg));
     CHECK(pumploss_test_stand_acceptance(t, 3, &pass, &tested, &val, &uu, &mg, &pt) == PUMPLOSS_EDATA && is_nan(val));
   }
+  { /* s16-report: the fit status per point; the map's temperature, stated or by default (no set_map) */
+    int fs[30];
+    double tm, mum, tlo, thi;
+    pumploss_test_stand_setup *s2 = NULL;
+    pumploss_test_stand *t2 = NULL;
+    CHECK(pumploss_test_stand_point_fit(t, 30, fs) == PUMPLOSS_OK && !(fs[0] > 0 && fs[0] < 100) &&
+          !(fs[29] > 0 && fs[29] < 100));
+    CHECK(pumploss_test_stand_point_fit(t, 29, fs) == PUMPLOSS_EBUFFER);
+    CHECK(pumploss_test_stand_map_temperature(t, &tm, &mum, &tlo, &thi) == PUMPLOSS_OK && tm == 323.15 &&
+          near_rel(tlo, 323.15, 1e-12) && near_rel(thi, 323.15, 1e-12) && mum > 0.0);
+    CHECK(pumploss_test_stand_map_temperature(NULL, &tm, &mum, &tlo, &thi) == PUMPLOSS_EMISUSE && is_nan(tm));
+    CHECK(pumploss_test_stand_setup_create(PUMPLOSS_PUMP, 71e-6, 313.15, 46e-6, 373.15, 6.9e-6, &s2) == PUMPLOSS_OK);
+    CHECK(pumploss_test_stand_create(s2, 30, n, p1, p2, q, tq, qd, ti, none, td, none, msg, sizeof msg, &t2) >= 0 &&
+          t2 != NULL);
+    /* the map at the drain temperature's tested mean; asked at the inlet's 318.15 K it is extrapolated */
+    CHECK(pumploss_test_stand_map_temperature(t2, &tm, &mum, &tlo, &thi) == PUMPLOSS_OK && near_rel(tm, 323.15, 1e-12));
+    pumploss_test_stand_destroy(t2);
+    t2 = NULL;
+    CHECK(pumploss_test_stand_setup_set_map(s2, 500.0 / 60, 1500.0 / 60, 20e5, 250e5, 318.15, 5, 4) == PUMPLOSS_OK);
+    CHECK(pumploss_test_stand_create(s2, 30, n, p1, p2, q, tq, qd, ti, none, td, none, msg, sizeof msg, &t2) ==
+          PUMPLOSS_WEXTRAPOLATED && t2 != NULL);
+    CHECK(pumploss_test_stand_map_temperature(t2, &tm, &mum, &tlo, &thi) == PUMPLOSS_WEXTRAPOLATED && tm == 318.15);
+    pumploss_test_stand_destroy(t2);
+    pumploss_test_stand_setup_destroy(s2);
+  }
   CHECK(pumploss_test_stand_displacement(t, PUMPLOSS_TS_DISPLACEMENT_USED, &v, &u) == PUMPLOSS_OK &&
         near_rel(v, 71e-6, 1e-10));
   CHECK(pumploss_test_stand_displacement(t, PUMPLOSS_TS_DISPLACEMENT_SLOPE, &v, &u) == PUMPLOSS_OK &&

@@ -126,10 +126,16 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   for (const auto& p : res.points) {
     if (!pumploss::is_usable(p.st)) continue;  // an error status comes with NaN numbers, by the rule
     check(std::isfinite(p.eta.eta_t.value) && std::isfinite(p.eta.eta_t.U), "a usable point with a non-finite number");
-    // (its flow residual may be NaN: when no loss model could be fitted there is no residual; to
-    // be tightened once the reduction reports that per point)
+    // the residuals: finite under a usable fit status, NaN under an error one (the missing fit, per point)
+    check(pumploss::is_usable(p.fit_st) == (std::isfinite(p.flow_residual_m3_s) && std::isfinite(p.torque_residual_n_m)),
+          "a point's residuals disagree with its fit status");
   }
   check(!res.models.empty() && res.maps.size() == res.models.size(), "no model");
+  std::size_t outlier_reports = 0;  // every flagged set point has its outlier report, and the run says so
+  for (const auto& m : res.messages) outlier_reports += m.st == pumploss::status::outlier ? 1u : 0u;
+  check(outlier_reports == res.outliers && (res.outliers == 0 || res.st == pumploss::status::outlier),
+        "outliers without their status");
+  check(std::isfinite(res.map_temperature_k) && res.map_mu_pa_s > 0, "no map temperature");
   for (const auto& mp : res.maps) {
     check(mp.eta_t.size() == s.map_speeds * s.map_pressures, "map size");
     for (std::size_t k = 0; k < mp.eta_t.size(); ++k)
