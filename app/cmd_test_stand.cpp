@@ -296,6 +296,7 @@ int run_test_stand(const stand_options& o) {
   output_set files;
   files.add("test_stand_map.csv", render_csv(tmap, du));
   files.add("test_stand_map.svg", p.render());
+  files.add("test_stand_baseline.toml", baseline_file_text(setup, o.data, d, res));  // health's baseline (issue 16)
   emit(r, files, o.out, du, "test_stand");
   return exit_ok;
 }
