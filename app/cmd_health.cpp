@@ -10,6 +10,7 @@
 #include <cctype>
 #include <deque>
 #include <filesystem>
+#include <map>
 #include <optional>
 #include <tuple>
 #include <cmath>
@@ -176,9 +177,6 @@ int run_health(const health_options& o) {
   bands.hot_margin = p.hot_margin;
   bands.hot_baseline_factor = p.hot_baseline_factor;
 
-  if (p.clearance_from_drain && !has("drain temperature"))
-    throw input_error(o.pump, 0, 0,
-                      "[health] clearance_temperature = \"drain\" needs a 'drain temperature' column in " + o.readings);
 
   pumploss::health_reference<double> ref{};
   ref.max_displacement_m3_rev = p.max_displacement_m3_rev;
@@ -259,6 +257,7 @@ int run_health(const health_options& o) {
     pumploss::health_reading<double> rd;
   };
   std::deque<row_info> waiting;
+  std::map<unsigned, std::string> reasons_text;
   std::optional<input_error> failure;
   std::vector<float> plot_x, plot_qn, plot_q;  // scored readings, display units
   auto lower = [](std::string s) {
@@ -309,9 +308,10 @@ int run_health(const health_options& o) {
                           std::string(pumploss::health_level_name(a.level))};
     w_t.row(row);
     h_t.add(std::move(row));
-    std::string why;
-    for (unsigned bit = 1; bit != 0 && bit <= a.reasons; bit <<= 1)
-      if (a.reasons & bit) why += (why.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
+    auto& why = reasons_text[a.reasons];  // the sentences of a combination of reasons, made once
+    if (why.empty())
+      for (unsigned bit = 1; bit != 0 && bit <= a.reasons; bit <<= 1)
+        if (a.reasons & bit) why += (why.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
     std::vector<cell> wr{ri.date, std::string(pumploss::health_level_name(a.level)), why, note};
     w_tr.row(wr);
     h_tr.add(std::move(wr));
@@ -324,17 +324,38 @@ int run_health(const health_options& o) {
   // a temperature column that looks like degF under a degC header is refused as a whole: kept
   // until the end (8 bytes a reading)
   std::vector<double> t_oil, t_drain;
-  const auto is_degc = [&](std::size_t k) {
-    return hd.present[k] && hd.unit[k] != nullptr && std::string(hd.unit[k]->symbol) == "degC";
-  };
-  const bool keep_oil = is_degc(k_oil), keep_drain = has("drain temperature") && is_degc(k_dt);
-  int first_line = 0, first_pos_oil = 0, first_pos_dt = 0;
-
   std::vector<std::string> event_notes;
   std::size_t n = 0;
   double last_date = 0, last_hours = 0;
   std::string first_date_text, last_date_text;
   pumploss::table_row row;
+  const auto is_degc = [&](std::size_t k) {
+    return hd.present[k] && hd.unit[k] != nullptr && std::string(hd.unit[k]->symbol) == "degC";
+  };
+  const bool keep_oil = is_degc(k_oil), keep_drain = has("drain temperature") && is_degc(k_dt);
+  int first_line = 0, first_pos_oil = 0, first_pos_dt = 0;
+  auto check_fahrenheit = [&] {
+    for (const auto& [col, vals, pos] : {std::tuple<const char*, const std::vector<double>*, int>{"oil temperature", &t_oil, first_pos_oil},
+                                         {"drain temperature", &t_drain, first_pos_dt}}) {
+      if (vals->empty()) continue;
+      std::vector<double> work(vals->size());
+      if (pumploss::health_temperatures_look_fahrenheit(vals->data(), vals->size(), bands, work.data()))
+        throw input_error(o.readings, first_line, pos,
+                          std::string("column '") + col + "': the values look like degF under a degC header (median "
+                          "above 85 degC, plausible oil temperatures when read as degF): fix the header's unit or the values");
+    }
+  };
+  if (p.clearance_from_drain && !has("drain temperature")) {  // the file's units are checked first
+    for (; in.next(row); ++n) {
+      if (n == 0) first_line = row.line, first_pos_oil = row.pos[k_oil];
+      if (keep_oil) t_oil.push_back(row.values[k_oil]);
+    }
+    if (pumploss::is_error(in.error().st)) throw input_error(o.readings, in.error().line, in.error().column, in.error().message);
+    check_fahrenheit();
+    throw input_error(o.pump, 0, 0,
+                      "[health] clearance_temperature = \"drain\" needs a 'drain temperature' column in " + o.readings);
+  }
+
   while (in.next(row)) {
     const auto& v = row.values;
     auto fail = [&](std::size_t k, const std::string& what) {
@@ -392,15 +413,7 @@ int run_health(const health_options& o) {
   if (pumploss::is_error(in.error().st)) throw input_error(o.readings, in.error().line, in.error().column, in.error().message);
   const auto sum = series.finish();
   if (failure) throw *failure;
-  for (const auto& [col, vals, pos] : {std::tuple<const char*, const std::vector<double>*, int>{"oil temperature", &t_oil, first_pos_oil},
-                                       {"drain temperature", &t_drain, first_pos_dt}}) {
-    if (vals->empty()) continue;
-    std::vector<double> work(vals->size());
-    if (pumploss::health_temperatures_look_fahrenheit(vals->data(), vals->size(), bands, work.data()))
-      throw input_error(o.readings, first_line, pos,
-                        std::string("column '") + col + "': the values look like degF under a degC header (median "
-                        "above 85 degC, plausible oil temperatures when read as degF): fix the header's unit or the values");
-  }
+  check_fahrenheit();
   std::vector<double>().swap(t_oil);
   std::vector<double>().swap(t_drain);
   if (sum.scored == 0) throw input_error(o.readings, 0, 0, "every reading was refused: nothing to score");

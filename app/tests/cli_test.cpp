@@ -1169,13 +1169,14 @@ TEST(CliHealth, BaselineFileFromTestStand) {
 TEST(CliHealth, ManyReadingsAreSummarised) {
   temp_dir tmp;
   // 5000 invented readings, a reading every 3 hours of running (the demo pump at 50 degC)
-  std::string csv = "date,operating hours,outlet pressure [bar],oil temperature [degC],speed [rpm],drain flow [L/min]\n";
+  std::string csv =
+      "date,operating hours,outlet pressure [bar],oil temperature [degC],speed [rpm],drain flow [L/min],drain temperature [degC]\n";
   const long d0 = pumploss::days_from_civil(2023, 1, 1);
   for (int i = 0; i < 5000; ++i) {
     const double hours = 100 + 3.0 * i;
     const double q = 3.1 * (1 + 2e-5 * hours) * (1 + 0.01 * std::sin(1.7 * i));
     char line[96];
-    std::snprintf(line, sizeof line, ",%.1f,250,50,1500,%.4f\n", hours, i == 777 ? 0.0 : q);
+    std::snprintf(line, sizeof line, ",%.1f,250,50,1500,%.4f,54\n", hours, i == 777 ? 0.0 : q);
     csv += pumploss::civil_from_days(d0 + static_cast<long>(hours / 24)) + line;
   }
   const std::string file = tmp / "many.csv", out = tmp / "out";
