@@ -12,7 +12,9 @@
 #include <filesystem>
 #include <map>
 #include <optional>
+#include <string_view>
 #include <tuple>
+#include <variant>
 #include <cmath>
 #include <limits>
 #include <vector>
@@ -128,30 +130,41 @@ constexpr std::size_t text_rows_end = 10;
 
 // Keep the head and the tail of a table's rows for the text (the CSV holds every row).
 struct head_tail {
-  std::vector<std::vector<cell>> head, tail;
+  std::vector<std::vector<cell>> head, ring;  // the first rows, the last ones in a ring (reused)
   std::size_t count = 0;
-  void add(std::vector<cell> row) {
-    ++count;
+  void add(const std::vector<cell>& row) {
     if (head.size() < text_rows_max) {
-      head.push_back(std::move(row));
-      return;
+      head.push_back(row);
+    } else {
+      const std::size_t k = (count - text_rows_max) % text_rows_end;
+      if (ring.size() <= k) ring.push_back(row);
+      else ring[k] = row;  // copy-assignment keeps the strings' storage
     }
-    tail.push_back(std::move(row));
-    if (tail.size() > 2 * text_rows_end) tail.erase(tail.begin(), tail.begin() + static_cast<std::ptrdiff_t>(text_rows_end));
+    ++count;
   }
   void into(table& t, const std::string& csv_name) {
-    t.rows = std::move(head);
-    if (count > text_rows_max) {
-      t.rows.resize(text_rows_end);
-      std::vector<cell> gap(t.cols.size(), std::string());
-      gap[0] = fmt::format("... {} rows", count - 2 * text_rows_end);
-      if (gap.size() > 1) gap[1] = "(all in " + csv_name + ")";
-      t.rows.push_back(gap);
-      const std::size_t k = std::min(tail.size(), text_rows_end);
-      for (std::size_t i = tail.size() - k; i < tail.size(); ++i) t.rows.push_back(std::move(tail[i]));
+    if (count <= text_rows_max) {
+      t.rows = std::move(head);
+      return;
     }
+    const std::size_t after = count - text_rows_max;  // rows past the head, the last of them in the ring
+    std::vector<std::vector<cell>> last(head.end() - static_cast<std::ptrdiff_t>(text_rows_end), head.end());
+    for (std::size_t j = after > text_rows_end ? after - text_rows_end : 0; j < after; ++j)
+      last.push_back(std::move(ring[j % text_rows_end]));
+    t.rows.assign(head.begin(), head.begin() + static_cast<std::ptrdiff_t>(text_rows_end));
+    std::vector<cell> gap(t.cols.size(), std::string());
+    gap[0] = fmt::format("... {} rows", count - 2 * text_rows_end);
+    if (gap.size() > 1) gap[1] = "(all in " + csv_name + ")";
+    t.rows.push_back(gap);
+    for (std::size_t i = last.size() - text_rows_end; i < last.size(); ++i) t.rows.push_back(std::move(last[i]));
   }
 };
+
+// Set a cell to a text, keeping its storage when it holds one already.
+void set_text(cell& c, std::string_view s) {
+  if (auto* p = std::get_if<std::string>(&c)) p->assign(s.data(), s.size());
+  else c = std::string(s);
+}
 
 int run_health(const health_options& o) {
   const display_units du = make_units(o.out);
@@ -167,6 +180,9 @@ int run_health(const health_options& o) {
                     k_case = k_of("case pressure"), k_note = k_of("note"), k_hours = k_of("operating hours"),
                     k_state = k_of("state"), k_event = k_of("event");
   const bool hours = has("operating hours");
+  // looked up once: the row loop runs a million times
+  const bool has_case = has("case pressure"), has_event = has("event"), has_state = has("state"),
+             has_dt = has("drain temperature"), has_note = has("note");
 
   pumploss::health_bands<double> bands;
   bands.sound_max = p.fraction_bands[0];
@@ -258,6 +274,7 @@ int run_health(const health_options& o) {
   };
   std::deque<row_info> waiting;
   std::map<unsigned, std::string> reasons_text;
+  std::vector<cell> row_cells(t.cols.size(), 0.0), why_cells(tr.cols.size(), std::string());
   std::optional<input_error> failure;
   std::vector<float> plot_x, plot_qn, plot_q;  // scored readings, display units
   auto lower = [](std::string s) {
@@ -273,48 +290,64 @@ int run_health(const health_options& o) {
     if (failure) return;
     const auto& a = res.a;
     const auto& rd = ri.rd;
-    std::string note = ri.note;
-    if (!ri.event.empty()) note += (note.empty() ? "" : "; ") + std::string("event: ") + ri.event;
-    if (a.st == status::out_of_validity) {
+    const bool refused = a.st == status::out_of_validity;
+    if (refused) {
       for (unsigned bit = 1; bit != 0 && bit <= a.refused; bit <<= 1)
         if (a.refused & bit) {
           const char* col = refusal_column(bit, p.clearance_from_drain);
           const std::string c(col);
           const int pos = c == "drain temperature" ? ri.pos_dt : c == "oil temperature" ? ri.pos_oil
                           : c == "speed" ? ri.pos_speed : c == "outlet pressure" ? ri.pos_out : ri.pos_drain;
-          std::vector<cell> row{ri.date, where(o.readings, ri.line, pos).substr(0, where(o.readings, ri.line, pos).size() - 2),
-                                std::string(pumploss::health_refusal_text(bit))};
+          const std::string at = where(o.readings, ri.line, pos);
+          std::vector<cell> row{ri.date, at.substr(0, at.size() - 2), std::string(pumploss::health_refusal_text(bit))};
           w_tx.row(row);
-          h_tx.add(std::move(row));
+          h_tx.add(row);
         }
-      std::vector<cell> row{ri.date, rd.outlet_pa, ri.oil_t_k, rd.speed_rev_s, rd.drain_flow_m3_s,
-                            std::string("-"), std::string("-"), std::string("-"), std::string("-"), std::string("-"),
-                            std::string(pumploss::operating_state_name(rd.state)), std::string("refused")};
-      w_t.row(row);
-      h_t.add(std::move(row));
-      std::vector<cell> why{ri.date, std::string("refused"), std::string("see the refused readings"), note};
-      w_tr.row(why);
-      h_tr.add(std::move(why));
-      return;
-    }
-    if (pumploss::is_error(a.st)) {
+    } else if (pumploss::is_error(a.st)) {
       failure = err_at(ri, ri.pos_drain, "drain flow", std::string("this reading cannot be assessed: ") +
                                                            pumploss::status_message(static_cast<int>(a.st)));
       return;
     }
-    std::vector<cell> row{ri.date, rd.outlet_pa, ri.oil_t_k, rd.speed_rev_s, rd.drain_flow_m3_s,
-                          a.drain_at_reference_m3_s, a.fraction_at_reference, a.growth, a.drain_rise_k,
-                          a.throttling_rise_k, std::string(pumploss::operating_state_name(rd.state)),
-                          std::string(pumploss::health_level_name(a.level))};
-    w_t.row(row);
-    h_t.add(std::move(row));
-    auto& why = reasons_text[a.reasons];  // the sentences of a combination of reasons, made once
-    if (why.empty())
-      for (unsigned bit = 1; bit != 0 && bit <= a.reasons; bit <<= 1)
-        if (a.reasons & bit) why += (why.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
-    std::vector<cell> wr{ri.date, std::string(pumploss::health_level_name(a.level)), why, note};
+    // one reused row of cells per table: no allocation per reading once the strings have grown
+    auto& c = row_cells;
+    set_text(c[0], ri.date);
+    c[1] = rd.outlet_pa;
+    c[2] = ri.oil_t_k;
+    c[3] = rd.speed_rev_s;
+    c[4] = rd.drain_flow_m3_s;
+    if (refused) {
+      for (std::size_t j = 5; j < 10; ++j) set_text(c[j], "-");
+    } else {
+      c[5] = a.drain_at_reference_m3_s;
+      c[6] = a.fraction_at_reference;
+      c[7] = a.growth;
+      c[8] = a.drain_rise_k;
+      c[9] = a.throttling_rise_k;
+    }
+    set_text(c[10], pumploss::operating_state_name(rd.state));
+    set_text(c[11], refused ? "refused" : pumploss::health_level_name(a.level));
+    w_t.row(c);
+    h_t.add(c);
+    auto& wr = why_cells;
+    set_text(wr[0], ri.date);
+    set_text(wr[1], refused ? "refused" : pumploss::health_level_name(a.level));
+    if (refused) {
+      set_text(wr[2], "see the refused readings");
+    } else {
+      auto& why = reasons_text[a.reasons];  // the sentences of a combination of reasons, made once
+      if (why.empty())
+        for (unsigned bit = 1; bit != 0 && bit <= a.reasons; bit <<= 1)
+          if (a.reasons & bit) why += (why.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
+      set_text(wr[2], why);
+    }
+    if (ri.event.empty()) {
+      set_text(wr[3], ri.note);
+    } else {
+      set_text(wr[3], ri.note + (ri.note.empty() ? "" : "; ") + "event: " + ri.event);
+    }
     w_tr.row(wr);
-    h_tr.add(std::move(wr));
+    h_tr.add(wr);
+    if (refused) return;
     plot_x.push_back(static_cast<float>(ri.date_days));
     plot_qn.push_back(static_cast<float>(du.show(a.drain_at_reference_m3_s, D::volume_flow)));
     plot_q.push_back(static_cast<float>(du.show(rd.drain_flow_m3_s, D::volume_flow)));
@@ -362,7 +395,7 @@ int run_health(const health_options& o) {
       return input_error(o.readings, row.line, row.pos[k], "column '" + spec[k].name + "': " + what);
     };
     // hard limits of the file only; what oil and pump can be at is the library's plausibility check
-    if (has("case pressure") && !(v[k_case] >= -1e5 && v[k_case] <= 1e7))
+    if (has_case && !(v[k_case] >= -1e5 && v[k_case] <= 1e7))
       throw fail(k_case, "'" + row.texts[k_case] + "' is not a case pressure between -1 and 100 bar");
     if (n > 0 && !(v[k_date] >= last_date)) throw fail(k_date, "dates must not go back in time");
     if (hours) {
@@ -372,19 +405,19 @@ int run_health(const health_options& o) {
     }
     last_date = v[k_date];
     pumploss::health_series_input x;
-    const std::string e = has("event") ? lower(row.texts[k_event]) : std::string();
+    const std::string e = has_event ? lower(row.texts[k_event]) : std::string();
     if (e == "oil change") x.event = pumploss::health_event::oil_change;
     else if (e == "overhaul") x.event = pumploss::health_event::overhaul;
     else if (e == "meter change") x.event = pumploss::health_event::meter_change;
     else if (!e.empty()) throw fail(k_event, "unknown event '" + e + "' (oil change, overhaul, meter change)");
-    const std::string st = has("state") ? lower(row.texts[k_state]) : std::string();
+    const std::string st = has_state ? lower(row.texts[k_state]) : std::string();
     auto state = pumploss::operating_state::on_stroke;
     if (st == "deadhead") state = pumploss::operating_state::deadhead;
     else if (!st.empty() && st != "on stroke") throw fail(k_state, "unknown state '" + st + "' (on stroke, deadhead)");
-    x.reading = {v[k_drain], v[k_out], has("case pressure") ? v[k_case] : 0.0,
+    x.reading = {v[k_drain], v[k_out], has_case ? v[k_case] : 0.0,
                  p.clearance_from_drain ? v[k_dt] : v[k_oil], v[k_speed]};
     x.reading.inlet_t_k = v[k_oil];
-    if (has("drain temperature")) x.reading.drain_t_k = v[k_dt];
+    if (has_dt) x.reading.drain_t_k = v[k_dt];
     x.reading.state = state;
     x.time = hours ? v[k_hours] : v[k_date];
     x.date = v[k_date];
@@ -397,14 +430,14 @@ int run_health(const health_options& o) {
     if (n == 0) {
       first_line = row.line;
       first_pos_oil = row.pos[k_oil];
-      first_pos_dt = has("drain temperature") ? row.pos[k_dt] : 0;
+      first_pos_dt = has_dt ? row.pos[k_dt] : 0;
       first_date_text = row.texts[k_date];
     }
     last_date_text = row.texts[k_date];
     if (keep_oil) t_oil.push_back(v[k_oil]);
     if (keep_drain) t_drain.push_back(v[k_dt]);
-    waiting.push_back({row.line, row.texts[k_date], has("note") ? row.texts[k_note] : std::string(), e,
-                       row.pos[k_drain], row.pos[k_oil], has("drain temperature") ? row.pos[k_dt] : 0,
+    waiting.push_back({row.line, row.texts[k_date], has_note ? row.texts[k_note] : std::string(), e,
+                       row.pos[k_drain], row.pos[k_oil], has_dt ? row.pos[k_dt] : 0,
                        row.pos[k_speed], row.pos[k_out], v[k_date], v[k_oil], x.reading});
     (void)series.feed(x);
     if (failure) throw *failure;
@@ -523,9 +556,9 @@ int run_health(const health_options& o) {
     tc.streamed_csv = scratch_path(o.out, "changes");
     csv_file_writer w(tc, du, tc.streamed_csv);
     head_tail ht;
-    for (auto& rw : tc.rows) {
+    for (const auto& rw : tc.rows) {
       w.row(rw);
-      ht.add(std::move(rw));
+      ht.add(rw);
     }
     ht.into(tc, "health_changes.csv");
     tc.streamed_csv = w.release();

@@ -17,6 +17,8 @@ display_units::display_units() {
   const char* defaults[16] = {"bar", "L/min", "cm3", "cm3/rev", "mPa.s", "cSt", "degC", "kW",
                               "N.m", "rpm", "mm", "kg/m3", "m/s", "kg/h", "kJ/(kg.K)", "N"};
   for (std::size_t i = 0; i < 16; ++i) unit_[i] = pumploss::find_unit(defaults[i]);
+  for (std::size_t i = 0; i < 16; ++i)
+    si_[i] = pumploss::find_unit(pumploss::si_symbol(static_cast<pumploss::dimension>(i)));
 }
 
 void display_units::choose(const std::string& symbol) {
@@ -31,12 +33,12 @@ const pumploss::unit_info& display_units::of(pumploss::dimension d) const {
 
 double display_units::show(double si, pumploss::dimension d) const {
   if (!std::isfinite(si)) return si;
-  return pumploss::convert(si, *pumploss::find_unit(pumploss::si_symbol(d)), of(d)).value;
+  return pumploss::convert(si, *si_[static_cast<std::size_t>(d)], of(d)).value;
 }
 
 double display_units::si(double shown, pumploss::dimension d) const {
   if (!std::isfinite(shown)) return shown;
-  return pumploss::convert(shown, of(d), *pumploss::find_unit(pumploss::si_symbol(d))).value;
+  return pumploss::convert(shown, of(d), *si_[static_cast<std::size_t>(d)]).value;
 }
 
 std::string format_sig(double v, int digits) {
@@ -134,11 +136,25 @@ std::string render_text(const report& r, const display_units& u) {
 }
 
 namespace {
-std::string csv_quote(const std::string& s) {
-  if (s.find_first_of(",\"\n") == std::string::npos) return s;
-  std::string q = "\"";
-  for (const char c : s) q += c == '"' ? std::string("\"\"") : std::string(1, c);
-  return q + "\"";
+// Append a field, quoted when it holds ',', '"' or a line end (one pass, no copy: a long table's
+// reasons column is most of its bytes).
+void csv_quote(std::string& out, const std::string& s) {
+  bool plain = true;
+  for (const char c : s)
+    if (c == ',' || c == '"' || c == '\n') {
+      plain = false;
+      break;
+    }
+  if (plain) {
+    out += s;
+    return;
+  }
+  out += '"';
+  for (const char c : s) {
+    if (c == '"') out += '"';
+    out += c;
+  }
+  out += '"';
 }
 }  // namespace
 
@@ -148,7 +164,7 @@ std::string csv_header(const table& t, const display_units& u) {
     if (j > 0) out += ",";
     // percent columns go out as plain numbers with their own name so the file reads back
     const auto& c = t.cols[j];
-    out += csv_quote(c.kind == cell_kind::percent ? c.title + " percent" : heading(c, u));
+    csv_quote(out, c.kind == cell_kind::percent ? c.title + " percent" : heading(c, u));
   }
   return out + "\n";
 }
@@ -157,7 +173,7 @@ void csv_row(std::string& out, const table& t, const std::vector<cell>& row, con
   for (std::size_t j = 0; j < row.size(); ++j) {
     if (j > 0) out += ",";
     if (const auto* s = std::get_if<std::string>(&row[j])) {
-      out += csv_quote(*s);
+      csv_quote(out, *s);
     } else {
       const double v = shown_value(t.cols[j], std::get<double>(row[j]), u);
       if (std::isfinite(v)) {  // as "{:.10g}" (printf's %.10g), without fmt's slow precision path

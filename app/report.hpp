@@ -29,6 +29,7 @@ class display_units {
 
  private:
   std::array<const pumploss::unit_info*, 16> unit_{};
+  std::array<const pumploss::unit_info*, 16> si_{};  // the SI unit per dimension, looked up once
 };
 
 /// How a column is shown.
