@@ -47,7 +47,12 @@ void emit(const report& r, const output_set& files, const output_options& o, con
   }
   output_set all;
   all.add(stem + ".txt", text);
-  for (const auto& t : r.tables) all.add(stem + "_" + t.name + ".csv", render_csv(t, u));
+  for (const auto& t : r.tables) {
+    if (t.streamed_csv.empty())
+      all.add(stem + "_" + t.name + ".csv", render_csv(t, u));
+    else
+      all.add_file(stem + "_" + t.name + ".csv", t.streamed_csv);
+  }
   for (const auto& [name, content] : files.items()) all.add(name, content);
   const auto written = all.write_all(o.out_dir);
   std::fputs(text.c_str(), stdout);

@@ -5,7 +5,16 @@
 #include <CLI/CLI.hpp>
 #include <fmt/format.h>
 
+#include <algorithm>
+#include <array>
 #include <cctype>
+#include <deque>
+#include <filesystem>
+#include <map>
+#include <optional>
+#include <string_view>
+#include <tuple>
+#include <variant>
 #include <cmath>
 #include <limits>
 #include <vector>
@@ -14,6 +23,8 @@
 #include "common.hpp"
 #include "inputs.hpp"
 #include "pumploss/health.hpp"
+#include "pumploss/health_series.hpp"
+#include "pumploss/table_reader.hpp"
 #include "pumploss/version.hpp"
 #include "svg.hpp"
 
@@ -60,23 +71,118 @@ std::string projection_text(const pumploss::health_projection_result<double>& pr
   return s;
 }
 
+// The plot's points: every scored reading up to this count, above it a median and a 10-90 %
+// band per period (a plot of a million points is a solid block).
+constexpr std::size_t plot_points_max = 3000;
+constexpr std::size_t plot_periods = 120;
+
+// Median and the 10 % and 90 % quantiles (nearest rank) of `v`, which is reordered.
+std::array<double, 3> median_band(std::vector<float>& v) {
+  auto at = [&](double q) {
+    const auto k = static_cast<std::size_t>(std::lround(q * static_cast<double>(v.size() - 1)));
+    std::nth_element(v.begin(), v.begin() + static_cast<std::ptrdiff_t>(k), v.end());
+    return static_cast<double>(v[k]);
+  };
+  return {at(0.5), at(0.1), at(0.9)};
+}
+
+// Per-period median and band of (x, y) pairs: x the date, periods of equal length.
+struct period_stats {
+  std::vector<double> x, median, lo, hi;
+  double days = 0;
+};
+period_stats aggregate(const std::vector<float>& x, const std::vector<float>& y) {
+  period_stats out;
+  const auto [mn, mx] = std::minmax_element(x.begin(), x.end());
+  const double x0 = static_cast<double>(*mn), span = std::max(1.0, static_cast<double>(*mx) - x0);
+  out.days = span / plot_periods;
+  std::vector<std::vector<float>> bins(plot_periods);
+  for (std::size_t i = 0; i < x.size(); ++i) {
+    auto b = static_cast<std::size_t>((static_cast<double>(x[i]) - x0) / out.days);
+    bins[std::min(b, plot_periods - 1)].push_back(y[i]);
+  }
+  for (std::size_t b = 0; b < plot_periods; ++b) {
+    if (bins[b].empty()) continue;
+    const auto m = median_band(bins[b]);
+    out.x.push_back(x0 + (static_cast<double>(b) + 0.5) * out.days);
+    out.median.push_back(m[0]);
+    out.lo.push_back(m[1]);
+    out.hi.push_back(m[2]);
+    std::vector<float>().swap(bins[b]);
+  }
+  return out;
+}
+
+// A scratch file beside the output folder (the folder itself is made only when all went well).
+std::string scratch_path(const output_options& out, const std::string& name) {
+  if (out.out_dir.empty()) return {};
+  namespace fs = std::filesystem;
+  fs::path dir(out.out_dir);
+  if (!dir.has_filename()) dir = dir.parent_path();
+  const fs::path parent = dir.parent_path();
+  if (!parent.empty()) fs::create_directories(parent);
+  return (parent / ("." + dir.filename().string() + "." + name + ".partial")).string();
+}
+
+// Rows of a long table shown in the text report: all up to this count, else the head and tail.
+constexpr std::size_t text_rows_max = 60;
+constexpr std::size_t text_rows_end = 10;
+
+// Keep the head and the tail of a table's rows for the text (the CSV holds every row).
+struct head_tail {
+  std::vector<std::vector<cell>> head, ring;  // the first rows, the last ones in a ring (reused)
+  std::size_t count = 0;
+  void add(const std::vector<cell>& row) {
+    if (head.size() < text_rows_max) {
+      head.push_back(row);
+    } else {
+      const std::size_t k = (count - text_rows_max) % text_rows_end;
+      if (ring.size() <= k) ring.push_back(row);
+      else ring[k] = row;  // copy-assignment keeps the strings' storage
+    }
+    ++count;
+  }
+  void into(table& t, const std::string& csv_name) {
+    if (count <= text_rows_max) {
+      t.rows = std::move(head);
+      return;
+    }
+    const std::size_t after = count - text_rows_max;  // rows past the head, the last of them in the ring
+    std::vector<std::vector<cell>> last(head.end() - static_cast<std::ptrdiff_t>(text_rows_end), head.end());
+    for (std::size_t j = after > text_rows_end ? after - text_rows_end : 0; j < after; ++j)
+      last.push_back(std::move(ring[j % text_rows_end]));
+    t.rows.assign(head.begin(), head.begin() + static_cast<std::ptrdiff_t>(text_rows_end));
+    std::vector<cell> gap(t.cols.size(), std::string());
+    gap[0] = fmt::format("... {} rows", count - 2 * text_rows_end);
+    if (gap.size() > 1) gap[1] = "(all in " + csv_name + ")";
+    t.rows.push_back(gap);
+    for (std::size_t i = last.size() - text_rows_end; i < last.size(); ++i) t.rows.push_back(std::move(last[i]));
+  }
+};
+
+// Set a cell to a text, keeping its storage when it holds one already.
+void set_text(cell& c, std::string_view s) {
+  if (auto* p = std::get_if<std::string>(&c)) p->assign(s.data(), s.size());
+  else c = std::string(s);
+}
+
 int run_health(const health_options& o) {
   const display_units du = make_units(o.out);
   const auto p = read_pump(o.pump);
-  auto spec = field_columns();
-  const auto d = read_csv(o.readings, spec, o.csv_format);
-  // hard limits of the file only; what oil and pump can be at is the library's plausibility check
-  d.check_range("case pressure", -1e5, 1e7, "is not a case pressure between -1 and 100 bar");
-  const auto& dates = d.si("date");
-  for (std::size_t i = 1; i < d.rows(); ++i)
-    if (!(dates[i] >= dates[i - 1])) throw d.error(i, "date", "dates must not go back in time");
-  const bool hours = d.has("operating hours");
-  if (hours)
-    for (std::size_t i = 0; i < d.rows(); ++i) {
-      if (!(d.si("operating hours")[i] >= 0)) throw d.error(i, "operating hours", "must not be negative");
-      if (i > 0 && !(d.si("operating hours")[i] >= d.si("operating hours")[i - 1]))
-        throw d.error(i, "operating hours", "operating hours must not go back");
-    }
+  const auto spec = field_columns();
+  pumploss::table_stream in(o.readings, spec, o.csv_format);
+  if (pumploss::is_error(in.error().st)) throw input_error(o.readings, in.error().line, in.error().column, in.error().message);
+  const auto& hd = in.header();
+  auto has = [&](const char* c) { return hd.has(c); };
+  auto k_of = [&](const char* c) { return hd.find(c); };
+  const std::size_t k_date = k_of("date"), k_out = k_of("outlet pressure"), k_oil = k_of("oil temperature"),
+                    k_speed = k_of("speed"), k_drain = k_of("drain flow"), k_dt = k_of("drain temperature"),
+                    k_case = k_of("case pressure"), k_note = k_of("note"), k_hours = k_of("operating hours"),
+                    k_state = k_of("state"), k_event = k_of("event");
+  const bool hours = has("operating hours");
+  // looked up once: the row loop runs a million times
+  const bool has_case = has("case pressure"), has_event = has("event"), has_state = has("state"),
+             has_dt = has("drain temperature"), has_note = has("note");
 
   pumploss::health_bands<double> bands;
   bands.sound_max = p.fraction_bands[0];
@@ -87,20 +193,6 @@ int run_health(const health_options& o) {
   bands.hot_margin = p.hot_margin;
   bands.hot_baseline_factor = p.hot_baseline_factor;
 
-  // a temperature column that looks like degF under a degC header is refused as a whole
-  for (const char* col : {"oil temperature", "drain temperature"}) {
-    if (!d.has(col)) continue;
-    const auto* u = d.unit[d.col(col)];
-    if (u == nullptr || std::string(u->symbol) != "degC") continue;
-    std::vector<double> work(d.rows());
-    if (pumploss::health_temperatures_look_fahrenheit(d.si(col).data(), d.rows(), bands, work.data()))
-      throw d.error(0, col, "the values look like degF under a degC header (median above 85 degC, plausible oil "
-                            "temperatures when read as degF): fix the header's unit or the values");
-  }
-
-  if (p.clearance_from_drain && !d.has("drain temperature"))
-    throw input_error(o.pump, 0, 0,
-                      "[health] clearance_temperature = \"drain\" needs a 'drain temperature' column in " + o.readings);
 
   pumploss::health_reference<double> ref{};
   ref.max_displacement_m3_rev = p.max_displacement_m3_rev;
@@ -118,14 +210,16 @@ int run_health(const health_options& o) {
   if (!p.fit_pressures_pa.empty()) {
     std::vector<pumploss::health_reading<double>> base;
     for (std::size_t k = 0; k < p.fit_pressures_pa.size(); ++k)
-      base.push_back({p.fit_drain_m3_s[k], p.fit_pressures_pa[k], 0.0, p.fit_temperatures_k[k], p.reference_speed_rev_s});
+      base.push_back({p.fit_drain_m3_s[k], p.fit_pressures_pa[k], k < p.fit_case_pa.size() ? p.fit_case_pa[k] : 0.0,
+                      p.fit_temperatures_k[k], p.reference_speed_rev_s});
     const auto f = pumploss::health_fit_constant(ref, base.data(), base.size());
     if (pumploss::is_error(f.st))
       throw input_error(o.pump, 0, 0, std::string("[health] baseline_fit_*: the constant part cannot be fitted: ") +
                                           status_text(f.st));
     ref.constant_m3_s = f.constant_m3_s;
     ref.baseline_m3_s = f.baseline_m3_s;
-    constant_source = fmt::format("fitted from {} baseline readings{}", base.size(),
+    constant_source = fmt::format("fitted from {} baseline readings{}{}", base.size(),
+                                  p.baseline_file.empty() ? "" : " of " + p.baseline_file,
                                   f.st == status::implausible ? " (a negative fit was set to zero)" : "");
     baseline_source = constant_source;
   }
@@ -135,59 +229,6 @@ int run_health(const health_options& o) {
     if (pumploss::is_error(chk.st))
       throw input_error(o.pump, 0, 0, std::string("[health] the description cannot be used: ") + status_text(chk.st) +
                                           " (is the constant part below the baseline?)");
-  }
-
-  const std::size_t n = d.rows();
-  const auto& date_text = d.texts[d.col("date")];
-  const bool has_note = d.has("note");
-  auto text_of = [&](const char* col, std::size_t i) { return d.has(col) ? d.texts[d.col(col)][i] : std::string(); };
-  auto lower = [](std::string s) {
-    for (auto& c : s) c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
-    return std::string(trim(s));
-  };
-  std::vector<event_kind> events(n, event_kind::none);
-  std::vector<pumploss::operating_state> states(n, pumploss::operating_state::on_stroke);
-  for (std::size_t i = 0; i < n; ++i) {
-    const auto e = lower(text_of("event", i));
-    if (e == "oil change") events[i] = event_kind::oil_change;
-    else if (e == "overhaul") events[i] = event_kind::overhaul;
-    else if (e == "meter change") events[i] = event_kind::meter_change;
-    else if (!e.empty()) throw d.error(i, "event", "unknown event '" + e + "' (oil change, overhaul, meter change)");
-    const auto st = lower(text_of("state", i));
-    if (st == "deadhead") states[i] = pumploss::operating_state::deadhead;
-    else if (!st.empty() && st != "on stroke") throw d.error(i, "state", "unknown state '" + st + "' (on stroke, deadhead)");
-  }
-  auto reading_at = [&](std::size_t i) {
-    pumploss::health_reading<double> rd{d.si("drain flow")[i], d.si("outlet pressure")[i],
-                                        d.has("case pressure") ? d.si("case pressure")[i] : 0.0,
-                                        p.clearance_from_drain ? d.si("drain temperature")[i] : d.si("oil temperature")[i],
-                                        d.si("speed")[i]};
-    rd.inlet_t_k = d.si("oil temperature")[i];
-    if (d.has("drain temperature")) rd.drain_t_k = d.si("drain temperature")[i];
-    rd.state = states[i];
-    return rd;
-  };
-
-  // pass 1: normalise (the baseline plays no part); an overhaul starts a new baseline from the
-  // mean of its first three accepted readings
-  std::vector<double> base_of(n, ref.baseline_m3_s);
-  {
-    double current = ref.baseline_m3_s;
-    for (std::size_t i = 0; i < n; ++i) {
-      if (events[i] == event_kind::overhaul) {
-        double sum = 0;
-        int k = 0;
-        for (std::size_t j = i; j < n && k < 3; ++j) {
-          const auto a = pumploss::assess_health(ref, bands, reading_at(j));
-          if (!pumploss::is_error(a.st)) {
-            sum += a.drain_at_reference_m3_s;
-            ++k;
-          }
-        }
-        if (k > 0) current = sum / k;
-      }
-      base_of[i] = current;
-    }
   }
 
   table t;
@@ -218,77 +259,200 @@ int run_health(const health_options& o) {
   tx.cols = {{"date", cell_kind::text, D::pressure, 0},
              {"where", cell_kind::text, D::pressure, 0},
              {"reason", cell_kind::text, D::pressure, 0}};
-  // accepted readings: index, time, normalised flow, fraction, segment
-  std::vector<std::size_t> acc;
-  std::vector<double> time, qn, frac;
-  std::vector<int> seg;
-  int segment = 0;
-  std::size_t scored = 0;
-  svg::series normalised{"normalised drain flow", {}, {}, true, true, false};
-  svg::series as_read{"drain flow as read", {}, {}, false, true, false};
-  pumploss::health_assessment<double> last{};
-  std::string last_date;
-  std::vector<std::string> event_notes;
-  for (std::size_t i = 0; i < n; ++i) {
-    if (events[i] == event_kind::overhaul || events[i] == event_kind::meter_change) ++segment;
-    if (events[i] != event_kind::none)
-      event_notes.push_back(date_text[i] + " " + lower(text_of("event", i)) +
-                            (events[i] == event_kind::overhaul      ? " (new baseline, steps and trend restart)"
-                             : events[i] == event_kind::meter_change ? " (steps and trend restart)"
-                                                                     : " (annotated)"));
-    auto ri = ref;
-    ri.baseline_m3_s = base_of[i];
-    const auto rd = reading_at(i);
-    const auto a = pumploss::assess_health(ri, bands, rd);
-    std::string note = has_note ? d.texts[d.col("note")][i] : std::string();
-    if (events[i] != event_kind::none) note += (note.empty() ? "" : "; ") + std::string("event: ") + lower(text_of("event", i));
-    if (a.st == status::out_of_validity) {
+  // the per-row CSVs go out as the rows are judged; the text keeps head and tail
+  csv_file_writer w_t(t, du, scratch_path(o.out, "readings")), w_tr(tr, du, scratch_path(o.out, "reasons")),
+      w_tx(tx, du, scratch_path(o.out, "refused"));
+  head_tail h_t, h_tr, h_tx;
+
+  // what a row's result needs once the series hands it back (rows after an overhaul wait a little)
+  struct row_info {
+    int line;
+    std::string date, note, event;
+    int pos_drain, pos_oil, pos_dt, pos_speed, pos_out;
+    double date_days, oil_t_k;
+    pumploss::health_reading<double> rd;
+  };
+  std::deque<row_info> waiting;
+  std::map<unsigned, std::string> reasons_text;
+  std::vector<cell> row_cells(t.cols.size(), 0.0), why_cells(tr.cols.size(), std::string());
+  std::optional<input_error> failure;
+  std::vector<float> plot_x, plot_qn, plot_q;  // scored readings, display units
+  auto lower = [](std::string s) {
+    for (auto& c : s) c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+    return std::string(trim(s));
+  };
+  auto err_at = [&](const row_info& ri, int pos, const char* col, const std::string& what) {
+    return input_error(o.readings, ri.line, pos, std::string("column '") + col + "': " + what);
+  };
+  auto on_row = [&](const pumploss::health_series_row& res) {
+    row_info ri = std::move(waiting.front());
+    waiting.pop_front();
+    if (failure) return;
+    const auto& a = res.a;
+    const auto& rd = ri.rd;
+    const bool refused = a.st == status::out_of_validity;
+    if (refused) {
       for (unsigned bit = 1; bit != 0 && bit <= a.refused; bit <<= 1)
         if (a.refused & bit) {
-          const auto e = d.error(i, refusal_column(bit, p.clearance_from_drain), pumploss::health_refusal_text(bit));
-          tx.rows.push_back({date_text[i], std::string(e.what()).substr(0, std::string(e.what()).find(": ")),
-                             std::string(pumploss::health_refusal_text(bit))});
+          const char* col = refusal_column(bit, p.clearance_from_drain);
+          const std::string c(col);
+          const int pos = c == "drain temperature" ? ri.pos_dt : c == "oil temperature" ? ri.pos_oil
+                          : c == "speed" ? ri.pos_speed : c == "outlet pressure" ? ri.pos_out : ri.pos_drain;
+          const std::string at = where(o.readings, ri.line, pos);
+          std::vector<cell> row{ri.date, at.substr(0, at.size() - 2), std::string(pumploss::health_refusal_text(bit))};
+          w_tx.row(row);
+          h_tx.add(row);
         }
-      t.rows.push_back({date_text[i], rd.outlet_pa, d.si("oil temperature")[i], rd.speed_rev_s, rd.drain_flow_m3_s,
-                        std::string("-"), std::string("-"), std::string("-"), std::string("-"), std::string("-"),
-                        std::string(pumploss::operating_state_name(rd.state)), std::string("refused")});
-      tr.rows.push_back({date_text[i], std::string("refused"), std::string("see the refused readings"), note});
-      continue;
+    } else if (pumploss::is_error(a.st)) {
+      failure = err_at(ri, ri.pos_drain, "drain flow", std::string("this reading cannot be assessed: ") +
+                                                           pumploss::status_message(static_cast<int>(a.st)));
+      return;
     }
-    if (pumploss::is_error(a.st))
-      throw d.error(i, "drain flow", std::string("this reading cannot be assessed: ") +
-                                         pumploss::status_message(static_cast<int>(a.st)));
-    last = a;
-    last_date = date_text[i];
-    t.rows.push_back({date_text[i], rd.outlet_pa, d.si("oil temperature")[i], rd.speed_rev_s, rd.drain_flow_m3_s,
-                      a.drain_at_reference_m3_s, a.fraction_at_reference, a.growth, a.drain_rise_k, a.throttling_rise_k,
-                      std::string(pumploss::operating_state_name(rd.state)),
-                      std::string(pumploss::health_level_name(a.level))});
-    std::string why;
-    for (unsigned bit = 1; bit != 0 && bit <= a.reasons; bit <<= 1)
-      if (a.reasons & bit) why += (why.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
-    tr.rows.push_back({date_text[i], std::string(pumploss::health_level_name(a.level)), why, note});
-    ++scored;
-    normalised.x.push_back(dates[i]);
-    normalised.y.push_back(du.show(a.drain_at_reference_m3_s, D::volume_flow));
-    as_read.x.push_back(dates[i]);
-    as_read.y.push_back(du.show(rd.drain_flow_m3_s, D::volume_flow));
-    if (rd.state != ref.baseline_state) continue;  // steps and trend compare like with like
-    acc.push_back(i);
-    time.push_back(hours ? d.si("operating hours")[i] : dates[i]);
-    qn.push_back(a.drain_at_reference_m3_s);
-    frac.push_back(a.fraction_at_reference);
-    seg.push_back(segment);
+    // one reused row of cells per table: no allocation per reading once the strings have grown
+    auto& c = row_cells;
+    set_text(c[0], ri.date);
+    c[1] = rd.outlet_pa;
+    c[2] = ri.oil_t_k;
+    c[3] = rd.speed_rev_s;
+    c[4] = rd.drain_flow_m3_s;
+    if (refused) {
+      for (std::size_t j = 5; j < 10; ++j) set_text(c[j], "-");
+    } else {
+      c[5] = a.drain_at_reference_m3_s;
+      c[6] = a.fraction_at_reference;
+      c[7] = a.growth;
+      c[8] = a.drain_rise_k;
+      c[9] = a.throttling_rise_k;
+    }
+    set_text(c[10], pumploss::operating_state_name(rd.state));
+    set_text(c[11], refused ? "refused" : pumploss::health_level_name(a.level));
+    w_t.row(c);
+    h_t.add(c);
+    auto& wr = why_cells;
+    set_text(wr[0], ri.date);
+    set_text(wr[1], refused ? "refused" : pumploss::health_level_name(a.level));
+    if (refused) {
+      set_text(wr[2], "see the refused readings");
+    } else {
+      auto& why = reasons_text[a.reasons];  // the sentences of a combination of reasons, made once
+      if (why.empty())
+        for (unsigned bit = 1; bit != 0 && bit <= a.reasons; bit <<= 1)
+          if (a.reasons & bit) why += (why.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
+      set_text(wr[2], why);
+    }
+    if (ri.event.empty()) {
+      set_text(wr[3], ri.note);
+    } else {
+      set_text(wr[3], ri.note + (ri.note.empty() ? "" : "; ") + "event: " + ri.event);
+    }
+    w_tr.row(wr);
+    h_tr.add(wr);
+    if (refused) return;
+    plot_x.push_back(static_cast<float>(ri.date_days));
+    plot_qn.push_back(static_cast<float>(du.show(a.drain_at_reference_m3_s, D::volume_flow)));
+    plot_q.push_back(static_cast<float>(du.show(rd.drain_flow_m3_s, D::volume_flow)));
+  };
+  pumploss::health_series series(ref, bands, on_row);
+
+  // a temperature column that looks like degF under a degC header is refused as a whole: kept
+  // until the end (8 bytes a reading)
+  std::vector<double> t_oil, t_drain;
+  std::vector<std::string> event_notes;
+  std::size_t n = 0;
+  double last_date = 0, last_hours = 0;
+  std::string first_date_text, last_date_text;
+  pumploss::table_row row;
+  const auto is_degc = [&](std::size_t k) {
+    return hd.present[k] && hd.unit[k] != nullptr && std::string(hd.unit[k]->symbol) == "degC";
+  };
+  const bool keep_oil = is_degc(k_oil), keep_drain = has("drain temperature") && is_degc(k_dt);
+  int first_line = 0, first_pos_oil = 0, first_pos_dt = 0;
+  auto check_fahrenheit = [&] {
+    for (const auto& [col, vals, pos] : {std::tuple<const char*, const std::vector<double>*, int>{"oil temperature", &t_oil, first_pos_oil},
+                                         {"drain temperature", &t_drain, first_pos_dt}}) {
+      if (vals->empty()) continue;
+      std::vector<double> work(vals->size());
+      if (pumploss::health_temperatures_look_fahrenheit(vals->data(), vals->size(), bands, work.data()))
+        throw input_error(o.readings, first_line, pos,
+                          std::string("column '") + col + "': the values look like degF under a degC header (median "
+                          "above 85 degC, plausible oil temperatures when read as degF): fix the header's unit or the values");
+    }
+  };
+  if (p.clearance_from_drain && !has("drain temperature")) {  // the file's units are checked first
+    for (; in.next(row); ++n) {
+      if (n == 0) first_line = row.line, first_pos_oil = row.pos[k_oil];
+      if (keep_oil) t_oil.push_back(row.values[k_oil]);
+    }
+    if (pumploss::is_error(in.error().st)) throw input_error(o.readings, in.error().line, in.error().column, in.error().message);
+    check_fahrenheit();
+    throw input_error(o.pump, 0, 0,
+                      "[health] clearance_temperature = \"drain\" needs a 'drain temperature' column in " + o.readings);
   }
-  if (scored == 0) throw input_error(o.readings, 0, 0, "every reading was refused: nothing to score");
-  if (acc.empty())
+
+  while (in.next(row)) {
+    const auto& v = row.values;
+    auto fail = [&](std::size_t k, const std::string& what) {
+      return input_error(o.readings, row.line, row.pos[k], "column '" + spec[k].name + "': " + what);
+    };
+    // hard limits of the file only; what oil and pump can be at is the library's plausibility check
+    if (has_case && !(v[k_case] >= -1e5 && v[k_case] <= 1e7))
+      throw fail(k_case, "'" + row.texts[k_case] + "' is not a case pressure between -1 and 100 bar");
+    if (n > 0 && !(v[k_date] >= last_date)) throw fail(k_date, "dates must not go back in time");
+    if (hours) {
+      if (!(v[k_hours] >= 0)) throw fail(k_hours, "must not be negative");
+      if (n > 0 && !(v[k_hours] >= last_hours)) throw fail(k_hours, "operating hours must not go back");
+      last_hours = v[k_hours];
+    }
+    last_date = v[k_date];
+    pumploss::health_series_input x;
+    const std::string e = has_event ? lower(row.texts[k_event]) : std::string();
+    if (e == "oil change") x.event = pumploss::health_event::oil_change;
+    else if (e == "overhaul") x.event = pumploss::health_event::overhaul;
+    else if (e == "meter change") x.event = pumploss::health_event::meter_change;
+    else if (!e.empty()) throw fail(k_event, "unknown event '" + e + "' (oil change, overhaul, meter change)");
+    const std::string st = has_state ? lower(row.texts[k_state]) : std::string();
+    auto state = pumploss::operating_state::on_stroke;
+    if (st == "deadhead") state = pumploss::operating_state::deadhead;
+    else if (!st.empty() && st != "on stroke") throw fail(k_state, "unknown state '" + st + "' (on stroke, deadhead)");
+    x.reading = {v[k_drain], v[k_out], has_case ? v[k_case] : 0.0,
+                 p.clearance_from_drain ? v[k_dt] : v[k_oil], v[k_speed]};
+    x.reading.inlet_t_k = v[k_oil];
+    if (has_dt) x.reading.drain_t_k = v[k_dt];
+    x.reading.state = state;
+    x.time = hours ? v[k_hours] : v[k_date];
+    x.date = v[k_date];
+    x.row = n;
+    if (x.event != pumploss::health_event::none)
+      event_notes.push_back(row.texts[k_date] + " " + e +
+                            (x.event == pumploss::health_event::overhaul       ? " (new baseline, steps and trend restart)"
+                             : x.event == pumploss::health_event::meter_change ? " (steps and trend restart)"
+                                                                               : " (annotated)"));
+    if (n == 0) {
+      first_line = row.line;
+      first_pos_oil = row.pos[k_oil];
+      first_pos_dt = has_dt ? row.pos[k_dt] : 0;
+      first_date_text = row.texts[k_date];
+    }
+    last_date_text = row.texts[k_date];
+    if (keep_oil) t_oil.push_back(v[k_oil]);
+    if (keep_drain) t_drain.push_back(v[k_dt]);
+    waiting.push_back({row.line, row.texts[k_date], has_note ? row.texts[k_note] : std::string(), e,
+                       row.pos[k_drain], row.pos[k_oil], has_dt ? row.pos[k_dt] : 0,
+                       row.pos[k_speed], row.pos[k_out], v[k_date], v[k_oil], x.reading});
+    (void)series.feed(x);
+    if (failure) throw *failure;
+    ++n;
+  }
+  if (pumploss::is_error(in.error().st)) throw input_error(o.readings, in.error().line, in.error().column, in.error().message);
+  const auto sum = series.finish();
+  if (failure) throw *failure;
+  check_fahrenheit();
+  std::vector<double>().swap(t_oil);
+  std::vector<double>().swap(t_drain);
+  if (sum.scored == 0) throw input_error(o.readings, 0, 0, "every reading was refused: nothing to score");
+  if (sum.in_state == 0)
     throw input_error(o.readings, 0, 0, "no scored reading is in the baseline's operating state: no steps or trend");
 
-  // steps: tabular CUSUM per segment (between overhauls and meter changes), noise from the
-  // moving ranges of all accepted readings
-  const std::size_t m = acc.size();
-  std::vector<double> work(m);
-  const auto sig = pumploss::health_noise_sigma(qn.data(), m, work.data());
   table ts;
   ts.name = "steps";
   ts.title = "Steps in the normalised drain flow (tabular CUSUM, k = 0.5, h = 5)";
@@ -297,45 +461,37 @@ int run_health(const health_options& o) {
              {"level after", cell_kind::quantity, D::volume_flow, 3},
              {"change", cell_kind::percent, D::pressure, 3},
              {"found at", cell_kind::text, D::pressure, 0}};
-  std::size_t trend_from = 0, gradual = 0;
-  for (std::size_t k = 0; k < m; ++k)
-    if (k > 0 && seg[k] != seg[k - 1]) trend_from = k;
-  if (pumploss::is_usable(sig.st) && sig.value > 0) {
-    std::size_t b0 = 0;
-    while (b0 < m) {
-      std::size_t b1 = b0;
-      while (b1 < m && seg[b1] == seg[b0]) ++b1;
-      std::vector<pumploss::health_step<double>> steps(b1 - b0);
-      std::size_t found = 0;
-      const auto st = pumploss::health_detect_steps(qn.data() + b0, b1 - b0, std::numeric_limits<double>::quiet_NaN(),
-                                                    sig.value, 0.5, 5.0, steps.data(), steps.size(), work.data(), found);
-      if (pumploss::is_usable(st))
-        for (std::size_t k = 0; k < found && k < steps.size(); ++k) {
-          if (!steps[k].abrupt) {
-            ++gradual;
-            continue;
-          }
-          const std::size_t at = b0 + steps[k].index;
-          ts.rows.push_back({date_text[acc[at]], steps[k].before, steps[k].after, steps[k].after / steps[k].before - 1,
-                             date_text[acc[b0 + steps[k].signal_index]]});
-          if (at > trend_from) trend_from = at;
-        }
-      b0 = b1;
-    }
-  }
-  const std::size_t k_trend = m - trend_from;
-  const auto trend = pumploss::fit_health_trend(time.data() + trend_from, frac.data() + trend_from, k_trend,
-                                                bands.worn_min);
-  const auto proj = pumploss::health_projection(trend, last.level);
+  auto day_text = [](double d) { return civil_from_days(static_cast<long>(std::lround(d))); };
+  for (const auto& s : sum.steps)
+    ts.rows.push_back({day_text(s.date), s.before, s.after, s.after / s.before - 1, day_text(s.signal_date)});
+  table tc;
+  tc.name = "changes";
+  tc.title = "Verdict changes";
+  tc.cols = {{"date", cell_kind::text, D::pressure, 0},
+             {"from", cell_kind::text, D::pressure, 0},
+             {"to", cell_kind::text, D::pressure, 0}};
+  for (const auto& c : sum.changes)
+    tc.rows.push_back({day_text(c.date), std::string(pumploss::health_level_name(c.from)),
+                       std::string(pumploss::health_level_name(c.to))});
+  const auto& trend = sum.trend;
+  const std::size_t k_trend = sum.trend_count;
   const std::string tunit = hours ? "operating hours" : "days";
+  const auto& last = sum.latest;
 
   report r;
-  add_input_notes(r, d);
+  add_input_notes(r, hd);
   r.title = "Pump health from field readings: " + p.name;
-  r.facts.emplace_back("Readings", fmt::format("{} ({} readings, {} to {}; {} scored, {} refused; {} in the "
+  std::string refusals;
+  for (unsigned b = 0; b < 8; ++b)
+    if (sum.refused_by[b] > 0)
+      refusals += fmt::format("{}{} x {}", refusals.empty() ? "" : "; ", sum.refused_by[b],
+                              pumploss::health_refusal_text(1u << b));
+  r.facts.emplace_back("Readings", fmt::format("{} ({} readings, {} to {}; {} scored, {} refused, {} flagged; {} in the "
                                                "baseline's state ({}) for steps and trend)",
-                                               o.readings, n, date_text.front(), date_text.back(), scored, n - scored, m,
+                                               o.readings, n, first_date_text, last_date_text, sum.scored, sum.refused,
+                                               sum.flagged, sum.in_state,
                                                pumploss::operating_state_name(ref.baseline_state)));
+  if (!refusals.empty()) r.facts.emplace_back("Refused", refusals);
   r.facts.emplace_back("Pump", show_quantity(p.max_displacement_m3_rev, D::displacement, du, 3) + " maximum, rated " +
                                    show_quantity(p.rated_speed_rev_s, D::rotational_speed, du, 4) +
                                    (p.has_geometry ? "" : " (no geometry needed for the verdict)"));
@@ -363,29 +519,52 @@ int run_health(const health_options& o) {
                                             100 * bands.sound_max, 100 * bands.acceptable_max, 100 * bands.worn_min,
                                             100 * bands.growth_moderate, 100 * bands.growth_large, p.bands_source));
   r.facts.emplace_back("Latest verdict", fmt::format("{} on {}: drain fraction {:.2f} %, growth {:+.0f} % over the baseline",
-                                                     pumploss::health_level_name(last.level), last_date,
+                                                     pumploss::health_level_name(last.level), day_text(sum.latest_date),
                                                      100 * last.fraction_at_reference, 100 * last.growth));
+  r.facts.emplace_back("Verdict changes", sum.changes.empty() ? std::string("none")
+                                                              : fmt::format("{} (see the verdict changes table)",
+                                                                            sum.changes.size()));
   r.facts.emplace_back("Steps", ts.rows.empty()
-                                    ? fmt::format("none found ({} gradual level shifts)", gradual)
+                                    ? fmt::format("none found ({} gradual level shifts)", sum.gradual)
                                     : fmt::format("{} abrupt (see the steps table; {} gradual level shifts)",
-                                                  ts.rows.size(), gradual));
-  const std::string since = date_text[acc[trend_from]];
+                                                  ts.rows.size(), sum.gradual));
+  const std::string since = day_text(sum.trend_from_date);
   if (pumploss::is_error(trend.st) || k_trend < 3)
     r.facts.emplace_back("Trend", "not available: fewer than 3 readings since " + since);
   else
     r.facts.emplace_back(
         "Trend", fmt::format("{:+.3g} percentage points per {} over the {} readings since {}; {}",
                              100 * trend.slope_per_day * (hours ? 1000.0 : 365.25), hours ? "1000 h" : "year", k_trend,
-                             since, projection_text(proj, tunit, time.back(), !hours)));
+                             since, projection_text(sum.projection, tunit, sum.trend_t1, !hours)));
   if (!event_notes.empty()) {
     std::string ev;
-    for (const auto& e : event_notes) ev += (ev.empty() ? "" : "; ") + e;
+    for (std::size_t i = 0; i < event_notes.size() && i < text_rows_max; ++i) ev += (ev.empty() ? "" : "; ") + event_notes[i];
+    if (event_notes.size() > text_rows_max) ev += fmt::format("; and {} more", event_notes.size() - text_rows_max);
     r.facts.emplace_back("Events", ev);
   }
+  h_t.into(t, "health_readings.csv");
+  h_tr.into(tr, "health_reasons.csv");
+  h_tx.into(tx, "health_refused.csv");
+  t.streamed_csv = w_t.release();
+  tr.streamed_csv = w_tr.release();
+  tx.streamed_csv = w_tx.release();
+  const bool any_refused = h_tx.count > 0;
   r.tables.push_back(std::move(t));
   r.tables.push_back(std::move(tr));
   if (!ts.rows.empty()) r.tables.push_back(std::move(ts));
-  if (!tx.rows.empty()) r.tables.push_back(std::move(tx));
+  if (tc.rows.size() > text_rows_max) {  // the text shows head and tail, the CSV every change
+    tc.streamed_csv = scratch_path(o.out, "changes");
+    csv_file_writer w(tc, du, tc.streamed_csv);
+    head_tail ht;
+    for (const auto& rw : tc.rows) {
+      w.row(rw);
+      ht.add(rw);
+    }
+    ht.into(tc, "health_changes.csv");
+    tc.streamed_csv = w.release();
+  }
+  if (!tc.rows.empty()) r.tables.push_back(std::move(tc));
+  if (any_refused) r.tables.push_back(std::move(tx));
   r.notes.push_back("steps: tabular CUSUM (Page 1954; Montgomery, Introduction to Statistical Quality Control, 6th ed., "
                     "9.1) on the normalised drain flow; a shift is an abrupt step only when it is a jump beyond the local "
                     "quadratic trend (level-shift z test, z > 5, confirmed by 5 readings; Box and Tiao 1975), so that "
@@ -393,6 +572,9 @@ int run_health(const health_options& o) {
                     "and with the jump; the trend is fitted after the last step or event and projected no further than "
                     "its span");
   r.notes.push_back("the verdict bands are common practice, no source, unless the pump file names the maker's figures");
+  if (n > text_rows_max)
+    r.notes.push_back(fmt::format("the tables show the first and last {} of {} readings; the CSV files hold every row",
+                                  text_rows_end, n));
   std::vector<std::string> caution_lines;
   {
     std::string c = pumploss::health_case_drain_caution();
@@ -409,7 +591,8 @@ int run_health(const health_options& o) {
   }
 
   // the plot: normalised drain flow over time, the baseline and the fraction bands as flows at the
-  // reference speed (the growth bands are in the table), the trend since the last step
+  // reference speed (the growth bands are in the table), the trend since the last step; above a
+  // few thousand readings a median and a 10-90 % band per period, said in the legend
   const double q_ref_speed = p.max_displacement_m3_rev * p.reference_speed_rev_s;
   svg::plot pl;
   pl.title = "Case drain flow of " + p.name;
@@ -418,12 +601,33 @@ int run_health(const health_options& o) {
   pl.x.label = "date";
   pl.x.dates = true;
   pl.y.label = std::string("drain flow [") + du.of(D::volume_flow).symbol + "]";
-  pl.lines.push_back(normalised);
-  pl.lines.push_back(as_read);
+  if (plot_x.size() <= plot_points_max) {
+    svg::series normalised{"normalised drain flow", {}, {}, true, true, false};
+    svg::series as_read{"drain flow as read", {}, {}, false, true, false};
+    for (std::size_t i = 0; i < plot_x.size(); ++i) {
+      normalised.x.push_back(static_cast<double>(plot_x[i]));
+      normalised.y.push_back(static_cast<double>(plot_qn[i]));
+      as_read.x.push_back(static_cast<double>(plot_x[i]));
+      as_read.y.push_back(static_cast<double>(plot_q[i]));
+    }
+    pl.lines.push_back(normalised);
+    pl.lines.push_back(as_read);
+  } else {
+    const auto a = aggregate(plot_x, plot_qn);
+    const auto b = aggregate(plot_x, plot_q);
+    const std::string per = fmt::format("per {:.3g}-day period, {} readings", a.days, plot_x.size());
+    pl.lines.push_back({"normalised drain flow: median " + per, a.x, a.median, true, false, false});
+    pl.lines.push_back({"normalised: 10 % of the period", a.x, a.lo, true, false, true});
+    pl.lines.push_back({"normalised: 90 % of the period", a.x, a.hi, true, false, true});
+    pl.lines.push_back({"drain flow as read: median per period", b.x, b.median, false, true, false});
+  }
+  std::vector<float>().swap(plot_x);
+  std::vector<float>().swap(plot_qn);
+  std::vector<float>().swap(plot_q);
   if (pumploss::is_usable(trend.st) && k_trend >= 3) {
-    svg::series tl{"trend since " + since, {dates[acc[trend_from]], dates[acc.back()]}, {}, true, false, true};
-    const double t0 = time[trend_from], t1 = time.back();
-    for (const double x : {t0, t1}) tl.y.push_back(du.show((trend.intercept + trend.slope_per_day * x) * q_ref_speed, D::volume_flow));
+    svg::series tl{"trend since " + since, {sum.trend_from_date, sum.last_date}, {}, true, false, true};
+    for (const double x : {sum.trend_t0, sum.trend_t1})
+      tl.y.push_back(du.show((trend.intercept + trend.slope_per_day * x) * q_ref_speed, D::volume_flow));
     pl.lines.push_back(tl);
   }
   auto flow_line = [&](double q, const std::string& label) { pl.limits.push_back({du.show(q, D::volume_flow), label}); };

@@ -414,6 +414,7 @@ int run_test_stand(const stand_options& o) {
     files.add("test_stand_report.html", render_html(r, du, figs, verdict, res.acceptance.empty() || res.accepted,
                                                      res.acceptance.empty() ? 0 : 1));
   }
+  files.add("test_stand_baseline.toml", baseline_file_text(setup, o.data, d, res));  // health's baseline (issue 16)
   emit(r, files, o.out, du, "test_stand");
   return exit_ok;
 }

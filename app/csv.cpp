@@ -46,7 +46,7 @@ void add_csv_format_option(CLI::App& sub, pumploss::csv_dialect& dialect) {
       ->option_text("FORMAT");
 }
 
-void add_input_notes(report& r, const csv_data& d) {
+void add_input_notes(report& r, const pumploss::table_data& d) {
   for (const auto& n : d.notes) r.notes.push_back(d.source + ": " + n + " (--csv-format sets the format)");
 }
 

@@ -40,7 +40,7 @@ void add_csv_format_option(CLI::App& sub, pumploss::csv_dialect& dialect);
 
 /// Put what the reader detected or assumed about the file (a ';' export, a Windows-1252 degree
 /// sign) into the report's notes, naming the file.
-void add_input_notes(report& r, const csv_data& d);
+void add_input_notes(report& r, const pumploss::table_data& d);
 
 }  // namespace plcli
 

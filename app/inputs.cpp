@@ -1,5 +1,7 @@
 #include "inputs.hpp"
 
+#include <fmt/format.h>
+
 #include "pumploss/drain_check.hpp"
 #include "pumploss/line.hpp"
 
@@ -576,6 +578,45 @@ void read_pump_geometry(section& root, section& pu, pump_spec& p, long z) {
   if (!(p.controller_consumption_m3_s >= 0)) p.controller_consumption_m3_s = q.controller_flow_m3_s;
 }
 
+// ---- baseline file (issue 16): drain over pressure per speed from a test-stand run
+// The baseline file named by [health] baseline_file (relative to the pump file): its set points
+// become the baseline readings that health fits the constant and laminar parts to.
+void read_baseline_file(section& h, pump_spec& p) {
+  const std::string ref = h.text("baseline_file");
+  const std::string path = ref.size() > 0 && ref[0] == '/' ? ref : directory_of(h.file()) + ref;
+  auto root = load_config(path);
+  const auto oil = read_oil_ref(root);
+  auto b = root.table("baseline");
+  const double v = b.quantity("displacement", D::displacement);
+  if (!(std::fabs(v / p.max_displacement_m3_rev - 1) <= 0.05))
+    throw b.error("displacement", "differs by more than 5 % from the pump file's max_displacement: another pump?");
+  // the viscosity at the reference temperature from both oils: the baseline must be of this oil
+  const auto nu_pump = pumploss::d341_viscosity(p.oil.props.viscosity, p.reference_temperature_k);
+  const auto nu_base = pumploss::d341_viscosity(oil.props.viscosity, p.reference_temperature_k);
+  if (!(std::fabs(nu_base.value / nu_pump.value - 1) <= 0.05))
+    throw input_error(path, 0, 0, "the oil of the baseline differs by more than 5 % in viscosity at the reference "
+                                  "temperature from the pump file's oil: the baseline was taken with another oil");
+  p.fit_pressures_pa = b.quantity_list("outlet_pressures", D::pressure);
+  p.fit_case_pa = b.quantity_list("case_pressures", D::pressure);
+  p.fit_drain_m3_s = b.quantity_list("drain_flows", D::volume_flow);
+  const auto speeds = b.quantity_list("speeds", D::rotational_speed);
+  const auto inlet = b.quantity_list("inlet_temperatures", D::temperature);
+  const bool has_drain_t = b.has("drain_temperatures");
+  const auto drain_t = has_drain_t ? b.quantity_list("drain_temperatures", D::temperature) : std::vector<double>{};
+  if (p.clearance_from_drain && !has_drain_t)
+    throw b.error_here("clearance_temperature = \"drain\" needs drain_temperatures in the baseline file");
+  p.fit_temperatures_k = p.clearance_from_drain ? drain_t : inlet;
+  const std::size_t n = p.fit_pressures_pa.size();
+  if (n < 2 || p.fit_case_pa.size() != n || p.fit_drain_m3_s.size() != n || speeds.size() != n || inlet.size() != n ||
+      (has_drain_t && drain_t.size() != n))
+    throw b.error("outlet_pressures", "needs two or more set points, every list of the same length");
+  (void)b.text_opt("pump");  // for people: what and where from
+  (void)b.text_opt("source");
+  b.finish();
+  root.finish();
+  p.baseline_file = path;
+}
+
 // [health] of a pump file: baseline, reference state, bands.
 void read_pump_health(section& root, pump_spec& p) {
   auto h = root.table("health");
@@ -587,7 +628,11 @@ void read_pump_health(section& root, pump_spec& p) {
   }
   if (!(p.controller_consumption_m3_s >= 0)) p.controller_consumption_m3_s = 0.0;
   p.baseline_drain_m3_s = h.quantity_opt("baseline_drain_flow", D::volume_flow).value_or(0.0);
-  if (h.has("baseline_fit_pressures")) {
+  const bool from_file = h.has("baseline_file");  // written by test-stand (issue 16)
+  if (from_file && (h.has("baseline_fit_pressures") || h.has("baseline_drain_flow")))
+    throw h.error("baseline_file", "give either baseline_file or baseline_drain_flow / baseline_fit_*, not both");
+  if (from_file) {
+  } else if (h.has("baseline_fit_pressures")) {
     p.fit_pressures_pa = h.quantity_list("baseline_fit_pressures", D::pressure);
     p.fit_temperatures_k = h.quantity_list("baseline_fit_temperatures", D::temperature);
     p.fit_drain_m3_s = h.quantity_list("baseline_fit_drain_flows", D::volume_flow);
@@ -622,6 +667,7 @@ void read_pump_health(section& root, pump_spec& p) {
   }
   p.clearance_from_drain = h.choice("clearance_temperature", {"oil", "drain"}, "oil") == "drain";
   p.bands_source = h.text("bands_source");
+  if (from_file) read_baseline_file(h, p);
   h.finish();
 }
 }  // namespace
@@ -681,6 +727,53 @@ pump_spec read_pump(const std::string& path) {
   sw.finish();
   root.finish();
   return p;
+}
+
+std::string baseline_file_text(const stand_setup& setup, const std::string& data_name, const pumploss::table_data& d,
+                               const pumploss::test_stand_result& res) {
+  const std::size_t n = res.points.size();
+  std::vector<double> sum_out(n), sum_case(n), sum_in(n), sum_dt(n), count(n);
+  const auto& out_p = d.si("outlet pressure");
+  const auto& case_p = d.si("case pressure");
+  const auto& t_in = d.si("inlet temperature");
+  const auto& t_dr = d.si("drain temperature");
+  for (std::size_t r = 0; r < res.row_point.size() && r < out_p.size(); ++r) {
+    const std::size_t i = res.row_point[r];
+    if (i >= n) continue;  // a settling row
+    sum_out[i] += out_p[r];
+    sum_case[i] += case_p.empty() ? 0.0 : case_p[r];
+    sum_in[i] += t_in[r];
+    sum_dt[i] += t_dr.empty() ? 0.0 : t_dr[r];
+    count[i] += 1;
+  }
+  std::string speeds, outs, cases, ins, drs, flows;
+  auto add = [](std::string& list, double v, const char* unit) {
+    list += fmt::format("{}\"{:.10g} {}\"", list.empty() ? "" : ", ", v, unit);
+  };
+  std::size_t used = 0;
+  for (std::size_t i = 0; i < n; ++i) {
+    if (res.points[i].excluded || count[i] == 0 || i >= res.drain.size()) continue;
+    ++used;
+    add(speeds, res.points[i].speed_rev_s * 60, "rpm");
+    add(outs, sum_out[i] / count[i] / 1e5, "bar");
+    add(cases, sum_case[i] / count[i] / 1e5, "bar");
+    add(ins, sum_in[i] / count[i] - 273.15, "degC");
+    if (!t_dr.empty()) add(drs, sum_dt[i] / count[i] - 273.15, "degC");
+    add(flows, res.drain[i].drain_flow_m3_s * 60000, "L/min");
+  }
+  const auto& oil = setup.oil;
+  std::string s = fmt::format(
+      "# pumploss baseline file: case drain flow over pressure per speed of a test-stand run ({} set points of {}).\n"
+      "# Read by 'pumploss health' through [health] baseline_file = \"<this file>\" in the pump file.\n"
+      "# Engineering estimates: never block, cap or valve a case drain; the pump maker's limits govern.\n\n"
+      "[oil]\nname = \"{}\"\npoints = [[\"{:.10g} degC\", \"{:.10g} cSt\"], [\"{:.10g} degC\", \"{:.10g} cSt\"]]\n\n"
+      "[baseline]\npump = \"{}\"\nsource = \"{}\"\ndisplacement = \"{:.10g} cm3/rev\"\n"
+      "speeds = [{}]\noutlet_pressures = [{}]\ncase_pressures = [{}]\ninlet_temperatures = [{}]\n",
+      used, data_name, oil.name, oil.t1_k - 273.15, oil.nu1_m2_s * 1e6, oil.t2_k - 273.15, oil.nu2_m2_s * 1e6,
+      setup.machine_name, data_name, setup.run.nominal_displacement_m3_rev * 1e6, speeds, outs, cases, ins);
+  if (!t_dr.empty()) s += "drain_temperatures = [" + drs + "]\n";
+  s += "drain_flows = [" + flows + "]\n";
+  return s;
 }
 
 std::vector<column_spec> field_columns() {

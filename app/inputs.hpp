@@ -128,6 +128,8 @@ struct pump_spec {
   bool has_geometry = false;            ///< [geometry] given (the budget needs it, health does not)
   double controller_consumption_m3_s = -1;  ///< constant drain part (negative until read)
   std::vector<double> fit_pressures_pa, fit_temperatures_k, fit_drain_m3_s;  ///< baseline readings to fit
+  std::vector<double> fit_case_pa;        ///< case pressures of the baseline readings (empty: 0)
+  std::string baseline_file;              ///< the baseline file read (test-stand's), or empty
   double baseline_rise_k = std::numeric_limits<double>::quiet_NaN();  ///< drain minus inlet at the reference state
   bool baseline_deadhead = false;       ///< the baseline was read at deadhead
   double hot_baseline_factor = 1.5;     ///< drain rise flagged above this times the baseline rise
@@ -143,6 +145,17 @@ struct pump_spec {
   double geometric_displacement_m3_rev() const;
 };
 pump_spec read_pump(const std::string& path);
+
+// ---- baseline file (issue 16)
+/// The baseline file of a test-stand run (TOML of our own format, read by health through
+/// [health] baseline_file): per set point not excluded its speed, mean outlet and case pressure,
+/// mean inlet and drain temperature and the drain flow, with the oil and the nominal displacement.
+/// @param setup the test-stand setup
+/// @param data_name the data file's name (for the file's comment)
+/// @param d the test-stand data as read
+/// @param res the reduction
+std::string baseline_file_text(const stand_setup& setup, const std::string& data_name, const pumploss::table_data& d,
+                               const pumploss::test_stand_result& res);
 
 /// Columns of the field-readings CSV.
 std::vector<column_spec> field_columns();

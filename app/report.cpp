@@ -3,6 +3,7 @@
 #include <fmt/format.h>
 
 #include <algorithm>
+#include <charconv>
 #include <cmath>
 #include <filesystem>
 #include <fstream>
@@ -16,6 +17,8 @@ display_units::display_units() {
   const char* defaults[16] = {"bar", "L/min", "cm3", "cm3/rev", "mPa.s", "cSt", "degC", "kW",
                               "N.m", "rpm", "mm", "kg/m3", "m/s", "kg/h", "kJ/(kg.K)", "N"};
   for (std::size_t i = 0; i < 16; ++i) unit_[i] = pumploss::find_unit(defaults[i]);
+  for (std::size_t i = 0; i < 16; ++i)
+    si_[i] = pumploss::find_unit(pumploss::si_symbol(static_cast<pumploss::dimension>(i)));
 }
 
 void display_units::choose(const std::string& symbol) {
@@ -30,12 +33,12 @@ const pumploss::unit_info& display_units::of(pumploss::dimension d) const {
 
 double display_units::show(double si, pumploss::dimension d) const {
   if (!std::isfinite(si)) return si;
-  return pumploss::convert(si, *pumploss::find_unit(pumploss::si_symbol(d)), of(d)).value;
+  return pumploss::convert(si, *si_[static_cast<std::size_t>(d)], of(d)).value;
 }
 
 double display_units::si(double shown, pumploss::dimension d) const {
   if (!std::isfinite(shown)) return shown;
-  return pumploss::convert(shown, of(d), *pumploss::find_unit(pumploss::si_symbol(d))).value;
+  return pumploss::convert(shown, of(d), *si_[static_cast<std::size_t>(d)]).value;
 }
 
 std::string format_sig(double v, int digits) {
@@ -132,33 +135,59 @@ std::string render_text(const report& r, const display_units& u) {
   return out;
 }
 
-std::string render_csv(const table& t, const display_units& u) {
-  auto quote = [](const std::string& s) {
-    if (s.find_first_of(",\"\n") == std::string::npos) return s;
-    std::string q = "\"";
-    for (const char c : s) q += c == '"' ? std::string("\"\"") : std::string(1, c);
-    return q + "\"";
-  };
+namespace {
+// Append a field, quoted when it holds ',', '"' or a line end (one pass, no copy: a long table's
+// reasons column is most of its bytes).
+void csv_quote(std::string& out, const std::string& s) {
+  bool plain = true;
+  for (const char c : s)
+    if (c == ',' || c == '"' || c == '\n') {
+      plain = false;
+      break;
+    }
+  if (plain) {
+    out += s;
+    return;
+  }
+  out += '"';
+  for (const char c : s) {
+    if (c == '"') out += '"';
+    out += c;
+  }
+  out += '"';
+}
+}  // namespace
+
+std::string csv_header(const table& t, const display_units& u) {
   std::string out;
   for (std::size_t j = 0; j < t.cols.size(); ++j) {
     if (j > 0) out += ",";
     // percent columns go out as plain numbers with their own name so the file reads back
     const auto& c = t.cols[j];
-    out += quote(c.kind == cell_kind::percent ? c.title + " percent" : heading(c, u));
+    csv_quote(out, c.kind == cell_kind::percent ? c.title + " percent" : heading(c, u));
   }
-  out += "\n";
-  for (const auto& row : t.rows) {
-    for (std::size_t j = 0; j < row.size(); ++j) {
-      if (j > 0) out += ",";
-      if (const auto* s = std::get_if<std::string>(&row[j])) {
-        out += quote(*s);
-      } else {
-        const double v = shown_value(t.cols[j], std::get<double>(row[j]), u);
-        out += std::isfinite(v) ? fmt::format("{:.10g}", v) : "";
+  return out + "\n";
+}
+
+void csv_row(std::string& out, const table& t, const std::vector<cell>& row, const display_units& u) {
+  for (std::size_t j = 0; j < row.size(); ++j) {
+    if (j > 0) out += ",";
+    if (const auto* s = std::get_if<std::string>(&row[j])) {
+      csv_quote(out, *s);
+    } else {
+      const double v = shown_value(t.cols[j], std::get<double>(row[j]), u);
+      if (std::isfinite(v)) {  // as "{:.10g}" (printf's %.10g), without fmt's slow precision path
+        char buf[32];
+        const auto res = std::to_chars(buf, buf + sizeof buf, v, std::chars_format::general, 10);
+        out.append(buf, res.ptr);
       }
     }
-    out += "\n";
   }
+  out += "\n";
+}
+
+std::string csv_footer() {
+  std::string out;
   std::string c = cautions;
   std::size_t pos = 0;
   while (pos < c.size()) {
@@ -169,7 +198,52 @@ std::string render_csv(const table& t, const display_units& u) {
   return out;
 }
 
+std::string render_csv(const table& t, const display_units& u) {
+  std::string out = csv_header(t, u);
+  for (const auto& row : t.rows) csv_row(out, t, row, u);
+  return out + csv_footer();
+}
+
+csv_file_writer::csv_file_writer(const table& columns, const display_units& u, std::string path)
+    : t_(columns), u_(u), path_(std::move(path)) {
+  if (path_.empty()) return;
+  f_ = std::fopen(path_.c_str(), "wb");
+  if (f_ == nullptr) throw std::runtime_error(path_ + ": cannot write");
+  buf_ = csv_header(t_, u_);
+}
+
+csv_file_writer::~csv_file_writer() {
+  if (f_ != nullptr) {
+    std::fclose(f_);
+    std::remove(path_.c_str());
+  }
+}
+
+void csv_file_writer::flush() {
+  if (!buf_.empty() && std::fwrite(buf_.data(), 1, buf_.size(), f_) != buf_.size())
+    throw std::runtime_error(path_ + ": cannot write");
+  buf_.clear();
+}
+
+void csv_file_writer::row(const std::vector<cell>& r) {
+  if (f_ == nullptr) return;
+  csv_row(buf_, t_, r, u_);
+  if (buf_.size() > (1u << 16)) flush();
+}
+
+const std::string& csv_file_writer::release() {
+  if (f_ != nullptr) {
+    buf_ += csv_footer();
+    flush();
+    const bool bad = std::fclose(f_) != 0;
+    f_ = nullptr;
+    if (bad) throw std::runtime_error(path_ + ": cannot write");
+  }
+  return path_;
+}
+
 void output_set::add(std::string name, std::string content) { files_.emplace_back(std::move(name), std::move(content)); }
+void output_set::add_file(std::string name, std::string path) { moves_.emplace_back(std::move(name), std::move(path)); }
 
 std::vector<std::string> output_set::write_all(const std::string& dir) const {
   namespace fs = std::filesystem;
@@ -187,6 +261,12 @@ std::vector<std::string> output_set::write_all(const std::string& dir) const {
       if (!out) throw std::runtime_error(tmp.string() + ": cannot write");
     }
     fs::rename(tmp, final_path, ec);
+    if (ec) throw std::runtime_error(final_path.string() + ": cannot write: " + ec.message());
+    written.push_back(final_path.string());
+  }
+  for (const auto& [name, path] : moves_) {
+    const fs::path final_path = fs::path(dir) / name;
+    fs::rename(path, final_path, ec);
     if (ec) throw std::runtime_error(final_path.string() + ": cannot write: " + ec.message());
     written.push_back(final_path.string());
   }

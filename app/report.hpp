@@ -4,6 +4,7 @@
 #define PUMPLOSS_CLI_REPORT_HPP
 
 #include <array>
+#include <cstdio>
 #include <string>
 #include <utility>
 #include <variant>
@@ -28,6 +29,7 @@ class display_units {
 
  private:
   std::array<const pumploss::unit_info*, 16> unit_{};
+  std::array<const pumploss::unit_info*, 16> si_{};  // the SI unit per dimension, looked up once
 };
 
 /// How a column is shown.
@@ -55,6 +57,7 @@ struct table {
   std::vector<column> cols;
   std::vector<std::vector<cell>> rows;
   std::vector<std::string> row_classes;  ///< HTML only: a class per row ("outlier", "fail"), may be empty
+  std::string streamed_csv;  ///< a scratch file holding the full CSV (csv_file_writer); the text shows `rows` only
 };
 
 /// A report: title, facts (label: value), tables and notes, with the cautions at the foot.
@@ -101,11 +104,42 @@ class output_set {
   /// Write every file into `dir` (created when missing); each file is written to a temporary
   /// name and renamed. Returns the paths written. Throws std::runtime_error on failure.
   std::vector<std::string> write_all(const std::string& dir) const;
-  bool empty() const { return files_.empty(); }
+  /// Move a file already written (a scratch file beside the output folder) in as `name`.
+  void add_file(std::string name, std::string path);
+  bool empty() const { return files_.empty() && moves_.empty(); }
   const std::vector<std::pair<std::string, std::string>>& items() const { return files_; }
 
  private:
   std::vector<std::pair<std::string, std::string>> files_;
+  std::vector<std::pair<std::string, std::string>> moves_;  // (name, scratch path)
+};
+
+// ---- streamed tables (issue 20): the CSV of a long table written row by row
+/// Header, one row, and the cautions foot of a table's CSV, as render_csv() writes them.
+std::string csv_header(const table& t, const display_units& u);
+void csv_row(std::string& out, const table& t, const std::vector<cell>& row, const display_units& u);
+std::string csv_footer();
+
+/// The CSV of a table written row by row into a scratch file, so that a long series never sits
+/// in memory; output_set::add_file() then moves it into the output folder. An empty path writes
+/// nothing. The scratch file is removed when the writer is dropped before release().
+class csv_file_writer {
+ public:
+  csv_file_writer(const table& columns, const display_units& u, std::string path);
+  ~csv_file_writer();
+  csv_file_writer(const csv_file_writer&) = delete;
+  csv_file_writer& operator=(const csv_file_writer&) = delete;
+  void row(const std::vector<cell>& r);
+  /// Write the foot and close; the file stays (it is moved by output_set::write_all()).
+  /// @return the path
+  const std::string& release();
+
+ private:
+  const table& t_;
+  const display_units& u_;
+  std::string path_, buf_;
+  std::FILE* f_ = nullptr;
+  void flush();
 };
 
 }  // namespace plcli

@@ -2,6 +2,7 @@
 #include "pumploss/table_reader.hpp"
 
 #include <cctype>
+#include <charconv>
 #include <cerrno>
 #include <cmath>
 #include <cstdio>
@@ -34,11 +35,19 @@ struct field {
 
 // Split one line at the delimiter; double quotes protect it and "" is a quote. On a malformed
 // line `err` is set and the fields read so far are returned.
-std::vector<field> split_line(int line_no, const std::string& line, char delim, table_error& err) {
-  std::vector<field> out;
+// `out` is reused from row to row (its strings keep their capacity).
+void split_line(int line_no, const std::string& line, char delim, table_error& err, std::vector<field>& out) {
+  std::size_t n = 0;
+  auto take = [&](field&& f) {
+    if (n == out.size()) out.emplace_back();
+    out[n].text.swap(f.text);
+    out[n++].column = f.column;
+  };
   std::size_t i = 0;
+  field f;
   while (true) {
-    field f{{}, static_cast<int>(i) + 1};
+    f.text.clear();
+    f.column = static_cast<int>(i) + 1;
     std::size_t j = i;  // the value itself starts after leading blanks
     while (j < line.size() && (line[j] == ' ' || line[j] == '\t')) ++j;
     if (j < line.size() && line[j] == '"') {
@@ -61,29 +70,37 @@ std::vector<field> split_line(int line_no, const std::string& line, char delim, 
       }
       if (!closed) {
         err = {status::domain, line_no, f.column, "opening quote without a closing quote"};
-        return out;
+        out.resize(n);
+        return;
       }
       while (j < line.size() && (line[j] == ' ' || line[j] == '\t' || line[j] == '\r')) ++j;
       if (j < line.size() && line[j] != delim) {
         err = {status::domain, line_no, static_cast<int>(j) + 1, "text after a closing quote"};
-        return out;
+        out.resize(n);
+        return;
       }
       i = j;
     } else {
       const auto comma = line.find(delim, i);
       const std::size_t end = comma == std::string::npos ? line.size() : comma;
-      f.text = std::string(trim(std::string_view(line).substr(i, end - i)));
+      f.text.assign(trim(std::string_view(line).substr(i, end - i)));
       if (j < end) f.column = static_cast<int>(j) + 1;
       i = end;
     }
-    out.push_back(std::move(f));
+    take(std::move(f));
     if (i >= line.size()) break;
     ++i;  // past the delimiter
     if (i == line.size()) {  // trailing delimiter: an empty last field
-      out.push_back(field{{}, static_cast<int>(i) + 1});
+      take(field{{}, static_cast<int>(i) + 1});
       break;
     }
   }
+  out.resize(n);
+}
+
+std::vector<field> split_line(int line_no, const std::string& line, char delim, table_error& err) {
+  std::vector<field> out;
+  split_line(line_no, line, delim, err, out);
   return out;
 }
 
@@ -91,9 +108,12 @@ bool parse_date(const std::string& s, long& days) {
   if (s.size() != 10 || s[4] != '-' || s[7] != '-') return false;
   for (std::size_t k : {0u, 1u, 2u, 3u, 5u, 6u, 8u, 9u})
     if (!std::isdigit(static_cast<unsigned char>(s[k]))) return false;
-  const int y = std::atoi(s.substr(0, 4).c_str());
-  const int m = std::atoi(s.substr(5, 2).c_str());
-  const int d = std::atoi(s.substr(8, 2).c_str());
+  auto num = [&](std::size_t at, std::size_t len) {
+    int v = 0;
+    for (std::size_t k = at; k < at + len; ++k) v = 10 * v + (s[k] - '0');
+    return v;
+  };
+  const int y = num(0, 4), m = num(5, 2), d = num(8, 2);
   if (m < 1 || m > 12 || d < 1) return false;
   static const int mdays[] = {31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31};
   const bool leap = (y % 4 == 0 && y % 100 != 0) || y % 400 == 0;
@@ -271,76 +291,94 @@ bool split_row(int line_no, const std::string& line, char delim, std::size_t n_f
 
 bool numeric(const column_spec& s) { return s.kind == column_kind::quantity || s.kind == column_kind::number; }
 
+// What the numbers seen so far say about the decimal mark.
+struct decimal_state {
+  std::string comma_text, point_text;  // first field with ',' / with '.'
+  int comma_line = 0, point_line = 0;
+  bool comma = false, point = false;
+};
+
+// Check the numbers of one split row for their decimal marks (delimiter `delim`, dialect as
+// given); false with `data.error` set when they make the file ambiguous.
+bool check_decimals(int line_no, const std::vector<field>& fields, char delim, csv_dialect dialect,
+                    const std::vector<std::size_t>& file_to_spec, table_data& data, decimal_state& ds) {
+  auto& err = data.error;
+  for (std::size_t i = 0; i < fields.size(); ++i) {
+    const auto& f = fields[i];
+    if (!numeric(data.spec[file_to_spec[i]])) continue;
+    const bool comma = f.text.find(',') != std::string::npos;
+    const bool point = f.text.find('.') != std::string::npos;
+    if (!comma && !point) continue;
+    const std::string col = "column '" + data.spec[file_to_spec[i]].name + "': '" + f.text + "' ";
+    if (comma && delim == ',') {
+      err = {status::domain, line_no, f.column,
+             col + "could be a thousands separator or a decimal comma in a comma-separated file; write the number "
+                   "without grouping and with '.' as the decimal point, or export with ';' between fields"};
+      return false;
+    }
+    if (comma && point) {
+      err = {status::domain, line_no, f.column,
+             col + "holds both ',' and '.' (a thousands separator?); export the numbers without thousands "
+                   "grouping"};
+      return false;
+    }
+    if (comma && !ds.comma) ds.comma = true, ds.comma_text = f.text, ds.comma_line = line_no;
+    if (point && !ds.point) ds.point = true, ds.point_text = f.text, ds.point_line = line_no;
+    const bool wrong = (dialect == csv_dialect::semicolon_comma && point) ||
+                       (dialect == csv_dialect::semicolon_point && comma);
+    const bool mixed = dialect == csv_dialect::detect && ds.comma && ds.point;
+    if (wrong || mixed) {
+      const std::string& other = comma ? ds.point_text : ds.comma_text;
+      const int other_line = comma ? ds.point_line : ds.comma_line;
+      err = {status::domain, line_no, f.column,
+             wrong ? col + "has a '" + (point ? "." : ",") + "' but the format given says '" +
+                         (point ? "," : ".") + "' is the decimal mark; a thousands separator? export the numbers " +
+                         "without grouping, or give the other format"
+                   : col + "has a '" + (comma ? "," : ".") + "' but line " + std::to_string(other_line) +
+                         " has '" + other + "': one of them is a thousands separator or the file mixes " +
+                         "decimal marks; export the numbers without grouping, or give the format " +
+                         "(--csv-format semicolon-comma or semicolon-point)"};
+      return false;
+    }
+  }
+  return true;
+}
+
+// The decimal mark once the numbers are checked ('.' or ','), with the note for a ';' file.
+char decided_mark(char delim, csv_dialect dialect, const decimal_state& ds, table_data& data) {
+  if (delim == ',') return '.';
+  if (dialect == csv_dialect::semicolon_comma) return ',';
+  if (dialect == csv_dialect::semicolon_point) return '.';
+  data.notes.push_back("read as separated by ';' with " +
+                       std::string(ds.comma   ? "',' as the decimal mark"
+                                   : ds.point ? "'.' as the decimal point"
+                                              : "whole numbers only (no decimal mark)") +
+                       " (detected from the header row and the numbers)");
+  return ds.comma ? ',' : '.';
+}
+
 // The decimal mark of the numbers ('.' or ','), detected or checked against the dialect; 0 with
 // `data.error` set when the numbers make it ambiguous.
 char decimal_mark(char delim, csv_dialect dialect, const std::vector<raw_row>& rows,
                   const std::vector<std::size_t>& file_to_spec, table_data& data) {
-  auto& err = data.error;
-  const field* first_comma = nullptr;
-  const field* first_point = nullptr;
-  int comma_line = 0, point_line = 0;
+  decimal_state ds;
   for (const auto& r : rows)
-    for (std::size_t i = 0; i < r.fields.size(); ++i) {
-      const auto& f = r.fields[i];
-      if (!numeric(data.spec[file_to_spec[i]])) continue;
-      const bool comma = f.text.find(',') != std::string::npos;
-      const bool point = f.text.find('.') != std::string::npos;
-      const std::string col = "column '" + data.spec[file_to_spec[i]].name + "': '" + f.text + "' ";
-      if (comma && delim == ',') {
-        err = {status::domain, r.line, f.column,
-               col + "could be a thousands separator or a decimal comma in a comma-separated file; write the number "
-                     "without grouping and with '.' as the decimal point, or export with ';' between fields"};
-        return 0;
-      }
-      if (comma && point) {
-        err = {status::domain, r.line, f.column,
-               col + "holds both ',' and '.' (a thousands separator?); export the numbers without thousands "
-                     "grouping"};
-        return 0;
-      }
-      if (comma && first_comma == nullptr) first_comma = &f, comma_line = r.line;
-      if (point && first_point == nullptr) first_point = &f, point_line = r.line;
-      const bool wrong = (dialect == csv_dialect::semicolon_comma && point) ||
-                         (dialect == csv_dialect::semicolon_point && comma);
-      const bool mixed = dialect == csv_dialect::detect && first_comma != nullptr && first_point != nullptr;
-      if (wrong || mixed) {
-        const field* other = comma ? first_point : first_comma;
-        const int other_line = comma ? point_line : comma_line;
-        err = {status::domain, r.line, f.column,
-               wrong ? col + "has a '" + (point ? "." : ",") + "' but the format given says '" +
-                           (point ? "," : ".") + "' is the decimal mark; a thousands separator? export the numbers " +
-                           "without grouping, or give the other format"
-                     : col + "has a '" + (comma ? "," : ".") + "' but line " + std::to_string(other_line) +
-                           " has '" + other->text + "': one of them is a thousands separator or the file mixes " +
-                           "decimal marks; export the numbers without grouping, or give the format " +
-                           "(--csv-format semicolon-comma or semicolon-point)"};
-        return 0;
-      }
-    }
-  if (delim == ',') return '.';
-  if (dialect == csv_dialect::semicolon_comma) return ',';
-  if (dialect == csv_dialect::semicolon_point) return '.';
-  const char mark = first_comma != nullptr ? ',' : '.';
-  data.notes.push_back(
-      "read as separated by ';' with " +
-      std::string(first_comma != nullptr   ? "',' as the decimal mark"
-                  : first_point != nullptr ? "'.' as the decimal point"
-                                           : "whole numbers only (no decimal mark)") +
-      " (detected from the header row and the numbers)");
-  return mark;
+    if (!check_decimals(r.line, r.fields, delim, dialect, file_to_spec, data, ds)) return 0;
+  return decided_mark(delim, dialect, ds, data);
 }
 
-// Read the numbers of one data row; false (and data.error set) on a bad field.
-bool read_row(const raw_row& row, char decimal, table_data& data, const std::vector<std::size_t>& file_to_spec) {
-  auto& err = data.error;
-  const int line_no = row.line;
-  const auto& fields = row.fields;
+// Read the numbers of one data row into `put(spec index, SI value, field)`; false (and `err`
+// set) on a bad field. `si_unit` holds the SI unit of every quantity column of the spec.
+template <class Put>
+bool read_fields(int line_no, const std::vector<field>& fields, char decimal, const table_data& data,
+                 const std::vector<std::size_t>& file_to_spec, const std::vector<const unit_info*>& si_unit,
+                 table_error& err, std::string& number, Put&& put) {
   for (std::size_t i = 0; i < fields.size(); ++i) {
     const auto k = file_to_spec[i];
     const auto& s = data.spec[k];
     const auto& f = fields[i];
     double v = 0.0;
-    const std::string col = "column '" + s.name + "': ";
+    auto col = [&] { return "column '" + s.name + "': "; };
     if (f.text.empty() && s.allow_missing && s.kind != column_kind::text) {
       v = std::nan("");
     } else {
@@ -348,23 +386,26 @@ bool read_row(const raw_row& row, char decimal, table_data& data, const std::vec
         case column_kind::quantity:
         case column_kind::number: {
           if (f.text.empty()) {
-            err = {status::domain, line_no, f.column, col + "empty field"};
+            err = {status::domain, line_no, f.column, col() + "empty field"};
             return false;
           }
-          std::string number = f.text;
-          if (decimal == ',')
+          std::string_view text = f.text;
+          if (decimal == ',' && f.text.find(',') != std::string::npos) {
+            number = f.text;
             for (auto& c : number)
               if (c == ',') c = '.';
-          const auto num = parse_number(number);
+            text = number;
+          }
+          const auto num = parse_number(text);
           if (!num) {
-            err = {status::domain, line_no, f.column, col + "'" + f.text + "' is not a number"};
+            err = {status::domain, line_no, f.column, col() + "'" + f.text + "' is not a number"};
             return false;
           }
           v = *num;
           if (s.kind == column_kind::quantity) {
-            const auto r = convert(v, *data.unit[k], *find_unit(si_symbol(s.dim)));
+            const auto r = convert(v, *data.unit[k], *si_unit[k]);
             if (!r.usable()) {
-              err = {r.st, line_no, f.column, col + status_message(static_cast<int>(r.st))};
+              err = {r.st, line_no, f.column, col() + status_message(static_cast<int>(r.st))};
               return false;
             }
             v = r.value;
@@ -374,7 +415,7 @@ bool read_row(const raw_row& row, char decimal, table_data& data, const std::vec
         case column_kind::date: {
           long days = 0;
           if (!parse_date(f.text, days)) {
-            err = {status::domain, line_no, f.column, col + "'" + f.text + "' is not a date YYYY-MM-DD"};
+            err = {status::domain, line_no, f.column, col() + "'" + f.text + "' is not a date YYYY-MM-DD"};
             return false;
           }
           v = static_cast<double>(days);
@@ -384,12 +425,54 @@ bool read_row(const raw_row& row, char decimal, table_data& data, const std::vec
           break;
       }
     }
-    data.values[k].push_back(v);
-    data.texts[k].push_back(f.text);
-    data.pos[k].push_back(f.column);
+    put(k, v, f);
   }
-  data.line.push_back(line_no);
   return true;
+}
+
+// The SI unit of every quantity column of the spec (null for the others).
+std::vector<const unit_info*> si_units(const std::vector<column_spec>& spec) {
+  std::vector<const unit_info*> out(spec.size(), nullptr);
+  for (std::size_t k = 0; k < spec.size(); ++k)
+    if (spec[k].kind == column_kind::quantity) out[k] = find_unit(si_symbol(spec[k].dim));
+  return out;
+}
+
+// Read the numbers of one data row; false (and data.error set) on a bad field.
+bool read_row(const raw_row& row, char decimal, table_data& data, const std::vector<std::size_t>& file_to_spec,
+              const std::vector<const unit_info*>& si_unit, std::string& number) {
+  const bool ok = read_fields(row.line, row.fields, decimal, data, file_to_spec, si_unit, data.error, number,
+                              [&](std::size_t k, double v, const field& f) {
+                                data.values[k].push_back(v);
+                                data.texts[k].push_back(f.text);
+                                data.pos[k].push_back(f.column);
+                              });
+  if (ok) data.line.push_back(row.line);
+  return ok;
+}
+
+// A line as read: CR and a first line's UTF-8 byte order mark removed; true for a line to skip
+// (blank or a '#' comment).
+bool skip_line(int line_no, std::string& line) {
+  if (!line.empty() && line.back() == '\r') line.pop_back();
+  if (line_no == 1 && line.size() >= 3 && static_cast<unsigned char>(line[0]) == 0xEF &&
+      static_cast<unsigned char>(line[1]) == 0xBB && static_cast<unsigned char>(line[2]) == 0xBF)
+    line.erase(0, 3);  // UTF-8 byte order mark written by some spreadsheets
+  const auto t = trim(line);
+  return t.empty() || t.front() == '#';
+}
+
+// The start of a table: the data without rows, for read_table and table_stream.
+table_data empty_table(std::string source, const std::vector<column_spec>& spec) {
+  table_data data;
+  data.source = std::move(source);
+  data.spec = spec;
+  data.present.assign(spec.size(), false);
+  data.unit.assign(spec.size(), nullptr);
+  data.values.assign(spec.size(), {});
+  data.texts.assign(spec.size(), {});
+  data.pos.assign(spec.size(), {});
+  return data;
 }
 
 }  // namespace
@@ -420,17 +503,19 @@ std::string civil_from_days(long z) {
 }
 
 std::optional<double> parse_number(std::string_view text) {
-  const std::string t(trim(text));
+  std::string_view t = trim(text);
   if (t.empty()) return std::nullopt;
-  // strtod also reads "inf", "nan" and hexadecimal floats: refuse them in data files.
+  // refuse "inf", "nan" and hexadecimal floats in data files
   for (const char c : t)
     if (!(std::isdigit(static_cast<unsigned char>(c)) || c == '.' || c == '-' || c == '+' || c == 'e' || c == 'E'))
       return std::nullopt;
-  const char* start = t.c_str();
-  char* end = nullptr;
-  errno = 0;
-  const double v = std::strtod(start, &end);
-  if (end == start || *end != '\0' || errno == ERANGE || !std::isfinite(v)) return std::nullopt;
+  if (t.front() == '+') {  // as strtod: one leading '+' (from_chars takes none)
+    t.remove_prefix(1);
+    if (t.empty() || t.front() == '+' || t.front() == '-') return std::nullopt;
+  }
+  double v = 0.0;  // correctly rounded as strtod, without its locale and copies (issue 20: a million rows)
+  const auto r = std::from_chars(t.data(), t.data() + t.size(), v, std::chars_format::general);
+  if (r.ec != std::errc() || r.ptr != t.data() + t.size() || !std::isfinite(v)) return std::nullopt;
   return v;
 }
 
@@ -501,14 +586,7 @@ table_data read_table(std::string_view text, const std::vector<column_spec>& spe
 
 table_data read_table(std::string_view text, const std::vector<column_spec>& spec, std::string source,
                       csv_dialect dialect) {
-  table_data data;
-  data.source = std::move(source);
-  data.spec = spec;
-  data.present.assign(spec.size(), false);
-  data.unit.assign(spec.size(), nullptr);
-  data.values.assign(spec.size(), {});
-  data.texts.assign(spec.size(), {});
-  data.pos.assign(spec.size(), {});
+  table_data data = empty_table(std::move(source), spec);
 
   std::vector<std::size_t> file_to_spec;  // per field of the file: spec index
   std::vector<raw_row> rows;
@@ -521,12 +599,7 @@ table_data read_table(std::string_view text, const std::vector<column_spec>& spe
     std::string line(text.substr(at, nl == std::string_view::npos ? std::string_view::npos : nl - at));
     at = nl == std::string_view::npos ? text.size() : nl + 1;
     ++line_no;
-    if (!line.empty() && line.back() == '\r') line.pop_back();
-    if (line_no == 1 && line.size() >= 3 && static_cast<unsigned char>(line[0]) == 0xEF &&
-        static_cast<unsigned char>(line[1]) == 0xBB && static_cast<unsigned char>(line[2]) == 0xBF)
-      line.erase(0, 3);  // UTF-8 byte order mark written by some spreadsheets
-    const auto t = trim(line);
-    if (t.empty() || t.front() == '#') continue;
+    if (skip_line(line_no, line)) continue;
     if (!header_done) {
       header_done = true;
       delim = header_delimiter(line_no, line, dialect, data.error);
@@ -547,8 +620,10 @@ table_data read_table(std::string_view text, const std::vector<column_spec>& spe
   }
   const char decimal = decimal_mark(delim, dialect, rows, file_to_spec, data);
   if (decimal == 0) return data;
+  const auto si_unit = si_units(spec);
+  std::string number;
   for (const auto& r : rows)
-    if (!read_row(r, decimal, data, file_to_spec)) return data;
+    if (!read_row(r, decimal, data, file_to_spec, si_unit, number)) return data;
   data.dialect = delim == ',' ? csv_dialect::comma : decimal == ',' ? csv_dialect::semicolon_comma : csv_dialect::semicolon_point;
   return data;
 }
@@ -570,5 +645,133 @@ table_data read_table_file(const std::string& path, const std::vector<column_spe
   ss << in.rdbuf();
   return read_table(ss.str(), spec, path, dialect);
 }
+
+
+// ---- streaming reader (issue 20)
+struct table_stream::impl {
+  std::unique_ptr<std::istream> owned;
+  std::istream* in = nullptr;
+  table_data data;
+  csv_dialect dialect = csv_dialect::detect;
+  std::vector<std::size_t> file_to_spec;
+  std::vector<const unit_info*> si_unit;
+  std::vector<field> fields;
+  decimal_state ds;
+  std::string line, number;
+  char delim = ',';
+  char decimal = 0;  // 0 while a ';' file has shown no decimal mark yet
+  int line_no = 0;
+  std::size_t rows = 0;
+  bool done = false;
+
+  bool get_line() {
+    while (std::getline(*in, line)) {
+      ++line_no;
+      if (!skip_line(line_no, line)) return true;
+    }
+    return false;
+  }
+  void start() {
+    si_unit = si_units(data.spec);
+    if (!get_line()) {
+      data.error = {status::insufficient_data, line_no > 0 ? line_no : 1, 0, "the file is empty: expected a header row"};
+      done = true;
+      return;
+    }
+    delim = header_delimiter(line_no, line, dialect, data.error);
+    if (delim == 0) {
+      done = true;
+      return;
+    }
+    read_header(line_no, line, delim, data, file_to_spec);
+    if (is_error(data.error.st)) done = true;
+    if (delim == ',') decimal = '.';
+    if (dialect == csv_dialect::semicolon_comma) decimal = ',';
+    if (dialect == csv_dialect::semicolon_point) decimal = '.';
+  }
+  void finish_dialect() {
+    if (delim == ';' && dialect == csv_dialect::detect && !ds.comma && !ds.point) decided_mark(delim, dialect, ds, data);
+    const char mark = decimal == 0 ? '.' : decimal;
+    data.dialect = delim == ',' ? csv_dialect::comma : mark == ',' ? csv_dialect::semicolon_comma : csv_dialect::semicolon_point;
+  }
+};
+
+table_stream::table_stream(std::istream& in, const std::vector<column_spec>& spec, std::string source,
+                           csv_dialect dialect)
+    : p_(new impl) {
+  p_->in = &in;
+  p_->data = empty_table(std::move(source), spec);
+  p_->dialect = dialect;
+  p_->start();
+}
+
+table_stream::table_stream(const std::string& path, const std::vector<column_spec>& spec, csv_dialect dialect)
+    : p_(new impl) {
+  p_->data = empty_table(path, spec);
+  p_->dialect = dialect;
+  auto f = std::make_unique<std::ifstream>(path, std::ios::binary);
+  if (!*f) {
+    p_->data.error = {status::misuse, 0, 0, "cannot open the file"};
+    p_->done = true;
+    return;
+  }
+  p_->in = f.get();
+  p_->owned = std::move(f);
+  p_->start();
+}
+
+table_stream::~table_stream() = default;
+
+bool table_stream::next(table_row& row) {
+  auto& s = *p_;
+  if (s.done) return false;
+  if (!s.get_line()) {
+    s.done = true;
+    if (s.rows == 0)
+      s.data.error = {status::insufficient_data, s.line_no, 0, "no data rows after the header row"};
+    else
+      s.finish_dialect();
+    return false;
+  }
+  auto& err = s.data.error;
+  split_line(s.line_no, s.line, s.delim, err, s.fields);
+  if (!is_error(err.st) && s.fields.size() != s.file_to_spec.size()) {
+    std::vector<raw_row> one;  // the message of read_table
+    split_row(s.line_no, s.line, s.delim, s.file_to_spec.size(), one, err);
+  }
+  if (!is_error(err.st) && s.decimal != '.' && s.decimal != ',' ) {
+    // a ';' file still detecting: the first number with a mark decides
+    if (check_decimals(s.line_no, s.fields, s.delim, s.dialect, s.file_to_spec, s.data, s.ds) && (s.ds.comma || s.ds.point))
+      s.decimal = decided_mark(s.delim, s.dialect, s.ds, s.data);
+  } else if (!is_error(err.st)) {
+    check_decimals(s.line_no, s.fields, s.delim, s.dialect, s.file_to_spec, s.data, s.ds);
+  }
+  if (is_error(err.st)) {
+    s.done = true;
+    return false;
+  }
+  const std::size_t n = s.data.spec.size();
+  row.line = s.line_no;
+  row.values.assign(n, std::nan(""));
+  row.texts.resize(n);
+  for (auto& t : row.texts) t.clear();
+  row.pos.assign(n, 0);
+  const bool ok = read_fields(s.line_no, s.fields, s.decimal == 0 ? '.' : s.decimal, s.data, s.file_to_spec, s.si_unit,
+                              err, s.number, [&](std::size_t k, double v, const field& f) {
+                                row.values[k] = v;
+                                row.texts[k] = f.text;
+                                row.pos[k] = f.column;
+                              });
+  if (!ok) {
+    s.done = true;
+    return false;
+  }
+  ++s.rows;
+  return true;
+}
+
+const table_data& table_stream::header() const noexcept { return p_->data; }
+const table_error& table_stream::error() const noexcept { return p_->data.error; }
+std::size_t table_stream::rows() const noexcept { return p_->rows; }
 
 }  // namespace pumploss

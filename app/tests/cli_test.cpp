@@ -4,6 +4,7 @@
 // library itself, never against a stored copy of a report.
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <cstdio>
 #include <cstdlib>
@@ -1153,4 +1154,82 @@ TEST(CliTestStand, AcceptanceCriteriaAndOptionalFit) {
   const auto bad = run({"test-stand", kDemo + "/test_stand.csv", "--setup", toml, "--out", out}, tmp);
   EXPECT_NE(bad.code, 0);
   EXPECT_NE(bad.err.find("min_percent"), std::string::npos) << bad.err;
+}
+
+// ---- issue 20 (health at scale) and issue 16 (the baseline file), s20-health
+
+namespace {
+// The number after `label` in the report ("Baseline:         3.08 L/min ...").
+double fact_number(const std::string& out, const std::string& label) {
+  const auto at = out.find(label);
+  if (at == std::string::npos) return std::nan("");
+  return std::stod(out.substr(out.find_first_not_of(' ', at + label.size())));
+}
+}  // namespace
+
+TEST(CliHealth, BaselineFileFromTestStand) {
+  temp_dir tmp;
+  const std::string out = tmp / "stand";
+  const auto r = run({"test-stand", kDemo + "/test_stand.csv", "--setup", kDemo + "/test_stand.toml", "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  const std::string base = slurp(out + "/test_stand_baseline.toml");
+  ASSERT_NE(base.find("[baseline]"), std::string::npos) << base;
+  EXPECT_NE(base.find("never block"), std::string::npos);
+  // the pump file of the demo with the baseline taken from the test-stand's file
+  std::string pump = slurp(kDemo + "/pump_p31_health.toml");
+  const auto b0 = pump.find("baseline_drain_flow");
+  ASSERT_NE(b0, std::string::npos);
+  pump.replace(b0, pump.find('\n', b0) - b0, "baseline_file = \"stand/test_stand_baseline.toml\"");
+  write_file(tmp / "pump.toml", pump);
+  write_file(tmp / "oil.toml", slurp(kDemo + "/oil.toml"));
+  const auto h = run({"health", kDemo + "/field_readings.csv", "--pump", tmp / "pump.toml"}, tmp);
+  ASSERT_EQ(h.code, 0) << h.err;
+  EXPECT_NE(h.out.find("baseline readings of"), std::string::npos) << h.out;
+  // the demo's truth (examples/demo/generate.py, baseline()): 3.082 L/min at 250 bar and 50 degC
+  // of a new pump, 0.3 L/min of it the compensator's constant part; the test stand's readings
+  // carry 1 % noise and its oil runs near 45 degC (self-calculated tolerance: 3 % and 0.15 L/min)
+  EXPECT_NEAR(fact_number(h.out, "Baseline:"), 3.082, 0.03 * 3.082) << h.out;
+  EXPECT_NEAR(fact_number(h.out, "Constant part:"), 0.3, 0.15) << h.out;
+  // refused: the baseline of another oil
+  std::string other_oil = slurp(kDemo + "/oil.toml");
+  other_oil.replace(other_oil.find("grade = 46"), 10, "grade = 68");
+  write_file(tmp / "oil.toml", other_oil);
+  const auto bad = run({"health", kDemo + "/field_readings.csv", "--pump", tmp / "pump.toml"}, tmp);
+  EXPECT_EQ(bad.code, 2);
+  EXPECT_NE(bad.err.find("another oil"), std::string::npos) << bad.err;
+}
+
+TEST(CliHealth, ManyReadingsAreSummarised) {
+  temp_dir tmp;
+  // 5000 invented readings, a reading every 3 hours of running (the demo pump at 50 degC)
+  std::string csv =
+      "date,operating hours,outlet pressure [bar],oil temperature [degC],speed [rpm],drain flow [L/min],drain temperature [degC]\n";
+  const long d0 = pumploss::days_from_civil(2023, 1, 1);
+  for (int i = 0; i < 5000; ++i) {
+    const double hours = 100 + 3.0 * i;
+    const double q = 3.1 * (1 + 2e-5 * hours) * (1 + 0.01 * std::sin(1.7 * i));
+    char line[96];
+    std::snprintf(line, sizeof line, ",%.1f,250,50,1500,%.4f,54\n", hours, i == 777 ? 0.0 : q);
+    csv += pumploss::civil_from_days(d0 + static_cast<long>(hours / 24)) + line;
+  }
+  const std::string file = tmp / "many.csv", out = tmp / "out";
+  write_file(file, csv);
+  const auto r = run({"health", file, "--pump", kDemo + "/pump_p31_health.toml", "--out", out}, tmp);
+  ASSERT_EQ(r.code, 0) << r.err;
+  // the text: head and tail, never every row; the CSV: every row
+  EXPECT_LT(std::count(r.out.begin(), r.out.end(), '\n'), 200) << r.out.substr(0, 4000);
+  EXPECT_NE(r.out.find("rows  (all in health_readings.csv)"), std::string::npos) << r.out.substr(0, 6000);
+  EXPECT_NE(r.out.find("5000 readings"), std::string::npos);
+  EXPECT_NE(r.out.find("4999 scored, 1 refused"), std::string::npos) << r.out.substr(0, 3000);
+  const auto t = read_out(out + "/health_readings.csv");
+  ASSERT_EQ(t.rows.size(), 5000u);
+  EXPECT_EQ(t.text(777, "verdict"), "refused");
+  EXPECT_EQ(read_out(out + "/health_refused.csv").rows.size(), 1u);
+  // the plot aggregates: a median and a band per period, said in the legend; cautions kept
+  const std::string svg = slurp(out + "/health.svg");
+  EXPECT_NE(svg.find("median per"), std::string::npos);
+  EXPECT_NE(svg.find("blows the shaft seal"), std::string::npos);
+  EXPECT_LT(svg.size(), 200000u);
+  // no scratch file left beside the output folder
+  for (const auto& e : fs::directory_iterator(tmp.path)) EXPECT_EQ(e.path().filename().string().find(".partial"), std::string::npos);
 }

@@ -27,6 +27,7 @@
 #ifndef PUMPLOSS_HEALTH_HPP
 #define PUMPLOSS_HEALTH_HPP
 
+#include <algorithm>
 #include <cmath>
 #include <cstddef>
 #include <limits>
@@ -206,6 +207,15 @@ struct [[nodiscard]] health_assessment {
 };
 
 namespace detail {
+// Median of w[0..m) (m >= 1), reordering w: linear time on average (std::nth_element), so that a
+// column of a million readings costs no more than reading it (issue 20; was an insertion sort).
+template <class T>
+inline T median_in_place(T* w, std::size_t m) {
+  const auto mid = static_cast<std::ptrdiff_t>(m / 2);
+  std::nth_element(w, w + mid, w + m);
+  if (m % 2) return w[mid];
+  return (*std::max_element(w, w + mid) + w[mid]) / 2;
+}
 template <class T>
 inline T health_dp(const health_reading<T>& r) {
   return r.outlet_pa - r.case_pa;
@@ -483,13 +493,7 @@ inline bool health_temperatures_look_fahrenheit(const T* t_k, std::size_t count,
   for (std::size_t i = 0; i < count; ++i)
     if (detail::finite(t_k[i])) work[m++] = t_k[i];
   if (m == 0) return false;
-  for (std::size_t i = 1; i < m; ++i)  // insertion sort: columns are short
-    for (std::size_t j = i; j > 0 && work[j] < work[j - 1]; --j) {
-      const T tmp = work[j];
-      work[j] = work[j - 1];
-      work[j - 1] = tmp;
-    }
-  const T med_c = (m % 2 ? work[m / 2] : (work[m / 2 - 1] + work[m / 2]) / 2) - T(273.15);
+  const T med_c = detail::median_in_place(work, m) - T(273.15);
   auto f_to_k = [](T c_as_read) { return (c_as_read - T(32)) * T(5) / T(9) + T(273.15); };
   if (!(med_c > T(85))) return false;
   for (std::size_t i = 0; i < m; ++i) {
@@ -772,13 +776,7 @@ inline result<T> health_noise_sigma(const T* x, std::size_t n, T* work) {
     const T d = x[i] - x[i - 1];
     work[m++] = d < T(0) ? -d : d;
   }
-  for (std::size_t i = 1; i < m; ++i)
-    for (std::size_t j = i; j > 0 && work[j] < work[j - 1]; --j) {
-      const T tmp = work[j];
-      work[j] = work[j - 1];
-      work[j - 1] = tmp;
-    }
-  const T med = m % 2 ? work[m / 2] : (work[m / 2 - 1] + work[m / 2]) / 2;
+  const T med = detail::median_in_place(work, m);
   return {med / detail::constant<T>(0.95387255240084L, "0.95387255240084"), status::ok};
 }
 

@@ -30,6 +30,8 @@
 #define PUMPLOSS_TABLE_READER_HPP
 
 #include <cstddef>
+#include <istream>
+#include <memory>
 #include <optional>
 #include <string>
 #include <string_view>
@@ -167,6 +169,59 @@ PUMPLOSS_CXX_API const char* dimension_name(dimension d) noexcept;
 /// @param d the dimension
 /// @return the list
 PUMPLOSS_CXX_API std::string unit_symbols(dimension d);
+
+
+// ---- streaming reader (issue 20): a table read row by row in bounded memory
+/// One data row of a table read by table_stream: per spec column its SI value (date: days since
+/// 1970-01-01; missing or absent: NaN), the field as written and its 1-based character column.
+struct table_row {
+  int line = 0;                    ///< 1-based line number in the file
+  std::vector<double> values;      ///< per spec column
+  std::vector<std::string> texts;  ///< per spec column (empty for a column absent from the file)
+  std::vector<int> pos;            ///< per spec column (0 for a column absent from the file)
+};
+
+/// A table read row by row: the same format, checks and messages as read_table(), in memory
+/// bounded by the longest line whatever the row count. The decimal mark of a ';' file is
+/// detected from the first number that holds one (read_table() looks at every number first), so
+/// a file that mixes marks is refused at the later row. Nothing here throws except std::bad_alloc.
+class table_stream {
+ public:
+  /// Read the header row of a stream (not owned; it must outlive this reader).
+  /// @param in the text
+  /// @param spec the expected columns
+  /// @param source a name for messages (the file name)
+  /// @param dialect the delimiter and decimal mark, or detect
+  PUMPLOSS_CXX_API table_stream(std::istream& in, const std::vector<column_spec>& spec, std::string source,
+                                csv_dialect dialect = csv_dialect::detect);
+  /// Open a file and read its header row (status::misuse with line 0 when it cannot be opened).
+  /// @param path the file
+  /// @param spec the expected columns
+  /// @param dialect the delimiter and decimal mark, or detect
+  PUMPLOSS_CXX_API table_stream(const std::string& path, const std::vector<column_spec>& spec,
+                                csv_dialect dialect = csv_dialect::detect);
+  PUMPLOSS_CXX_API ~table_stream();
+  table_stream(const table_stream&) = delete;
+  table_stream& operator=(const table_stream&) = delete;
+  /// The next data row.
+  /// @param row receives the row (its vectors are reused)
+  /// @return true with `row` filled; false at the end of the table or on an error (see error())
+  PUMPLOSS_CXX_API bool next(table_row& row);
+  /// The table without rows: source, spec, present, unit, notes, error and (after the last row)
+  /// the dialect read; `rows()` of it is 0.
+  /// @return the header data
+  PUMPLOSS_CXX_API const table_data& header() const noexcept;
+  /// Why reading stopped (st ok while rows come and at a clean end). A file without data rows
+  /// is status::insufficient_data, as in read_table().
+  /// @return the error
+  PUMPLOSS_CXX_API const table_error& error() const noexcept;
+  /// @return the number of data rows read so far
+  PUMPLOSS_CXX_API std::size_t rows() const noexcept;
+
+ private:
+  struct impl;
+  std::unique_ptr<impl> p_;
+};
 
 }  // namespace pumploss
 

@@ -1,0 +1,42 @@
+#!/usr/bin/env bash
+# Scale benchmark of `pumploss health` (issue 20): N readings (default 1 000 000) generated into a
+# scratch folder, `pumploss health` on them (with --out, every row written to the CSV) and a
+# pandas script that only reads the file and normalises the flow, one after the other in one
+# run; prints the seconds of each, their ratio and the peak memory (max RSS, /usr/bin/time -v).
+# Usage: scripts/bench_health_scale.sh [pumploss binary] [N]
+#   default binary: build/app/pumploss. Exit 1 when health is slower than pandas or its peak RSS
+#   exceeds 200 MB and PUMPLOSS_BENCH_STRICT=1 (default: report only).
+set -euo pipefail
+here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+bin="${1:-$here/build/app/pumploss}"
+n="${2:-1000000}"
+scratch="$(mktemp -d)"
+trap 'rm -rf "$scratch"' EXIT
+cp "$here/examples/demo/oil.toml" "$here/examples/demo/pump_p31_health.toml" "$scratch/"
+/usr/bin/python3 "$here/bench/health_scale.py" generate "$n" "$scratch/readings.csv"
+echo "readings: $n rows, $(du -h "$scratch/readings.csv" | cut -f1)"
+run() {  # label, command...: prints seconds and max RSS (kB)
+  local label="$1"; shift
+  /usr/bin/time -v -o "$scratch/$label.time" "$@" >"$scratch/$label.out" 2>&1 || { cat "$scratch/$label.out"; exit 2; }
+  local s kb
+  s="$(awk -F': ' '/Elapsed \(wall clock\)/ {n=split($2,a,":"); t=0; for(i=1;i<=n;i++) t=t*60+a[i]; print t}' "$scratch/$label.time")"
+  kb="$(awk -F': ' '/Maximum resident set size/ {print $2}' "$scratch/$label.time")"
+  cpu="$(awk -F': ' '/User time|System time/ {t+=$2} END {print t}' "$scratch/$label.time")"
+  echo "$label $s $kb $cpu"
+}
+h="$(run health "$bin" health "$scratch/readings.csv" --pump "$scratch/pump_p31_health.toml" --out "$scratch/out")"
+p="$(run pandas /usr/bin/python3 "$here/bench/health_scale.py" pandas "$scratch/readings.csv")"
+echo "command: $bin health readings.csv --pump pump_p31_health.toml --out out   (N = $n)"
+echo "command: /usr/bin/python3 bench/health_scale.py pandas readings.csv"
+/usr/bin/python3 - "$h" "$p" "$n" "$scratch/out/health_readings.csv" <<'PY'
+import os, sys
+h, p, n, csv = sys.argv[1].split(), sys.argv[2].split(), int(sys.argv[3]), sys.argv[4]
+hs, hkb, hcpu, ps, pkb, pcpu = float(h[1]), int(h[2]), float(h[3]), float(p[1]), int(p[2]), float(p[3])
+rows = sum(1 for line in open(csv) if line and line[0].isdigit())
+print(f"pumploss health: {hs:.2f} s wall, {hcpu:.2f} s CPU, peak RSS {hkb / 1024:.0f} MB; CSV rows {rows}")
+print(f"pandas read + normalise: {ps:.2f} s wall, {pcpu:.2f} s CPU, peak RSS {pkb / 1024:.0f} MB")
+print(f"ratio health / pandas: {hs / ps:.2f} wall, {hcpu / pcpu:.2f} CPU (at most 1 asked; on a shared machine CPU is the fairer)")
+ok = hs <= ps and hkb <= 200 * 1024 and rows == n
+print("figures reached" if ok else "figures NOT reached")
+sys.exit(1 if (not ok and os.environ.get("PUMPLOSS_BENCH_STRICT") == "1") else 0)
+PY
