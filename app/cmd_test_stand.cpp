@@ -31,7 +31,7 @@ std::string point_flag(const pumploss::test_stand_point& p) {
   return f;
 }
 
-// ---- s16-report: the figures of the HTML report (issue 16, Deliver 8)
+// ---- the figures of the HTML report (issue 16, Deliver 8)
 // One series per speed level of a quantity over the pressure difference, the outliers and the
 // excluded set points as their own marker series.
 svg::plot per_speed_plot(const pumploss::test_stand_result& res, const display_units& du, const std::string& title,
@@ -307,7 +307,7 @@ int run_test_stand(const stand_options& o) {
   c.level_format = "{:g} %";
   p.contours = c;
   p.lines.push_back(measured);
-  {  // s16-report: the extrapolated cells shaded, the test envelope drawn, the outliers marked
+  {  // the extrapolated cells shaded, the test envelope drawn, the outliers marked
     svg::shade sh{"extrapolated by the model", {}};
     const auto& st = res.maps.back().st;
     auto cell_out = [&](std::size_t i, std::size_t j) { return st[i * nx + j] != status::ok; };
@@ -384,7 +384,7 @@ int run_test_stand(const stand_options& o) {
   files.add("test_stand_map.csv", render_csv(tmap, du));
   const std::string map_svg = p.render();
   files.add("test_stand_map.svg", map_svg);
-  {  // ---- s16-report: the customer's HTML report beside the text report (issue 16, Deliver 8)
+  {  // ---- the customer's HTML report beside the text report (issue 16, Deliver 8)
     std::vector<html_figure> figs;
     const struct { const char* id; const char* name; double (*f)(const pumploss::test_stand_result&, std::size_t); } effs[] = {
         {"fig-eta-t", "Overall efficiency", +[](const pumploss::test_stand_result& rr, std::size_t k) { return rr.points[k].eta.eta_t.value; }},

@@ -273,7 +273,7 @@ std::vector<std::string> output_set::write_all(const std::string& dir) const {
   return written;
 }
 
-// ---- s16-report: the HTML report (issue 16, Deliver 8)
+// ---- the HTML report (issue 16, Deliver 8)
 namespace {
 
 std::string html_escape(const std::string& s) {

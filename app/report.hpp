@@ -81,7 +81,7 @@ std::string render_text(const report& r, const display_units& u);
 /// The CSV reads back with read_csv().
 std::string render_csv(const table& t, const display_units& u);
 
-// ---- s16-report: the HTML report (issue 16, Deliver 8)
+// ---- the HTML report (issue 16, Deliver 8)
 /// A figure of an HTML report: an SVG document as svg::plot::render() gives it, with a caption.
 struct html_figure {
   std::string id;       ///< unique in the report (used for the figure's element id and its clip paths)

@@ -61,7 +61,7 @@ if b4 in med and l4 in med:
           f"{med[l4]['bytes_per_second']/1e9:.2f} GB/s: ratio {med[b4]['bytes_per_second'] / med[l4]['bytes_per_second']:.2f}")
 w = "BM_WilsonFit/10000"
 line(f"Wilson fit of 10 000 points {ns(w)/1e6:.3f} ms (goal < 2 ms)", ns(w) < 2e6)
-# s16-report (issue 16): 100 000 logged test-stand rows reduced in a time comparable to reading them
+# issue 16: 100 000 logged test-stand rows reduced in a time comparable to reading them
 rd, rr = "BM_TestStandReadCsv", "BM_TestStandReduce"
 if rd in med and rr in med:
     line(f"test stand, 100 000 logged rows: reading the CSV text {ns(rd)/1e6:.1f} ms, reduce_test_stand "

@@ -17,7 +17,7 @@ T touch_all() {
   sum += pumploss::gap_plates_height_couette(T(1e-7), T(1e6), T(0.04), T(0.02), T(0.01), T(2)).value;
   sum += pumploss::gap_pad_orifice(T(2.5e7), T(870), T(0.04), T(4e-4), T(0.7), T(0.005), T(0.008), T(1.5e-5), T(0.02)).force_n;
   sum += pumploss::orifice_flow_viscous(T(1e7), T(870), T(0.04), T(1e-3), T(0.61), T(0.163)).value;
-  // flow test, gear and vane pumps, motors, shaft seal (h8)
+  // flow test, gear and vane pumps, motors, shaft seal
   const pumploss::flow_test_setup<T> fs{T(0), T(0.85), {T(25), T(24), T(7500)}, T(0.02), T(0.028), T(1.7e7), T(24),
                                         T(0.95), T(0.85), T(0.05)};
   sum += pumploss::flow_test_evaluate(pumploss::flow_reading<T>{T(3e-4), T(0), T(0)},

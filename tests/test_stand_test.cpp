@@ -501,7 +501,7 @@ TEST(TestStandLogged, AcceptanceVerdictsAtAndAroundEachLimit) {
   EXPECT_EQ(pumploss::reduce_test_stand(s, L.r).messages.front().setting, "acceptance");
 }
 
-// ---- s16-report (issue 16): the outlier status, the fit status per point, the map's defaults and
+// ---- issue 16: the outlier status, the fit status per point, the map's defaults and
 // its temperature. Truth: the Wilson pump above (self-calculated, invented for the test).
 TEST(TestStandLogged, OutliersHaveTheirOwnStatusAndEveryPointItsFitStatus) {
   const truth w;

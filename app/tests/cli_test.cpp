@@ -1156,7 +1156,7 @@ TEST(CliTestStand, AcceptanceCriteriaAndOptionalFit) {
   EXPECT_NE(bad.err.find("min_percent"), std::string::npos) << bad.err;
 }
 
-// ---- issue 20 (health at scale) and issue 16 (the baseline file), s20-health
+// ---- issue 20 (health at scale) and issue 16 (the baseline file)
 
 namespace {
 // The number after `label` in the report ("Baseline:         3.08 L/min ...").

@@ -1942,7 +1942,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_motor_efficiency_uncertainty(
     double u_displacement_m3_rev, double u_speed_rev_s, double u_dp_pa, double u_flow_m3_s, double u_torque_n_m,
     double r_flow_displacement, double *u_eta_v, double *u_eta_hm, double *u_eta_t);
 /** @} */
-/* ---- loss models with constant and compression flow columns (h7) ---- */
+/* ---- loss models with constant and compression flow columns ---- */
 #define PUMPLOSS_FLOW_TERM_CONSTANT 1     /**< Extra flow column: constant flow loss Q_c. */
 #define PUMPLOSS_FLOW_TERM_COMPRESSION 2  /**< Extra flow column: compression C_k D omega dp / K. */
 #define PUMPLOSS_CRITERION_AIC 0          /**< Model choice by Akaike's information criterion. */
@@ -2136,7 +2136,7 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_reason_text(int reason);
  *  @return "sound", "acceptable", "elevated", "worn", or "unknown" (static storage) */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_health_level_name(int level);
 
-/* -- health, version 2: one normalisation model, plausibility, streaming monitor (h4) -- */
+/* -- health, version 2: one normalisation model, plausibility, streaming monitor -- */
 #define PUMPLOSS_REASON_SPEED_OFF_RATED 0x400     /**< Speed away from rated (flag). */
 #define PUMPLOSS_REASON_DRAIN_COLDER 0x800        /**< Drain colder than inlet: sensors swapped? (flag) */
 #define PUMPLOSS_REASON_STATE_DIFFERS 0x1000      /**< Operating state differs from the baseline's: heat not assessed. */
@@ -2596,7 +2596,7 @@ PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_piston_pump_path_name(int path);
  *  @param group PUMPLOSS_GROUP_*
  *  @return "piston", "slipper", ... or "unknown" (static storage) */
 PUMPLOSS_API const char *PUMPLOSS_CALL pumploss_piston_pump_group_name(int group);
-/* ---- piston pump: kinematics, controller modes, force balance, non-case losses (h7) ---- */
+/* ---- piston pump: kinematics, controller modes, force balance, non-case losses ---- */
 #define PUMPLOSS_MODE_ON_STROKE 0     /**< Controller mode: on stroke (control chamber vented). */
 #define PUMPLOSS_MODE_COMPENSATING 1  /**< Controller mode: compensating (control piston and bleed at control pressure). */
 #define PUMPLOSS_MODE_DEADHEAD 2      /**< Controller mode: deadhead (compensating at zero displacement). */
@@ -3192,7 +3192,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_outliers(const pumploss_test_
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_acceptance(const pumploss_test_stand *ts, size_t index, int *pass,
                                                               int *tested, double *value, double *U, double *margin,
                                                               size_t *point);
-/* ---- s16-report: the fit status per set point, the map's temperature (issue 16) ---- */
+/* ---- the fit status per set point, the map's temperature (issue 16) ---- */
 /**
  * The fit status of each set point: the status of the first fitted model's prediction there.
  * A point whose residuals (pumploss_test_stand_points()) are NaN has an error status here saying
@@ -3220,7 +3220,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_point_fit(const pumploss_test
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_map_temperature(const pumploss_test_stand *ts, double *t_k,
                                                                    double *mu_pa_s, double *tested_lo_k,
                                                                    double *tested_hi_k);
-/* ---- end s16-report ---- */
+
 /** @} */
 /* ==== flowtest ==== */
 /** @name Field flow test of any pump

@@ -593,7 +593,7 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_acceptance(const pumploss_tes
   return PUMPLOSS_OK;
 }
 
-// ---- s16-report: the fit status per set point, the map's temperature (issue 16)
+// ---- the fit status per set point, the map's temperature (issue 16)
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_test_stand_point_fit(const pumploss_test_stand* ts, size_t count,
                                                              int fit_status[]) {
   if (ts == nullptr || fit_status == nullptr) return PUMPLOSS_EMISUSE;
