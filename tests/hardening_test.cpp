@@ -71,10 +71,13 @@ struct monitor_fixture : ::testing::Test {
     ASSERT_EQ(pumploss_health_set_description(h, 0.3e-3 / 60.0, 0.0, 25.0, 25.0), PUMPLOSS_OK);
     pumploss_health_monitor* m = make();
     for (int i = 0; i < 30; ++i) {
-      if (i == 5) ASSERT_EQ(pumploss_health_monitor_save(m, learning.data(), learning.size()), PUMPLOSS_WUNDEFINED);
+      if (i == 5) {
+        ASSERT_EQ(pumploss_health_monitor_save(m, learning.data(), learning.size()), PUMPLOSS_WUNDEFINED);
+      }
       feed(m, i, 4e-3 / 60.0 * (1.0 + 0.001 * (i % 3 - 1)));
     }
-    ASSERT_EQ(pumploss_health_monitor_save(m, learned.data(), learned.size()), PUMPLOSS_OK);
+    // WUNDEFINED: no step yet, so the last step time is NaN
+    ASSERT_EQ(pumploss_health_monitor_save(m, learned.data(), learned.size()), PUMPLOSS_WUNDEFINED);
     pumploss_health_monitor_destroy(m);
   }
   void TearDown() override { pumploss_health_destroy(h); }
@@ -138,7 +141,7 @@ TEST_F(monitor_fixture, AGivenBaselineCannotBeReplaced) {
   pumploss_health_monitor* m = make();
   for (int i = 0; i < 14; ++i) feed(m, i, 4e-3 / 60.0);
   std::vector<double> s(PUMPLOSS_HEALTH_MONITOR_STATE_COUNT);
-  ASSERT_EQ(pumploss_health_monitor_save(m, s.data(), s.size()), PUMPLOSS_OK);
+  ASSERT_EQ(pumploss_health_monitor_save(m, s.data(), s.size()), PUMPLOSS_WUNDEFINED);
   EXPECT_EQ(pumploss_health_monitor_restore(m, s.data(), s.size()), PUMPLOSS_OK);
   s[10] *= 2.0;
   EXPECT_EQ(pumploss_health_monitor_restore(m, s.data(), s.size()), PUMPLOSS_EVALIDITY);

@@ -1706,7 +1706,8 @@ typedef struct pumploss_model pumploss_model;
  *        NULL on every error, like every create function of the API.
  * @return PUMPLOSS_OK; PUMPLOSS_WILLCONDITIONED (coefficients uncertain); PUMPLOSS_EDATA;
  *         PUMPLOSS_EDOMAIN (also for an unknown machine or model kind); PUMPLOSS_ENONFINITE;
- *         PUMPLOSS_EMISUSE (NULL array); PUMPLOSS_ENOMEM. @sa pumploss::fit_loss_model
+ *         PUMPLOSS_EOVERFLOW (finite data that overflow the fit, e.g. flows near the largest
+ *         double); PUMPLOSS_EMISUSE (NULL array); PUMPLOSS_ENOMEM. @sa pumploss::fit_loss_model
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model_kind, double displacement_m3_rev,
                                                      double rho_kg_m3, size_t count, const double *dp_pa,
