@@ -45,14 +45,10 @@ double colebrook_fixed_point(double re, double rr) {
   return 1.0 / (x * x);
 }
 
-/// The library's Colebrook solve (detail::colebrook_unchecked<double>) with its last step
-/// switchable, to show what the double-double finish costs and buys (docs/pages/performance.md).
-/// Finish, how f = (ln 10/2)^2/(F0 + d)^2 is assembled: 0 in plain double; 1 in double-double
-/// arithmetic as the library does, but with its exact products from std::fma (a library call
-/// unless the compiler targets a hardware FMA) where the library (detail::two_product) uses an
-/// FMA instruction or, on a target without one, Dekker's split.
-template <int Finish>
-double colebrook_variant(double re, double rr) {
+/// The library's Colebrook solve (detail::colebrook_unchecked<double>) with its last step in
+/// plain double instead of double-double arithmetic, f = (ln 10/2)^2/(F0 + d)^2: what the
+/// double-double finish costs (docs/pages/performance.md; it buys 2 ulp worst instead of 4).
+double colebrook_plain_finish(double re, double rr) {
   const double ln10 = 2.302585092994045684;
   const double x1 = rr * re * (ln10 / 18.574);
   const double x2 = std::log(re) + pumploss::detail::clamond_c2<double>();
@@ -68,24 +64,8 @@ double colebrook_variant(double re, double rr) {
   const double g = f + std::log(s);
   const double d = -g * s * (1.0 / (s + c));
   const double k_hi = 1.3254745276195996;
-  if constexpr (Finish > 0) {
-    auto exact = [](double a, double b, double& p, double& e) {
-      p = a * b;
-      e = std::fma(a, b, -p);
-    };
-    const double k_lo = -1.0467943915251679e-16, inv_k = 0.7544467880464557;
-    double p_hi, p_err;
-    exact(f, f, p_hi, p_err);
-    const double p_lo = p_err + 2.0 * f * d;
-    const double q = k_hi / p_hi;
-    double qp_hi, qp_lo;
-    exact(q, p_hi, qp_hi, qp_lo);
-    const double r = ((k_hi - qp_hi) - qp_lo) + (k_lo - q * p_lo);
-    return q + r * (q * inv_k);
-  } else {
-    const double fd = f + d;
-    return k_hi / (fd * fd);
-  }
+  const double fd = f + d;
+  return k_hi / (fd * fd);
 }
 
 /// Worst ulp distance from the 50-digit root over the 64 benchmark points.
@@ -108,32 +88,20 @@ void BM_FrictionColebrook(benchmark::State& state) {
 }
 BENCHMARK(BM_FrictionColebrook);
 
-void BM_FrictionColebrookFixedPoint(benchmark::State& state) {
+/// A Colebrook solve written here (double in, double out) over the 64 points, with its worst ulp.
+template <double (*Solve)(double, double)>
+void BM_ColebrookHere(benchmark::State& state) {
   const auto& p = points();
   std::size_t i = 0;
   for (auto _ : state) {
-    const double f = colebrook_fixed_point(p[i].re, p[i].rr);
+    const double f = Solve(p[i].re, p[i].rr);
     benchmark::DoNotOptimize(f);
     i = (i + 1) & 63;
   }
-  state.counters["max_ulp"] = worst_ulp(colebrook_fixed_point);
+  state.counters["max_ulp"] = worst_ulp(Solve);
 }
-BENCHMARK(BM_FrictionColebrookFixedPoint);
-
-/// The variants of colebrook_variant(), each with its worst ulp over the 64 points.
-template <int Finish>
-void BM_FrictionColebrookVariant(benchmark::State& state) {
-  const auto& p = points();
-  std::size_t i = 0;
-  for (auto _ : state) {
-    const double f = colebrook_variant<Finish>(p[i].re, p[i].rr);
-    benchmark::DoNotOptimize(f);
-    i = (i + 1) & 63;
-  }
-  state.counters["max_ulp"] = worst_ulp(colebrook_variant<Finish>);
-}
-BENCHMARK_TEMPLATE(BM_FrictionColebrookVariant, 0)->Name("BM_FrictionColebrookPlainFinish");
-BENCHMARK_TEMPLATE(BM_FrictionColebrookVariant, 1)->Name("BM_FrictionColebrookFmaCallFinish");
+BENCHMARK_TEMPLATE(BM_ColebrookHere, colebrook_fixed_point)->Name("BM_FrictionColebrookFixedPoint");
+BENCHMARK_TEMPLATE(BM_ColebrookHere, colebrook_plain_finish)->Name("BM_FrictionColebrookPlainFinish");
 
 void BM_FrictionHaaland(benchmark::State& state) {
   const auto& p = points();
