@@ -40,18 +40,14 @@ inline T clamond_c2() {
                      "-0.7793974884556819406441139701653776731705");
 }
 
-/// Exact product a * b = p + e (Dekker's TwoProduct; one FMA where the target has it).
+/// Exact product a * b = p + e by one fused multiply-add (an instruction where the compiler
+/// targets one, else the C library's fma, which uses the processor's FMA when it has one).
 /// Exact when no partial product overflows or underflows (|a|, |b| within 1e-100..1e100 here).
+/// (Dekker's split in place of a library fma was measured and removed: 24 % slower on a
+/// processor with FMA; docs/pages/performance.md.)
 inline void two_product(double a, double b, double& p, double& e) {
   p = a * b;
-#if defined(__FMA__) || defined(__ARM_FEATURE_FMA)
   e = std::fma(a, b, -p);
-#else  // without a hardware FMA std::fma is a library call: Veltkamp's split is cheaper
-  const double split = 134217729.0;  // 2^27 + 1
-  const double sa = split * a, ah = sa - (sa - a), al = a - ah;
-  const double sb = split * b, bh = sb - (sb - b), bl = b - bh;
-  e = ((ah * bh - p) + ah * bl + al * bh) + al * bl;
-#endif
 }
 
 /// Colebrook-White in Clamond's variable F = (ln 10 / 2) / sqrt(f), no input checks.
@@ -165,10 +161,9 @@ inline result<T> friction_laminar(T reynolds, T laminar_constant = T(64)) {
 /// \f$ F_0 = X_2 - 0.2 \f$, then one Newton step on
 /// \f$ G(F) = F + \ln\!\left(\tfrac{\varepsilon/D}{3.7} + \tfrac{5.02\,F}{Re \ln 10}\right) \f$
 /// whose correction is kept apart from \f$F_0\f$, and \f$ f = (\ln 10/2)^2/F^2 \f$ formed in
-/// double-double arithmetic (exact products: an FMA where the target has one, else Dekker's
-/// split). No loop runs to a tolerance: the work is always 4 logarithms and 8 divisions, 6 of
-/// them off the dependent chain
-/// (more Newton steps, fixed in number, for multiprecision T). Finite for every Re up to the
+/// double-double arithmetic (exact products by fused multiply-add). No loop runs to a
+/// tolerance: the work is always 4 logarithms and 8 divisions, 6 of them off the dependent
+/// chain (more Newton steps, fixed in number, for multiprecision T). Finite for every Re up to the
 /// largest double.
 ///
 /// @param reynolds Reynolds number Re, > 0 (1000 or more; 4e3 to 1e8 is the tested range)
