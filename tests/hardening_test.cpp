@@ -106,8 +106,9 @@ TEST_F(monitor_fixture, OwnStatesAreRestored) {
 }
 
 TEST_F(monitor_fixture, StatesTheMonitorNeverHoldsAreRefused) {
-  // Layout (include/pumploss/health_monitor.hpp, save()): [9] noise, [10] baseline, [15] CUSUM
-  // noise, [16]/[17] the cumulative sums, [22] last step time, [25..56] history, [57..88] times.
+  // Layout (include/pumploss/health_monitor.hpp, save()): [3] accepted count, [6] learning sum,
+  // [9] noise, [10] baseline, [11] level, [15] CUSUM noise, [16]/[17] the cumulative sums,
+  // [22] last step time, [24] held direction, [25..56] history, [57..88] times, [89] examined.
   struct edit {
     const std::vector<double>* base;
     std::size_t index;
@@ -120,6 +121,10 @@ TEST_F(monitor_fixture, StatesTheMonitorNeverHoldsAreRefused) {
       {&learned, 15, -1.0},  {&learned, 16, -5.0},   {&learned, 17, -5.0},    // CUSUM
       {&learned, 22, inf},   {&learned, 22, -inf},   {&learned, 30, kNaN},    // times, history
       {&learned, 30, inf},   {&learned, 60, inf},
+      // the checks that were there before: a count that is no whole number, a level outside
+      // 0..3, a held direction outside -1, 0, 1, a damaged index, a non-finite learning sum
+      {&learned, 3, 2.5},    {&learned, 11, 7.0},    {&learned, 24, 0.5},
+      {&learned, 89, -1.0},  {&learned, 6, inf},
   };
   for (const edit& e : edits) {
     std::vector<double> bad = *e.base;
