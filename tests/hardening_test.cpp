@@ -53,9 +53,15 @@ TEST(Hardening, LossModelOrdinaryFlowsStillFit) {
   const int st = pumploss_model_create_terms(PUMPLOSS_MOTOR, PUMPLOSS_MODEL_SCHLOESSER, 5e-5, 5e-5, 870.0, 1e7, 1,
                                              PUMPLOSS_CRITERION_BIC, 5, kDp, kSpeed, kMu, flow, kTorque, &h);
   ASSERT_FALSE(st > 0 && st < 100) << st;
-  double rq[5], rt[5];
-  EXPECT_FALSE(pumploss_model_residuals(h, 5, rq, rt) > 0 && pumploss_model_residuals(h, 5, rq, rt) < 100);
+  double rq[6], rt[6];
+  const int rs = pumploss_model_residuals(h, 5, rq, rt);
+  EXPECT_FALSE(rs > 0 && rs < 100) << rs;
   for (int i = 0; i < 5; ++i) EXPECT_TRUE(std::isfinite(rq[i]) && std::isfinite(rt[i])) << i;
+  // fuzz_handles (corpus finding-model-residuals-padding): arrays longer than the points came
+  // back with PUMPLOSS_OK and NaN in the extra elements; a NaN output is PUMPLOSS_WUNDEFINED
+  EXPECT_EQ(pumploss_model_residuals(h, 6, rq, rt), PUMPLOSS_WUNDEFINED);
+  for (int i = 0; i < 5; ++i) EXPECT_TRUE(std::isfinite(rq[i]) && std::isfinite(rt[i])) << i;
+  EXPECT_TRUE(std::isnan(rq[5]) && std::isnan(rt[5]));
   pumploss_model_destroy(h);
 }
 

@@ -1773,9 +1773,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_diagnostics(const pumploss_model *
  * Residuals per point (measured minus fitted), in the order the points were given.
  * @param model the handle
  * @param count length of the two arrays (at least the number of points)
- * @param flow_residual_m3_s array of count, receives the flow residuals, m^3/s
- * @param torque_residual_n_m array of count, receives the torque residuals, N m
- * @return as pumploss_model_coefficients(); PUMPLOSS_EBUFFER when count is too small.
+ * @param flow_residual_m3_s array of count, receives the flow residuals, m^3/s (NaN beyond the points)
+ * @param torque_residual_n_m array of count, receives the torque residuals, N m (NaN beyond the points)
+ * @return as pumploss_model_coefficients(); PUMPLOSS_EBUFFER when count is too small;
+ *         PUMPLOSS_WUNDEFINED instead of a usable status when count exceeds the number of points.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_residuals(const pumploss_model *model, size_t count,
                                                         double flow_residual_m3_s[], double torque_residual_n_m[]);
