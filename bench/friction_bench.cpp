@@ -45,6 +45,29 @@ double colebrook_fixed_point(double re, double rr) {
   return 1.0 / (x * x);
 }
 
+/// The library's Colebrook solve (detail::colebrook_unchecked<double>) with its last step in
+/// plain double instead of double-double arithmetic, f = (ln 10/2)^2/(F0 + d)^2: what the
+/// double-double finish costs (docs/pages/performance.md; it buys 2 ulp worst instead of 4).
+double colebrook_plain_finish(double re, double rr) {
+  const double ln10 = 2.302585092994045684;
+  const double x1 = rr * re * (ln10 / 18.574);
+  const double x2 = std::log(re) + pumploss::detail::clamond_c2<double>();
+  double f = x2 - 0.2;
+  for (int i = 0; i < 2; ++i) {
+    const double x1f = x1 + f;
+    const double d = 1.0 + x1f;
+    const double e = (std::log(x1f) + f - x2) * (1.0 / d);
+    f = f - (e * x1f) * ((d + e / 2) / (d + e * (1.0 + e * (1.0 / 3))));
+  }
+  const double c = 2.180158299154324 / re;
+  const double s = c * f + rr / 3.7;
+  const double g = f + std::log(s);
+  const double d = -g * s * (1.0 / (s + c));
+  const double k_hi = 1.3254745276195996;
+  const double fd = f + d;
+  return k_hi / (fd * fd);
+}
+
 /// Worst ulp distance from the 50-digit root over the 64 benchmark points.
 template <class F>
 double worst_ulp(F&& f) {
@@ -65,17 +88,20 @@ void BM_FrictionColebrook(benchmark::State& state) {
 }
 BENCHMARK(BM_FrictionColebrook);
 
-void BM_FrictionColebrookFixedPoint(benchmark::State& state) {
+/// A Colebrook solve written here (double in, double out) over the 64 points, with its worst ulp.
+template <double (*Solve)(double, double)>
+void BM_ColebrookHere(benchmark::State& state) {
   const auto& p = points();
   std::size_t i = 0;
   for (auto _ : state) {
-    const double f = colebrook_fixed_point(p[i].re, p[i].rr);
+    const double f = Solve(p[i].re, p[i].rr);
     benchmark::DoNotOptimize(f);
     i = (i + 1) & 63;
   }
-  state.counters["max_ulp"] = worst_ulp(colebrook_fixed_point);
+  state.counters["max_ulp"] = worst_ulp(Solve);
 }
-BENCHMARK(BM_FrictionColebrookFixedPoint);
+BENCHMARK_TEMPLATE(BM_ColebrookHere, colebrook_fixed_point)->Name("BM_FrictionColebrookFixedPoint");
+BENCHMARK_TEMPLATE(BM_ColebrookHere, colebrook_plain_finish)->Name("BM_FrictionColebrookPlainFinish");
 
 void BM_FrictionHaaland(benchmark::State& state) {
   const auto& p = points();

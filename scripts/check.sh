@@ -9,7 +9,7 @@
 #      them against an installed static package); the .deb (scripts/package_check.sh deb);
 #   3. the whole test suite under AddressSanitizer + UndefinedBehaviorSanitizer and the C API
 #      thread test under ThreadSanitizer (clang);
-#   3a. the libFuzzer targets (tests/fuzz), PUMPLOSS_FUZZ_SECONDS (default 60) each;
+#   3a. the libFuzzer targets (tests/fuzz), PUMPLOSS_FUZZ_SECONDS (default 45) each;
 #   3b. line coverage of include/, src/, capi/ by the test suite (gcc --coverage, gcovr), failing
 #      under PUMPLOSS_COVERAGE_MIN (default 90) percent;
 #   4. the Windows x64 DLL (mingw-w64): export table against the generated pumploss.def and
@@ -105,7 +105,7 @@ TSAN_OPTIONS=halt_on_error=1:second_deadlock_stack=1 "$out/tsan/tests/capi/capi_
 # The handle contract: 8 threads evaluate ONE shared handle of every kind (pumploss.h).
 TSAN_OPTIONS=halt_on_error=1:second_deadlock_stack=1 "$out/tsan/tests/capi/capi_shared_handles" 10 8
 
-fuzz_secs="${PUMPLOSS_FUZZ_SECONDS:-60}"
+fuzz_secs="${PUMPLOSS_FUZZ_SECONDS:-45}"  # 45 s: all targets and their build within about 8 min
 step "fuzzing: libFuzzer + ASan/UBSan, ${fuzz_secs} s per target from the committed corpus"
 PUMPLOSS_CHECK_DIR="$out" bash scripts/fuzz.sh "$fuzz_secs"
 

@@ -12,7 +12,7 @@ cd "$here"
 secs="${1:-60}"
 shift || true
 targets=("$@")
-[ ${#targets[@]} -gt 0 ] || targets=(fuzz_units fuzz_capi fuzz_csv fuzz_test_stand fuzz_health_stream)
+[ ${#targets[@]} -gt 0 ] || targets=(fuzz_units fuzz_capi fuzz_csv fuzz_test_stand fuzz_handles fuzz_health_monitor fuzz_health_stream)
 out="${PUMPLOSS_CHECK_DIR:-build-check}/fuzz"
 cmake --preset ci-linux-clang-fuzz -B "$out" >/dev/null
 cmake --build "$out" -j "$(nproc 2>/dev/null || echo 2)" --target "${targets[@]}"

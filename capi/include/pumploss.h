@@ -1754,7 +1754,8 @@ typedef struct pumploss_model pumploss_model;
  *        NULL on every error, like every create function of the API.
  * @return PUMPLOSS_OK; PUMPLOSS_WILLCONDITIONED (coefficients uncertain); PUMPLOSS_EDATA;
  *         PUMPLOSS_EDOMAIN (also for an unknown machine or model kind); PUMPLOSS_ENONFINITE;
- *         PUMPLOSS_EMISUSE (NULL array); PUMPLOSS_ENOMEM. @sa pumploss::fit_loss_model
+ *         PUMPLOSS_EOVERFLOW (finite data that overflow the fit, e.g. flows near the largest
+ *         double); PUMPLOSS_EMISUSE (NULL array); PUMPLOSS_ENOMEM. @sa pumploss::fit_loss_model
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_create(int machine_kind, int model_kind, double displacement_m3_rev,
                                                      double rho_kg_m3, size_t count, const double *dp_pa,
@@ -1820,9 +1821,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_diagnostics(const pumploss_model *
  * Residuals per point (measured minus fitted), in the order the points were given.
  * @param model the handle
  * @param count length of the two arrays (at least the number of points)
- * @param flow_residual_m3_s array of count, receives the flow residuals, m^3/s
- * @param torque_residual_n_m array of count, receives the torque residuals, N m
- * @return as pumploss_model_coefficients(); PUMPLOSS_EBUFFER when count is too small.
+ * @param flow_residual_m3_s array of count, receives the flow residuals, m^3/s (NaN beyond the points)
+ * @param torque_residual_n_m array of count, receives the torque residuals, N m (NaN beyond the points)
+ * @return as pumploss_model_coefficients(); PUMPLOSS_EBUFFER when count is too small;
+ *         PUMPLOSS_WUNDEFINED instead of a usable status when count exceeds the number of points.
  */
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_residuals(const pumploss_model *model, size_t count,
                                                         double flow_residual_m3_s[], double torque_residual_n_m[]);

@@ -248,7 +248,10 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_residuals(const pumploss_model* mo
     flow_residual_m3_s[i] = i < m ? model->flow_residual[i] : kNaN;
     torque_residual_n_m[i] = i < m ? model->torque_residual[i] : kNaN;
   }
-  return model_status(model);
+  // elements beyond the points are NaN: a usable status with NaN outputs is WUNDEFINED (found
+  // by tests/fuzz/fuzz_handles: PUMPLOSS_OK came with them)
+  const int st = model_status(model);
+  return count > m && !(st > 0 && st < 100) ? PUMPLOSS_WUNDEFINED : st;
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_predict(const pumploss_model* model, double dp_pa, double speed_rev_s,

@@ -15,7 +15,6 @@
 #include "scalar_traits.hpp"
 #include "status.hpp"
 #include "units.hpp"
-#include "detail/log_table.hpp"
 
 namespace pumploss {
 
@@ -41,31 +40,14 @@ inline T clamond_c2() {
                      "-0.7793974884556819406441139701653776731705");
 }
 
-/// Exact product a * b = p + e (Dekker's TwoProduct; one FMA where the target has it).
+/// Exact product a * b = p + e by one fused multiply-add (an instruction where the compiler
+/// targets one, else the C library's fma, which uses the processor's FMA when it has one).
 /// Exact when no partial product overflows or underflows (|a|, |b| within 1e-100..1e100 here).
+/// (Dekker's split in place of a library fma was measured and removed: 24 % slower on a
+/// processor with FMA; docs/pages/performance.md.)
 inline void two_product(double a, double b, double& p, double& e) {
   p = a * b;
-#if defined(__FMA__) || defined(__ARM_FEATURE_FMA)
   e = std::fma(a, b, -p);
-#else  // without a hardware FMA std::fma is a library call: Veltkamp's split is cheaper
-  const double split = 134217729.0;  // 2^27 + 1
-  const double sa = split * a, ah = sa - (sa - a), al = a - ah;
-  const double sb = split * b, bh = sb - (sb - b), bl = b - bh;
-  e = ((ah * bh - p) + ah * bl + al * bh) + al * bl;
-#endif
-}
-
-/// Logarithm for the starting iterations of colebrook_unchecked(): the table-driven
-/// log_positive_normal() for double (its arguments are positive normal there: Re >= 1000,
-/// X1 + F >= F > 2), the library log otherwise.
-template <class T>
-inline T colebrook_start_log(T x) {
-  if constexpr (std::is_same_v<T, double>) {
-    return log_positive_normal(x);
-  } else {
-    using std::log;
-    return log(x);
-  }
 }
 
 /// Colebrook-White in Clamond's variable F = (ln 10 / 2) / sqrt(f), no input checks.
@@ -79,21 +61,21 @@ inline T colebrook_start_log(T x) {
 /// F <- F - [e (X1 + F)] [(D + e/2) / (D + e (1 + e/3))], so no intermediate overflows, up to
 /// Re = DBL_MAX with epsilon/D = 1 (where the starting F is far from the root).
 ///
-/// Speed (double): the Newton step corrects whatever the first three logarithms leave above
-/// 1e-9, so they come from the table-driven log (4e-15); the reciprocals 1/D and 1/(s + c) are
-/// formed beside the logarithms, off the chain of dependent operations.
+/// Speed (double): the reciprocals 1/D and 1/(s + c) are formed beside the logarithms, off the
+/// chain of dependent operations. (A table-driven logarithm for the three starting logarithms
+/// was tried and removed: no gain beyond the run-to-run scatter, docs/pages/performance.md.)
 template <class T>
 inline T colebrook_unchecked(T re, T rr) {
   using std::log;
   const T ln10 = detail::ln10<T>();
   const T x1 = rr * re * (ln10 / constant<T>(18.574L, "18.574"));
-  const T x2 = colebrook_start_log(re) + clamond_c2<T>();
+  const T x2 = log(re) + clamond_c2<T>();
   T f = x2 - constant<T>(0.2L, "0.2");
   const T third = T(1) / T(3);
   for (int i = 0; i < 2; ++i) {
     const T x1f = x1 + f;
     const T d = T(1) + x1f;
-    const T e = (colebrook_start_log(x1f) + f - x2) * (T(1) / d);
+    const T e = (log(x1f) + f - x2) * (T(1) / d);
     f = f - (e * x1f) * ((d + e / 2) / (d + e * (T(1) + e * third)));
   }
   if constexpr (std::is_same_v<T, double>) {
@@ -179,10 +161,9 @@ inline result<T> friction_laminar(T reynolds, T laminar_constant = T(64)) {
 /// \f$ F_0 = X_2 - 0.2 \f$, then one Newton step on
 /// \f$ G(F) = F + \ln\!\left(\tfrac{\varepsilon/D}{3.7} + \tfrac{5.02\,F}{Re \ln 10}\right) \f$
 /// whose correction is kept apart from \f$F_0\f$, and \f$ f = (\ln 10/2)^2/F^2 \f$ formed in
-/// double-double arithmetic (exact products: an FMA where the target has one, else Dekker's
-/// split). No loop runs to a tolerance: the work is always 4 logarithms (the first three from
-/// a table, the last from the library) and 8 divisions, 6 of them off the dependent chain
-/// (more Newton steps, fixed in number, for multiprecision T). Finite for every Re up to the
+/// double-double arithmetic (exact products by fused multiply-add). No loop runs to a
+/// tolerance: the work is always 4 logarithms and 8 divisions, 6 of them off the dependent
+/// chain (more Newton steps, fixed in number, for multiprecision T). Finite for every Re up to the
 /// largest double.
 ///
 /// @param reynolds Reynolds number Re, > 0 (1000 or more; 4e3 to 1e8 is the tested range)

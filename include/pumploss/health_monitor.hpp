@@ -346,6 +346,20 @@ class health_monitor {
     if (!detail::all_finite(m.learn_sum_, m.learn_mr_sum_, m.learn_prev_, m.cusum_.target, m.cusum_.sigma,
                             m.cusum_.c_hi, m.cusum_.c_lo, m.cusum_.held_after))
       return status::out_of_validity;
+    // values the monitor itself never holds (found by tests/fuzz/fuzz_health_monitor): a noise
+    // or baseline other than "not learned yet" (NaN) while learning and finite, >= 0 after; a
+    // given baseline replaced; negative noise or cumulative sums; an infinite time or history
+    const bool learning_now = m.accepted_ < settings_.learn_count;
+    auto is_nan = [](const T& x) { return !(x == x); };
+    auto is_inf = [&](const T& x) { return !detail::finite(x) && !is_nan(x); };
+    auto learned = [&](const T& x) { return learning_now ? is_nan(x) : (detail::finite(x) && x >= T(0)); };
+    const bool baseline_ok = detail::finite(given_baseline_) ? m.ref_.baseline_m3_s == given_baseline_
+                                                             : learned(m.ref_.baseline_m3_s);
+    if (!learned(m.sigma_) || !baseline_ok || m.cusum_.sigma < T(0) || m.cusum_.c_hi < T(0) || m.cusum_.c_lo < T(0) ||
+        is_inf(m.last_step_time_))
+      return status::out_of_validity;
+    for (std::size_t j = 0; j < health_cusum<T>::history; ++j)
+      if (!detail::finite(m.cusum_.hist[j]) || is_inf(m.times_[j])) return status::out_of_validity;
     // counts that cannot belong together mean a damaged buffer
     if (m.cusum_.n_hi > m.cusum_.count || m.cusum_.n_lo > m.cusum_.count || m.cusum_.count > m.accepted_ ||
         m.cusum_start_ > m.accepted_ || m.pending_n_ >= settings_.debounce_count || m.steps_ > m.accepted_ ||

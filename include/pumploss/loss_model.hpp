@@ -218,7 +218,8 @@ inline loss_model<T> loss_model_fail(machine kind, loss_model_kind model, T v, T
 /// @return the model; status::ill_conditioned (report) when a condition number exceeds
 ///         opt.cond_limit (e.g. viscosity times speed proportional to pressure on the test grid);
 ///         status::insufficient_data for too few or degenerate points; status::domain /
-///         nonfinite / misuse for bad input.
+///         nonfinite / misuse for bad input; status::overflow when finite data overflow the
+///         fit (a coefficient, error or residual would not be finite; residuals NaN).
 /// @par Validity
 /// Wilson's form assumes laminar slip and linear friction laws; at low Stribeck number
 /// mu n / dp (mixed lubrication) real machines depart from it (equations as in Merritt 1967).
@@ -420,6 +421,20 @@ inline loss_model<T> fit_loss_model(machine kind, loss_model_kind model, T displ
   r.resid_corr_dp = detail::correlation(m, rq, dp_pa);
   r.resid_corr_speed = detail::correlation(m, rq, speed_rev_s);
   r.resid_corr_mu = detail::correlation(m, rq, mu_pa_s);
+  // Finite data can still overflow the fit (flows or torques near the largest double): a model
+  // with a non-finite coefficient, error or residual is no model (found by tests/fuzz/fuzz_handles).
+  bool finite_fit = detail::all_finite(r.c_s, r.c_st, r.q_c_m3_s, r.c_k, r.c_v, r.c_f, r.t_c_n_m, r.c_h) &&
+                    detail::all_finite(r.u_c_s, r.u_c_st, r.u_q_c_m3_s, r.u_c_k, r.u_c_v, r.u_c_f, r.u_t_c_n_m, r.u_c_h) &&
+                    detail::all_finite(r.rms_flow_m3_s, r.rms_torque_n_m, r.r2_flow, r.r2_torque);
+  for (std::size_t i = 0; i < m && finite_fit; ++i)
+    finite_fit = detail::finite(rq[i]) && (torque_residual_n_m == nullptr || detail::finite(torque_residual_n_m[i]));
+  if (!finite_fit) {
+    for (std::size_t i = 0; i < m; ++i) {
+      if (flow_residual_m3_s != nullptr) flow_residual_m3_s[i] = scalar_traits<T>::nan();
+      if (torque_residual_n_m != nullptr) torque_residual_n_m[i] = scalar_traits<T>::nan();
+    }
+    return fail(status::overflow);
+  }
   return r;
 }
 

@@ -19,10 +19,11 @@
 
 #include <fuzzer/FuzzedDataProvider.h>
 
-#include "capi_harness.hpp"
+#include "fuzz_support.hpp"
 
 namespace {
 using namespace plcapi;
+using plfuzz::fuzz_args;
 
 struct state {
   Context ctx;
@@ -45,34 +46,6 @@ struct state {
   }
 };
 
-double fuzz_double(FuzzedDataProvider& fdp, double base) {
-  const std::uint8_t ctl = fdp.ConsumeIntegral<std::uint8_t>();
-  switch (ctl % 4) {
-    case 0: return base;
-    case 1: {
-      const auto sp = special_doubles(base);
-      return sp[(ctl / 4u) % sp.size()];
-    }
-    case 2: {
-      const std::uint64_t b = fdp.ConsumeIntegral<std::uint64_t>();
-      double v;
-      std::memcpy(&v, &b, sizeof v);
-      return v;
-    }
-    default: return base * std::pow(10.0, fdp.ConsumeFloatingPointInRange<double>(-6.0, 6.0));
-  }
-}
-int fuzz_int(FuzzedDataProvider& fdp, int base) {
-  const std::uint8_t ctl = fdp.ConsumeIntegral<std::uint8_t>();
-  switch (ctl % 3) {
-    case 0: return base;
-    case 1: {
-      const auto sp = special_ints();
-      return sp[(ctl / 3u) % sp.size()];
-    }
-    default: return fdp.ConsumeIntegral<int>();
-  }
-}
 }  // namespace
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
@@ -86,26 +59,7 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     c.n = fdp.ConsumeIntegralInRange<std::size_t>(0, 6);
     expand(c);
   }
-  for (int p = 0; p < f.nparams; ++p) {
-    Arg& a = c.args[static_cast<std::size_t>(p)];
-    const Param& pr = f.params[p];
-    switch (pr.kind) {
-      case K_DIN: a.d = fuzz_double(fdp, a.d); break;
-      case K_IIN: a.i = fuzz_int(fdp, a.i); break;
-      case K_STR:
-        if (fdp.ConsumeBool()) a.s = fdp.ConsumeRandomLengthString(40);
-        break;
-      case K_DARR:
-        for (double& v : a.darr) v = fuzz_double(fdp, v);
-        break;
-      case K_IARR:
-        for (int& v : a.iarr) v = fuzz_int(fdp, v);
-        break;
-      default: break;
-    }
-    // a NULL pointer now and then (1 in 32)
-    if (is_pointer(pr.kind) && (fdp.ConsumeIntegral<std::uint8_t>() & 31u) == 31u) a.null = true;
-  }
+  fuzz_args(fdp, c);
   Exec e;
   e.prepare(c, st->ctx);
   e.invoke(c);
@@ -113,16 +67,6 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   std::string msg = check(c, e, &infinite);
   if (msg.empty() && infinite > 0) msg = "a usable status came with an infinite output";
   e.release(c, st->ctx);
-  if (!msg.empty()) {
-    std::fprintf(stderr, "fuzz_capi: %s: %s (n = %zu)\n", f.name, msg.c_str(), c.n);
-    for (int p = 0; p < f.nparams; ++p) {
-      const Arg& a = c.args[static_cast<std::size_t>(p)];
-      std::fprintf(stderr, "  %s: null=%d d=%.17g i=%d s=\"%s\"", f.params[p].name, a.null ? 1 : 0, a.d, a.i,
-                   a.s.c_str());
-      for (double v : a.darr) std::fprintf(stderr, " %.17g", v);
-      std::fprintf(stderr, "\n");
-    }
-    std::abort();
-  }
+  if (!msg.empty()) plfuzz::report("fuzz_capi", c, msg);
   return 0;
 }

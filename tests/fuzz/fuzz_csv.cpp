@@ -1,6 +1,7 @@
 // libFuzzer target: the library's table reader (pumploss/table_reader.hpp, read_table) with the
 // column specs of the test-stand and field-reading files and a small mixed one. The first byte
-// chooses the spec, the rest is the file. The corpus holds the exported forms too (';' with a
+// chooses the spec (byte % 3) and the dialect ((byte / 3) % 4: detected, or given as comma,
+// semicolon with decimal comma, semicolon with decimal point), the rest is the file. The corpus holds the exported forms too (';' with a
 // decimal comma, BOM + CRLF, degree signs in UTF-8 and Windows-1252, units in parentheses,
 // ambiguous '1,500' and mixed decimal marks), so the detection paths are fuzzed from the start. Every problem must come out as a table_error with an
 // error status; a crash, undefined behaviour, an exception, a non-finite SI value or columns of
@@ -57,7 +58,8 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   };
   const auto& spec = specs[data[0] % 3];
   const std::string_view text(reinterpret_cast<const char*>(data + 1), size - 1);
-  const auto d = pumploss::read_table(text, spec, "fuzz.csv");
+  const auto dialect = static_cast<pumploss::csv_dialect>((data[0] / 3) % 4);
+  const auto d = pumploss::read_table(text, spec, "fuzz.csv", dialect);
   if (d.error.st != pumploss::status::ok) {
     if (!pumploss::is_error(d.error.st) || d.error.message.empty() || d.error.line < 0 || d.error.column < 0) {
       std::fprintf(stderr, "fuzz_csv: a refusal without an error status or message\n");
