@@ -431,6 +431,19 @@ struct oil {
   T barus_per_pa;          ///< Barus pressure-viscosity coefficient, 1/Pa (0 to ignore)
 };
 
+namespace detail {
+/// An oil in another scalar type: the same oil for the same type, else its value parts as
+/// constants (no derivatives; see scalar_as()).
+/// @param o the oil
+/// @return the oil in U
+template <class U, class T>
+inline oil<U> oil_cast(const oil<T>& o) {
+  return oil<U>{{scalar_as<U>(o.viscosity.a), scalar_as<U>(o.viscosity.b)}, scalar_as<U>(o.rho_ref_kg_m3),
+                scalar_as<U>(o.t_ref_k), scalar_as<U>(o.alpha_per_k), scalar_as<U>(o.bulk_modulus_pa),
+                scalar_as<U>(o.cp_j_kg_k), scalar_as<U>(o.barus_per_pa)};
+}
+}  // namespace detail
+
 /// Typical property set of a mineral hydraulic oil (HM/HLP type) without the viscosity line.
 ///
 /// | property | value | source |

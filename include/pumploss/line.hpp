@@ -12,6 +12,7 @@
 #include <array>
 #include <cmath>
 #include <cstddef>
+#include <type_traits>
 #include <vector>
 
 #include "detail/roots.hpp"
@@ -236,6 +237,36 @@ inline T element_bore(const line_element<T>* elements, std::size_t count, std::s
   return T(0);
 }
 
+/// A line element in the scalar type U: the element itself for its own type, else its value
+/// parts as constants (scalar_as()), so a line given in dual numbers can be read in the value
+/// type one element at a time.
+template <class U, class T>
+inline decltype(auto) element_as(const line_element<T>& e) {
+  if constexpr (std::is_same_v<U, T>) {
+    return (e);
+  } else {
+    line_element<U> r;
+    r.kind = e.kind;
+    r.diameter_m = scalar_as<U>(e.diameter_m);
+    r.length_m = scalar_as<U>(e.length_m);
+    r.roughness_m = scalar_as<U>(e.roughness_m);
+    r.c1 = scalar_as<U>(e.c1);
+    r.c2 = scalar_as<U>(e.c2);
+    r.c3 = scalar_as<U>(e.c3);
+    r.q_ref_m3_s = scalar_as<U>(e.q_ref_m3_s);
+    r.dp_ref_pa = scalar_as<U>(e.dp_ref_pa);
+    r.exponent = scalar_as<U>(e.exponent);
+    r.nu_ref_m2_s = scalar_as<U>(e.nu_ref_m2_s);
+    r.nu_exponent = scalar_as<U>(e.nu_exponent);
+    r.n_points = e.n_points;
+    for (std::size_t i = 0; i < r.q_points.size(); ++i) {
+      r.q_points[i] = scalar_as<U>(e.q_points[i]);
+      r.dp_points[i] = scalar_as<U>(e.dp_points[i]);
+    }
+    return r;
+  }
+}
+
 template <class T>
 inline result<T> element_dp(const line_element<T>& e, T q, T rho, T mu, T d_override) {
   using std::fabs;
@@ -346,7 +377,9 @@ struct [[nodiscard]] line_drop {
 /// \f[ \Delta p = \rho g \Delta z + \sum_\mathrm{pipes} f \frac{L}{D}\frac{\rho v^2}{2}
 ///     + \sum_\mathrm{fittings} K \frac{\rho v^2}{2} + \sum_\mathrm{components} \Delta p_i(q, \nu) \f]
 ///
-/// @param elements the elements (may be NULL when count is 0)
+/// @param elements the elements (may be NULL when count is 0); their scalar type E may differ
+///        from T: then each element is read as constants in T (detail::element_as()), as the
+///        inverse line_flow_for_pressure() does for dual numbers
 /// @param count number of elements
 /// @param height_m height of the outlet above the inlet, m
 /// @param q_m3_s flow, m^3/s (any sign; friction terms take its sign, the static part does not)
@@ -366,8 +399,8 @@ struct [[nodiscard]] line_drop {
 /// @par Source
 /// Darcy-Weisbach and the K method (F. M. White, Fluid Mechanics, 7th ed., 2011, Sec. 6.9);
 /// elements as cited at each method (fittings.hpp, friction.hpp).
-template <class T>
-inline line_drop<T> line_pressure_drop(const line_element<T>* elements, std::size_t count, T height_m, T q_m3_s,
+template <class T, class E = T>
+inline line_drop<T> line_pressure_drop(const line_element<E>* elements, std::size_t count, T height_m, T q_m3_s,
                                        T rho_kg_m3, T mu_pa_s, T* element_dp_pa = nullptr, T d_override_m = T(0),
                                        status* element_st = nullptr) {
   const T nan = scalar_traits<T>::nan();
@@ -381,8 +414,8 @@ inline line_drop<T> line_pressure_drop(const line_element<T>* elements, std::siz
   T total = dp_static;
   status st = status::ok;
   for (std::size_t i = 0; i < count; ++i) {
-    const T d = detail::element_bore(elements, count, i, d_override_m);
-    const auto r = detail::element_dp(elements[i], q_m3_s, rho_kg_m3, mu_pa_s, d);
+    const T d = d_override_m > T(0) ? d_override_m : detail::scalar_as<T>(detail::element_bore(elements, count, i, E(0)));
+    const auto r = detail::element_dp(detail::element_as<T>(elements[i]), q_m3_s, rho_kg_m3, mu_pa_s, d);
     if (is_error(r.st)) return fail(r.st);
     st = worst(st, r.st);
     if (element_dp_pa != nullptr) element_dp_pa[i] = r.value;
@@ -427,12 +460,56 @@ inline line_drop<T> line_pressure_drop_at(const line<T>& l, T q_m3_s, const oil<
   return r;
 }
 
+namespace detail {
+/// line_flow_for_pressure() in the scalar type T of elements given in E (the value type of a
+/// dual line, or the same type): Brent's method on a bracket grown by doubling.
+template <class T, class E>
+inline result<T> line_flow_solve(const line_element<E>* elements, std::size_t count, T height_m, T dp_pa,
+                                 T rho_kg_m3, T mu_pa_s) {
+  using std::fabs;
+  if (!all_finite(height_m, dp_pa, rho_kg_m3, mu_pa_s)) return fail<T>(status::nonfinite);
+  if (!(rho_kg_m3 > T(0)) || !(mu_pa_s > T(0))) return fail<T>(status::domain);
+  status st = status::ok;
+  auto g = [&](T q, bool& err) {
+    const auto r = line_pressure_drop(elements, count, height_m, q, rho_kg_m3, mu_pa_s);
+    if (is_error(r.st)) { st = r.st; err = true; return T(0); }
+    st = worst(st, r.st);
+    return r.dp_pa - dp_pa;
+  };
+  bool err = false;
+  T lo = T(0), glo = g(lo, err);
+  if (err) return fail<T>(st);
+  if (glo == T(0)) return {T(0), status::ok};
+  if (glo > T(0)) return fail<T>(status::out_of_validity);
+  const int cap = scalar_traits<T>::max_iterations;
+  auto f = [&](T q) {
+    const T v = err ? T(0) : g(q, err);
+    return err ? scalar_traits<T>::nan() : v;
+  };
+  // bracket: double the flow from 1e-9 m^3/s until the drop exceeds dp
+  const T q1 = constant<T>(1e-9L, "0.000000001");
+  const T g1 = f(q1);
+  bracket<T> br{lo, glo, q1, g1, 0, status::ok};
+  if (!err && g1 < T(0)) br = expand_bracket(f, q1, g1, [](T q) { return q * 2; }, cap);
+  if (err) return fail<T>(st);
+  if (br.st != status::ok) return fail<T>(status::no_convergence);
+  st = status::ok;
+  const T tol = 4 * scalar_traits<T>::epsilon();
+  const auto r = brent(f, br.a, br.b, br.fa, br.fb, tol, T(0), cap);
+  if (err) return fail<T>(st);
+  if (r.st != status::ok) return fail<T>(status::no_convergence);
+  return {r.x, st};
+}
+}  // namespace detail
+
 /// The flow a given pressure drop drives through a line (the inverse of line_pressure_drop()).
 ///
 /// The drop rises monotonically with flow (friction_factor()'s transition bridge keeps
 /// \f$ f\,Re^2 \f$ rising), so the root is unique: it is bracketed by doubling from 1e-9 m^3/s
 /// (at most scalar_traits<T>::max_iterations doublings) and found by Brent's method
-/// (detail/roots.hpp) to 4 machine epsilons.
+/// (detail/roots.hpp) to 4 machine epsilons. For dual numbers (in the scalars or the elements)
+/// the root is found in the value type and the derivatives follow from the implicit-function
+/// rule (dq/dp = -F_p/F_q, detail::implicit_root()).
 /// @param elements the elements
 /// @param count number of elements
 /// @param height_m height of the outlet above the inlet, m
@@ -449,39 +526,19 @@ inline line_drop<T> line_pressure_drop_at(const line<T>& l, T q_m3_s, const oil<
 template <class T>
 inline result<T> line_flow_for_pressure(const line_element<T>* elements, std::size_t count, T height_m, T dp_pa,
                                         T rho_kg_m3, T mu_pa_s) {
-  using std::fabs;
-  if (!detail::all_finite(height_m, dp_pa, rho_kg_m3, mu_pa_s)) return detail::fail<T>(status::nonfinite);
-  if (!(rho_kg_m3 > T(0)) || !(mu_pa_s > T(0))) return detail::fail<T>(status::domain);
-  status st = status::ok;
-  auto g = [&](T q, bool& err) {
-    const auto r = line_pressure_drop(elements, count, height_m, q, rho_kg_m3, mu_pa_s);
-    if (is_error(r.st)) { st = r.st; err = true; return T(0); }
-    st = worst(st, r.st);
-    return r.dp_pa - dp_pa;
-  };
-  bool err = false;
-  T lo = T(0), glo = g(lo, err);
-  if (err) return detail::fail<T>(st);
-  if (glo == T(0)) return {T(0), status::ok};
-  if (glo > T(0)) return detail::fail<T>(status::out_of_validity);
-  const int cap = scalar_traits<T>::max_iterations;
-  auto f = [&](T q) {
-    const T v = err ? T(0) : g(q, err);
-    return err ? scalar_traits<T>::nan() : v;
-  };
-  // bracket: double the flow from 1e-9 m^3/s until the drop exceeds dp
-  const T q1 = detail::constant<T>(1e-9L, "0.000000001");
-  const T g1 = f(q1);
-  detail::bracket<T> br{lo, glo, q1, g1, 0, status::ok};
-  if (!err && g1 < T(0)) br = detail::expand_bracket(f, q1, g1, [](T q) { return q * 2; }, cap);
-  if (err) return detail::fail<T>(st);
-  if (br.st != status::ok) return detail::fail<T>(status::no_convergence);
-  st = status::ok;
-  const T tol = 4 * scalar_traits<T>::epsilon();
-  const auto r = detail::brent(f, br.a, br.b, br.fa, br.fb, tol, T(0), cap);
-  if (err) return detail::fail<T>(st);
-  if (r.st != status::ok) return detail::fail<T>(status::no_convergence);
-  return {r.x, st};
+  if constexpr (detail::is_dual_v<T>) {  // root in the value type, derivatives by the implicit rule
+    using detail::primal;
+    using V = detail::value_type_of_t<T>;
+    const auto v = detail::line_flow_solve(elements, count, V(primal(height_m)), V(primal(dp_pa)),
+                                           V(primal(rho_kg_m3)), V(primal(mu_pa_s)));
+    if (is_error(v.st)) return detail::fail<T>(v.st);
+    auto residual = [&](auto q, auto h, auto dp, auto rho, auto mu) {  // F(q) = drop(q) - dp
+      return decltype(q)(line_pressure_drop(elements, count, h, q, rho, mu).dp_pa - dp);
+    };
+    return {detail::implicit_root<T>(v.value, residual, height_m, dp_pa, rho_kg_m3, mu_pa_s), v.st};
+  } else {
+    return detail::line_flow_solve(elements, count, height_m, dp_pa, rho_kg_m3, mu_pa_s);
+  }
 }
 /// @}
 
