@@ -69,7 +69,7 @@ struct line_element {
 /// @param length_m length, m
 /// @param roughness_m absolute roughness, m
 /// @return the element (checked when evaluated)
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_pipe(T diameter_m, T length_m, T roughness_m) {
   line_element<T> e;
   e.kind = line_element_kind::pipe;
@@ -84,7 +84,7 @@ inline line_element<T> line_pipe(T diameter_m, T length_m, T roughness_m) {
 /// @param diameter_m bore the K refers to, m (0: the bore of the element it follows)
 /// @param k loss coefficient
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_fitting_k(T diameter_m, T k) {
   line_element<T> e;
   e.kind = line_element_kind::fitting_k;
@@ -99,7 +99,7 @@ inline line_element<T> line_fitting_k(T diameter_m, T k) {
 /// @param diameter_m bore, m (0: the bore of the element it follows)
 /// @param l_over_d equivalent length in diameters
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_fitting_l_over_d(T diameter_m, T l_over_d) {
   line_element<T> e;
   e.kind = line_element_kind::fitting_l_over_d;
@@ -112,7 +112,7 @@ inline line_element<T> line_fitting_l_over_d(T diameter_m, T l_over_d) {
 /// @param k1 K_1
 /// @param k_inf K_infinity
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_fitting_hooper(T diameter_m, T k1, T k_inf) {
   line_element<T> e;
   e.kind = line_element_kind::fitting_hooper;
@@ -127,7 +127,7 @@ inline line_element<T> line_fitting_hooper(T diameter_m, T k1, T k_inf) {
 /// @param k_i K_i
 /// @param k_d K_d
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_fitting_darby(T diameter_m, T k1, T k_i, T k_d) {
   line_element<T> e;
   e.kind = line_element_kind::fitting_darby;
@@ -160,7 +160,7 @@ inline result<line_element<T>> line_fitting_named(T diameter_m, fitting_type typ
 /// 2 in laminar flow, 1 in turbulent flow).
 /// @param diameter_m bore, m (0: the bore of the element it follows)
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_exit(T diameter_m) {
   line_element<T> e;
   e.kind = line_element_kind::exit_kinetic;
@@ -174,7 +174,7 @@ inline line_element<T> line_exit(T diameter_m) {
 /// @param nu_ref_m2_s viscosity of the data, m^2/s, > 0
 /// @param nu_exponent m, >= 0 (1 for laminar elements such as filter media, 0 for none)
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_component_power(T q_ref_m3_s, T dp_ref_pa, T exponent, T nu_ref_m2_s, T nu_exponent) {
   line_element<T> e;
   e.kind = line_element_kind::component_power;
