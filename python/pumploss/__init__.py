@@ -44,6 +44,7 @@ from ._ctypes_api import (Library, PumplossError, PumplossWarning, is_error, is_
 
 FUNCTIONS = _signatures.FUNCTIONS
 COUNTS = _signatures.COUNTS
+ARRAY_COUNTS = _signatures.ARRAY_COUNTS
 STATUS_CODES = _signatures.STATUS_CODES
 CONSTANTS = _signatures.CONSTANTS
 DOCS = getattr(_signatures, "DOCS", {})
@@ -122,6 +123,10 @@ class _Fn:
         src = COUNTS.get(name, {})
         self.explicit_sizes = {k for k, v in src.items() if v == "explicit"}
         self.sizes_after = {k for k, v in src.items() if v == "before"}  # the count follows its arrays
+        # input arrays counted by explicit counts only (a levels x per_level grid): checked
+        # against the product of those counts before the call
+        self.grid_arrays = {a: dims for a, dims in ARRAY_COUNTS.get(name, {}).items()
+                            if dims and all(d in self.explicit_sizes for d in dims)}
         self.user_ins = [p for p in self.ins if not (p[0] == "SIZE" and p[2] not in self.explicit_sizes)]
         self._c = None
 
@@ -136,6 +141,7 @@ class _Fn:
         it = iter(args)
         conv, outs, sizes, keep = [], [], [], []
         pending = []  # counts to be filled from the arrays after them
+        given = {}  # explicit counts by name
         last_arrays = []  # lengths of the arrays since the last count
         for kind, _ctype, pname in self.params:
             if kind == "HIN":
@@ -150,6 +156,7 @@ class _Fn:
             elif kind == "SIZE":
                 if pname in self.explicit_sizes:
                     n = int(next(it))
+                    given[pname] = n
                     conv.append(n)
                     sizes.append(n)
                 elif pname in self.sizes_after:
@@ -170,6 +177,11 @@ class _Fn:
                 a = np.ascontiguousarray(next(it), dtype=dtype).ravel()
                 keep.append(a)
                 last_arrays.append(a.size)
+                if pname in self.grid_arrays:
+                    want = int(np.prod([given[d] for d in self.grid_arrays[pname]]))
+                    if a.size != want:
+                        raise ValueError(f"{self.short}: {pname} has {a.size} elements, "
+                                         f"{' x '.join(self.grid_arrays[pname])} = {want} expected")
                 if pending:
                     if pending[1] is None:
                         pending[1] = a.size

@@ -430,6 +430,12 @@ def write_python(funcs, handles, codes, consts, out):
         src = count_sources(f)
         if src:
             w(f"    {f.name!r}: {{" + ", ".join(f"{k!r}: {v!r}" for k, v in src.items()) + "},\n")
+    w("}\n\n# name -> {array parameter: (size_t parameters whose product is its length)}: array_counts()\n")
+    w("ARRAY_COUNTS = {\n")
+    for f in funcs:
+        dims = array_counts(f)
+        if dims:
+            w(f"    {f.name!r}: {{" + ", ".join(f"{k!r}: {v!r}" for k, v in dims.items()) + "},\n")
     w("}\n\nHANDLES = (" + "".join(f"{h!r}, " for h in handles) + ")\n\n")
     w("STATUS_CODES = {\n" + "".join(f"    {n!r}: {v},\n" for n, v in codes) + "}\n\n")
     w("CONSTANTS = {\n" + "".join(f"    {n!r}: {v},\n" for n, v in consts) + "}\n\n")
