@@ -191,30 +191,30 @@ TEST(ImplicitDerivative, GapGrowthForDrainAgainst50DigitDifference) {
   // An invented pump of about 70 cm3/rev (plausible dimensions, no real product; as
   // piston_pump_test.cpp's). Seeded: the measured drain, the outlet pressure, the oil
   // temperature and the bore clearance (a member of the description).
-  auto make_pump = [](auto bore) {
-    using U = decltype(bore);
-    pumploss::piston_pump<U> p;
-    p.pistons = 9;
-    p.piston_diameter_m = U(20e-3);
+  pumploss::piston_pump<double> base;
+  base.pistons = 9;
+  base.piston_diameter_m = 20e-3;
+  base.engaged_length_min_m = 20e-3;
+  base.pitch_radius_m = 34e-3;
+  base.max_swash_angle_rad = 0.3490658503988659;  // 20 degrees
+  base.slipper_pocket_radius_m = 9.5e-3;
+  base.slipper_outer_radius_m = 11.5e-3;
+  base.slipper_gap_m = 12e-6;
+  base.slipper_feed_diameter_m = 0.8e-3;
+  base.slipper_feed_length_m = 60e-3;
+  base.ball_diameter_m = 14e-3;
+  base.ball_clearance_m = 8e-6;
+  base.ball_length_m = 4e-3;
+  base.valve_inner_land_inner_radius_m = 31e-3;
+  base.valve_inner_land_outer_radius_m = 34e-3;
+  base.valve_outer_land_inner_radius_m = 44e-3;
+  base.valve_outer_land_outer_radius_m = 47e-3;
+  base.valve_kidney_arc_rad = 2.6179938779914944;  // 150 degrees
+  base.valve_gap_m = 10e-6;
+  base.controller_flow_m3_s = 0.5e-3 / 60;
+  auto make_pump = [&](auto bore) {
+    auto p = pumploss::piston_pump_cast<decltype(bore)>(base);
     p.bore_clearance_m = bore;
-    p.engaged_length_min_m = U(20e-3);
-    p.pitch_radius_m = U(34e-3);
-    p.max_swash_angle_rad = U(0.3490658503988659);
-    p.slipper_pocket_radius_m = U(9.5e-3);
-    p.slipper_outer_radius_m = U(11.5e-3);
-    p.slipper_gap_m = U(12e-6);
-    p.slipper_feed_diameter_m = U(0.8e-3);
-    p.slipper_feed_length_m = U(60e-3);
-    p.ball_diameter_m = U(14e-3);
-    p.ball_clearance_m = U(8e-6);
-    p.ball_length_m = U(4e-3);
-    p.valve_inner_land_inner_radius_m = U(31e-3);
-    p.valve_inner_land_outer_radius_m = U(34e-3);
-    p.valve_outer_land_inner_radius_m = U(44e-3);
-    p.valve_outer_land_outer_radius_m = U(47e-3);
-    p.valve_kidney_arc_rad = U(2.6179938779914944);
-    p.valve_gap_m = U(10e-6);
-    p.controller_flow_m3_s = U(0.5e-3 / 60);
     return p;
   };
   const auto oil = pumploss::typical_mineral_oil(pumploss::d341_fit(313.15, 46e-6, 373.15, 6.8e-6).value);
