@@ -467,8 +467,8 @@ template <class T, class E>
 inline result<T> line_flow_solve(const line_element<E>* elements, std::size_t count, T height_m, T dp_pa,
                                  T rho_kg_m3, T mu_pa_s) {
   using std::fabs;
-  if (!all_finite(height_m, dp_pa, rho_kg_m3, mu_pa_s)) return fail<T>(status::nonfinite);
-  if (!(rho_kg_m3 > T(0)) || !(mu_pa_s > T(0))) return fail<T>(status::domain);
+  if (!detail::all_finite(height_m, dp_pa, rho_kg_m3, mu_pa_s)) return detail::fail<T>(status::nonfinite);
+  if (!(rho_kg_m3 > T(0)) || !(mu_pa_s > T(0))) return detail::fail<T>(status::domain);
   status st = status::ok;
   auto g = [&](T q, bool& err) {
     const auto r = line_pressure_drop(elements, count, height_m, q, rho_kg_m3, mu_pa_s);
@@ -478,26 +478,26 @@ inline result<T> line_flow_solve(const line_element<E>* elements, std::size_t co
   };
   bool err = false;
   T lo = T(0), glo = g(lo, err);
-  if (err) return fail<T>(st);
+  if (err) return detail::fail<T>(st);
   if (glo == T(0)) return {T(0), status::ok};
-  if (glo > T(0)) return fail<T>(status::out_of_validity);
+  if (glo > T(0)) return detail::fail<T>(status::out_of_validity);
   const int cap = scalar_traits<T>::max_iterations;
   auto f = [&](T q) {
     const T v = err ? T(0) : g(q, err);
     return err ? scalar_traits<T>::nan() : v;
   };
   // bracket: double the flow from 1e-9 m^3/s until the drop exceeds dp
-  const T q1 = constant<T>(1e-9L, "0.000000001");
+  const T q1 = detail::constant<T>(1e-9L, "0.000000001");
   const T g1 = f(q1);
-  bracket<T> br{lo, glo, q1, g1, 0, status::ok};
-  if (!err && g1 < T(0)) br = expand_bracket(f, q1, g1, [](T q) { return q * 2; }, cap);
-  if (err) return fail<T>(st);
-  if (br.st != status::ok) return fail<T>(status::no_convergence);
+  detail::bracket<T> br{lo, glo, q1, g1, 0, status::ok};
+  if (!err && g1 < T(0)) br = detail::expand_bracket(f, q1, g1, [](T q) { return q * 2; }, cap);
+  if (err) return detail::fail<T>(st);
+  if (br.st != status::ok) return detail::fail<T>(status::no_convergence);
   st = status::ok;
   const T tol = 4 * scalar_traits<T>::epsilon();
-  const auto r = brent(f, br.a, br.b, br.fa, br.fb, tol, T(0), cap);
-  if (err) return fail<T>(st);
-  if (r.st != status::ok) return fail<T>(status::no_convergence);
+  const auto r = detail::brent(f, br.a, br.b, br.fa, br.fb, tol, T(0), cap);
+  if (err) return detail::fail<T>(st);
+  if (r.st != status::ok) return detail::fail<T>(status::no_convergence);
   return {r.x, st};
 }
 }  // namespace detail

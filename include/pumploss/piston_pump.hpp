@@ -1033,23 +1033,23 @@ inline result<T> gap_growth_solve(const piston_pump<T>& p, const oil<T>& o, cons
                                   pump_gap gap, T measured_drain_m3_s) {
   using std::exp;
   using std::log;
-  if (!finite(measured_drain_m3_s)) return fail<T>(status::nonfinite);
-  if (!(measured_drain_m3_s > T(0))) return fail<T>(status::domain);
+  if (!detail::finite(measured_drain_m3_s)) return detail::fail<T>(status::nonfinite);
+  if (!(measured_drain_m3_s > T(0))) return detail::fail<T>(status::domain);
   const int g = static_cast<int>(gap);
-  if (g < 0 || g >= pump_gap_count) return fail<T>(status::domain);
+  if (g < 0 || g >= pump_gap_count) return detail::fail<T>(status::domain);
   const T gaps[pump_gap_count] = {p.bore_clearance_m, p.slipper_gap_m, p.ball_clearance_m, p.valve_gap_m};
-  if (!(gaps[g] > T(0))) return fail<T>(status::domain);
+  if (!(gaps[g] > T(0))) return detail::fail<T>(status::domain);
   const unsigned mask = 1u << g;
   auto total = [&](T k) { return piston_pump_budget(scale_gaps(p, mask, k), o, op); };
   const auto nominal = total(T(1));
-  if (is_error(nominal.st)) return fail<T>(nominal.st);
+  if (is_error(nominal.st)) return detail::fail<T>(nominal.st);
   // bracket in log k: the total rises monotonically with any gap
   T lo = -log(T(20)), hi = log(T(20));
   const auto blo = total(exp(lo));
   const auto bhi = total(exp(hi));
   if (is_error(blo.st) || is_error(bhi.st) || !(blo.total_m3_s <= measured_drain_m3_s) ||
       !(bhi.total_m3_s >= measured_drain_m3_s))
-    return fail<T>(status::out_of_validity);
+    return detail::fail<T>(status::out_of_validity);
   status st = nominal.st;
   auto f = [&](T x) {
     const auto b = total(exp(x));
@@ -1057,10 +1057,10 @@ inline result<T> gap_growth_solve(const piston_pump<T>& p, const oil<T>& o, cons
     return is_error(b.st) ? scalar_traits<T>::nan() : T(b.total_m3_s - measured_drain_m3_s);
   };
   const T tol = 4 * scalar_traits<T>::epsilon();
-  const auto r = brent(f, lo, hi, T(blo.total_m3_s - measured_drain_m3_s),
+  const auto r = detail::brent(f, lo, hi, T(blo.total_m3_s - measured_drain_m3_s),
                                T(bhi.total_m3_s - measured_drain_m3_s), tol, tol, scalar_traits<T>::max_iterations);
-  if (is_error(st)) return fail<T>(st);
-  if (r.st != status::ok) return fail<T>(r.st);
+  if (is_error(st)) return detail::fail<T>(st);
+  if (r.st != status::ok) return detail::fail<T>(r.st);
   using std::expm1;
   return {expm1(r.x), st};
 }
