@@ -49,6 +49,14 @@ static_assert(std::is_same_v<decltype(pumploss::gap_annulus_flow(D2(1e7), 0.04, 
                              result<D2>>);
 static_assert(std::is_same_v<decltype(pumploss::friction_colebrook(1e5, 0)), result<double>>);
 static_assert(std::is_same_v<decltype(pumploss::throttle_temperature_rise(10e5, 880, 2030)), result<double>>);
+// integers only: promoted to double as Boost.Math promotes (not computed in int)
+static_assert(std::is_same_v<decltype(pumploss::friction_colebrook(100000, 0)), result<double>>);
+static_assert(std::is_same_v<decltype(pumploss::throttle_temperature_rise(1000000, 880, 2030)), result<double>>);
+static_assert(std::is_same_v<decltype(pumploss::orifice_flow(10000000, 870, 1, 1)), result<double>>);
+static_assert(std::is_same_v<decltype(pumploss::gap_plates_flow(100000L, 1, 1, 1, 1, 0)), result<double>>);
+static_assert(std::is_same_v<decltype(pumploss::line_pipe(1, 6, 0)), pumploss::line_element<double>>);
+static_assert(std::is_same_v<decltype(pumploss::drain_flow_parts(0, 1, 323)), pumploss::drain_flow<double>>);
+static_assert(std::is_same_v<decltype(pumploss::shaft_seal_check(0, 4, 1, 3u)), pumploss::shaft_seal_result<double>>);
 
 // A dual number beside a multiprecision number: no overload (detected, not a hard error).
 template <class... A>
@@ -101,6 +109,20 @@ TEST(MixedArguments, IntLiteralBesideDoublesEqualsAllDoubleCall) {
   const auto annulus = pumploss::gap_annulus_flow(250e5, 0.040, 0.02002, 0.02, 0.030, 0);
   EXPECT_EQ(annulus.value, pumploss::gap_annulus_flow(250e5, 0.040, 0.02002, 0.02, 0.030, 0.0).value);
   EXPECT_EQ(pumploss::friction_colebrook(100000, 1e-4).value, pumploss::friction_colebrook(1e5, 1e-4).value);
+}
+
+TEST(MixedArguments, IntegersOnlyEvaluateInDouble) {
+  // Boost.Math's rule: f(1, 2) runs as f(1.0, 2.0); in int the drop would truncate to 0
+  EXPECT_EQ(pumploss::friction_colebrook(100000, 0).value, pumploss::friction_colebrook(1e5, 0.0).value);
+  const auto rise = pumploss::throttle_temperature_rise(1000000, 880, 2030);  // 10 bar: 0.56 K
+  EXPECT_EQ(rise.value, pumploss::throttle_temperature_rise(1e6, 880.0, 2030.0).value);
+  EXPECT_GT(rise.value, 0.5);
+  EXPECT_LT(rise.value, 0.6);
+  const auto q = pumploss::orifice_flow(10000000, 870, 1, 1);
+  EXPECT_EQ(q.value, pumploss::orifice_flow(1e7, 870.0, 1.0, 1.0).value);
+  const auto pipe = pumploss::line_pipe(1, 6, 0);
+  EXPECT_EQ(pipe.length_m, 6.0);
+  EXPECT_EQ(pumploss::drain_flow_parts(0, 1, 323).laminar_ref_m3_s, pumploss::drain_flow_parts(0.0, 1.0, 323.0).laminar_ref_m3_s);
 }
 
 TEST(MixedArguments, HeadersMergedLaterPromoteToo) {

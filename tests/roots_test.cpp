@@ -5,10 +5,14 @@
 
 #include <boost/multiprecision/cpp_bin_float.hpp>
 #include <cmath>
+#include <utility>
+#include <vector>
 
 #include "pumploss/detail/roots.hpp"
 #include "pumploss/fluid.hpp"
 #include "pumploss/gap.hpp"
+#include "pumploss/line.hpp"
+#include "pumploss/piston_pump.hpp"
 #include "test_support.hpp"
 
 using pltest::mp50;
@@ -139,6 +143,113 @@ TEST(ImplicitDerivative, AnnulusClearanceAgainst50DigitDifferenceInEveryInput) {
                                                     << " vs " << ref;
     }
   }
+}
+
+TEST(ImplicitDerivative, LineFlowForPressureAgainst50DigitDifferenceInEveryInput) {
+  // An invented drain line: entrance K, 6 m of 12.7 mm tube, a Hooper elbow, exit; 0.8 m rise.
+  // Inputs seeded: height, dp, rho, mu and the tube's bore (an element in dual numbers).
+  using D5 = pumploss::dual<double, 5>;
+  auto make = [](auto d, auto k_in) {
+    using U = decltype(d);
+    return std::vector<pumploss::line_element<U>>{
+        pumploss::line_fitting_k(U(0.0127), k_in), pumploss::line_pipe(d, U(6.0), U(1.5e-6)),
+        pumploss::line_fitting_hooper(U(0.0127), U(800.0), U(0.4)), pumploss::line_fitting_k(U(0.0127), U(1.0))};
+  };
+  // laminar (0.5 Pa s) and turbulent (0.002 Pa s) flow, away from the transition bridge
+  for (const auto& c : {std::pair<double, double>{0.5, 3e-4}, std::pair<double, double>{0.002, 2e-3}}) {
+    const double mu = c.first;
+    const auto line_d = make(0.0127, 0.57);
+    const double dp = pumploss::line_pressure_drop(line_d.data(), line_d.size(), 0.8, c.second, 870.0, mu).dp_pa;
+    const double x[5] = {0.8, dp, 870.0, mu, 0.0127};
+    const auto line_dual = make(D5::variable(x[4], 4), D5(0.57));
+    const auto r = pumploss::line_flow_for_pressure(line_dual.data(), line_dual.size(), D5::variable(x[0], 0),
+                                                    D5::variable(x[1], 1), D5::variable(x[2], 2), D5::variable(x[3], 3));
+    ASSERT_TRUE(r.usable()) << mu;
+    EXPECT_EQ(r.value.val,
+              pumploss::line_flow_for_pressure(line_d.data(), line_d.size(), x[0], x[1], x[2], x[3]).value);
+    for (int i = 0; i < 5; ++i) {
+      auto q_of = [&](const mp50& v) {
+        mp50 a[5];
+        for (int k = 0; k < 5; ++k) a[k] = mp50(x[k]);
+        a[i] = v;
+        const auto l = make(a[4], mp50(0.57));
+        return pumploss::line_flow_for_pressure(l.data(), l.size(), a[0], a[1], a[2], a[3]).value;
+      };
+      const double ref = central_difference(q_of, mp50(x[i]));
+      EXPECT_LT(rel_diff(r.value.d[i], ref), 1e-10) << "mu " << mu << " input " << i << ": " << r.value.d[i]
+                                                    << " vs " << ref;
+    }
+  }
+  // errors pass through with NaN
+  const auto l = make(D5(0.0127), D5(0.57));
+  const auto e = pumploss::line_flow_for_pressure(l.data(), l.size(), D5(0.8), D5(1000.0), D5(870.0), D5(0.04));
+  EXPECT_EQ(e.st, status::out_of_validity);
+  EXPECT_TRUE(std::isnan(e.value.val));
+}
+
+TEST(ImplicitDerivative, GapGrowthForDrainAgainst50DigitDifference) {
+  // An invented pump of about 70 cm3/rev (plausible dimensions, no real product; as
+  // piston_pump_test.cpp's). Seeded: the measured drain, the outlet pressure, the oil
+  // temperature and the bore clearance (a member of the description).
+  pumploss::piston_pump<double> base;
+  base.pistons = 9;
+  base.piston_diameter_m = 20e-3;
+  base.engaged_length_min_m = 20e-3;
+  base.pitch_radius_m = 34e-3;
+  base.max_swash_angle_rad = 0.3490658503988659;  // 20 degrees
+  base.slipper_pocket_radius_m = 9.5e-3;
+  base.slipper_outer_radius_m = 11.5e-3;
+  base.slipper_gap_m = 12e-6;
+  base.slipper_feed_diameter_m = 0.8e-3;
+  base.slipper_feed_length_m = 60e-3;
+  base.ball_diameter_m = 14e-3;
+  base.ball_clearance_m = 8e-6;
+  base.ball_length_m = 4e-3;
+  base.valve_inner_land_inner_radius_m = 31e-3;
+  base.valve_inner_land_outer_radius_m = 34e-3;
+  base.valve_outer_land_inner_radius_m = 44e-3;
+  base.valve_outer_land_outer_radius_m = 47e-3;
+  base.valve_kidney_arc_rad = 2.6179938779914944;  // 150 degrees
+  base.valve_gap_m = 10e-6;
+  base.controller_flow_m3_s = 0.5e-3 / 60;
+  auto make_pump = [&](auto bore) {
+    auto p = pumploss::piston_pump_cast<decltype(bore)>(base);
+    p.bore_clearance_m = bore;
+    return p;
+  };
+  const auto oil = pumploss::typical_mineral_oil(pumploss::d341_fit(313.15, 46e-6, 373.15, 6.8e-6).value);
+  using D4 = pumploss::dual<double, 4>;
+  const pumploss::pump_operating_point<double> op{250e5, 1e5, 25.0, 1.0, 323.15};
+  auto worn = make_pump(15e-6);
+  worn.valve_gap_m *= 1.25;
+  const double x[4] = {pumploss::piston_pump_budget(worn, oil, op).total_m3_s, 250e5, 323.15, 15e-6};
+  auto op_in = [&](auto outlet, auto t) {
+    using U = decltype(outlet);
+    return pumploss::pump_operating_point<U>{outlet, U(1e5), U(25.0), U(1.0), t};
+  };
+  const auto r = pumploss::gap_growth_for_drain(make_pump(D4::variable(x[3], 3)), pumploss::detail::oil_cast<D4>(oil),
+                                                op_in(D4::variable(x[1], 1), D4::variable(x[2], 2)),
+                                                pumploss::pump_gap::valve, D4::variable(x[0], 0));
+  ASSERT_EQ(r.st, status::ok);
+  EXPECT_NEAR(r.value.val, 0.25, 1e-9);
+  EXPECT_EQ(r.value.val,
+            pumploss::gap_growth_for_drain(make_pump(x[3]), oil, op_in(x[1], x[2]), pumploss::pump_gap::valve, x[0]).value);
+  const auto oil50 = pumploss::detail::oil_cast<mp50>(oil);
+  for (int i = 0; i < 4; ++i) {
+    auto g_of = [&](const mp50& v) {
+      mp50 a[4];
+      for (int k = 0; k < 4; ++k) a[k] = mp50(x[k]);
+      a[i] = v;
+      return pumploss::gap_growth_for_drain(make_pump(a[3]), oil50, op_in(a[1], a[2]), pumploss::pump_gap::valve, a[0])
+          .value;
+    };
+    const double ref = central_difference(g_of, mp50(x[i]));
+    EXPECT_LT(rel_diff(r.value.d[i], ref), 1e-9) << "input " << i << ": " << r.value.d[i] << " vs " << ref;
+  }
+  const auto e = pumploss::gap_growth_for_drain(make_pump(D4(15e-6)), pumploss::detail::oil_cast<D4>(oil),
+                                                op_in(D4(250e5), D4(323.15)), pumploss::pump_gap::valve, D4(-1.0));
+  EXPECT_EQ(e.st, status::domain);
+  EXPECT_TRUE(std::isnan(e.value.val));
 }
 
 TEST(ImplicitDerivative, ErrorsPassThroughWithNaN) {

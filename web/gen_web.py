@@ -12,7 +12,8 @@
 
 The header is read by the C API generator's parser (its path is found beside this file's
 repository root, or given by PUMPLOSS_CAPIGEN), so the web module knows exactly the functions,
-parameter kinds and status codes the C tests know.
+parameter kinds and status codes the C tests know; the count of each array (capigen's
+array_counts()) and the comparison cases (capigen's `cases` and `native` modes) come from it too.
 
 Calling convention of the ES module (stated in the .d.ts and docs/pages/web.md):
 - inputs in the order of the C declaration, outputs left out; size_t counts stay explicit;
@@ -32,8 +33,6 @@ ROOT = os.path.dirname(HERE)
 
 def load_capigen():
     path = os.environ.get("PUMPLOSS_CAPIGEN") or os.path.join(ROOT, "tools", "capigen", "capigen.py")
-    if not os.path.exists(path):  # the parser's place before the build tools had a folder
-        path = os.path.join(ROOT, "tests", "capi", "gen_capi.py")
     spec = importlib.util.spec_from_file_location("capigen", path)
     mod = importlib.util.module_from_spec(spec)
     spec.loader.exec_module(mod)
@@ -50,29 +49,13 @@ def short(name):
 
 def out_len_expr(f):
     """JS expression of an output array's length: the product of the function's size_t params."""
-    sizes = [p.name for p in f.params if p.kind == "SIZE"]
-    return " * ".join(sizes) if sizes else "1"
+    return " * ".join(p.name for p in f.params if p.kind == "SIZE") or "1"
 
 
 def in_len_expr(f, idx):
-    """JS expression of an input array's length: the product of the run of size_t params nearest
-    before it (`n` of a batch; `levels, per_level` of a grid; `n_dp` before `dp_pa`), else of
-    the run right after it."""
-    j = idx - 1
-    while j >= 0 and f.params[j].kind != "SIZE":
-        j -= 1
-    run = []
-    while j >= 0 and f.params[j].kind == "SIZE":
-        run.insert(0, f.params[j].name)
-        j -= 1
-    if not run:  # the count follows its arrays (`const double t_k[], size_t count`)
-        j = idx + 1
-        while j < len(f.params) and f.params[j].kind != "SIZE":
-            j += 1
-        while j < len(f.params) and f.params[j].kind == "SIZE":
-            run.append(f.params[j].name)
-            j += 1
-    return " * ".join(run) if run else "0"
+    """JS expression of an input array's length: the product of its counts (capigen's
+    array_counts(), the one statement of the count-to-array rule)."""
+    return " * ".join(CG.array_counts(f)[f.params[idx].name]) or "0"
 
 
 # ---- the ES module -------------------------------------------------------------------------
@@ -332,112 +315,6 @@ def write_dts(funcs, handles, codes, out, consts=()):
     w("export default function loadPumploss(): Promise<Pumploss>;\n")
 
 
-# ---- comparison cases (native C against the module) ----------------------------------------
-
-def case_functions(funcs):
-    """Scalar and batch functions with at most one count (each count is 3 in the cases)."""
-    return [f for f in funcs if f.ret == "int" and f.params and f.cls in ("SCALAR", "BATCH")
-            and sum(p.kind == "SIZE" for p in f.params) <= 1]
-
-
-def case_inputs(f, scale):
-    """Inputs of one case: each parameter's guess times `scale` (batches: three elements)."""
-    vals, nstr = [], 0
-    for p in f.params:
-        g = CG.guess(p)
-        if p.kind == "DIN":
-            vals.append(g * scale)
-        elif p.kind == "IIN":
-            vals.append(int(g))
-        elif p.kind == "SIZE":
-            vals.append(3)
-        elif p.kind == "DARR":
-            vals.append([g * scale, g * scale * 1.25, g * scale * 0.8])
-        elif p.kind == "IARR":
-            vals.append([int(g)] * 3)
-        elif p.kind == "STR":
-            vals.append(["bar", "psi", "degC"][min(nstr, 2)])
-            nstr += 1
-        else:
-            vals.append(None)  # outputs
-    return vals
-
-
-SCALES = (1.0, 0.5, 3.0)
-
-
-def write_cases(funcs, out):
-    cases = []
-    for f in case_functions(funcs):
-        for s in SCALES:
-            cases.append({"fn": short(f.name), "inputs": case_inputs(f, s)})
-    json.dump(cases, out, indent=0)
-
-
-def write_native(funcs, out):
-    w = out.write
-    w("/* Generated from pumploss.h by web/gen_web.py: do not edit. Evaluates the comparison\n")
-    w("   cases with the native library and prints one JSON line per case (hex floats). */\n")
-    w("#include <stdio.h>\n#include \"pumploss.h\"\n\n")
-    w("static int first;\n")
-    w("static void pd(const char *name, const double *v, size_t n) {\n")
-    w("  size_t i;\n  printf(\"%s\\\"%s\\\":[\", first ? \"\" : \",\", name);\n  first = 0;\n")
-    w("  for (i = 0; i < n; ++i) printf(\"%s\\\"%a\\\"\", i ? \",\" : \"\", v[i]);\n  printf(\"]\");\n}\n")
-    if any(p.kind == "ZOUT" for f in case_functions(funcs) for p in f.params):
-        w("static void pz(const char *name, const size_t *v) {\n")
-        w("  printf(\"%s\\\"%s\\\":[%lu]\", first ? \"\" : \",\", name, (unsigned long)v[0]);\n  first = 0;\n}\n")
-    w("static void pi(const char *name, const int *v, size_t n) {\n")
-    w("  size_t i;\n  printf(\"%s\\\"%s\\\":[\", first ? \"\" : \",\", name);\n  first = 0;\n")
-    w("  for (i = 0; i < n; ++i) printf(\"%s%d\", i ? \",\" : \"\", v[i]);\n  printf(\"]\");\n}\n\n")
-    w("int main(void) {\n  int st;\n")
-    k = 0
-    for f in case_functions(funcs):
-        for s in SCALES:
-            vals = case_inputs(f, s)
-            w("  {\n")
-            args = []
-            for p, v in zip(f.params, vals):
-                if p.kind == "DIN":
-                    args.append(repr(float(v)))
-                elif p.kind in ("IIN", "SIZE"):
-                    args.append(str(v))
-                elif p.kind == "DARR":
-                    w(f"    const double a_{p.name}[3] = {{{', '.join(repr(float(x)) for x in v)}}};\n")
-                    args.append(f"a_{p.name}")
-                elif p.kind == "IARR":
-                    w(f"    const int a_{p.name}[3] = {{{', '.join(str(x) for x in v)}}};\n")
-                    args.append(f"a_{p.name}")
-                elif p.kind == "STR":
-                    args.append(json.dumps(v))
-                elif p.kind == "DOUT":
-                    w(f"    double o_{p.name}[9];\n")
-                    args.append(f"o_{p.name}")
-                elif p.kind == "IOUT":
-                    w(f"    int o_{p.name}[9];\n")
-                    args.append(f"o_{p.name}")
-                elif p.kind == "ZOUT":
-                    w(f"    size_t o_{p.name}[9];\n")
-                    args.append(f"o_{p.name}")
-                elif p.kind == "CBUF":
-                    w(f"    char o_{p.name}[1024];\n")
-                    args.append(f"o_{p.name}")
-                elif p.kind == "BUFLEN":
-                    args.append("1024")
-            w(f"    st = {f.name}({', '.join(args)});\n")
-            w(f"    printf(\"{{\\\"case\\\":{k},\\\"fn\\\":\\\"{short(f.name)}\\\",\\\"status\\\":%d,\\\"out\\\":{{\", st);\n    first = 1;\n")
-            n = 3 if any(p.kind == "SIZE" for p in f.params) else 1
-            for p in f.params:
-                if p.kind == "DOUT":
-                    w(f"    pd(\"{p.name}\", o_{p.name}, {n if p.array else 1});\n")
-                elif p.kind == "IOUT":
-                    w(f"    pi(\"{p.name}\", o_{p.name}, {n if p.array else 1});\n")
-                elif p.kind == "ZOUT":
-                    w(f"    pz(\"{p.name}\", o_{p.name});\n")
-            w("    printf(\"}}\\n\");\n  }\n")
-            k += 1
-    w("  return 0;\n}\n")
-
-
 def main():
     if len(sys.argv) != 4:
         sys.exit(__doc__)
@@ -452,10 +329,8 @@ def main():
             write_module(funcs, handles, codes, out, consts)
         elif mode == "dts":
             write_dts(funcs, handles, codes, out, consts)
-        elif mode == "cases":
-            write_cases(funcs, out)
-        elif mode == "native":
-            write_native(funcs, out)
+        elif mode in ("cases", "native"):  # the comparison cases: a capigen mode
+            CG.WRITERS[mode](funcs, handles, codes, consts, out)
         else:
             sys.exit(__doc__)
 

@@ -27,7 +27,9 @@
  *   the count: a NULL array gives PUMPLOSS_EMISUSE, also with n = 0. With valid arrays and
  *   n = 0 a batch function returns PUMPLOSS_OK and writes nothing; a function that needs data
  *   (a fit, a calibration, a check over temperatures) returns its documented error for too few
- *   points (PUMPLOSS_EDATA or PUMPLOSS_EDOMAIN).
+ *   points (PUMPLOSS_EDATA or PUMPLOSS_EDOMAIN). Counts are checked before a handle's state:
+ *   n = 0 gives that answer also on a handle that is not configured yet (a line without its
+ *   oil, a health handle without its description).
  * - Every int parameter that selects a mode, method or kind has named constants
  *   (PUMPLOSS_PUMP, PUMPLOSS_MODEL_WILSON, PUMPLOSS_PATH_SLIPPER, ...): use the names.
  * - No global mutable state: every function is reentrant and safe to call from many threads.

@@ -320,13 +320,16 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_health_monitor_create(const pumploss_hea
   if (out == nullptr) return PUMPLOSS_EMISUSE;
   *out = nullptr;
   if (h == nullptr) return PUMPLOSS_EMISUSE;
-  if (!std::isfinite(h->ref.reference_speed_rev_s)) return PUMPLOSS_EMISUSE;  // set_description() first
   pumploss::capi::fp_guard guard;
   pumploss::health_monitor_settings<double> s;
   s.learn_count = learn_count;
   s.debounce_count = debounce_count;
   s.hysteresis = hysteresis;
-  pumploss::health_monitor<double> m;
+  using monitor = pumploss::health_monitor<double>;
+  const status sc = monitor::check_counts(s);  // the counts before the handle's state (pumploss.h)
+  if (pumploss::is_error(sc)) return static_cast<int>(sc);
+  if (!std::isfinite(h->ref.reference_speed_rev_s)) return PUMPLOSS_EMISUSE;  // set_description() first
+  monitor m;
   const status st = m.init(h->ref, h->bands, s);
   if (pumploss::is_error(st)) return static_cast<int>(st);
   auto* p = new (std::nothrow) pumploss_health_monitor{m};

@@ -168,13 +168,6 @@ inline clearance_budget<T> clearance_budget_of(status check, const oil<T>& o, co
   return clearance_budget_finish(b, displacement_m3_rev, op.speed_rev_s);
 }
 
-/// An oil converted to another scalar type (constant: no derivatives).
-template <class U, class T>
-inline oil<U> oil_cast(const oil<T>& o) {
-  return oil<U>{{U(o.viscosity.a), U(o.viscosity.b)}, U(o.rho_ref_kg_m3), U(o.t_ref_k), U(o.alpha_per_k),
-                U(o.bulk_modulus_pa), U(o.cp_j_kg_k), U(o.barus_per_pa)};
-}
-
 /// Sensitivities from a budget evaluated in dual numbers seeded on the three clearances.
 template <class T, class D>
 inline clearance_sensitivity<T> clearance_sensitivity_from(const clearance_budget<D>& b,

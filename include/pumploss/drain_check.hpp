@@ -54,7 +54,7 @@ struct drain_flow {
 /// @param laminar_ref_m3_s laminar leakage at t_ref_k, m^3/s
 /// @param t_ref_k reference temperature, K
 /// @return the model (checked when evaluated)
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline drain_flow<T> drain_flow_parts(T constant_m3_s, T laminar_ref_m3_s, T t_ref_k) {
   drain_flow<T> f;
   f.constant_m3_s = constant_m3_s;

@@ -366,6 +366,18 @@ template <class T, std::size_t N>
 inline const T& primal(const dual<T, N>& x) noexcept {
   return x.val;
 }
+/// A scalar in the scalar type U: itself (with its derivatives) when it already has that type,
+/// else its value part converted to U (a constant: the derivative directions stay behind).
+/// @param x the scalar
+/// @return x as U
+template <class U, class T>
+inline decltype(auto) scalar_as(const T& x) {
+  if constexpr (std::is_same_v<U, T>) {
+    return (x);
+  } else {
+    return U(primal(x));
+  }
+}
 }  // namespace detail
 
 }  // namespace pumploss

@@ -90,7 +90,7 @@ inline T inv_two_pi() {
 /// @par Source
 /// ISO 4409:2019 (test method) with the definitions of ISO 4391; pump eta_hm = eta_t / eta_v,
 /// ISO 4409:2019 and ISO 4391 (docs/pages/theory_efficiency.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline efficiency_point<T> pump_efficiency(T displacement_m3_rev, T speed_rev_s, T dp_pa, T flow_m3_s,
                                            T torque_n_m) {
   if (!detail::all_finite(displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m))
@@ -131,7 +131,7 @@ inline efficiency_point<T> pump_efficiency(T displacement_m3_rev, T speed_rev_s,
 /// A few ulp against a 50-digit evaluation (tests/efficiency_test.cpp: at most 3 ulp seen over 3 000 points).
 /// @par Source
 /// ISO 4409:2019 with the definitions of ISO 4391.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline efficiency_point<T> motor_efficiency(T displacement_m3_rev, T speed_rev_s, T dp_pa, T flow_m3_s,
                                             T torque_n_m) {
   if (!detail::all_finite(displacement_m3_rev, speed_rev_s, dp_pa, flow_m3_s, torque_n_m))
@@ -178,7 +178,7 @@ inline efficiency_point<T> machine_efficiency(machine kind, T displacement_m3_re
 /// Correctly rounded (one multiplication).
 /// @par Source
 /// ISO 4391 definition.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> theoretical_flow(T displacement_m3_rev, T speed_rev_s) {
   if (!detail::all_finite(displacement_m3_rev, speed_rev_s)) return detail::fail<T>(status::nonfinite);
   if (!(displacement_m3_rev > T(0)) || !(speed_rev_s >= T(0))) return detail::fail<T>(status::domain);
@@ -193,7 +193,7 @@ inline result<T> theoretical_flow(T displacement_m3_rev, T speed_rev_s) {
 /// Within 2 ulp.
 /// @par Source
 /// ISO 4391 definition.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> theoretical_torque(T displacement_m3_rev, T dp_pa) {
   if (!detail::all_finite(displacement_m3_rev, dp_pa)) return detail::fail<T>(status::nonfinite);
   if (!(displacement_m3_rev > T(0)) || !(dp_pa >= T(0))) return detail::fail<T>(status::domain);
@@ -209,7 +209,7 @@ inline result<T> theoretical_torque(T displacement_m3_rev, T dp_pa) {
 /// Correctly rounded.
 /// @par Source
 /// Definition (docs/pages/theory_efficiency.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> hydraulic_power(T flow_m3_s, T dp_pa) {
   if (!detail::all_finite(flow_m3_s, dp_pa)) return detail::fail<T>(status::nonfinite);
   if (!(flow_m3_s >= T(0))) return detail::fail<T>(status::domain);
@@ -227,7 +227,7 @@ inline result<T> hydraulic_power(T flow_m3_s, T dp_pa) {
 /// Within 2 ulp.
 /// @par Source
 /// Definition (docs/pages/theory_efficiency.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> shaft_power(T speed_rev_s, T torque_n_m) {
   if (!detail::all_finite(speed_rev_s, torque_n_m)) return detail::fail<T>(status::nonfinite);
   if (!(speed_rev_s >= T(0))) return detail::fail<T>(status::domain);
@@ -261,7 +261,7 @@ inline result<T> shaft_power(T speed_rev_s, T torque_n_m) {
 /// @par Source
 /// Mass conservation with the density model of docs/pages/theory_fluid.md; the approach of ISO 4409:2019
 /// (clause text not seen).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> flow_at_port(T q_meter_m3_s, T p_meter_pa, T t_meter_k, T p_port_pa, T t_port_k,
                               T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_modulus_pa) {
   if (!detail::finite(q_meter_m3_s)) return detail::fail<T>(status::nonfinite);
@@ -291,7 +291,7 @@ inline result<T> flow_at_port(T q_meter_m3_s, T p_meter_pa, T t_meter_k, T p_por
 /// (tests/efficiency_test.cpp).
 /// @par Source
 /// First-order expansion of the density ratio (docs/pages/theory_efficiency.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> flow_at_port_linear(T q_meter_m3_s, T p_meter_pa, T t_meter_k, T p_port_pa, T t_port_k,
                                      T alpha_per_k, T bulk_modulus_pa) {
   using std::fabs;

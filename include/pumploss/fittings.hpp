@@ -47,7 +47,7 @@ inline constexpr double constant_k_min_reynolds = 1e4;
 /// @par Source
 /// Crane Co., Flow of Fluids Through Valves, Fittings, and Pipe, Technical Paper 410, 2009 (the
 /// f_T table); fit by C. Bell in python3-fluids 1.0.22 (fluids.fittings.ft_Crane).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> friction_factor_ft(T diameter_m) {
   using std::pow;
   if (!detail::finite(diameter_m)) return detail::fail<T>(status::nonfinite);
@@ -72,7 +72,7 @@ inline result<T> friction_factor_ft(T diameter_m) {
 /// @par Source
 /// W. B. Hooper, "The two-K method predicts head losses in pipe fittings", Chem. Eng., 24 Aug
 /// 1981, 96-100; constants as tabulated in python3-fluids (fluids.fittings.Hooper).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> k_hooper(T k1, T k_inf, T diameter_m, T reynolds) {
   if (!detail::all_finite(k1, k_inf, diameter_m, reynolds)) return detail::fail<T>(status::nonfinite);
   if (!(k1 >= T(0)) || !(k_inf >= T(0)) || !(diameter_m > T(0)) || !(reynolds > T(0)))
@@ -95,7 +95,7 @@ inline result<T> k_hooper(T k1, T k_inf, T diameter_m, T reynolds) {
 /// flow through elbows, valves and tees", Chem. Eng. 106(7) (1999) 101; R. Darby, Chemical
 /// Engineering Fluid Mechanics, 2nd ed., Marcel Dekker, 2001, Table 7-3; constants as tabulated
 /// in python3-fluids (fluids.fittings.Darby).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> k_darby(T k1, T k_i, T k_d, T nominal_size_in, T reynolds) {
   using std::pow;
   if (!detail::all_finite(k1, k_i, k_d, nominal_size_in, reynolds)) return detail::fail<T>(status::nonfinite);
@@ -114,7 +114,7 @@ inline result<T> k_darby(T k1, T k_i, T k_d, T nominal_size_in, T reynolds) {
 /// Rounding only.
 /// @par Source
 /// Definition (K = f L/D; Crane Technical Paper 410, 2009).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> equivalent_length(T k, T diameter_m, T f_darcy) {
   if (!detail::all_finite(k, diameter_m, f_darcy)) return detail::fail<T>(status::nonfinite);
   if (!(k >= T(0)) || !(diameter_m > T(0)) || !(f_darcy > T(0))) return detail::fail<T>(status::domain);
@@ -133,7 +133,7 @@ inline result<T> equivalent_length(T k, T diameter_m, T f_darcy) {
 /// @par Source
 /// F. M. White, Fluid Mechanics, 7th ed., McGraw-Hill, 2011, Sec. 3.7 (kinetic energy correction
 /// factor alpha = 2 for laminar pipe flow), from memory.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> k_exit_kinetic(T reynolds) {
   if (!detail::finite(reynolds)) return detail::fail<T>(status::nonfinite);
   if (!(reynolds >= T(0))) return detail::fail<T>(status::domain);

@@ -35,7 +35,7 @@ namespace pumploss {
 /// @par Source
 /// ASTM D341, "Standard Practice for Viscosity-Temperature Equations and Charts for Liquid
 /// Petroleum or Hydrocarbon Products" (form with the low-viscosity term).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline T d341_z(T nu_mm2_s) {
   using std::exp;
   T z = nu_mm2_s + detail::constant<T>(0.7L, "0.7");
@@ -58,7 +58,7 @@ inline T d341_z(T nu_mm2_s) {
 /// d341_z(); the round trip differs by up to about 1e-3 mm^2/s below 2 mm^2/s.
 /// @par Source
 /// ASTM D341 (docs/pages/theory_fluid.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline T d341_nu_from_z(T z) {
   using std::exp;
   const T x = z - detail::constant<T>(0.7L, "0.7");
@@ -107,7 +107,7 @@ inline status d341_check(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
 /// @par Source
 /// ASTM D341 (docs/pages/theory_fluid.md). Check: 32 mm^2/s at 40 degC and 5.4 mm^2/s at 100 degC give
 /// A = 9.5259, B = 3.7449 with T = theta + 273 (published worked example).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<d341_line<T>> d341_fit(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s) {
   using std::log;
   const T nan = scalar_traits<T>::nan();
@@ -202,7 +202,7 @@ inline result<T> d341_temperature(const d341_line<T>& line, T nu_m2_s) {
 /// @par Source
 /// ASTM D341 (docs/pages/theory_fluid.md); check value 8.53 mm^2/s at 80 degC for 32 mm^2/s at 40 degC and
 /// 5.4 mm^2/s at 100 degC (published worked example, quoted as 8.5).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> viscosity_d341(T t1_k, T nu1_m2_s, T t2_k, T nu2_m2_s, T t_k) {
   const auto line = d341_fit(t1_k, nu1_m2_s, t2_k, nu2_m2_s);
   if (is_error(line.st)) return detail::fail<T>(line.st);
@@ -264,7 +264,7 @@ PUMPLOSS_CXX_API result<iso_vg_grade> iso_vg_classify(double nu40_m2_s) noexcept
 /// @par Source
 /// ASTM D2161-93, Eq. for 100 degF (as implemented in the `chemicals` library's
 /// viscosity_converter); check 46 mm^2/s -> 214.19 SUS, 2 mm^2/s -> 32.60 SUS.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> sus_from_kinematic(T nu_m2_s) {
   if (!detail::finite(nu_m2_s)) return detail::fail<T>(status::nonfinite);
   if (!(nu_m2_s > T(0))) return detail::fail<T>(status::domain);
@@ -289,7 +289,7 @@ inline result<T> sus_from_kinematic(T nu_m2_s) {
 ///         status::no_convergence if the iteration cap is reached (not seen in tests).
 /// @par Source
 /// ASTM D2161-93; check 700 SUS -> 151.0891 mm^2/s (`chemicals` documentation).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> kinematic_from_sus(T sus) {
   if (!detail::finite(sus)) return detail::fail<T>(status::nonfinite);
   if (!(sus > T(0))) return detail::fail<T>(status::domain);
@@ -335,7 +335,7 @@ inline result<T> kinematic_from_sus(T sus) {
 /// @return mu in Pa s; status::overflow when the product is not representable.
 /// @par Source
 /// Definition (ISO 80000-11).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> dynamic_viscosity(T nu_m2_s, T rho_kg_m3) {
   if (!detail::all_finite(nu_m2_s, rho_kg_m3)) return detail::fail<T>(status::nonfinite);
   if (!(nu_m2_s > T(0)) || !(rho_kg_m3 > T(0))) return detail::fail<T>(status::domain);
@@ -350,7 +350,7 @@ inline result<T> dynamic_viscosity(T nu_m2_s, T rho_kg_m3) {
 /// @return nu in m^2/s; status::overflow when the quotient is not representable.
 /// @par Source
 /// Definition (ISO 80000-11).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> kinematic_viscosity(T mu_pa_s, T rho_kg_m3) {
   if (!detail::all_finite(mu_pa_s, rho_kg_m3)) return detail::fail<T>(status::nonfinite);
   if (!(mu_pa_s > T(0)) || !(rho_kg_m3 > T(0))) return detail::fail<T>(status::domain);
@@ -377,7 +377,7 @@ inline result<T> kinematic_viscosity(T mu_pa_s, T rho_kg_m3) {
 /// @par Source
 /// Definitions of the secant bulk modulus and expansion coefficient: Vacca & Franzoni,
 /// Hydraulic Fluid Power, Wiley 2021, sections 2.4-2.5; model in docs/pages/theory_fluid.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> oil_density(T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_modulus_pa, T t_k, T p_pa) {
   using std::fabs;
   if (!detail::all_finite(rho_ref_kg_m3, t_ref_k, alpha_per_k, bulk_modulus_pa, t_k, p_pa))
@@ -403,7 +403,7 @@ inline result<T> oil_density(T rho_ref_kg_m3, T t_ref_k, T alpha_per_k, T bulk_m
 /// @return mu in Pa s; status::regime above 100 MPa, where other laws are preferred.
 /// @par Source
 /// C. Barus, Am. J. Sci. 45 (1893) 87-96; limits from memory.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> viscosity_barus(T mu0_pa_s, T alpha_per_pa, T p_pa) {
   using std::exp;
   if (!detail::all_finite(mu0_pa_s, alpha_per_pa, p_pa)) return detail::fail<T>(status::nonfinite);
@@ -430,6 +430,19 @@ struct oil {
   T cp_j_kg_k;             ///< specific heat capacity, J/(kg K)
   T barus_per_pa;          ///< Barus pressure-viscosity coefficient, 1/Pa (0 to ignore)
 };
+
+namespace detail {
+/// An oil in another scalar type: the same oil for the same type, else its value parts as
+/// constants (no derivatives; see scalar_as()).
+/// @param o the oil
+/// @return the oil in U
+template <class U, class T>
+inline oil<U> oil_cast(const oil<T>& o) {
+  return oil<U>{{scalar_as<U>(o.viscosity.a), scalar_as<U>(o.viscosity.b)}, scalar_as<U>(o.rho_ref_kg_m3),
+                scalar_as<U>(o.t_ref_k), scalar_as<U>(o.alpha_per_k), scalar_as<U>(o.bulk_modulus_pa),
+                scalar_as<U>(o.cp_j_kg_k), scalar_as<U>(o.barus_per_pa)};
+}
+}  // namespace detail
 
 /// Typical property set of a mineral hydraulic oil (HM/HLP type) without the viscosity line.
 ///

@@ -185,7 +185,7 @@ inline result<T> friction_laminar(T reynolds, T laminar_constant = T(64)) {
 /// region between the smooth and rough pipe laws", J. ICE 11(4) (1939) 133-156.
 /// D. Clamond, "Efficient resolution of the Colebrook equation", Ind. Eng. Chem. Res. 48(7)
 /// (2009) 3665-3671 (docs/pages/theory_friction.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> friction_colebrook(T reynolds, T relative_roughness) {
   const status s = detail::friction_check(reynolds, relative_roughness);
   if (is_error(s)) return detail::fail<T>(s);
@@ -214,7 +214,7 @@ inline result<T> friction_colebrook(T reynolds, T relative_roughness) {
 /// @par Source
 /// S. E. Haaland, "Simple and explicit formulas for the friction factor in turbulent pipe
 /// flow", J. Fluids Eng. 105(1) (1983) 89-90.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> friction_haaland(T reynolds, T relative_roughness) {
   using std::log;
   using std::pow;
@@ -244,7 +244,7 @@ inline result<T> friction_haaland(T reynolds, T relative_roughness) {
 /// @par Source
 /// P. K. Swamee, A. K. Jain, "Explicit equations for pipe-flow problems", J. Hydraulics Div.
 /// ASCE 102(5) (1976) 657-664.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> friction_swamee_jain(T reynolds, T relative_roughness) {
   using std::log;
   using std::pow;
@@ -280,7 +280,7 @@ inline result<T> friction_swamee_jain(T reynolds, T relative_roughness) {
 /// @par Source
 /// S. W. Churchill, "Friction-factor equation spans all fluid-flow regimes", Chem. Eng. 84(24)
 /// (1977) 91-92 (journal details from memory; formula as in python3-fluids).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> friction_churchill(T reynolds, T relative_roughness) {
   using std::log;
   using std::pow;
@@ -373,7 +373,7 @@ struct [[nodiscard]] pipe_flow {
 /// A few roundings.
 /// @par Source
 /// Definition (continuity).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> pipe_velocity(T q_m3_s, T diameter_m) {
   if (!detail::all_finite(q_m3_s, diameter_m)) return detail::fail<T>(status::nonfinite);
   if (!(diameter_m > T(0))) return detail::fail<T>(status::domain);
@@ -392,7 +392,7 @@ inline result<T> pipe_velocity(T q_m3_s, T diameter_m) {
 /// A few roundings.
 /// @par Source
 /// Definition: Re = 4q/(pi D nu).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> pipe_reynolds(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diameter_m) {
   using std::fabs;
   if (!detail::all_finite(q_m3_s, rho_kg_m3, mu_pa_s, diameter_m)) return detail::fail<T>(status::nonfinite);

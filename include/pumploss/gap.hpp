@@ -86,7 +86,7 @@ inline T cubic_positive_root(T p, T r) {
 /// @par Source
 /// Standard lubrication result; e.g. Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19
 /// (annulus form); docs/pages/theory_gap.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_plates_flow(T dp_pa, T mu_pa_s, T width_m, T height_m, T length_m, T wall_speed_m_s) {
   if (!detail::all_finite(dp_pa, mu_pa_s, width_m, height_m, length_m, wall_speed_m_s))
     return detail::fail<T>(status::nonfinite);
@@ -113,7 +113,7 @@ inline result<T> gap_plates_flow(T dp_pa, T mu_pa_s, T width_m, T height_m, T le
 /// A few ulp (closed form).
 /// @par Source
 /// Standard plane Couette-Poiseuille profile (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_plates_velocity(T dp_pa, T mu_pa_s, T height_m, T length_m, T wall_speed_m_s, T y_m) {
   if (!detail::all_finite(dp_pa, mu_pa_s, height_m, length_m, wall_speed_m_s, y_m))
     return detail::fail<T>(status::nonfinite);
@@ -141,7 +141,7 @@ inline result<T> gap_plates_velocity(T dp_pa, T mu_pa_s, T height_m, T length_m,
 /// Within a few ulp of the 50-digit evaluation except where the two terms cancel.
 /// @par Source
 /// Wall shear of the plane Couette-Poiseuille profile (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_plates_shear_force(T dp_pa, T mu_pa_s, T width_m, T height_m, T length_m, T wall_speed_m_s) {
   if (!detail::all_finite(dp_pa, mu_pa_s, width_m, height_m, length_m, wall_speed_m_s))
     return detail::fail<T>(status::nonfinite);
@@ -168,7 +168,7 @@ inline result<T> gap_plates_shear_force(T dp_pa, T mu_pa_s, T width_m, T height_
 /// Within 2 ulp of the 50-digit evaluation (sum of positive terms).
 /// @par Source
 /// Plane Couette-Poiseuille flow (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_plates_power_loss(T dp_pa, T mu_pa_s, T width_m, T height_m, T length_m, T wall_speed_m_s) {
   if (!detail::all_finite(dp_pa, mu_pa_s, width_m, height_m, length_m, wall_speed_m_s))
     return detail::fail<T>(status::nonfinite);
@@ -198,7 +198,7 @@ inline result<T> gap_plates_power_loss(T dp_pa, T mu_pa_s, T width_m, T height_m
 /// Within 2 ulp of the 50-digit evaluation.
 /// @par Source
 /// Inverse of the laminar gap flow, derived here (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_plates_height(T q_m3_s, T dp_pa, T mu_pa_s, T width_m, T length_m) {
   using std::cbrt;
   if (!detail::all_finite(q_m3_s, dp_pa, mu_pa_s, width_m, length_m)) return detail::fail<T>(status::nonfinite);
@@ -230,7 +230,7 @@ inline result<T> gap_plates_height(T q_m3_s, T dp_pa, T mu_pa_s, T width_m, T le
 /// (tests/gap_test.cpp).
 /// @par Source
 /// docs/pages/theory_gap.md (inverse problem); cubic formulas: standard algebra (Cardano, Viete).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_plates_height_couette(T q_m3_s, T dp_pa, T mu_pa_s, T width_m, T length_m, T wall_speed_m_s) {
   using std::cbrt;
   if (!detail::all_finite(q_m3_s, dp_pa, mu_pa_s, width_m, length_m, wall_speed_m_s))
@@ -293,7 +293,7 @@ inline result<T> gap_plates_height_couette(T q_m3_s, T dp_pa, T mu_pa_s, T width
 /// Eccentric annulus: Piercy, Hooper and Winny, Phil. Mag. 15 (1933); as given in F. M. White,
 /// Viscous Fluid Flow (McGraw-Hill), section on the eccentric annulus (equation number from
 /// memory, not cited); docs/pages/theory_gap.md (concentric and eccentric annulus).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_annulus_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, T piston_diameter_m, T length_m,
                                   T eccentricity_ratio) {
   if (!detail::all_finite(dp_pa, mu_pa_s, bore_diameter_m, piston_diameter_m, length_m, eccentricity_ratio))
@@ -331,7 +331,7 @@ inline result<T> gap_annulus_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, T pisto
 /// Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19 (concentric); eccentricity
 /// factor: Manring, Hydraulic Control Systems, Wiley 2005 (equation number from memory);
 /// docs/pages/theory_gap.md (concentric and eccentric annulus).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_annulus_narrow_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, T piston_diameter_m, T length_m,
                                          T eccentricity_ratio) {
   if (!detail::all_finite(dp_pa, mu_pa_s, bore_diameter_m, piston_diameter_m, length_m, eccentricity_ratio))
@@ -369,7 +369,7 @@ inline result<T> gap_annulus_narrow_flow(T dp_pa, T mu_pa_s, T bore_diameter_m, 
 /// Derived here (narrow form: M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19): harmonic solution
 /// (xi - alpha)/(beta - alpha) in the bipolar coordinates of the eccentric-annulus solution
 /// (Piercy, Hooper and Winny 1933), integrated over the cross-section.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_annulus_drag_flow(T bore_diameter_m, T piston_diameter_m, T eccentricity_ratio,
                                        T piston_speed_m_s) {
   using std::asinh;
@@ -405,7 +405,7 @@ inline result<T> gap_annulus_drag_flow(T bore_diameter_m, T piston_diameter_m, T
 /// Each part within 1e-12 relative; the sum can cancel when the drag opposes the pressure flow.
 /// @par Source
 /// Superposition of gap_annulus_flow() and gap_annulus_drag_flow().
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_piston_leakage(T dp_pa, T mu_pa_s, T bore_diameter_m, T piston_diameter_m, T length_m,
                                     T eccentricity_ratio, T piston_speed_m_s) {
   const result<T> qp = gap_annulus_flow(dp_pa, mu_pa_s, bore_diameter_m, piston_diameter_m, length_m,
@@ -439,7 +439,7 @@ inline result<T> gap_piston_leakage(T dp_pa, T mu_pa_s, T bore_diameter_m, T pis
 /// Round trip within 1e-14 relative (tests/gap_test.cpp).
 /// @par Source
 /// Inverse of the laminar gap flow, derived here (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_annulus_clearance(T q_m3_s, T dp_pa, T mu_pa_s, T bore_diameter_m, T length_m,
                                        T eccentricity_ratio) {
   using std::cbrt;
@@ -531,7 +531,7 @@ inline status radial_check(T mu, T ri, T ro, T h) {
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
 /// Standard lubrication result (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_radial_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T outer_radius_m, T height_m) {
   using std::log1p;
   if (!detail::all_finite(dp_pa, mu_pa_s, inner_radius_m, outer_radius_m, height_m))
@@ -561,7 +561,7 @@ inline result<T> gap_radial_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T outer_r
 /// Within 1e-14 relative of the 50-digit evaluation.
 /// @par Source
 /// docs/pages/theory_gap.md (sector fraction of the disc flow).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_radial_sector_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T outer_radius_m, T height_m,
                                         T angle_rad) {
   using std::log1p;
@@ -591,7 +591,7 @@ inline result<T> gap_radial_sector_flow(T dp_pa, T mu_pa_s, T inner_radius_m, T 
 /// Within a few ulp (log1p forms).
 /// @par Source
 /// Standard lubrication result (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_radial_pressure(T inner_pressure_pa, T outer_pressure_pa, T inner_radius_m, T outer_radius_m,
                                      T radius_m) {
   using std::log1p;
@@ -627,7 +627,7 @@ inline result<T> gap_radial_pressure(T inner_pressure_pa, T outer_pressure_pa, T
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
 /// Integration of the logarithmic land pressure p(r) of gap_radial_flow() (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_radial_land_force(T inner_pressure_pa, T outer_pressure_pa, T inner_radius_m,
                                        T outer_radius_m, T angle_rad) {
   using std::log1p;
@@ -659,7 +659,7 @@ inline result<T> gap_radial_land_force(T inner_pressure_pa, T outer_pressure_pa,
 /// Within 2 ulp of the 50-digit evaluation.
 /// @par Source
 /// Inverse of the laminar gap flow, derived here (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_radial_height(T q_m3_s, T dp_pa, T mu_pa_s, T inner_radius_m, T outer_radius_m) {
   using std::cbrt;
   using std::log1p;
@@ -744,7 +744,7 @@ inline pad_state<T> pad_finish(T ps, T pr, T q, T ri, T ro, T piston_d) {
 /// Rowe, Hydrostatic, Aerostatic and Hybrid Bearing Design, 2012; Stachowiak and Batchelor,
 /// Engineering Tribology, chapter on hydrostatic lubrication (citations from memory);
 /// algebra in docs/pages/theory_gap.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline pad_state<T> gap_pad_capillary(T supply_pressure_pa, T mu_pa_s, T capillary_diameter_m, T capillary_length_m,
                                       T inner_radius_m, T outer_radius_m, T height_m, T piston_diameter_m) {
   if (!detail::all_finite(supply_pressure_pa, mu_pa_s, capillary_diameter_m, capillary_length_m, inner_radius_m,
@@ -782,7 +782,7 @@ inline pad_state<T> gap_pad_capillary(T supply_pressure_pa, T mu_pa_s, T capilla
 /// Within 1e-14 relative of the 50-digit evaluation (tests/gap_test.cpp).
 /// @par Source
 /// As gap_pad_capillary().
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline pad_state<T> gap_pad_orifice(T supply_pressure_pa, T rho_kg_m3, T mu_pa_s, T orifice_diameter_m, T cd,
                                     T inner_radius_m, T outer_radius_m, T height_m, T piston_diameter_m) {
   using std::sqrt;
@@ -819,7 +819,7 @@ inline pad_state<T> gap_pad_orifice(T supply_pressure_pa, T rho_kg_m3, T mu_pa_s
 /// Round trip with gap_pad_capillary() within 1e-14 relative.
 /// @par Source
 /// W. B. Rowe, Hydrostatic, Aerostatic and Hybrid Bearing Design, 2012 (from memory), inverted here; docs/pages/theory_gap.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_pad_capillary_height(T supply_pressure_pa, T mu_pa_s, T capillary_diameter_m,
                                           T capillary_length_m, T inner_radius_m, T outer_radius_m, T load_n) {
   using std::cbrt;
@@ -860,7 +860,7 @@ inline result<T> gap_pad_capillary_height(T supply_pressure_pa, T mu_pa_s, T cap
 /// Round trip with gap_pad_orifice() within 1e-14 relative.
 /// @par Source
 /// W. B. Rowe, Hydrostatic, Aerostatic and Hybrid Bearing Design, 2012 (from memory), inverted here; docs/pages/theory_gap.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_pad_orifice_height(T supply_pressure_pa, T rho_kg_m3, T mu_pa_s, T orifice_diameter_m, T cd,
                                         T inner_radius_m, T outer_radius_m, T load_n) {
   using std::cbrt;
@@ -903,7 +903,7 @@ inline result<T> gap_pad_orifice_height(T supply_pressure_pa, T rho_kg_m3, T mu_
 /// A few ulp.
 /// @par Source
 /// Definition of the Reynolds number with D_h = 2h (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_reynolds(T q_m3_s, T width_m, T rho_kg_m3, T mu_pa_s) {
   using std::fabs;
   if (!detail::all_finite(q_m3_s, width_m, rho_kg_m3, mu_pa_s)) return detail::fail<T>(status::nonfinite);
@@ -929,7 +929,7 @@ inline result<T> gap_reynolds(T q_m3_s, T width_m, T rho_kg_m3, T mu_pa_s) {
 /// A few ulp.
 /// @par Source
 /// Definition of the Reynolds number with D_h = 2h (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_reduced_reynolds(T q_m3_s, T width_m, T height_m, T length_m, T rho_kg_m3, T mu_pa_s) {
   const result<T> re = gap_reynolds(q_m3_s, width_m, rho_kg_m3, mu_pa_s);
   if (is_error(re.st)) return re;
@@ -951,7 +951,7 @@ inline result<T> gap_reduced_reynolds(T q_m3_s, T width_m, T height_m, T length_
 /// Exact up to one rounding.
 /// @par Source
 /// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eq. 2.19 (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> gap_narrow_ratio(T bore_diameter_m, T piston_diameter_m) {
   if (!detail::all_finite(bore_diameter_m, piston_diameter_m)) return detail::fail<T>(status::nonfinite);
   if (!(piston_diameter_m > T(0)) || !(bore_diameter_m > piston_diameter_m)) return detail::fail<T>(status::domain);

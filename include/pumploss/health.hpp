@@ -54,7 +54,7 @@ namespace pumploss {
 ///         non-positive displacement or speed; status::implausible when the fraction exceeds 1.
 /// @par Source
 /// Definition; the bands it is compared with are common practice (see health.hpp).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> drain_fraction(T drain_flow_m3_s, T max_displacement_m3_rev, T speed_rev_s) {
   if (!detail::all_finite(drain_flow_m3_s, max_displacement_m3_rev, speed_rev_s))
     return detail::fail<T>(status::nonfinite);

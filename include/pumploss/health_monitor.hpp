@@ -83,19 +83,28 @@ class health_monitor {
   /// Version of the saved state layout.
   static constexpr int state_version = 2;
 
+  /// The counts of the settings: learn_count 2 to 100000, debounce_count 1 to 100000.
+  /// @param settings the monitor's settings
+  /// @return ok or status::domain
+  static status check_counts(const health_monitor_settings<T>& settings) noexcept {
+    if (settings.learn_count < 2 || settings.learn_count > 100000 || settings.debounce_count < 1 ||
+        settings.debounce_count > 100000)
+      return status::domain;
+    return status::ok;
+  }
+
   /// Set up a monitor.
   /// @param ref the pump description (baseline NaN: learned from the first learn_count readings)
   /// @param bands bands and limits
   /// @param settings the monitor's settings
   /// @return ok, or the error of a bad description, band or setting (the monitor is unchanged)
   status init(const health_reference<T>& ref, const health_bands<T>& bands, const health_monitor_settings<T>& settings) {
-    status s = detail::health_reference_check(ref);
+    status s = check_counts(settings);  // the counts first, as the C API checks them before a handle's state
+    if (is_error(s)) return s;
+    s = detail::health_reference_check(ref);
     if (is_error(s)) return s;
     s = detail::health_bands_check(bands);
     if (is_error(s)) return s;
-    if (settings.learn_count < 2 || settings.learn_count > 100000 || settings.debounce_count < 1 ||
-        settings.debounce_count > 100000)
-      return status::domain;
     if (!detail::all_finite(settings.hysteresis, settings.cusum_k, settings.cusum_h, settings.sigma_floor))
       return status::nonfinite;
     if (!(settings.hysteresis >= T(0)) || !(settings.hysteresis <= T(0.5)) || !(settings.cusum_k >= T(0)) ||

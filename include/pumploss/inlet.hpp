@@ -206,7 +206,7 @@ struct [[nodiscard]] shaft_seal_result {
 /// @par Source
 /// Comparison with the maker's rating; that makers set a maximum case pressure is common
 /// practice, no source.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline shaft_seal_result<T> shaft_seal_check(T case_continuous_pa, T case_peak_pa, T seal_continuous_pa,
                                              T seal_peak_pa) {
   const T nan = scalar_traits<T>::nan();

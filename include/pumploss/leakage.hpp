@@ -34,7 +34,7 @@ namespace pumploss {
 /// Within 3 ulp of the 50-digit evaluation (tests/leakage_test.cpp).
 /// @par Source
 /// Laminar gap flow q = G h^3 dp / mu (docs/pages/theory_efficiency.md, leakage scaling).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> leakage_scale(T q_ref_m3_s, T dp_ref_pa, T mu_ref_pa_s, T dp_pa, T mu_pa_s) {
   if (!detail::all_finite(q_ref_m3_s, dp_ref_pa, mu_ref_pa_s, dp_pa, mu_pa_s)) return detail::fail<T>(status::nonfinite);
   if (!(q_ref_m3_s >= T(0)) || !(dp_ref_pa > T(0)) || !(mu_ref_pa_s > T(0)) || !(dp_pa >= T(0)) || !(mu_pa_s > T(0)))
@@ -61,7 +61,7 @@ inline result<T> leakage_scale(T q_ref_m3_s, T dp_ref_pa, T mu_ref_pa_s, T dp_pa
 /// Within 8 ulp of the 50-digit evaluation.
 /// @par Source
 /// Empirical power law (docs/pages/theory_efficiency.md, leakage scaling).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> leakage_scale_power_law(T q_ref_m3_s, T dp_ref_pa, T mu_ref_pa_s, T dp_pa, T mu_pa_s, T a, T b) {
   using std::pow;
   if (!detail::all_finite(q_ref_m3_s, dp_ref_pa, mu_ref_pa_s, dp_pa, mu_pa_s, a, b))
@@ -127,7 +127,7 @@ inline result<T> leakage_normalise(T q_m3_s, T dp_pa, T t_k, T dp_ref_pa, T t_re
 /// Within 4 ulp of the 50-digit evaluation, also where R_t dp << R_lam^2.
 /// @par Source
 /// Quadratic of laminar and square-law resistances in series (docs/pages/theory_efficiency.md), rearranged to avoid cancellation.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> leakage_series(T r_lam_pa_s_m3, T r_t_pa_s2_m6, T dp_pa) {
   using std::sqrt;
   if (!detail::all_finite(r_lam_pa_s_m3, r_t_pa_s2_m6, dp_pa)) return detail::fail<T>(status::nonfinite);

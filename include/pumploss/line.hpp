@@ -12,6 +12,7 @@
 #include <array>
 #include <cmath>
 #include <cstddef>
+#include <type_traits>
 #include <vector>
 
 #include "detail/roots.hpp"
@@ -68,7 +69,7 @@ struct line_element {
 /// @param length_m length, m
 /// @param roughness_m absolute roughness, m
 /// @return the element (checked when evaluated)
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_pipe(T diameter_m, T length_m, T roughness_m) {
   line_element<T> e;
   e.kind = line_element_kind::pipe;
@@ -83,7 +84,7 @@ inline line_element<T> line_pipe(T diameter_m, T length_m, T roughness_m) {
 /// @param diameter_m bore the K refers to, m (0: the bore of the element it follows)
 /// @param k loss coefficient
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_fitting_k(T diameter_m, T k) {
   line_element<T> e;
   e.kind = line_element_kind::fitting_k;
@@ -98,7 +99,7 @@ inline line_element<T> line_fitting_k(T diameter_m, T k) {
 /// @param diameter_m bore, m (0: the bore of the element it follows)
 /// @param l_over_d equivalent length in diameters
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_fitting_l_over_d(T diameter_m, T l_over_d) {
   line_element<T> e;
   e.kind = line_element_kind::fitting_l_over_d;
@@ -111,7 +112,7 @@ inline line_element<T> line_fitting_l_over_d(T diameter_m, T l_over_d) {
 /// @param k1 K_1
 /// @param k_inf K_infinity
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_fitting_hooper(T diameter_m, T k1, T k_inf) {
   line_element<T> e;
   e.kind = line_element_kind::fitting_hooper;
@@ -126,7 +127,7 @@ inline line_element<T> line_fitting_hooper(T diameter_m, T k1, T k_inf) {
 /// @param k_i K_i
 /// @param k_d K_d
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_fitting_darby(T diameter_m, T k1, T k_i, T k_d) {
   line_element<T> e;
   e.kind = line_element_kind::fitting_darby;
@@ -159,7 +160,7 @@ inline result<line_element<T>> line_fitting_named(T diameter_m, fitting_type typ
 /// 2 in laminar flow, 1 in turbulent flow).
 /// @param diameter_m bore, m (0: the bore of the element it follows)
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_exit(T diameter_m) {
   line_element<T> e;
   e.kind = line_element_kind::exit_kinetic;
@@ -173,7 +174,7 @@ inline line_element<T> line_exit(T diameter_m) {
 /// @param nu_ref_m2_s viscosity of the data, m^2/s, > 0
 /// @param nu_exponent m, >= 0 (1 for laminar elements such as filter media, 0 for none)
 /// @return the element
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline line_element<T> line_component_power(T q_ref_m3_s, T dp_ref_pa, T exponent, T nu_ref_m2_s, T nu_exponent) {
   line_element<T> e;
   e.kind = line_element_kind::component_power;
@@ -234,6 +235,36 @@ inline T element_bore(const line_element<T>* elements, std::size_t count, std::s
   for (std::size_t j = i + 1; j < count; ++j)
     if (has_bore(elements[j]) && elements[j].diameter_m != T(0)) return elements[j].diameter_m;
   return T(0);
+}
+
+/// A line element in the scalar type U: the element itself for its own type, else its value
+/// parts as constants (scalar_as()), so a line given in dual numbers can be read in the value
+/// type one element at a time.
+template <class U, class T>
+inline decltype(auto) element_as(const line_element<T>& e) {
+  if constexpr (std::is_same_v<U, T>) {
+    return (e);
+  } else {
+    line_element<U> r;
+    r.kind = e.kind;
+    r.diameter_m = scalar_as<U>(e.diameter_m);
+    r.length_m = scalar_as<U>(e.length_m);
+    r.roughness_m = scalar_as<U>(e.roughness_m);
+    r.c1 = scalar_as<U>(e.c1);
+    r.c2 = scalar_as<U>(e.c2);
+    r.c3 = scalar_as<U>(e.c3);
+    r.q_ref_m3_s = scalar_as<U>(e.q_ref_m3_s);
+    r.dp_ref_pa = scalar_as<U>(e.dp_ref_pa);
+    r.exponent = scalar_as<U>(e.exponent);
+    r.nu_ref_m2_s = scalar_as<U>(e.nu_ref_m2_s);
+    r.nu_exponent = scalar_as<U>(e.nu_exponent);
+    r.n_points = e.n_points;
+    for (std::size_t i = 0; i < r.q_points.size(); ++i) {
+      r.q_points[i] = scalar_as<U>(e.q_points[i]);
+      r.dp_points[i] = scalar_as<U>(e.dp_points[i]);
+    }
+    return r;
+  }
 }
 
 template <class T>
@@ -346,7 +377,9 @@ struct [[nodiscard]] line_drop {
 /// \f[ \Delta p = \rho g \Delta z + \sum_\mathrm{pipes} f \frac{L}{D}\frac{\rho v^2}{2}
 ///     + \sum_\mathrm{fittings} K \frac{\rho v^2}{2} + \sum_\mathrm{components} \Delta p_i(q, \nu) \f]
 ///
-/// @param elements the elements (may be NULL when count is 0)
+/// @param elements the elements (may be NULL when count is 0); their scalar type E may differ
+///        from T: then each element is read as constants in T (detail::element_as()), as the
+///        inverse line_flow_for_pressure() does for dual numbers
 /// @param count number of elements
 /// @param height_m height of the outlet above the inlet, m
 /// @param q_m3_s flow, m^3/s (any sign; friction terms take its sign, the static part does not)
@@ -366,8 +399,8 @@ struct [[nodiscard]] line_drop {
 /// @par Source
 /// Darcy-Weisbach and the K method (F. M. White, Fluid Mechanics, 7th ed., 2011, Sec. 6.9);
 /// elements as cited at each method (fittings.hpp, friction.hpp).
-template <class T>
-inline line_drop<T> line_pressure_drop(const line_element<T>* elements, std::size_t count, T height_m, T q_m3_s,
+template <class T, class E = T>
+inline line_drop<T> line_pressure_drop(const line_element<E>* elements, std::size_t count, T height_m, T q_m3_s,
                                        T rho_kg_m3, T mu_pa_s, T* element_dp_pa = nullptr, T d_override_m = T(0),
                                        status* element_st = nullptr) {
   const T nan = scalar_traits<T>::nan();
@@ -381,8 +414,8 @@ inline line_drop<T> line_pressure_drop(const line_element<T>* elements, std::siz
   T total = dp_static;
   status st = status::ok;
   for (std::size_t i = 0; i < count; ++i) {
-    const T d = detail::element_bore(elements, count, i, d_override_m);
-    const auto r = detail::element_dp(elements[i], q_m3_s, rho_kg_m3, mu_pa_s, d);
+    const T d = d_override_m > T(0) ? d_override_m : detail::scalar_as<T>(detail::element_bore(elements, count, i, E(0)));
+    const auto r = detail::element_dp(detail::element_as<T>(elements[i]), q_m3_s, rho_kg_m3, mu_pa_s, d);
     if (is_error(r.st)) return fail(r.st);
     st = worst(st, r.st);
     if (element_dp_pa != nullptr) element_dp_pa[i] = r.value;
@@ -427,28 +460,12 @@ inline line_drop<T> line_pressure_drop_at(const line<T>& l, T q_m3_s, const oil<
   return r;
 }
 
-/// The flow a given pressure drop drives through a line (the inverse of line_pressure_drop()).
-///
-/// The drop rises monotonically with flow (friction_factor()'s transition bridge keeps
-/// \f$ f\,Re^2 \f$ rising), so the root is unique: it is bracketed by doubling from 1e-9 m^3/s
-/// (at most scalar_traits<T>::max_iterations doublings) and found by Brent's method
-/// (detail/roots.hpp) to 4 machine epsilons.
-/// @param elements the elements
-/// @param count number of elements
-/// @param height_m height of the outlet above the inlet, m
-/// @param dp_pa available pressure difference across the line, Pa
-/// @param rho_kg_m3 density, kg/m^3, > 0
-/// @param mu_pa_s dynamic viscosity, Pa s, > 0
-/// @return q in m^3/s; status::out_of_validity when dp does not exceed the static part (no
-///         forward flow); status::no_convergence at the iteration caps; element errors.
-/// @par Accuracy
-/// Round trip q -> dp -> q within 1e-12 relative (tests/line_test.cpp).
-/// @par Source
-/// Brent's method: R. P. Brent, Algorithms for Minimization without Derivatives, Prentice-Hall
-/// 1973, ch. 4.
-template <class T>
-inline result<T> line_flow_for_pressure(const line_element<T>* elements, std::size_t count, T height_m, T dp_pa,
-                                        T rho_kg_m3, T mu_pa_s) {
+namespace detail {
+/// line_flow_for_pressure() in the scalar type T of elements given in E (the value type of a
+/// dual line, or the same type): Brent's method on a bracket grown by doubling.
+template <class T, class E>
+inline result<T> line_flow_solve(const line_element<E>* elements, std::size_t count, T height_m, T dp_pa,
+                                 T rho_kg_m3, T mu_pa_s) {
   using std::fabs;
   if (!detail::all_finite(height_m, dp_pa, rho_kg_m3, mu_pa_s)) return detail::fail<T>(status::nonfinite);
   if (!(rho_kg_m3 > T(0)) || !(mu_pa_s > T(0))) return detail::fail<T>(status::domain);
@@ -482,6 +499,46 @@ inline result<T> line_flow_for_pressure(const line_element<T>* elements, std::si
   if (err) return detail::fail<T>(st);
   if (r.st != status::ok) return detail::fail<T>(status::no_convergence);
   return {r.x, st};
+}
+}  // namespace detail
+
+/// The flow a given pressure drop drives through a line (the inverse of line_pressure_drop()).
+///
+/// The drop rises monotonically with flow (friction_factor()'s transition bridge keeps
+/// \f$ f\,Re^2 \f$ rising), so the root is unique: it is bracketed by doubling from 1e-9 m^3/s
+/// (at most scalar_traits<T>::max_iterations doublings) and found by Brent's method
+/// (detail/roots.hpp) to 4 machine epsilons. For dual numbers (in the scalars or the elements)
+/// the root is found in the value type and the derivatives follow from the implicit-function
+/// rule (dq/dp = -F_p/F_q, detail::implicit_root()).
+/// @param elements the elements
+/// @param count number of elements
+/// @param height_m height of the outlet above the inlet, m
+/// @param dp_pa available pressure difference across the line, Pa
+/// @param rho_kg_m3 density, kg/m^3, > 0
+/// @param mu_pa_s dynamic viscosity, Pa s, > 0
+/// @return q in m^3/s; status::out_of_validity when dp does not exceed the static part (no
+///         forward flow); status::no_convergence at the iteration caps; element errors.
+/// @par Accuracy
+/// Round trip q -> dp -> q within 1e-12 relative (tests/line_test.cpp).
+/// @par Source
+/// Brent's method: R. P. Brent, Algorithms for Minimization without Derivatives, Prentice-Hall
+/// 1973, ch. 4.
+template <class T>
+inline result<T> line_flow_for_pressure(const line_element<T>* elements, std::size_t count, T height_m, T dp_pa,
+                                        T rho_kg_m3, T mu_pa_s) {
+  if constexpr (detail::is_dual_v<T>) {  // root in the value type, derivatives by the implicit rule
+    using detail::primal;
+    using V = detail::value_type_of_t<T>;
+    const auto v = detail::line_flow_solve(elements, count, V(primal(height_m)), V(primal(dp_pa)),
+                                           V(primal(rho_kg_m3)), V(primal(mu_pa_s)));
+    if (is_error(v.st)) return detail::fail<T>(v.st);
+    auto residual = [&](auto q, auto h, auto dp, auto rho, auto mu) {  // F(q) = drop(q) - dp
+      return decltype(q)(line_pressure_drop(elements, count, h, q, rho, mu).dp_pa - dp);
+    };
+    return {detail::implicit_root<T>(v.value, residual, height_m, dp_pa, rho_kg_m3, mu_pa_s), v.st};
+  } else {
+    return detail::line_flow_solve(elements, count, height_m, dp_pa, rho_kg_m3, mu_pa_s);
+  }
 }
 /// @}
 

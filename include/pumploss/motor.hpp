@@ -126,7 +126,7 @@ struct [[nodiscard]] motor_creep_result {
 /// Laminar leakage law (Rabie, Fluid Power Engineering, McGraw-Hill 2009, ch. 2); torque and
 /// pressure of a machine driven as a pump, \f$2\pi M \eta_{hm} = V\Delta p\f$ (ISO 4409:2019
 /// definitions).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline motor_creep_result<T> motor_creep(T displacement_m3_rev, T load_torque_nm, T hydromech_efficiency,
                                          T leak_test_m3_s, T leak_test_dp_pa, T leak_test_mu_pa_s, T mu_pa_s,
                                          T travel_per_rev_m) {

@@ -48,7 +48,7 @@ inline T signed_sqrt(T x) {
 /// @par Source
 /// Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39 (citing Merritt 1967);
 /// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39; docs/pages/theory_gap.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> orifice_flow(T dp_pa, T rho_kg_m3, T diameter_m, T cd) {
   if (!detail::all_finite(dp_pa, rho_kg_m3, diameter_m, cd)) return detail::fail<T>(status::nonfinite);
   if (!(rho_kg_m3 > T(0)) || !(diameter_m > T(0)) || !(cd > T(0)) || !(cd <= T(1)))
@@ -73,7 +73,7 @@ inline result<T> orifice_flow(T dp_pa, T rho_kg_m3, T diameter_m, T cd) {
 /// Within 3 ulp of the 50-digit evaluation.
 /// @par Source
 /// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39; docs/pages/theory_gap.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> orifice_dp(T q_m3_s, T rho_kg_m3, T diameter_m, T cd) {
   if (!detail::all_finite(q_m3_s, rho_kg_m3, diameter_m, cd)) return detail::fail<T>(status::nonfinite);
   if (!(rho_kg_m3 > T(0)) || !(diameter_m > T(0)) || !(cd > T(0)) || !(cd <= T(1)))
@@ -99,7 +99,7 @@ inline result<T> orifice_dp(T q_m3_s, T rho_kg_m3, T diameter_m, T cd) {
 /// Within 3 ulp of the 50-digit evaluation.
 /// @par Source
 /// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39; docs/pages/theory_gap.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> orifice_diameter(T q_m3_s, T dp_pa, T rho_kg_m3, T cd) {
   using std::fabs;
   using std::sqrt;
@@ -127,7 +127,7 @@ inline result<T> orifice_diameter(T q_m3_s, T dp_pa, T rho_kg_m3, T cd) {
 /// A few ulp.
 /// @par Source
 /// Definition of the orifice Reynolds number (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> orifice_reynolds(T q_m3_s, T diameter_m, T rho_kg_m3, T mu_pa_s) {
   using std::fabs;
   if (!detail::all_finite(q_m3_s, diameter_m, rho_kg_m3, mu_pa_s)) return detail::fail<T>(status::nonfinite);
@@ -165,7 +165,7 @@ inline T orifice_sampson_delta() {
 /// @par Source
 /// Low-Re law: Merritt, Hydraulic Control Systems, Wiley 1967 (delta about 0.2, from memory);
 /// Sampson's creeping flow (delta = 1/sqrt(12 pi)); blend: this library's choice (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> orifice_cd_low_re(T re, T cd_inf, T delta) {
   using std::sqrt;
   if (!detail::all_finite(re, cd_inf, delta)) return detail::fail<T>(status::nonfinite);
@@ -197,7 +197,7 @@ inline result<T> orifice_cd_low_re(T re, T cd_inf, T delta) {
 /// Within 1e-14 relative of the 50-digit evaluation (tests/orifice_test.cpp).
 /// @par Source
 /// H. E. Merritt, Hydraulic Control Systems, Wiley 1967 (low-Re Cd, from memory); docs/pages/theory_gap.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> orifice_flow_viscous(T dp_pa, T rho_kg_m3, T mu_pa_s, T diameter_m, T cd_inf, T delta) {
   using std::fabs;
   using std::sqrt;
@@ -247,7 +247,7 @@ inline status capillary_check(T rho, T mu, T d, T l, T k) {
 /// Within 2 ulp of the 50-digit evaluation.
 /// @par Source
 /// Hagen-Poiseuille law; K range from memory (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> capillary_dp(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diameter_m, T length_m, T loss_coefficient) {
   using std::fabs;
   if (!detail::all_finite(q_m3_s, rho_kg_m3, mu_pa_s, diameter_m, length_m, loss_coefficient))
@@ -280,7 +280,7 @@ inline result<T> capillary_dp(T q_m3_s, T rho_kg_m3, T mu_pa_s, T diameter_m, T 
 /// Within 1e-14 relative of the 50-digit evaluation (tests/orifice_test.cpp).
 /// @par Source
 /// docs/pages/theory_gap.md (quadratic solved here in its stable form).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> capillary_flow(T dp_pa, T rho_kg_m3, T mu_pa_s, T diameter_m, T length_m, T loss_coefficient) {
   using std::fabs;
   using std::sqrt;
@@ -317,7 +317,7 @@ inline result<T> capillary_flow(T dp_pa, T rho_kg_m3, T mu_pa_s, T diameter_m, T
 /// Within 3 ulp of the 50-digit evaluation.
 /// @par Source
 /// Series combination of square-law restrictions, derived here (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> orifice_series_cda(T cda1_m2, T cda2_m2) {
   using std::sqrt;
   if (!detail::all_finite(cda1_m2, cda2_m2)) return detail::fail<T>(status::nonfinite);
@@ -340,7 +340,7 @@ inline result<T> orifice_series_cda(T cda1_m2, T cda2_m2) {
 /// One rounding.
 /// @par Source
 /// Parallel combination of square-law restrictions, derived here (docs/pages/theory_gap.md).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> orifice_parallel_cda(T cda1_m2, T cda2_m2) {
   if (!detail::all_finite(cda1_m2, cda2_m2)) return detail::fail<T>(status::nonfinite);
   if (!(cda1_m2 >= T(0)) || !(cda2_m2 >= T(0))) return detail::fail<T>(status::domain);
@@ -360,7 +360,7 @@ inline result<T> orifice_parallel_cda(T cda1_m2, T cda2_m2) {
 /// Within 2 ulp.
 /// @par Source
 /// M. Galal Rabie, Fluid Power Engineering, McGraw-Hill 2009, Eqs. 2.34-2.39; docs/pages/theory_gap.md.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> orifice_flow_cda(T dp_pa, T rho_kg_m3, T cda_m2) {
   if (!detail::all_finite(dp_pa, rho_kg_m3, cda_m2)) return detail::fail<T>(status::nonfinite);
   if (!(rho_kg_m3 > T(0)) || !(cda_m2 >= T(0))) return detail::fail<T>(status::domain);

@@ -748,50 +748,61 @@ inline pump_flow_loss<T> piston_pump_flow_loss(const piston_pump<T>& p, const oi
   return r;
 }
 
-/// A pump description converted to another scalar type (for dual-number sensitivities).
+/// A pump description converted to another scalar type (for dual-number sensitivities): the
+/// same description for the same type, else its value parts as constants (detail::scalar_as()).
 /// @param p the description in T
 /// @return the same description in U
 template <class U, class T>
 inline piston_pump<U> piston_pump_cast(const piston_pump<T>& p) {
   piston_pump<U> q;
   q.pistons = p.pistons;
-  q.piston_diameter_m = U(p.piston_diameter_m);
-  q.bore_clearance_m = U(p.bore_clearance_m);
-  q.piston_eccentricity = U(p.piston_eccentricity);
-  q.engaged_length_min_m = U(p.engaged_length_min_m);
-  q.pitch_radius_m = U(p.pitch_radius_m);
-  q.max_swash_angle_rad = U(p.max_swash_angle_rad);
-  q.high_pressure_share = U(p.high_pressure_share);
-  q.slipper_pocket_radius_m = U(p.slipper_pocket_radius_m);
-  q.slipper_outer_radius_m = U(p.slipper_outer_radius_m);
-  q.slipper_gap_m = U(p.slipper_gap_m);
-  q.slipper_feed_diameter_m = U(p.slipper_feed_diameter_m);
-  q.slipper_feed_length_m = U(p.slipper_feed_length_m);
-  q.ball_diameter_m = U(p.ball_diameter_m);
-  q.ball_clearance_m = U(p.ball_clearance_m);
-  q.ball_length_m = U(p.ball_length_m);
-  q.valve_inner_land_inner_radius_m = U(p.valve_inner_land_inner_radius_m);
-  q.valve_inner_land_outer_radius_m = U(p.valve_inner_land_outer_radius_m);
-  q.valve_outer_land_inner_radius_m = U(p.valve_outer_land_inner_radius_m);
-  q.valve_outer_land_outer_radius_m = U(p.valve_outer_land_outer_radius_m);
-  q.valve_kidney_arc_rad = U(p.valve_kidney_arc_rad);
-  q.valve_gap_m = U(p.valve_gap_m);
-  q.controller_flow_m3_s = U(p.controller_flow_m3_s);
-  q.bleed_orifice_diameter_m = U(p.bleed_orifice_diameter_m);
-  q.bleed_cd = U(p.bleed_cd);
-  q.extra_conductance_m3 = U(p.extra_conductance_m3);
-  q.extra_orifice_cda_m2 = U(p.extra_orifice_cda_m2);
-  q.stated_displacement_m3_rev = U(p.stated_displacement_m3_rev);
-  q.pivot_offset_m = U(p.pivot_offset_m);
-  q.dead_volume_m3 = U(p.dead_volume_m3);
-  q.cross_port_conductance_m3 = U(p.cross_port_conductance_m3);
-  q.control_piston_conductance_m3 = U(p.control_piston_conductance_m3);
-  q.control_pressure_pa = U(p.control_pressure_pa);
-  q.barrel_spring_force_n = U(p.barrel_spring_force_n);
+  q.piston_diameter_m = detail::scalar_as<U>(p.piston_diameter_m);
+  q.bore_clearance_m = detail::scalar_as<U>(p.bore_clearance_m);
+  q.piston_eccentricity = detail::scalar_as<U>(p.piston_eccentricity);
+  q.engaged_length_min_m = detail::scalar_as<U>(p.engaged_length_min_m);
+  q.pitch_radius_m = detail::scalar_as<U>(p.pitch_radius_m);
+  q.max_swash_angle_rad = detail::scalar_as<U>(p.max_swash_angle_rad);
+  q.high_pressure_share = detail::scalar_as<U>(p.high_pressure_share);
+  q.slipper_pocket_radius_m = detail::scalar_as<U>(p.slipper_pocket_radius_m);
+  q.slipper_outer_radius_m = detail::scalar_as<U>(p.slipper_outer_radius_m);
+  q.slipper_gap_m = detail::scalar_as<U>(p.slipper_gap_m);
+  q.slipper_feed_diameter_m = detail::scalar_as<U>(p.slipper_feed_diameter_m);
+  q.slipper_feed_length_m = detail::scalar_as<U>(p.slipper_feed_length_m);
+  q.ball_diameter_m = detail::scalar_as<U>(p.ball_diameter_m);
+  q.ball_clearance_m = detail::scalar_as<U>(p.ball_clearance_m);
+  q.ball_length_m = detail::scalar_as<U>(p.ball_length_m);
+  q.valve_inner_land_inner_radius_m = detail::scalar_as<U>(p.valve_inner_land_inner_radius_m);
+  q.valve_inner_land_outer_radius_m = detail::scalar_as<U>(p.valve_inner_land_outer_radius_m);
+  q.valve_outer_land_inner_radius_m = detail::scalar_as<U>(p.valve_outer_land_inner_radius_m);
+  q.valve_outer_land_outer_radius_m = detail::scalar_as<U>(p.valve_outer_land_outer_radius_m);
+  q.valve_kidney_arc_rad = detail::scalar_as<U>(p.valve_kidney_arc_rad);
+  q.valve_gap_m = detail::scalar_as<U>(p.valve_gap_m);
+  q.controller_flow_m3_s = detail::scalar_as<U>(p.controller_flow_m3_s);
+  q.bleed_orifice_diameter_m = detail::scalar_as<U>(p.bleed_orifice_diameter_m);
+  q.bleed_cd = detail::scalar_as<U>(p.bleed_cd);
+  q.extra_conductance_m3 = detail::scalar_as<U>(p.extra_conductance_m3);
+  q.extra_orifice_cda_m2 = detail::scalar_as<U>(p.extra_orifice_cda_m2);
+  q.stated_displacement_m3_rev = detail::scalar_as<U>(p.stated_displacement_m3_rev);
+  q.pivot_offset_m = detail::scalar_as<U>(p.pivot_offset_m);
+  q.dead_volume_m3 = detail::scalar_as<U>(p.dead_volume_m3);
+  q.cross_port_conductance_m3 = detail::scalar_as<U>(p.cross_port_conductance_m3);
+  q.control_piston_conductance_m3 = detail::scalar_as<U>(p.control_piston_conductance_m3);
+  q.control_pressure_pa = detail::scalar_as<U>(p.control_pressure_pa);
+  q.barrel_spring_force_n = detail::scalar_as<U>(p.barrel_spring_force_n);
   return q;
 }
 
 namespace detail {
+/// An operating point in another scalar type (as piston_pump_cast()).
+/// @param op the operating point in T
+/// @return the same point in U
+template <class U, class T>
+inline pump_operating_point<U> operating_point_cast(const pump_operating_point<T>& op) {
+  return {scalar_as<U>(op.outlet_pa), scalar_as<U>(op.case_pa), scalar_as<U>(op.speed_rev_s),
+          scalar_as<U>(op.displacement_fraction), scalar_as<U>(op.t_k), op.mode, scalar_as<U>(op.inlet_pa),
+          scalar_as<U>(op.film_temperature_rise_k)};
+}
+
 // The budget in dual numbers with the four gaps as the variables (pump_gap order).
 template <class T>
 inline leakage_budget<dual<T, pump_gap_count>> gap_dual_budget(const piston_pump<T>& p, const oil<T>& o,
@@ -802,11 +813,7 @@ inline leakage_budget<dual<T, pump_gap_count>> gap_dual_budget(const piston_pump
   pd.slipper_gap_m = D::variable(p.slipper_gap_m, 1);
   pd.ball_clearance_m = D::variable(p.ball_clearance_m, 2);
   pd.valve_gap_m = D::variable(p.valve_gap_m, 3);
-  const oil<D> od{{D(o.viscosity.a), D(o.viscosity.b)}, D(o.rho_ref_kg_m3), D(o.t_ref_k), D(o.alpha_per_k),
-                  D(o.bulk_modulus_pa), D(o.cp_j_kg_k), D(o.barus_per_pa)};
-  const pump_operating_point<D> opd{D(op.outlet_pa), D(op.case_pa), D(op.speed_rev_s), D(op.displacement_fraction),
-                                    D(op.t_k), op.mode, D(op.inlet_pa), D(op.film_temperature_rise_k)};
-  return piston_pump_budget(pd, od, opd);
+  return piston_pump_budget(pd, oil_cast<D>(o), operating_point_cast<D>(op));
 }
 }  // namespace detail
 
@@ -1019,23 +1026,11 @@ struct [[nodiscard]] pump_calibration {
 PUMPLOSS_CXX_API pump_calibration calibrate_piston_pump(const piston_pump<double>& p, const oil<double>& o,
                                        const drain_measurement* m, std::size_t n) noexcept;
 
-/// The change of one gap alone that would explain a measured drain flow: the factor k on that
-/// gap for which the budget's total equals the measurement (other gaps as described).
-/// @param p the pump
-/// @param o the oil
-/// @param op the operating point of the measurement
-/// @param gap the gap to change
-/// @param measured_drain_m3_s measured case drain flow, m^3/s (> 0)
-/// @return k - 1 (0.2: the gap must be 20 % larger); status::out_of_validity (NaN) when no
-///         change of that gap alone can explain the measurement (the other paths already
-///         exceed it, or the gap's path cannot carry enough), status::domain when the pump has
-///         no such path.
-/// @par Source
-/// Monotone one-dimensional root of the budget in log k on [ln(1/20), ln 20], found by Brent's
-/// method (detail/roots.hpp).
+namespace detail {
+/// gap_growth_for_drain() for a scalar type that is not a dual number: Brent's method in ln k.
 template <class T>
-inline result<T> gap_growth_for_drain(const piston_pump<T>& p, const oil<T>& o, const pump_operating_point<T>& op,
-                                      pump_gap gap, T measured_drain_m3_s) {
+inline result<T> gap_growth_solve(const piston_pump<T>& p, const oil<T>& o, const pump_operating_point<T>& op,
+                                  pump_gap gap, T measured_drain_m3_s) {
   using std::exp;
   using std::log;
   if (!detail::finite(measured_drain_m3_s)) return detail::fail<T>(status::nonfinite);
@@ -1068,6 +1063,52 @@ inline result<T> gap_growth_for_drain(const piston_pump<T>& p, const oil<T>& o, 
   if (r.st != status::ok) return detail::fail<T>(r.st);
   using std::expm1;
   return {expm1(r.x), st};
+}
+}  // namespace detail
+
+/// The change of one gap alone that would explain a measured drain flow: the factor k on that
+/// gap for which the budget's total equals the measurement (other gaps as described).
+/// @param p the pump
+/// @param o the oil
+/// @param op the operating point of the measurement
+/// @param gap the gap to change
+/// @param measured_drain_m3_s measured case drain flow, m^3/s (> 0)
+/// @return k - 1 (0.2: the gap must be 20 % larger); status::out_of_validity (NaN) when no
+///         change of that gap alone can explain the measurement (the other paths already
+///         exceed it, or the gap's path cannot carry enough), status::domain when the pump has
+///         no such path.
+/// For dual numbers (in the description, the oil, the point or the measurement) the root is
+/// found in the value type and the derivatives follow from the implicit-function rule
+/// (dx/dp = -F_p/F_x with x = ln k, detail::implicit_root()).
+/// @par Source
+/// Monotone one-dimensional root of the budget in log k on [ln(1/20), ln 20], found by Brent's
+/// method (detail/roots.hpp).
+template <class T>
+inline result<T> gap_growth_for_drain(const piston_pump<T>& p, const oil<T>& o, const pump_operating_point<T>& op,
+                                      pump_gap gap, T measured_drain_m3_s) {
+  using std::exp;
+  using std::log;
+  if constexpr (detail::is_dual_v<T>) {  // root in the value type, derivatives by the implicit rule
+    using V = detail::value_type_of_t<T>;
+    const auto v = gap_growth_for_drain(piston_pump_cast<V>(p), detail::oil_cast<V>(o),
+                                        detail::operating_point_cast<V>(op), gap, detail::primal(measured_drain_m3_s));
+    if (is_error(v.st)) return detail::fail<T>(v.st);
+    const unsigned mask = 1u << static_cast<int>(gap);
+    // F(x) = budget total with the gap scaled by k = e^x, less the measurement
+    auto residual = [&](auto x, auto q) {
+      using std::exp;
+      using U = decltype(x);
+      return U(piston_pump_budget(scale_gaps(piston_pump_cast<U>(p), mask, U(exp(x))), detail::oil_cast<U>(o),
+                                  detail::operating_point_cast<U>(op))
+                   .total_m3_s -
+               q);
+    };
+    using std::expm1;
+    using std::log1p;
+    return {expm1(detail::implicit_root<T>(log1p(v.value), residual, measured_drain_m3_s)), v.st};
+  } else {
+    return detail::gap_growth_solve(p, o, op, gap, measured_drain_m3_s);
+  }
 }
 
 }  // namespace pumploss

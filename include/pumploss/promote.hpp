@@ -14,8 +14,10 @@
 /// promote_args_t<A...> and calls the original. It takes part only when the argument types
 /// differ from their promoted type, and partial ordering prefers the original `name(T, T, ...)`
 /// whenever all arguments already share one type, so same-type calls are untouched.
-/// All-integer calls (`f(1, 2)`) deduce T = int in the original and are not promoted: write
-/// one literal as a double.
+/// All-integer calls (`f(1, 2)`) promote too, to double, as in Boost.Math: each such
+/// template is declared `template <class T, detail::if_real<T> = 0>`, which takes it out of the
+/// overload set for an integer T, so the forwarding overload converts the integers and calls
+/// it in double.
 #ifndef PUMPLOSS_PROMOTE_HPP
 #define PUMPLOSS_PROMOTE_HPP
 
@@ -60,6 +62,12 @@ template <class A>
 struct promote_scalar
     : std::bool_constant<(std::is_arithmetic_v<A> && !std::is_same_v<A, bool>) || is_dual_v<A> ||
                          (!std::is_arithmetic_v<A> && std::numeric_limits<A>::is_specialized)> {};
+
+/// In the template parameter list of a formula template that has a PUMPLOSS_PROMOTE line:
+/// `template <class T, detail::if_real<T> = 0>`. An integer T (an all-integer call) is not
+/// taken, so the call goes to the forwarding overload and runs in double.
+template <class T>
+using if_real = std::enable_if_t<!std::is_integral_v<T>, int>;
 
 /// One argument type after promotion: integers become double.
 template <class A>

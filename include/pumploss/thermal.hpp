@@ -32,7 +32,7 @@ namespace pumploss {
 /// (self-calculated, tests/reference/SOURCES.md methods13_row18).
 /// @par Source
 /// Energy balance of an adiabatic throttle (docs/pages/theory_efficiency.md, Heat).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> throttle_temperature_rise(T dp_pa, T rho_kg_m3, T cp_j_kg_k) {
   if (!detail::all_finite(dp_pa, rho_kg_m3, cp_j_kg_k)) return detail::fail<T>(status::nonfinite);
   if (!(dp_pa >= T(0)) || !(rho_kg_m3 > T(0)) || !(cp_j_kg_k > T(0))) return detail::fail<T>(status::domain);
@@ -57,7 +57,7 @@ inline result<T> throttle_temperature_rise(T dp_pa, T rho_kg_m3, T cp_j_kg_k) {
 /// @par Source
 /// Standard thermodynamics of the Joule-Thomson coefficient (citation from memory),
 /// Energy balance (docs/pages/theory_efficiency.md, Heat).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> throttle_temperature_rise_isenthalpic(T dp_pa, T rho_kg_m3, T cp_j_kg_k, T alpha_per_k, T t_k) {
   if (!detail::all_finite(dp_pa, rho_kg_m3, cp_j_kg_k, alpha_per_k, t_k)) return detail::fail<T>(status::nonfinite);
   if (!(dp_pa >= T(0)) || !(rho_kg_m3 > T(0)) || !(cp_j_kg_k > T(0)) || !(alpha_per_k >= T(0)) || !(t_k > T(0)))
@@ -80,7 +80,7 @@ inline result<T> throttle_temperature_rise_isenthalpic(T dp_pa, T rho_kg_m3, T c
 /// Within 2 ulp.
 /// @par Source
 /// Energy balance (docs/pages/theory_efficiency.md, Heat); efficiency definitions of ISO 4409:2019.
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> heat_load(T input_power_w, T eta_t) {
   if (!detail::all_finite(input_power_w, eta_t)) return detail::fail<T>(status::nonfinite);
   if (!(input_power_w >= T(0)) || !(eta_t >= T(0))) return detail::fail<T>(status::domain);
@@ -132,7 +132,7 @@ inline result<T> machine_heat_load(machine kind, T displacement_m3_rev, T speed_
 /// Within 3 ulp of the 50-digit evaluation.
 /// @par Source
 /// Energy balance (docs/pages/theory_efficiency.md, Heat).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> case_drain_temperature(T t_inlet_k, T power_w, T drain_flow_m3_s, T rho_kg_m3, T cp_j_kg_k) {
   if (!detail::all_finite(t_inlet_k, power_w, drain_flow_m3_s, rho_kg_m3, cp_j_kg_k))
     return detail::fail<T>(status::nonfinite);
@@ -161,7 +161,7 @@ inline result<T> case_drain_temperature(T t_inlet_k, T power_w, T drain_flow_m3_
 /// Within 4 ulp of the 50-digit evaluation.
 /// @par Source
 /// Energy balance (docs/pages/theory_efficiency.md, Heat).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> case_drain_temperature_from_leakage(T t_inlet_k, T dp_pa, T drain_flow_m3_s, T extra_power_w,
                                                      T rho_kg_m3, T cp_j_kg_k) {
   if (!detail::all_finite(dp_pa, drain_flow_m3_s, extra_power_w)) return detail::fail<T>(status::nonfinite);

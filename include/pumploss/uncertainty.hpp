@@ -70,7 +70,7 @@ inline result<T> standard_uncertainty(T figure, uncertainty_basis basis, uncerta
 /// Within a few ulp (cancellation only when r = 1 and u_p1 = u_p2, where the result is 0).
 /// @par Source
 /// JCGM 100:2008, 5.2.2 Eq. (13).
-template <class T>
+template <class T, detail::if_real<T> = 0>
 inline result<T> pressure_difference_uncertainty(T u_p1_pa, T u_p2_pa, T r12) {
   using std::sqrt;
   if (!detail::all_finite(u_p1_pa, u_p2_pa, r12)) return detail::fail<T>(status::nonfinite);

@@ -43,6 +43,8 @@ from ._ctypes_api import (Library, PumplossError, PumplossWarning, is_error, is_
                           _KIND_CTYPES, _signatures)
 
 FUNCTIONS = _signatures.FUNCTIONS
+COUNTS = _signatures.COUNTS
+ARRAY_COUNTS = _signatures.ARRAY_COUNTS
 STATUS_CODES = _signatures.STATUS_CODES
 CONSTANTS = _signatures.CONSTANTS
 DOCS = getattr(_signatures, "DOCS", {})
@@ -116,25 +118,15 @@ class _Fn:
                           else p[2] for p in self.outs if p[0] != "HOUT"]
         self.ins = [p for p in self.params if p[0] in ("DIN", "IIN", "STR", "HIN", "DARR", "IARR", "SIZE")]
         self.scalar = all(p[0] in ("DIN", "IIN", "STR", "HIN") for p in self.ins)
-        # a count is taken from the arrays after it (up to the next count), else from the arrays
-        # before it (since the previous count), else it is passed explicitly (two in a row)
-        self.explicit_sizes, self.sizes_after = set(), set()
-        kinds = [p[0] for p in self.params]
-        for i, p in enumerate(self.params):
-            if p[0] != "SIZE":
-                continue
-            j = i + 1
-            while j < len(kinds) and kinds[j] != "SIZE" and kinds[j] not in ("DARR", "IARR"):
-                j += 1
-            if j < len(kinds) and kinds[j] in ("DARR", "IARR"):
-                continue  # from the arrays after it
-            j = i - 1
-            while j >= 0 and kinds[j] != "SIZE" and kinds[j] not in ("DARR", "IARR"):
-                j -= 1
-            if j >= 0 and kinds[j] in ("DARR", "IARR"):
-                self.sizes_after.add(p[2])  # the count follows its arrays
-            else:
-                self.explicit_sizes.add(p[2])
+        # where each count comes from (the arrays after it, the arrays before it, or the caller):
+        # the rule is stated once, in tools/capigen/capigen.py, and comes with the generated table
+        src = COUNTS.get(name, {})
+        self.explicit_sizes = {k for k, v in src.items() if v == "explicit"}
+        self.sizes_after = {k for k, v in src.items() if v == "before"}  # the count follows its arrays
+        # input arrays counted by explicit counts only (a levels x per_level grid): checked
+        # against the product of those counts before the call
+        self.grid_arrays = {a: dims for a, dims in ARRAY_COUNTS.get(name, {}).items()
+                            if dims and all(d in self.explicit_sizes for d in dims)}
         self.user_ins = [p for p in self.ins if not (p[0] == "SIZE" and p[2] not in self.explicit_sizes)]
         self._c = None
 
@@ -149,6 +141,7 @@ class _Fn:
         it = iter(args)
         conv, outs, sizes, keep = [], [], [], []
         pending = []  # counts to be filled from the arrays after them
+        given = {}  # explicit counts by name
         last_arrays = []  # lengths of the arrays since the last count
         for kind, _ctype, pname in self.params:
             if kind == "HIN":
@@ -163,6 +156,7 @@ class _Fn:
             elif kind == "SIZE":
                 if pname in self.explicit_sizes:
                     n = int(next(it))
+                    given[pname] = n
                     conv.append(n)
                     sizes.append(n)
                 elif pname in self.sizes_after:
@@ -183,6 +177,11 @@ class _Fn:
                 a = np.ascontiguousarray(next(it), dtype=dtype).ravel()
                 keep.append(a)
                 last_arrays.append(a.size)
+                if pname in self.grid_arrays:
+                    want = int(np.prod([given[d] for d in self.grid_arrays[pname]]))
+                    if a.size != want:
+                        raise ValueError(f"{self.short}: {pname} has {a.size} elements, "
+                                         f"{' x '.join(self.grid_arrays[pname])} = {want} expected")
                 if pending:
                     if pending[1] is None:
                         pending[1] = a.size

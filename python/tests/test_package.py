@@ -58,6 +58,19 @@ def test_incompatible_shapes_raise_value_error():
         pumploss.pump_efficiency(71e-6, 25.0)
 
 
+def test_two_counts_in_a_row_are_given_and_checked():
+    # A levels x per_level grid (ISO 8426-1 two-step): both counts are explicit. Invented pump
+    # (self-calculated truth): q = V n - k dp with V = 71 cm3/rev, so the two-step method returns V.
+    v, k = 71e-6, 2e-12
+    speed = np.tile([10.0, 15.0, 20.0, 25.0, 30.0], 5)
+    dp = np.repeat([50e5, 100e5, 150e5, 200e5, 250e5], 5)
+    flow = v * speed - k * dp
+    r = pumploss.displacement_two_step(5, 5, speed, dp, flow)
+    assert abs(r.v_m3_rev / v - 1) < 1e-9
+    with pytest.raises(ValueError):  # 24 elements for a 5 x 5 grid
+        pumploss.displacement_two_step(5, 5, speed[:24], dp[:24], flow[:24])
+
+
 def test_statuses_exceptions_for_scalars_status_arrays_for_arrays():
     with pytest.raises(pumploss.PumplossError) as e:
         pumploss.pump_efficiency(71e-6, 25.0, -2e7, 1.7e-3, 240.0)

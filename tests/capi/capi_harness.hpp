@@ -122,6 +122,7 @@ inline bool returns_status(const Fn& f) { return f.ret == R_INT; }
 /// The value of one argument of a case.
 struct Arg {
   bool null = false;
+  bool bare = false;         ///< K_HIN: the unconfigured handle of its kind (Context::bare)
   double d = 0.0;            ///< K_DIN; base of the elements of a K_DARR
   int i = 0;                 ///< K_IIN; base of a K_IARR
   std::vector<double> darr;  ///< K_DARR elements (size n)
@@ -141,6 +142,9 @@ struct Case {
 struct Context {
   std::vector<void*> live = std::vector<void*>(static_cast<std::size_t>(kHandleTypeCount) + 1, nullptr);
   std::vector<int> destroy = std::vector<int>(static_cast<std::size_t>(kHandleTypeCount) + 1, -1);
+  /// Per kind made by a builder: a handle straight from its create function, not configured
+  /// (a health handle without its description), for the n = 0 rule; NULL where none.
+  std::vector<void*> bare = std::vector<void*>(static_cast<std::size_t>(kHandleTypeCount) + 1, nullptr);
   Context() {
     for (int f = 0; f < kFunctionCount; ++f)
       if (kFunctions[f].cls == C_DESTROY) destroy[static_cast<std::size_t>(kFunctions[f].params[0].handle)] = f;
@@ -154,7 +158,10 @@ struct Context {
     kFunctions[f].thunk(&s, &r);
   }
   ~Context() {
-    for (int t = 0; t < kHandleTypeCount; ++t) destroy_handle(t, live[static_cast<std::size_t>(t)]);
+    for (int t = 0; t < kHandleTypeCount; ++t) {
+      destroy_handle(t, live[static_cast<std::size_t>(t)]);
+      destroy_handle(t, bare[static_cast<std::size_t>(t)]);
+    }
   }
   Context(const Context&) = delete;
   Context& operator=(const Context&) = delete;
@@ -211,7 +218,7 @@ struct Exec {
           cbuf[p].assign(256, 'x');
           s.buf = a.null ? nullptr : cbuf[p].data();
           break;
-        case K_HIN: s.h = a.null ? nullptr : ctx.live[static_cast<std::size_t>(pr.handle)]; break;
+        case K_HIN: s.h = a.null ? nullptr : (a.bare ? ctx.bare : ctx.live)[static_cast<std::size_t>(pr.handle)]; break;
         case K_HOUT:
           hbuf[p] = kHandleSentinel;
           s.ph = a.null ? nullptr : &hbuf[p];
@@ -492,8 +499,9 @@ struct Recipe {
   void* (*make)() = nullptr;
 };
 
-/// Run a recipe in ctx; true when it gave a handle (then ctx.live[type] holds it).
-inline bool cook(const Recipe& r, Context& ctx, Exec& e) {
+/// Run a recipe in ctx; true when it gave a handle (then ctx.live[type] holds it, or
+/// ctx.bare[type] when `bare`).
+inline bool cook(const Recipe& r, Context& ctx, Exec& e, bool bare = false) {
   if (r.make != nullptr) {
     void* h = r.make();
     if (h != nullptr) ctx.live[static_cast<std::size_t>(r.type)] = h;
@@ -504,7 +512,7 @@ inline bool cook(const Recipe& r, Context& ctx, Exec& e) {
   void*& h = e.hbuf[static_cast<std::size_t>(r.out_param)];
   const bool made = !is_error(e.ret.code) && h != nullptr && h != kHandleSentinel;
   if (made) {
-    ctx.live[static_cast<std::size_t>(r.type)] = h;
+    (bare ? ctx.bare : ctx.live)[static_cast<std::size_t>(r.type)] = h;
     h = nullptr;
   }
   e.release(r.c, ctx);
@@ -525,7 +533,10 @@ inline void make_live_handles(Context& ctx, std::vector<std::string>* notes, std
         notes->push_back(std::string("the builder of ") + kHandleTypes[t] + " failed: the C API refused its data");
       }
     }
-    for (int fn = 0; fn < kFunctionCount && ctx.live[static_cast<std::size_t>(t)] == nullptr; ++fn) {
+    // a kind with a builder also gets an unconfigured handle from its create function (bare)
+    const bool bare = builder_of(t) != nullptr;
+    auto& slot = (bare ? ctx.bare : ctx.live)[static_cast<std::size_t>(t)];
+    for (int fn = 0; fn < kFunctionCount && slot == nullptr; ++fn) {
       const Fn& f = kFunctions[fn];
       if (f.cls != C_CREATE) continue;
       int out_param = -1;
@@ -535,7 +546,7 @@ inline void make_live_handles(Context& ctx, std::vector<std::string>* notes, std
       Recipe r{t, fn, out_param, Case{}};
       if (!find_baseline(fn, ctx, 8, r.c)) continue;
       Exec e;
-      if (cook(r, ctx, e) && recipes) recipes->push_back(r);
+      if (cook(r, ctx, e, bare) && recipes && !bare) recipes->push_back(r);
     }
     if (ctx.live[static_cast<std::size_t>(t)] == nullptr && notes)
       notes->push_back(std::string("no valid ") + kHandleTypes[t] +
@@ -640,6 +651,13 @@ inline std::vector<Case> make_cases(int fn, const Case& base, const Context& ctx
     for (int p = 0; p < f.nparams; ++p)
       if (is_pointer(f.params[p].kind) && f.params[p].kind != K_HIN) zn.args[static_cast<std::size_t>(p)].null = true;
     push(zn, "n = 0, all arrays NULL");
+    // the counts come before the handle's state (pumploss.h): the same on an unconfigured handle
+    Case zb = z;
+    bool any_bare = false;
+    for (int p = 0; p < f.nparams; ++p)
+      if (f.params[p].kind == K_HIN && ctx.bare[static_cast<std::size_t>(f.params[p].handle)] != nullptr)
+        any_bare = zb.args[static_cast<std::size_t>(p)].bare = true;
+    if (any_bare) push(zb, "n = 0, unconfigured handle");
     Case one = base;
     one.n = 1;
     expand(one);
@@ -701,11 +719,9 @@ inline std::string check(const Case& c, const Exec& e, int* inf_with_usable) {
   }
   bool any_null = false;
   for (int p = 0; p < f.nparams; ++p) any_null = any_null || (c.args[static_cast<std::size_t>(p)].null && is_pointer(f.params[p].kind));
-  // (a function of a handle may say EMISUSE for the handle itself: "a NULL pointer or a bad
-  // handle", e.g. one whose oil is not set yet; the cases here do not know a handle's state)
-  bool takes_handle = false;
-  for (int p = 0; p < f.nparams; ++p) takes_handle = takes_handle || f.params[p].kind == K_HIN;
-  if (has_size(f) && c.n == 0 && !any_null && code == PUMPLOSS_EMISUSE && !takes_handle)
+  // the counts are checked before a handle's state (pumploss.h): n = 0 with valid arrays is
+  // "too few data" or an empty batch, also on a handle that is not configured yet
+  if (has_size(f) && c.n == 0 && !any_null && code == PUMPLOSS_EMISUSE)
     return "n = 0 with valid arrays gave PUMPLOSS_EMISUSE (pumploss.h: OK for a batch, the error for too few points otherwise)";
   const int status_param = status_param_of(f);
   for (int p = 0; p < f.nparams; ++p) {
