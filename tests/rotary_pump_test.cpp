@@ -8,6 +8,7 @@
 #include <string>
 
 #include "pumploss.h"
+#include "pumploss/efficiency.hpp"
 #include "pumploss/flow_test.hpp"
 #include "pumploss/gap.hpp"
 #include "pumploss/gear_pump.hpp"
@@ -139,6 +140,35 @@ TEST(RotaryWorkedExample, EspositoGearPumpVolumetricEfficiency) {
   EXPECT_NEAR(v * n / gpm, 30.6, 0.05);  // the book's theoretical flow
   expect_worked(r.volumetric_efficiency, "esposito gear eta_v");
   EXPECT_NEAR(r.leakage_m3_s / gpm, 30.6 - 28, 0.05);
+}
+
+// A published vane pump problem (vane_pump_exercise, tests/reference/SOURCES.md; answers worked by
+// hand): the speed that gives the stated flow at 90 % volumetric efficiency, then the flow test and
+// the efficiencies of the library at that speed with the input torque of 12.7 kW.
+TEST(RotaryWorkedExample, VanePumpExerciseEfficiencies) {
+  const double v = 115e-6, q_actual = 0.09315 / 60, dp = 70e5, power = 12.7e3;
+  const double n = q_actual / (0.90 * v);  // the problem's step (ii)
+  expect_worked(n, "vane exercise speed rev/s");
+  const double torque = power / (2 * pumploss::detail::pi<double>() * n);
+  const auto e = pumploss::pump_efficiency(v, n, dp, q_actual, torque);
+  ASSERT_EQ(e.st, status::ok);
+  expect_worked(e.eta_v, "vane exercise eta_v");
+  expect_worked(e.eta_hm, "vane exercise eta_hm");
+  expect_worked(e.eta_t, "vane exercise eta_t");
+  // the same pump through the field flow test: the no-load flow the geometric flow
+  pumploss::flow_test_setup<double> s{};
+  s.displacement_m3_rev = v;
+  s.mu_test_pa_s = s.mu_ref_pa_s = 0.03;
+  s.ref_pressure_pa = dp;
+  s.ref_speed_rev_s = n;
+  s.new_volumetric_efficiency = 0.95;
+  s.limit = pumploss::flow_test_default_limit;
+  s.watch_band = pumploss::flow_test_default_watch_band;
+  const pumploss::flow_reading<double> no_load{v * n, 0.0, n}, loaded{q_actual, dp, n};
+  const auto r = pumploss::flow_test_evaluate(no_load, loaded, s);
+  ASSERT_EQ(r.st, status::ok);
+  expect_worked(r.volumetric_efficiency, "vane exercise eta_v");
+  expect_worked(r.leakage_m3_s, "vane exercise leakage m3/s");
 }
 
 // The hand-worked examples of docs/pages/theory_rotary.md (self-calculated): each step of the

@@ -12,6 +12,19 @@
 //   four digits; repeated in mpmath (tests/python/test_rotary_worked_examples.py). Tolerance
 //   1e-3: the hand rounding (a difference of two rounded terms for the tips).
 {"esposito_gear_example", "esposito gear eta_v", 0.915, 0.0005 / 0.915},
+// vane_pump_exercise (published problem, answers self-calculated): a vane pump of 115 cm3
+//   displacement, rotor 63.5 mm, cam ring 89.0 mm, vanes 50.8 mm wide, delivering 0.09315 m3/min at
+//   70 bar with 90 % volumetric efficiency and 12.7 kW input (the metric form of the vane pump
+//   examples of Esposito, Fluid Power with Applications, ch. 5; the problem statement as published
+//   on the web, see tests/reference/SOURCES.md). Answers worked by hand from the definitions:
+//   e = 2 V / (pi (D_c + D_r) L) = 9.450 mm, n = Q_A / (eta_v V) = 900 rpm, T = P / (2 pi n)
+//   = 134.75 N m, eta_hm = dp V / (2 pi T) = 0.9508, eta_t = dp Q_A / P = 0.8557. Tolerance: the
+//   four digits of the hand values.
+{"vane_pump_exercise", "vane exercise speed rev/s", 15.0, 1e-4},
+{"vane_pump_exercise", "vane exercise eta_v", 0.9000, 1e-4},
+{"vane_pump_exercise", "vane exercise eta_hm", 0.9508, 1e-4},
+{"vane_pump_exercise", "vane exercise eta_t", 0.8557, 1e-4},
+{"vane_pump_exercise", "vane exercise leakage m3/s", 1.725e-4, 1e-4},
 // gear: b 20 mm, h_t 20 um, 4 tip lands of 1.5 mm in series, r_a 20 mm, r_f 15 mm, r_s 10 mm,
 // side plates with end float 40 um centred (20 um each side), arc pi, mesh sealed, V 10 cm3/rev
 {"hand_rotary_worked_example", "gear tip pressure term per gear", 7.982e-7, 1e-3},
