@@ -513,9 +513,20 @@ std::optional<double> parse_number(std::string_view text) {
     t.remove_prefix(1);
     if (t.empty() || t.front() == '+' || t.front() == '-') return std::nullopt;
   }
-  double v = 0.0;  // correctly rounded as strtod, without its locale and copies (issue 20: a million rows)
+  double v = 0.0;
+#if defined(__cpp_lib_to_chars) && __cpp_lib_to_chars >= 201611L
+  // correctly rounded as strtod, without its locale and copies (issue 20: a million rows)
   const auto r = std::from_chars(t.data(), t.data() + t.size(), v, std::chars_format::general);
   if (r.ec != std::errc() || r.ptr != t.data() + t.size() || !std::isfinite(v)) return std::nullopt;
+#else
+  // standard libraries without floating-point from_chars (emscripten's libc++): strtod on a copy,
+  // in the C locale such builds run in; out of range refused as from_chars refuses it
+  const std::string copy(t);
+  char* end = nullptr;
+  errno = 0;
+  v = std::strtod(copy.c_str(), &end);
+  if (errno == ERANGE || end != copy.c_str() + copy.size() || !std::isfinite(v)) return std::nullopt;
+#endif
   return v;
 }
 
