@@ -95,7 +95,8 @@ struct [[nodiscard]] health_series_summary {
   health_assessment<double> latest{};  ///< the last scored reading's assessment
   std::size_t latest_row = 0;  ///< its caller's row
   double latest_date = 0;      ///< its date
-  double first_date = 0, last_date = 0;  ///< dates of the first and last reading fed
+  double first_date = 0;       ///< date of the first reading fed
+  double last_date = 0;        ///< date of the last reading fed
   double baseline_m3_s = 0;    ///< baseline in force at the end
   double noise_sigma = 0;      ///< noise of the normalised drain flow (moving ranges), m^3/s (NaN: not found)
   std::vector<health_series_step> steps;          ///< abrupt steps, in order
@@ -106,7 +107,8 @@ struct [[nodiscard]] health_series_summary {
   std::size_t trend_count = 0;                    ///< readings of the trend
   std::size_t trend_from_row = 0;                 ///< caller's row of its first reading
   double trend_from_date = 0;                     ///< its date
-  double trend_t0 = 0, trend_t1 = 0;              ///< its first and last time (trend axis)
+  double trend_t0 = 0;                            ///< its first time (trend axis)
+  double trend_t1 = 0;                            ///< its last time (trend axis)
   status st = status::ok;  ///< insufficient_data: nothing scored or nothing in the baseline's state; misuse: fed after finish
   /// @return true when the status is exactly ok.
   bool ok() const noexcept { return st == status::ok; }
