@@ -1133,9 +1133,11 @@ struct test_stand_stream::impl {
     if (!g.judged && !g.pending.empty()) {
       rows = std::move(g.pending);
       g.pending.clear();
+      rows.insert(rows.end(), run_rows.begin(), run_rows.end());
+      run_rows.clear();
+    } else {
+      rows.swap(run_rows);  // no copy: the run's storage is handed over
     }
-    rows.insert(rows.end(), run_rows.begin(), run_rows.end());
-    run_rows.clear();
     std::vector<const held_row*> keep;
     if (!setup.drop_unsteady) {
       for (const auto& h : rows) keep.push_back(&h);
