@@ -1069,6 +1069,7 @@ struct test_stand_stream::impl {
   test_stand_setup setup;
   unsigned columns = 0;
   bool keep_row_point = false, finished = false;
+  bool setup_good = true;  // setup_ok(): else finish() refuses the setup and the rows are only counted
   std::size_t n = 0, max_held = 0;
   std::vector<std::size_t> excl;  // setup.exclude_rows, sorted
   std::vector<stream_group> groups;
@@ -1165,6 +1166,7 @@ struct test_stand_stream::impl {
 
   void add(const test_stand_row& row) {
     const std::size_t i = n++;
+    if (!setup_good) return;
     const bool pump = setup.kind == machine::pump;
     const int c_visc = setup.viscosity_at == viscosity_temperature::inlet ? 6 : setup.viscosity_at == viscosity_temperature::outlet ? 7 : 8;
     const double tv = has(c_visc) ? row.*row_member[c_visc] : 0.0;
@@ -1310,6 +1312,9 @@ test_stand_stream::test_stand_stream(const test_stand_setup& setup, unsigned col
   p_->keep_row_point = keep_row_point;
   p_->excl = setup.exclude_rows;
   std::sort(p_->excl.begin(), p_->excl.end());
+  test_stand_result scratch;
+  run r{scratch};
+  p_->setup_good = setup_ok(setup, r);
 }
 test_stand_stream::~test_stand_stream() = default;
 void test_stand_stream::add(const test_stand_row& row) {
