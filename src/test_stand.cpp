@@ -177,7 +177,7 @@ bool setup_ok(const test_stand_setup& s, run& r) {
 
 // The checks of the readings that do not look at values: the count, the columns given and their
 // lengths (sizes: per column index, 0 for a column not given). Then the values (ranges, the pump's
-// pressures), then value_checks_late(): the columns the setup asks for.
+// pressures), then columns_late_ok(): the columns the setup asks for.
 bool columns_ok(const test_stand_setup& s, std::size_t n, const std::size_t (&sizes)[11], run& r) {
   const bool pump = s.kind == machine::pump;
   const char* flow_col = pump ? "outlet flow" : "inlet flow";
@@ -208,10 +208,15 @@ test_stand_result& pressures_out_of_order(bool pump, std::size_t i, run& r) {
                      : "a motor's outlet pressure must lie below its inlet pressure");
 }
 
+// The column index of the temperature that sets the viscosity.
+int viscosity_column(const test_stand_setup& s) {
+  return s.viscosity_at == viscosity_temperature::inlet ? 6 : s.viscosity_at == viscosity_temperature::outlet ? 7 : 8;
+}
+
 bool columns_late_ok(const test_stand_setup& s, const std::size_t (&sizes)[11], run& r) {
   const bool pump = s.kind == machine::pump;
   const char* tvisc = temperature_column(s.viscosity_at);
-  const int c_visc = s.viscosity_at == viscosity_temperature::inlet ? 6 : s.viscosity_at == viscosity_temperature::outlet ? 7 : 8;
+  const int c_visc = viscosity_column(s);
   if (sizes[c_visc] == 0)
     return r.fail(status::insufficient_data, no_row, tvisc, "viscosity_at",
                   std::string("the viscosity is taken at the ") + tvisc + ", but there are no '" + tvisc + "' readings"),
@@ -1168,7 +1173,7 @@ struct test_stand_stream::impl {
     const std::size_t i = n++;
     if (!setup_good) return;
     const bool pump = setup.kind == machine::pump;
-    const int c_visc = setup.viscosity_at == viscosity_temperature::inlet ? 6 : setup.viscosity_at == viscosity_temperature::outlet ? 7 : 8;
+    const int c_visc = viscosity_column(setup);
     const double tv = has(c_visc) ? row.*row_member[c_visc] : 0.0;
     later_half.push_back(tv);
     while (later_half.size() > n - n / 2) later_half.pop_front();

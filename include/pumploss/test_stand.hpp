@@ -318,7 +318,7 @@ struct test_stand_row {
 /// row count (for a logger's file of a million rows).
 ///
 /// How: a set point of logged data is a consecutive run of rows. The rows of the run being
-/// logged are held (memory bounded by the longest run: about 130 bytes a row); when a row opens
+/// logged are held (memory bounded by the longest run: about 150 bytes a row); when a row opens
 /// another set point the run is judged by the steady-state criterion about its medians and folded
 /// into its set point's sums (running sums of every column in row order, the scatter's sum of
 /// squares), then released. The grouping rule is reduce_test_stand()'s: the running means of every
@@ -333,7 +333,7 @@ struct test_stand_row {
 /// same sums in the same order, and its scatter is merged by the pairwise formula of T. F. Chan,
 /// G. H. Golub and R. J. LeVeque, "Algorithms for computing the sample variance", The American
 /// Statistician 37 (1983) 242-247: equal within rounding unless a row lies at a steady-state limit.
-/// Besides the open run, the stream holds per set point about 300 bytes, and the viscosity
+/// Besides the open run, the stream holds per set point about 350 bytes, and the viscosity
 /// temperature of the later half of the rows (8 bytes a row: reduce_test_stand() takes the
 /// oil density of the Schloesser terms at reading n / 2, and n is known only at the end).
 /// Nothing throws except std::bad_alloc.
