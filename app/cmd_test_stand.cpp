@@ -92,30 +92,47 @@ struct stand_options {
   pumploss::csv_dialect csv_format = pumploss::csv_dialect::detect;
 };
 
-// The readings of the CSV, in SI, as the library takes them.
-pumploss::test_stand_readings readings_of(const csv_data& d, bool pump) {
-  auto col = [&](const char* name) { return d.has(name) ? d.si(name) : std::vector<double>{}; };
-  pumploss::test_stand_readings r;
-  r.speed_rev_s = col("speed");
-  r.inlet_pressure_pa = col("inlet pressure");
-  r.outlet_pressure_pa = col("outlet pressure");
-  r.flow_m3_s = col(pump ? "outlet flow" : "inlet flow");
-  r.torque_n_m = col("torque");
-  r.drain_flow_m3_s = col("drain flow");
-  r.inlet_temperature_k = col("inlet temperature");
-  r.outlet_temperature_k = col("outlet temperature");
-  r.drain_temperature_k = col("drain temperature");
-  r.meter_temperature_k = col("meter temperature");
-  r.case_pressure_pa = col("case pressure");
-  return r;
+// The columns of the CSV (names of stand_columns()) that fill each field of a reading, with the
+// library's column bit; the flow is the outlet flow of a pump, the inlet flow of a motor.
+struct stand_column {
+  const char* name;
+  double pumploss::test_stand_row::*field;
+  unsigned bit;
+};
+std::vector<stand_column> stand_fields(bool pump) {
+  using R = pumploss::test_stand_row;
+  using S = pumploss::test_stand_stream;
+  return {{"speed", &R::speed_rev_s, S::speed},
+          {"inlet pressure", &R::inlet_pressure_pa, S::inlet_pressure},
+          {"outlet pressure", &R::outlet_pressure_pa, S::outlet_pressure},
+          {pump ? "outlet flow" : "inlet flow", &R::flow_m3_s, S::flow},
+          {"torque", &R::torque_n_m, S::torque},
+          {"drain flow", &R::drain_flow_m3_s, S::drain_flow},
+          {"inlet temperature", &R::inlet_temperature_k, S::inlet_temperature},
+          {"outlet temperature", &R::outlet_temperature_k, S::outlet_temperature},
+          {"drain temperature", &R::drain_temperature_k, S::drain_temperature},
+          {"meter temperature", &R::meter_temperature_k, S::meter_temperature},
+          {"case pressure", &R::case_pressure_pa, S::case_pressure}};
 }
 
-// A refusal of the library as an input_error at the file, line and column it concerns.
-[[noreturn]] void refuse(const pumploss::test_stand_message& m, const csv_data& d, const stand_options& o) {
+[[noreturn]] void throw_table_error(const std::string& file, const pumploss::table_error& e) {
+  throw input_error(file, e.line, e.column, e.message);
+}
+
+// A refusal of the library as an input_error at the file, line and column it concerns; the
+// reading it names is found by reading the file again up to it (the stream kept no rows).
+[[noreturn]] void refuse(const pumploss::test_stand_message& m, const stand_options& o) {
   if (!m.setting.empty()) throw input_error(o.setup, 0, 0, m.text);
-  const auto k = d.find(m.column);
-  if (m.row != pumploss::test_stand_message::no_row && k < d.spec.size() && d.present[k])
-    throw d.error(m.row, m.column, m.follows_value ? "'" + d.texts[k][m.row] + "' " + m.text : m.text);
+  if (m.row != pumploss::test_stand_message::no_row) {
+    pumploss::table_stream in(o.data, stand_columns(), o.csv_format);
+    const auto k = in.header().find(m.column);
+    pumploss::table_row row;
+    if (k < in.header().spec.size() && in.header().present[k])
+      while (in.next(row))
+        if (in.rows() == m.row + 1)
+          throw input_error(o.data, row.line, row.pos[k],
+                            "column '" + m.column + "': " + (m.follows_value ? "'" + row.texts[k] + "' " + m.text : m.text));
+  }
   throw input_error(o.data, 0, 0, m.text);
 }
 
@@ -124,10 +141,32 @@ int run_test_stand(const stand_options& o) {
   const auto setup = read_stand_setup(o.setup);
   const auto& s = setup.run;
   const bool pump = s.kind == pumploss::machine::pump;
-  const auto d = read_csv(o.data, stand_columns(), o.csv_format);
+  // the data streamed row by row into the reduction: memory bounded by the longest set point (issue 20)
+  pumploss::table_stream in(o.data, stand_columns(), o.csv_format);
+  if (pumploss::is_error(in.error().st)) throw_table_error(o.data, in.error());
+  const auto& hd = in.header();
+  struct field_at {
+    std::size_t k;
+    double pumploss::test_stand_row::*field;
+  };
+  std::vector<field_at> fields;
+  unsigned bits = 0;
+  for (const auto& c : stand_fields(pump))
+    if (hd.has(c.name)) {
+      fields.push_back({hd.find(c.name), c.field});
+      bits |= c.bit;
+    }
+  pumploss::test_stand_stream stream(s, bits);
+  pumploss::table_row line;
+  while (in.next(line)) {
+    pumploss::test_stand_row reading;
+    for (const auto& f : fields) reading.*(f.field) = line.values[f.k];
+    stream.add(reading);
+  }
+  if (pumploss::is_error(in.error().st)) throw_table_error(o.data, in.error());
 
-  const auto res = pumploss::reduce_test_stand(s, readings_of(d, pump));
-  if (pumploss::is_error(res.st)) refuse(res.messages.front(), d, o);
+  const auto res = stream.finish();
+  if (pumploss::is_error(res.st)) refuse(res.messages.front(), o);
 
   const std::size_t n = res.points.size();
   const auto& est = res.estimators;
@@ -141,7 +180,7 @@ int run_test_stand(const stand_options& o) {
   const std::string vt = pumploss::viscosity_temperature_name(s.viscosity_at);
 
   report r;
-  add_input_notes(r, d);
+  add_input_notes(r, hd);
   r.title = std::string("Test-stand analysis: ") + setup.machine_name;
   for (const auto& j : setup.job) r.facts.emplace_back(j.first, j.second);
   r.facts.emplace_back("Data", o.data + fmt::format(" ({} operating points; {} speed levels x {} pressure levels)", n,
@@ -159,7 +198,7 @@ int run_test_stand(const stand_options& o) {
       fmt::format("{} from {} readings grouped by speed ({:.3g} %) and pressure ({:.3g} % or {:.3g} bar); {} settling "
                   "readings dropped (steady-state limits of ISO 4409 class B, from memory); type A s/sqrt(n) of the "
                   "scatter with the instruments' type B",
-                  n, res.row_point.size(), 100 * s.group_speed_fraction, 100 * s.group_dp_fraction,
+                  n, stream.rows(), 100 * s.group_speed_fraction, 100 * s.group_dp_fraction,
                   s.group_dp_abs_pa / 1e5, res.rows_unsteady));
   r.facts.emplace_back("Outliers", fmt::format("{} set points flagged (externally studentized residual above {:.3g}), {} "
                                                "excluded from the fit; see the 'flag' column",
@@ -414,7 +453,7 @@ int run_test_stand(const stand_options& o) {
     files.add("test_stand_report.html", render_html(r, du, figs, verdict, res.acceptance.empty() || res.accepted,
                                                      res.acceptance.empty() ? 0 : 1));
   }
-  files.add("test_stand_baseline.toml", baseline_file_text(setup, o.data, d, res));  // health's baseline (issue 16)
+  files.add("test_stand_baseline.toml", baseline_file_text(setup, o.data, stream.point_means(), res));  // health's baseline (issue 16)
   emit(r, files, o.out, du, "test_stand");
   return exit_ok;
 }

@@ -729,36 +729,24 @@ pump_spec read_pump(const std::string& path) {
   return p;
 }
 
-std::string baseline_file_text(const stand_setup& setup, const std::string& data_name, const pumploss::table_data& d,
-                               const pumploss::test_stand_result& res) {
-  const std::size_t n = res.points.size();
-  std::vector<double> sum_out(n), sum_case(n), sum_in(n), sum_dt(n), count(n);
-  const auto& out_p = d.si("outlet pressure");
-  const auto& case_p = d.si("case pressure");
-  const auto& t_in = d.si("inlet temperature");
-  const auto& t_dr = d.si("drain temperature");
-  for (std::size_t r = 0; r < res.row_point.size() && r < out_p.size(); ++r) {
-    const std::size_t i = res.row_point[r];
-    if (i >= n) continue;  // a settling row
-    sum_out[i] += out_p[r];
-    sum_case[i] += case_p.empty() ? 0.0 : case_p[r];
-    sum_in[i] += t_in[r];
-    sum_dt[i] += t_dr.empty() ? 0.0 : t_dr[r];
-    count[i] += 1;
-  }
+std::string baseline_file_text(const stand_setup& setup, const std::string& data_name,
+                               const std::vector<pumploss::test_stand_row>& means, const pumploss::test_stand_result& res) {
+  const std::size_t n = std::min(res.points.size(), means.size());
+  const bool has_dt = n > 0 && !std::isnan(means[0].drain_temperature_k);
   std::string speeds, outs, cases, ins, drs, flows;
   auto add = [](std::string& list, double v, const char* unit) {
     list += fmt::format("{}\"{:.10g} {}\"", list.empty() ? "" : ", ", v, unit);
   };
   std::size_t used = 0;
   for (std::size_t i = 0; i < n; ++i) {
-    if (res.points[i].excluded || count[i] == 0 || i >= res.drain.size()) continue;
+    if (res.points[i].excluded || i >= res.drain.size()) continue;
     ++used;
+    const auto& m = means[i];
     add(speeds, res.points[i].speed_rev_s * 60, "rpm");
-    add(outs, sum_out[i] / count[i] / 1e5, "bar");
-    add(cases, sum_case[i] / count[i] / 1e5, "bar");
-    add(ins, sum_in[i] / count[i] - 273.15, "degC");
-    if (!t_dr.empty()) add(drs, sum_dt[i] / count[i] - 273.15, "degC");
+    add(outs, m.outlet_pressure_pa / 1e5, "bar");
+    add(cases, std::isnan(m.case_pressure_pa) ? 0.0 : m.case_pressure_pa / 1e5, "bar");
+    add(ins, m.inlet_temperature_k - 273.15, "degC");
+    if (has_dt) add(drs, m.drain_temperature_k - 273.15, "degC");
     add(flows, res.drain[i].drain_flow_m3_s * 60000, "L/min");
   }
   const auto& oil = setup.oil;
@@ -771,7 +759,7 @@ std::string baseline_file_text(const stand_setup& setup, const std::string& data
       "speeds = [{}]\noutlet_pressures = [{}]\ncase_pressures = [{}]\ninlet_temperatures = [{}]\n",
       used, data_name, oil.name, oil.t1_k - 273.15, oil.nu1_m2_s * 1e6, oil.t2_k - 273.15, oil.nu2_m2_s * 1e6,
       setup.machine_name, data_name, setup.run.nominal_displacement_m3_rev * 1e6, speeds, outs, cases, ins);
-  if (!t_dr.empty()) s += "drain_temperatures = [" + drs + "]\n";
+  if (has_dt) s += "drain_temperatures = [" + drs + "]\n";
   s += "drain_flows = [" + flows + "]\n";
   return s;
 }

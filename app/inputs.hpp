@@ -152,10 +152,11 @@ pump_spec read_pump(const std::string& path);
 /// mean inlet and drain temperature and the drain flow, with the oil and the nominal displacement.
 /// @param setup the test-stand setup
 /// @param data_name the data file's name (for the file's comment)
-/// @param d the test-stand data as read
+/// @param means per set point, the mean of every column over its steady rows
+///        (pumploss::test_stand_stream::point_means(); NaN for a column the data lack)
 /// @param res the reduction
-std::string baseline_file_text(const stand_setup& setup, const std::string& data_name, const pumploss::table_data& d,
-                               const pumploss::test_stand_result& res);
+std::string baseline_file_text(const stand_setup& setup, const std::string& data_name,
+                               const std::vector<pumploss::test_stand_row>& means, const pumploss::test_stand_result& res);
 
 /// Columns of the field-readings CSV.
 std::vector<column_spec> field_columns();

@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
+#include <deque>
 #include <limits>
 #include <utility>
 
@@ -71,12 +72,6 @@ struct run {
   }
 };
 
-struct column_ref {
-  const char* name;
-  const std::vector<double>* v;
-  bool required;
-};
-
 // The readings of a column by its name ("outlet flow" and "inlet flow" both name the flow).
 const std::vector<double>* column_of(const test_stand_readings& d, const std::string& name) {
   const std::pair<const char*, const std::vector<double>*> cols[] = {
@@ -96,6 +91,44 @@ const std::vector<double>* column_of(const test_stand_readings& d, const std::st
   for (const auto& c : cols)
     if (name == c.first) return c.second;
   return nullptr;
+}
+
+// The columns of a reading by index (test_stand_row's order), in the readings and in a row.
+constexpr std::vector<double> test_stand_readings::*readings_member[11] = {
+    &test_stand_readings::speed_rev_s,         &test_stand_readings::inlet_pressure_pa,
+    &test_stand_readings::outlet_pressure_pa,  &test_stand_readings::flow_m3_s,
+    &test_stand_readings::torque_n_m,          &test_stand_readings::drain_flow_m3_s,
+    &test_stand_readings::inlet_temperature_k, &test_stand_readings::outlet_temperature_k,
+    &test_stand_readings::drain_temperature_k, &test_stand_readings::meter_temperature_k,
+    &test_stand_readings::case_pressure_pa};
+constexpr double test_stand_row::*row_member[11] = {
+    &test_stand_row::speed_rev_s,         &test_stand_row::inlet_pressure_pa,    &test_stand_row::outlet_pressure_pa,
+    &test_stand_row::flow_m3_s,           &test_stand_row::torque_n_m,           &test_stand_row::drain_flow_m3_s,
+    &test_stand_row::inlet_temperature_k, &test_stand_row::outlet_temperature_k, &test_stand_row::drain_temperature_k,
+    &test_stand_row::meter_temperature_k, &test_stand_row::case_pressure_pa};
+
+// The range of every reading, in the order the checks run (a reader of the file meets them so).
+struct range_check {
+  int col;  // index of readings_member / row_member
+  const char* name;
+  double lo, hi;
+  const char* what;
+};
+std::array<range_check, 11> range_checks(bool pump) {
+  const char* temp = "is not an oil temperature between -50 and 200 degC";
+  const char* gauge = "is not a gauge pressure between -1 and 10000 bar";
+  const char* flow = "is not a flow between zero and 60000 L/min";
+  return {{{0, "speed", 1e-3, 1e3, "is not a speed above zero (and below 60000 rpm)"},
+           {3, pump ? "outlet flow" : "inlet flow", 0.0, 1.0, flow},
+           {5, "drain flow", 0.0, 1.0, flow},
+           {4, "torque", 0.0, 1e6, "is not a torque between zero and 1e6 N.m"},
+           {6, "inlet temperature", 223.15, 473.15, temp},
+           {7, "outlet temperature", 223.15, 473.15, temp},
+           {8, "drain temperature", 223.15, 473.15, temp},
+           {9, "meter temperature", 223.15, 473.15, temp},
+           {1, "inlet pressure", -1e5, 1e9, gauge},
+           {2, "outlet pressure", -1e5, 1e9, gauge},
+           {10, "case pressure", -1e5, 1e9, gauge}}};
 }
 
 // Check the setup's own values (a program's reader checks them too; an embedder may not).
@@ -142,89 +175,114 @@ bool setup_ok(const test_stand_setup& s, run& r) {
   return true;
 }
 
-// Lengths and ranges of the readings, in the order a reader of the file would meet them.
-bool readings_ok(const test_stand_setup& s, const test_stand_readings& d, run& r) {
+// The checks of the readings that do not look at values: the count, the columns given and their
+// lengths (sizes: per column index, 0 for a column not given). Then the values (ranges, the pump's
+// pressures), then columns_late_ok(): the columns the setup asks for.
+bool columns_ok(const test_stand_setup& s, std::size_t n, const std::size_t (&sizes)[11], run& r) {
   const bool pump = s.kind == machine::pump;
   const char* flow_col = pump ? "outlet flow" : "inlet flow";
-  const std::size_t n = d.speed_rev_s.size();
-  const column_ref cols[] = {
-      {"speed", &d.speed_rev_s, true},
-      {"inlet pressure", &d.inlet_pressure_pa, true},
-      {"outlet pressure", &d.outlet_pressure_pa, true},
-      {flow_col, &d.flow_m3_s, true},
-      {"torque", &d.torque_n_m, true},
-      {"drain flow", &d.drain_flow_m3_s, true},
-      {"inlet temperature", &d.inlet_temperature_k, true},
-      {"outlet temperature", &d.outlet_temperature_k, false},
-      {"drain temperature", &d.drain_temperature_k, false},
-      {"case pressure", &d.case_pressure_pa, false},
-      {"meter temperature", &d.meter_temperature_k, false},
-  };
+  const char* names[11] = {"speed",       "inlet pressure",     "outlet pressure",   flow_col,
+                           "torque",      "drain flow",         "inlet temperature", "outlet temperature",
+                           "drain temperature", "meter temperature", "case pressure"};
   if (n == 0) return r.fail(status::insufficient_data, no_row, "speed", {}, "no readings"), false;
-  for (const auto& c : cols) {
-    if (c.v->empty() && c.required)
-      return r.fail(status::insufficient_data, no_row, c.name, {},
-                    std::string("missing column '") + c.name + "' (the " + (pump ? "pump" : "motor") + "'s " +
-                        (c.name == flow_col ? (pump ? "outlet flow" : "inlet flow") : c.name) + ")"),
+  for (const int c : {0, 1, 2, 3, 4, 5, 6, 7, 8, 10, 9}) {
+    if (sizes[c] == 0 && c <= 6)
+      return r.fail(status::insufficient_data, no_row, names[c], {},
+                    std::string("missing column '") + names[c] + "' (the " + (pump ? "pump" : "motor") + "'s " +
+                        names[c] + ")"),
              false;
-    if (!c.v->empty() && c.v->size() != n)
-      return r.fail(status::misuse, no_row, c.name, {},
-                    std::string("column '") + c.name + "' has " + std::to_string(c.v->size()) +
+    if (sizes[c] != 0 && sizes[c] != n)
+      return r.fail(status::misuse, no_row, names[c], {},
+                    std::string("column '") + names[c] + "' has " + std::to_string(sizes[c]) +
                         " readings, 'speed' has " + std::to_string(n)),
              false;
   }
-  struct range {
-    const char* name;
-    const std::vector<double>* v;
-    double lo, hi;
-    const char* what;
-  };
-  const char* temp = "is not an oil temperature between -50 and 200 degC";
-  const range ranges[] = {
-      {"speed", &d.speed_rev_s, 1e-3, 1e3, "is not a speed above zero (and below 60000 rpm)"},
-      {flow_col, &d.flow_m3_s, 0.0, 1.0, "is not a flow between zero and 60000 L/min"},
-      {"drain flow", &d.drain_flow_m3_s, 0.0, 1.0, "is not a flow between zero and 60000 L/min"},
-      {"torque", &d.torque_n_m, 0.0, 1e6, "is not a torque between zero and 1e6 N.m"},
-      {"inlet temperature", &d.inlet_temperature_k, 223.15, 473.15, temp},
-      {"outlet temperature", &d.outlet_temperature_k, 223.15, 473.15, temp},
-      {"drain temperature", &d.drain_temperature_k, 223.15, 473.15, temp},
-      {"meter temperature", &d.meter_temperature_k, 223.15, 473.15, temp},
-      {"inlet pressure", &d.inlet_pressure_pa, -1e5, 1e9, "is not a gauge pressure between -1 and 10000 bar"},
-      {"outlet pressure", &d.outlet_pressure_pa, -1e5, 1e9, "is not a gauge pressure between -1 and 10000 bar"},
-      {"case pressure", &d.case_pressure_pa, -1e5, 1e9, "is not a gauge pressure between -1 and 10000 bar"},
-  };
-  for (const auto& c : ranges)
-    for (std::size_t i = 0; i < c.v->size(); ++i)
-      if (!((*c.v)[i] >= c.lo && (*c.v)[i] <= c.hi)) {
-        r.fail(status::domain, i, c.name, {}, c.what);
-        r.res.messages.back().follows_value = true;
-        return false;
-      }
-  const auto& p1 = d.inlet_pressure_pa;
-  const auto& p2 = d.outlet_pressure_pa;
-  for (std::size_t i = 0; i < n; ++i)
-    if (pump ? !(p2[i] > p1[i]) : !(p1[i] > p2[i]))
-      return r.fail(status::domain, i, "outlet pressure", {},
-                    pump ? "a pump's outlet pressure must lie above its inlet pressure"
-                         : "a motor's outlet pressure must lie below its inlet pressure"),
-             false;
+  return true;
+}
+
+// A pump's outlet pressure above its inlet pressure (a motor's below).
+bool pressures_in_order(bool pump, double p1, double p2) { return pump ? p2 > p1 : p1 > p2; }
+test_stand_result& pressures_out_of_order(bool pump, std::size_t i, run& r) {
+  return r.fail(status::domain, i, "outlet pressure", {},
+                pump ? "a pump's outlet pressure must lie above its inlet pressure"
+                     : "a motor's outlet pressure must lie below its inlet pressure");
+}
+
+// The column index of the temperature that sets the viscosity.
+int viscosity_column(const test_stand_setup& s) {
+  return s.viscosity_at == viscosity_temperature::inlet ? 6 : s.viscosity_at == viscosity_temperature::outlet ? 7 : 8;
+}
+
+bool columns_late_ok(const test_stand_setup& s, const std::size_t (&sizes)[11], run& r) {
+  const bool pump = s.kind == machine::pump;
   const char* tvisc = temperature_column(s.viscosity_at);
-  if (temperatures(d, s.viscosity_at).empty())
+  const int c_visc = viscosity_column(s);
+  if (sizes[c_visc] == 0)
     return r.fail(status::insufficient_data, no_row, tvisc, "viscosity_at",
                   std::string("the viscosity is taken at the ") + tvisc + ", but there are no '" + tvisc + "' readings"),
            false;
   if (!s.meter_at_port) {
     const char* tport = pump ? "outlet temperature" : "inlet temperature";
-    if (d.meter_temperature_k.empty())
+    if (sizes[9] == 0)
       return r.fail(status::insufficient_data, no_row, "meter temperature", "meter_at_port",
                     "a flow meter in the return line needs the 'meter temperature' readings"),
              false;
-    if ((pump ? d.outlet_temperature_k : d.inlet_temperature_k).empty())
+    if (sizes[pump ? 7 : 6] == 0)
       return r.fail(status::insufficient_data, no_row, tport, "meter_at_port",
                     std::string("a flow meter in the return line needs the '") + tport +
                         "' readings (the port the flow is corrected to)"),
              false;
   }
+  return true;
+}
+
+// Lengths and ranges of the readings, in the order a reader of the file would meet them.
+bool readings_ok(const test_stand_setup& s, const test_stand_readings& d, run& r) {
+  const bool pump = s.kind == machine::pump;
+  const std::size_t n = d.speed_rev_s.size();
+  std::size_t sizes[11];
+  for (int c = 0; c < 11; ++c) sizes[c] = (d.*readings_member[c]).size();
+  if (!columns_ok(s, n, sizes, r)) return false;
+  for (const auto& c : range_checks(pump)) {
+    const auto& v = d.*readings_member[c.col];
+    for (std::size_t i = 0; i < v.size(); ++i)
+      if (!(v[i] >= c.lo && v[i] <= c.hi)) {
+        r.fail(status::domain, i, c.name, {}, c.what);
+        r.res.messages.back().follows_value = true;
+        return false;
+      }
+  }
+  for (std::size_t i = 0; i < n; ++i)
+    if (!pressures_in_order(pump, d.inlet_pressure_pa[i], d.outlet_pressure_pa[i]))
+      return pressures_out_of_order(pump, i, r), false;
+  return columns_late_ok(s, sizes, r);
+}
+
+// The pressure difference, the viscosity in the gaps and the flow at the port of reading i
+// (t_visc the temperature that sets the viscosity; t_meter and t_port read for a return-line
+// meter only); false with the failure recorded in r.
+bool derive_row(const test_stand_setup& s, std::size_t i, double p1, double p2, double t_visc, double q_read,
+                double t_meter, double t_port, double& dp, double& mu, double& q, bool& regime, run& r) {
+  const bool pump = s.kind == machine::pump;
+  const auto& oil = s.fluid;
+  dp = pump ? p2 - p1 : p1 - p2;
+  const auto m = oil_dynamic_viscosity(oil, t_visc, 0.0);
+  if (!m.usable())
+    return r.fail(m.st, i, temperature_column(s.viscosity_at), {}, "no oil viscosity at this temperature: " + sentence(m.st)),
+           false;
+  mu = m.value;
+  if (s.meter_at_port) {
+    q = q_read;
+    return true;
+  }
+  const auto f = flow_at_port(q_read, s.meter_pressure_pa, t_meter, pump ? p2 : p1, t_port, oil.rho_ref_kg_m3,
+                              oil.t_ref_k, oil.alpha_per_k, oil.bulk_modulus_pa);
+  if (!f.usable())
+    return r.fail(f.st, i, pump ? "outlet flow" : "inlet flow", {},
+                  "cannot correct the flow to port conditions: " + sentence(f.st)),
+           false;
+  if (f.st != status::ok) regime = true;
+  q = f.value;
   return true;
 }
 
@@ -235,6 +293,15 @@ struct set_point_rows {
   std::size_t unsteady = 0;
 };
 
+// A reading (speed n, pressure difference dp) joins a set point of `count` rows whose speeds and
+// pressure differences sum to sum_n and sum_p.
+bool joins(const test_stand_setup& s, std::size_t count, double sum_n, double sum_p, double n, double dp) {
+  const double c = static_cast<double>(count);
+  const double mn = sum_n / c, mp = sum_p / c;
+  return std::fabs(n - mn) <= s.group_speed_fraction * mn &&
+         std::fabs(dp - mp) <= std::max(s.group_dp_fraction * std::fabs(mp), s.group_dp_abs_pa);
+}
+
 // Group rows into set points: a row joins the set point whose running means of speed and pressure
 // difference it matches within the setup's tolerances (the previous row's set point tried first,
 // as logged data stay on a set point for many rows), else it opens a new one.
@@ -242,12 +309,7 @@ std::vector<set_point_rows> group_rows(const test_stand_setup& s, const std::vec
                                        const std::vector<double>& dp) {
   std::vector<set_point_rows> g;
   std::vector<double> sum_n, sum_p;
-  auto fits = [&](std::size_t k, std::size_t i) {
-    const double c = static_cast<double>(g[k].all.size());
-    const double mn = sum_n[k] / c, mp = sum_p[k] / c;
-    return std::fabs(speed[i] - mn) <= s.group_speed_fraction * mn &&
-           std::fabs(dp[i] - mp) <= std::max(s.group_dp_fraction * std::fabs(mp), s.group_dp_abs_pa);
-  };
+  auto fits = [&](std::size_t k, std::size_t i) { return joins(s, g[k].all.size(), sum_n[k], sum_p[k], speed[i], dp[i]); };
   std::size_t last = no_row;
   for (std::size_t i = 0; i < speed.size(); ++i) {
     std::size_t k = (last != no_row && fits(last, i)) ? last : no_row;
@@ -267,15 +329,28 @@ std::vector<set_point_rows> group_rows(const test_stand_setup& s, const std::vec
   return g;
 }
 
-double median_of(const std::vector<std::size_t>& rows, const std::vector<double>& v) {
-  std::vector<double> x;
-  x.reserve(rows.size());
-  for (const std::size_t i : rows) x.push_back(v[i]);
+// Median of values (the mean of the two middle ones for an even count).
+double median_in(std::vector<double> x) {
   const std::size_t h = x.size() / 2;
   std::nth_element(x.begin(), x.begin() + static_cast<std::ptrdiff_t>(h), x.end());
   double med = x[h];
   if (x.size() % 2 == 0) med = 0.5 * (med + *std::max_element(x.begin(), x.begin() + static_cast<std::ptrdiff_t>(h)));
   return med;
+}
+
+double median_of(const std::vector<std::size_t>& rows, const std::vector<double>& v) {
+  std::vector<double> x;
+  x.reserve(rows.size());
+  for (const std::size_t i : rows) x.push_back(v[i]);
+  return median_in(std::move(x));
+}
+
+// A row within the steady-state limits about its set point's medians (speed, dp, flow, torque, temperature).
+bool steady_about(const steady_state_limits& l, const double (&med)[5], double n, double dp, double q, double t,
+                  double temp) {
+  return std::fabs(n - med[0]) <= l.speed_fraction * med[0] && std::fabs(dp - med[1]) <= l.pressure_fraction * med[1] &&
+         std::fabs(q - med[2]) <= l.flow_fraction * med[2] && std::fabs(t - med[3]) <= l.torque_fraction * med[3] &&
+         std::fabs(temp - med[4]) <= l.temperature_k;
 }
 
 // The steady rows of a set point: every indicated value within the steady-state limits of its median.
@@ -288,14 +363,10 @@ set_point_rows steady_rows(const test_stand_setup& s, const set_point_rows& g, c
     out.rows = g.all;
     return out;
   }
-  const auto& l = s.steady;
-  const double mn = median_of(g.all, speed), md = median_of(g.all, dp), mq = median_of(g.all, q),
-               mt = median_of(g.all, torque), mT = median_of(g.all, temp);
+  const double med[5] = {median_of(g.all, speed), median_of(g.all, dp), median_of(g.all, q), median_of(g.all, torque),
+                         median_of(g.all, temp)};
   for (const std::size_t i : g.all) {
-    const bool ok = std::fabs(speed[i] - mn) <= l.speed_fraction * mn && std::fabs(dp[i] - md) <= l.pressure_fraction * md &&
-                    std::fabs(q[i] - mq) <= l.flow_fraction * mq && std::fabs(torque[i] - mt) <= l.torque_fraction * mt &&
-                    std::fabs(temp[i] - mT) <= l.temperature_k;
-    if (ok)
+    if (steady_about(s.steady, med, speed[i], dp[i], q[i], torque[i], temp[i]))
       out.rows.push_back(i);
     else
       ++out.unsteady;
@@ -611,16 +682,25 @@ const char* loss_model_name(loss_model_kind k) noexcept {
   return k == loss_model_kind::wilson ? "Wilson" : "Schloesser";
 }
 
+namespace {
+// The means of every set point the reduction needs, one element per set point.
+struct point_inputs {
+  std::vector<double> sp, dpp, qp, tp, mup, drp, q_read_p, p1p, p2p, tvp;
+  void resize(std::size_t m) {
+    for (auto* v : {&sp, &dpp, &qp, &tp, &mup, &drp, &q_read_p, &p1p, &p2p, &tvp}) v->assign(m, 0.0);
+  }
+};
+test_stand_result& reduce_points(const test_stand_setup& setup, run& r, const point_inputs& P, std::size_t n,
+                                 double t_mid, bool regime_flow);
+}  // namespace
+
 test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_stand_readings& d) {
   test_stand_result res;
   run r{res};
   if (!setup_ok(setup, r) || !readings_ok(setup, d, r)) return res;
 
   const bool pump = setup.kind == machine::pump;
-  const char* flow_col = pump ? "outlet flow" : "inlet flow";
-  const char* tvisc = temperature_column(setup.viscosity_at);
   const auto& t_visc = temperatures(d, setup.viscosity_at);
-  const auto& oil = setup.fluid;
   const auto& p1 = d.inlet_pressure_pa;
   const auto& p2 = d.outlet_pressure_pa;
   const std::size_t n = d.speed_rev_s.size();
@@ -633,22 +713,10 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
   bool regime_flow = false;
   res.flow_corrected = !setup.meter_at_port;
   for (std::size_t i = 0; i < n; ++i) {
-    dp[i] = pump ? p2[i] - p1[i] : p1[i] - p2[i];
-    const auto m = oil_dynamic_viscosity(oil, t_visc[i], 0.0);
-    if (!m.usable()) return r.fail(m.st, i, tvisc, {}, "no oil viscosity at this temperature: " + sentence(m.st));
-    mu[i] = m.value;
-    if (setup.meter_at_port) {
-      q[i] = q_read[i];
-      continue;
-    }
-    const double p_port = pump ? p2[i] : p1[i];
-    const double t_port = pump ? d.outlet_temperature_k[i] : d.inlet_temperature_k[i];
-    const auto f = flow_at_port(q_read[i], setup.meter_pressure_pa, d.meter_temperature_k[i], p_port, t_port,
-                                oil.rho_ref_kg_m3, oil.t_ref_k, oil.alpha_per_k, oil.bulk_modulus_pa);
-    if (!f.usable())
-      return r.fail(f.st, i, flow_col, {}, "cannot correct the flow to port conditions: " + sentence(f.st));
-    if (f.st != status::ok) regime_flow = true;
-    q[i] = f.value;
+    const double t_port = setup.meter_at_port ? 0.0 : pump ? d.outlet_temperature_k[i] : d.inlet_temperature_k[i];
+    if (!derive_row(setup, i, p1[i], p2[i], t_visc[i], q_read[i],
+                    setup.meter_at_port ? 0.0 : d.meter_temperature_k[i], t_port, dp[i], mu[i], q[i], regime_flow, r))
+      return res;
   }
 
   // ---- set points: grouping, steady-state filter, averages with type A
@@ -663,9 +731,9 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
     if (!k.rows.empty()) kept.push_back(std::move(k));
   }
   const std::size_t m = kept.size();
-  std::vector<double> sp(m), dpp(m), qp(m), tp(m), mup(m), drp(m), q_read_p(m), p1p(m), p2p(m), tvp(m);
+  point_inputs P;
+  P.resize(m);
   res.points.resize(m);
-  res.drain.resize(m);
   for (std::size_t k = 0; k < m; ++k) {
     const auto& rows = kept[k].rows;
     auto& pt = res.points[k];
@@ -674,22 +742,40 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
     pt.rows_unsteady = kept[k].unsteady;
     for (const std::size_t i : rows) res.row_point[i] = k;
     const auto ms = mean_sd(rows, speed), md = mean_sd(rows, dp), mq = mean_sd(rows, q), mt = mean_sd(rows, torque);
-    sp[k] = ms.first; dpp[k] = md.first; qp[k] = mq.first; tp[k] = mt.first;
+    P.sp[k] = ms.first; P.dpp[k] = md.first; P.qp[k] = mq.first; P.tp[k] = mt.first;
     const double sq = std::sqrt(static_cast<double>(rows.size()));
     pt.ua_speed_rev_s = ms.second / sq;
     pt.ua_dp_pa = md.second / sq;
     pt.ua_flow_m3_s = mq.second / sq;
     pt.ua_torque_n_m = mt.second / sq;
-    mup[k] = mean_sd(rows, mu).first;
-    tvp[k] = mean_sd(rows, t_visc).first;
-    drp[k] = mean_sd(rows, d.drain_flow_m3_s).first;
-    q_read_p[k] = mean_sd(rows, q_read).first;
-    p1p[k] = mean_sd(rows, p1).first;
-    p2p[k] = mean_sd(rows, p2).first;
+    P.mup[k] = mean_sd(rows, mu).first;
+    P.tvp[k] = mean_sd(rows, t_visc).first;
+    P.drp[k] = mean_sd(rows, d.drain_flow_m3_s).first;
+    P.q_read_p[k] = mean_sd(rows, q_read).first;
+    P.p1p[k] = mean_sd(rows, p1).first;
+    P.p2p[k] = mean_sd(rows, p2).first;
     for (const std::size_t x : setup.exclude_rows)
       if (x < n && std::find(kept[k].all.begin(), kept[k].all.end(), x) != kept[k].all.end()) pt.excluded_by_list = true;
     pt.excluded = pt.excluded_by_list;
   }
+  reduce_points(setup, r, P, n, t_visc[n / 2], regime_flow);
+  return res;
+}
+
+namespace {
+// The reduction from the set points on (both front ends): res.points holds each set point's rows,
+// type A and list exclusion; P its means; n the readings; t_mid the viscosity temperature of reading n / 2.
+test_stand_result& reduce_points(const test_stand_setup& setup, run& r, const point_inputs& P, std::size_t n,
+                                 double t_mid, bool regime_flow) {
+  test_stand_result& res = r.res;
+  const bool pump = setup.kind == machine::pump;
+  const char* tvisc = temperature_column(setup.viscosity_at);
+  const auto& oil = setup.fluid;
+  const std::size_t m = res.points.size();
+  res.drain.resize(m);
+  const auto& sp = P.sp; const auto& dpp = P.dpp; const auto& qp = P.qp; const auto& tp = P.tp;
+  const auto& mup = P.mup; const auto& drp = P.drp; const auto& q_read_p = P.q_read_p;
+  const auto& p1p = P.p1p; const auto& p2p = P.p2p; const auto& tvp = P.tvp;
   for (const std::size_t x : setup.exclude_rows)
     if (x >= n)
       return r.fail(status::domain, no_row, {}, "exclude_rows",
@@ -716,7 +802,7 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
 
   // ---- displacement, fit, outliers: repeated while the worst outlier is excluded by rule
   std::vector<double> work(loss_fit_workspace(m));
-  const double rho = oil_density_at(oil, t_visc[n / 2], 0.0).value;
+  const double rho = oil_density_at(oil, t_mid, 0.0).value;
   res.fit_density_kg_m3 = rho;
   std::vector<loss_model_kind> kinds = {loss_model_kind::wilson};
   if (setup.fit_schloesser) kinds.push_back(loss_model_kind::schloesser);
@@ -953,6 +1039,310 @@ test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_st
              "the test grid does not separate the loss terms well: the fitted coefficients are uncertain");
   if (res.map_temperature_tested) r.note("map_temperature_k", t_note);
   return res;
+}
+}  // namespace
+
+
+// ---- the streaming front end (test_stand_stream, issue 20)
+namespace {
+// A reading held while its set point's run is open: its index, the values the steady-state filter
+// judges (speed, dp, flow at the port, torque, viscosity temperature), the viscosity, and the row.
+struct held_row {
+  std::size_t i;
+  double judged[5];
+  double mu;
+  test_stand_row row;
+};
+
+// One set point: the running sums of the grouping, and the sums of its steady rows.
+struct stream_group {
+  std::size_t count = 0;          // every row grouped here
+  double sum_n = 0, sum_p = 0;    // their speeds and pressure differences (the grouping's running means)
+  bool judged = false;            // the medians below are set (the steady-state filter ran on >= 3 rows)
+  double med[5] = {0, 0, 0, 0, 0};
+  std::vector<held_row> pending;  // rows of a group of fewer than 3 rows, not yet judged
+  std::size_t steady = 0, unsteady = 0, first_row = no_row;
+  bool excluded_by_list = false;
+  double sum[5] = {0, 0, 0, 0, 0};  // steady rows: speed, dp, flow at the port, torque, viscosity temperature
+  double sum_mu = 0;
+  double sum_col[11] = {0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0};  // steady rows: every column as read
+  double m2[4] = {0, 0, 0, 0};  // sums of squared deviations of speed, dp, flow, torque (type A)
+};
+}  // namespace
+
+struct test_stand_stream::impl {
+  test_stand_setup setup;
+  unsigned columns = 0;
+  bool keep_row_point = false, finished = false;
+  bool setup_good = true;  // setup_ok(): else finish() refuses the setup and the rows are only counted
+  std::size_t n = 0, max_held = 0;
+  std::vector<std::size_t> excl;  // setup.exclude_rows, sorted
+  std::vector<stream_group> groups;
+  std::size_t open = no_row;     // the group of the previous row
+  std::vector<held_row> run_rows;  // the rows of the open run
+  std::deque<double> later_half;  // viscosity temperature of the rows n / 2 .. n - 1
+  std::vector<std::size_t> row_group;  // per row: group, or no_row when dropped as settling (keep_row_point)
+  bool regime_flow = false;
+  // the first failure of the values: check (0..10 ranges, 11 pressures, 12 derive), row, and its message
+  int fail_check = 13;
+  std::size_t fail_row = no_row;
+  test_stand_message fail_msg;
+  double fail_value = 0;
+  std::vector<test_stand_row> means;
+
+  bool has(int c) const { return (columns >> c) & 1u; }
+
+  void record_failure(int check, std::size_t i, const test_stand_message& m, double value) {
+    if (check > fail_check || (check == fail_check && i >= fail_row)) return;
+    fail_check = check;
+    fail_row = i;
+    fail_msg = m;
+    fail_value = value;
+  }
+
+  // Fold steady rows (in row order) into their group's sums; the scatter merged by Chan, Golub and LeVeque (1983).
+  void fold(stream_group& g, const std::vector<const held_row*>& rows) {
+    if (rows.empty()) return;
+    double bsum[4] = {0, 0, 0, 0};
+    for (const auto* h : rows) {
+      if (g.first_row == no_row) g.first_row = h->i;
+      for (int c = 0; c < 5; ++c) g.sum[c] += h->judged[c];
+      for (int c = 0; c < 4; ++c) bsum[c] += h->judged[c];
+      g.sum_mu += h->mu;
+      for (int c = 0; c < 11; ++c) g.sum_col[c] += h->row.*row_member[c];
+    }
+    const double nb = static_cast<double>(rows.size()), na = static_cast<double>(g.steady);
+    for (int c = 0; c < 4; ++c) {
+      const double mean_b = bsum[c] / nb;
+      double ss = 0;
+      for (const auto* h : rows) ss += (h->judged[c] - mean_b) * (h->judged[c] - mean_b);
+      if (g.steady == 0) {
+        g.m2[c] = ss;
+      } else {
+        const double delta = mean_b - (g.sum[c] - bsum[c]) / na;
+        g.m2[c] += ss + delta * delta * na * nb / (na + nb);
+      }
+    }
+    g.steady += rows.size();
+  }
+
+  void drop(stream_group& g, const held_row& h) {
+    ++g.unsteady;
+    if (keep_row_point) row_group[h.i] = no_row;
+  }
+
+  // The open run has ended: judge its rows by the steady-state criterion and fold the steady ones.
+  void close_run() {
+    if (open == no_row || run_rows.empty()) return;
+    auto& g = groups[open];
+    std::vector<held_row> rows;
+    if (!g.judged && !g.pending.empty()) {
+      rows = std::move(g.pending);
+      g.pending.clear();
+      rows.insert(rows.end(), run_rows.begin(), run_rows.end());
+      run_rows.clear();
+    } else {
+      rows.swap(run_rows);  // no copy: the run's storage is handed over
+    }
+    std::vector<const held_row*> keep;
+    if (!setup.drop_unsteady) {
+      for (const auto& h : rows) keep.push_back(&h);
+    } else if (!g.judged) {
+      if (rows.size() < 3) {  // two rows have no majority to judge by: held until the set point grows or the end
+        g.pending = std::move(rows);
+        return;
+      }
+      std::vector<double> x(rows.size());
+      for (int c = 0; c < 5; ++c) {
+        for (std::size_t k = 0; k < rows.size(); ++k) x[k] = rows[k].judged[c];
+        g.med[c] = median_in(x);
+      }
+      g.judged = true;
+    }
+    if (setup.drop_unsteady)
+      for (const auto& h : rows) {
+        if (steady_about(setup.steady, g.med, h.judged[0], h.judged[1], h.judged[2], h.judged[3], h.judged[4]))
+          keep.push_back(&h);
+        else
+          drop(g, h);
+      }
+    fold(g, keep);
+  }
+
+  void add(const test_stand_row& row) {
+    const std::size_t i = n++;
+    if (!setup_good) return;
+    const bool pump = setup.kind == machine::pump;
+    const int c_visc = viscosity_column(setup);
+    const double tv = has(c_visc) ? row.*row_member[c_visc] : 0.0;
+    later_half.push_back(tv);
+    while (later_half.size() > n - n / 2) later_half.pop_front();
+    if (keep_row_point) row_group.push_back(no_row);
+    // the values, in reduce_test_stand()'s order of checks
+    int check = 0;
+    for (const auto& c : range_checks(pump)) {
+      if (check >= fail_check) break;
+      const double v = row.*row_member[c.col];
+      if (has(c.col) && !(v >= c.lo && v <= c.hi)) {
+        record_failure(check, i, {status::domain, i, c.name, {}, c.what, true}, v);
+        break;
+      }
+      ++check;
+    }
+    if (fail_check > 11 && (columns & required) == required &&
+        !pressures_in_order(pump, row.inlet_pressure_pa, row.outlet_pressure_pa)) {
+      test_stand_result scratch;
+      run_record(scratch, [&](run& r) { pressures_out_of_order(pump, i, r); });
+      record_failure(11, i, scratch.messages.back(), 0);
+    }
+    if (fail_check < 13 || (columns & required) != required || !has(c_visc) ||
+        (!setup.meter_at_port && !(has(9) && has(pump ? 7 : 6))))
+      return;  // the result is an error: only the checks go on
+    held_row h{i, {row.speed_rev_s, 0, 0, row.torque_n_m, tv}, 0, row};
+    {
+      test_stand_result scratch;
+      run r{scratch};
+      const double t_port = setup.meter_at_port ? 0.0 : pump ? row.outlet_temperature_k : row.inlet_temperature_k;
+      if (!derive_row(setup, i, row.inlet_pressure_pa, row.outlet_pressure_pa, tv, row.flow_m3_s,
+                      row.meter_temperature_k, t_port, h.judged[1], h.mu, h.judged[2], regime_flow, r)) {
+        record_failure(12, i, scratch.messages.back(), 0);
+        return;
+      }
+    }
+    // the grouping: the previous row's set point first, then every earlier one, else a new one
+    auto fits = [&](std::size_t k) {
+      return joins(setup, groups[k].count, groups[k].sum_n, groups[k].sum_p, row.speed_rev_s, h.judged[1]);
+    };
+    std::size_t k = (open != no_row && fits(open)) ? open : no_row;
+    for (std::size_t j = 0; k == no_row && j < groups.size(); ++j)
+      if (fits(j)) k = j;
+    if (k != open) close_run();
+    if (k == no_row) {
+      k = groups.size();
+      groups.emplace_back();
+    }
+    open = k;
+    auto& g = groups[k];
+    ++g.count;
+    g.sum_n += row.speed_rev_s;
+    g.sum_p += h.judged[1];
+    if (!excl.empty() && std::binary_search(excl.begin(), excl.end(), i)) g.excluded_by_list = true;
+    if (keep_row_point) row_group[i] = k;
+    run_rows.push_back(h);
+    max_held = std::max(max_held, run_rows.size() + g.pending.size());
+  }
+
+  template <class F>
+  static void run_record(test_stand_result& res, F f) {
+    run r{res};
+    f(r);
+  }
+
+  test_stand_result finish() {
+    test_stand_result res;
+    run r{res};
+    finished = true;
+    if (!setup_ok(setup, r)) return res;
+    std::size_t sizes[11];
+    for (int c = 0; c < 11; ++c) sizes[c] = has(c) ? n : 0;
+    if (!columns_ok(setup, n, sizes, r)) return res;
+    if (fail_check <= 11) {
+      res.st = fail_msg.st;
+      res.messages.push_back(fail_msg);
+      return res;
+    }
+    if (!columns_late_ok(setup, sizes, r)) return res;
+    if (fail_check == 12) {
+      res.st = fail_msg.st;
+      res.messages.push_back(fail_msg);
+      return res;
+    }
+    res.flow_corrected = !setup.meter_at_port;
+    close_run();
+    std::vector<const held_row*> keep;
+    for (auto& g : groups)
+      if (!g.pending.empty()) {  // fewer than 3 rows: every one kept
+        keep.clear();
+        for (const auto& h : g.pending) keep.push_back(&h);
+        fold(g, keep);
+        g.pending.clear();
+      }
+    std::vector<std::size_t> point_of(groups.size(), no_row);
+    std::size_t m = 0;
+    for (std::size_t j = 0; j < groups.size(); ++j) {
+      res.rows_unsteady += groups[j].unsteady;
+      if (groups[j].steady > 0) point_of[j] = m++;
+    }
+    point_inputs P;
+    P.resize(m);
+    res.points.resize(m);
+    means.assign(m, test_stand_row{});
+    const double nan = std::numeric_limits<double>::quiet_NaN();
+    for (std::size_t j = 0; j < groups.size(); ++j) {
+      if (point_of[j] == no_row) continue;
+      const auto& g = groups[j];
+      const std::size_t k = point_of[j];
+      auto& pt = res.points[k];
+      const double c = static_cast<double>(g.steady);
+      pt.first_row = g.first_row;
+      pt.rows = g.steady;
+      pt.rows_unsteady = g.unsteady;
+      P.sp[k] = g.sum[0] / c; P.dpp[k] = g.sum[1] / c; P.qp[k] = g.sum[2] / c; P.tp[k] = g.sum[3] / c;
+      P.tvp[k] = g.sum[4] / c;
+      P.mup[k] = g.sum_mu / c;
+      P.drp[k] = g.sum_col[5] / c;
+      P.q_read_p[k] = g.sum_col[3] / c;
+      P.p1p[k] = g.sum_col[1] / c;
+      P.p2p[k] = g.sum_col[2] / c;
+      const double sq = std::sqrt(c);
+      double* ua[4] = {&pt.ua_speed_rev_s, &pt.ua_dp_pa, &pt.ua_flow_m3_s, &pt.ua_torque_n_m};
+      for (int q = 0; q < 4; ++q) *ua[q] = g.steady < 2 ? 0.0 : std::sqrt(g.m2[q] / (c - 1)) / sq;
+      pt.excluded_by_list = pt.excluded = g.excluded_by_list;
+      for (int q = 0; q < 11; ++q) means[k].*row_member[q] = has(q) ? g.sum_col[q] / c : nan;
+    }
+    if (keep_row_point) {
+      res.row_point.resize(n);
+      for (std::size_t i = 0; i < n; ++i)
+        res.row_point[i] = row_group[i] == no_row ? no_row : point_of[row_group[i]];
+    }
+    reduce_points(setup, r, P, n, later_half.empty() ? 0.0 : later_half.front(), regime_flow);
+    return res;
+  }
+};
+
+test_stand_stream::test_stand_stream(const test_stand_setup& setup, unsigned columns, bool keep_row_point)
+    : p_(new impl) {
+  p_->setup = setup;
+  p_->columns = columns;
+  p_->keep_row_point = keep_row_point;
+  p_->excl = setup.exclude_rows;
+  std::sort(p_->excl.begin(), p_->excl.end());
+  test_stand_result scratch;
+  run r{scratch};
+  p_->setup_good = setup_ok(setup, r);
+}
+test_stand_stream::~test_stand_stream() = default;
+void test_stand_stream::add(const test_stand_row& row) {
+  if (!p_->finished) p_->add(row);
+}
+test_stand_result test_stand_stream::finish() {
+  if (p_->finished) {
+    test_stand_result res;
+    run r{res};
+    r.fail(status::misuse, no_row, {}, {}, "the stream was finished already");
+    return res;
+  }
+  return p_->finish();
+}
+std::size_t test_stand_stream::rows() const noexcept { return p_->n; }
+std::size_t test_stand_stream::max_held_rows() const noexcept { return p_->max_held; }
+const std::vector<test_stand_row>& test_stand_stream::point_means() const noexcept { return p_->means; }
+std::string test_stand_stream::describe(const test_stand_message& m) const {
+  test_stand_readings one;  // the failing reading's value in a readings of its row alone
+  if (m.follows_value && m.row == p_->fail_row && m.row != no_row) {
+    if (const auto* v = column_of(one, m.column)) const_cast<std::vector<double>*>(v)->assign(m.row + 1, p_->fail_value);
+  }
+  return pumploss::describe(m, one);
 }
 
 }  // namespace pumploss

@@ -580,3 +580,242 @@ TEST(TestStandMap, DefaultsToTheTestedEnvelopeAtTheTestedViscosityTemperature) {
   s.map_speed_lo_rev_s = 0;
   EXPECT_EQ(pumploss::reduce_test_stand(s, r).messages.front().setting, "map_temperature_k");
 }
+
+// ---- the streaming front end (issue 20): test_stand_stream fed the same readings row by row gives
+// reduce_test_stand()'s result (bit for bit where every set point is one run of rows), the same
+// refusals, and holds no more than one set point's rows.
+namespace {
+
+// The column bits of the columns a readings struct has.
+unsigned columns_of(const pumploss::test_stand_readings& r) {
+  using S = pumploss::test_stand_stream;
+  const std::pair<const std::vector<double>*, unsigned> c[] = {
+      {&r.speed_rev_s, S::speed},          {&r.inlet_pressure_pa, S::inlet_pressure},
+      {&r.outlet_pressure_pa, S::outlet_pressure}, {&r.flow_m3_s, S::flow},
+      {&r.torque_n_m, S::torque},          {&r.drain_flow_m3_s, S::drain_flow},
+      {&r.inlet_temperature_k, S::inlet_temperature}, {&r.outlet_temperature_k, S::outlet_temperature},
+      {&r.drain_temperature_k, S::drain_temperature}, {&r.meter_temperature_k, S::meter_temperature},
+      {&r.case_pressure_pa, S::case_pressure}};
+  unsigned bits = 0;
+  for (const auto& x : c)
+    if (!x.first->empty()) bits |= x.second;
+  return bits;
+}
+
+// Feed every row of r into a stream.
+void feed(pumploss::test_stand_stream& st, const pumploss::test_stand_readings& r) {
+  auto at = [](const std::vector<double>& v, std::size_t i) { return i < v.size() ? v[i] : std::nan(""); };
+  for (std::size_t i = 0; i < r.speed_rev_s.size(); ++i) {
+    pumploss::test_stand_row row;
+    row.speed_rev_s = r.speed_rev_s[i];
+    row.inlet_pressure_pa = at(r.inlet_pressure_pa, i);
+    row.outlet_pressure_pa = at(r.outlet_pressure_pa, i);
+    row.flow_m3_s = at(r.flow_m3_s, i);
+    row.torque_n_m = at(r.torque_n_m, i);
+    row.drain_flow_m3_s = at(r.drain_flow_m3_s, i);
+    row.inlet_temperature_k = at(r.inlet_temperature_k, i);
+    row.outlet_temperature_k = at(r.outlet_temperature_k, i);
+    row.drain_temperature_k = at(r.drain_temperature_k, i);
+    row.meter_temperature_k = at(r.meter_temperature_k, i);
+    row.case_pressure_pa = at(r.case_pressure_pa, i);
+    st.add(row);
+  }
+}
+
+pumploss::test_stand_result streamed(const pumploss::test_stand_setup& s, const pumploss::test_stand_readings& r) {
+  pumploss::test_stand_stream st(s, columns_of(r), true);
+  feed(st, r);
+  return st.finish();
+}
+
+// a and b equal within rel (0: bit for bit; NaN equals NaN)
+void expect_near(double a, double b, double rel_tol, const std::string& what) {
+  if (std::isnan(a) || std::isnan(b)) {
+    EXPECT_TRUE(std::isnan(a) && std::isnan(b)) << what << ": " << a << " vs " << b;
+  } else if (rel_tol == 0) {
+    EXPECT_EQ(a, b) << what;
+  } else {
+    EXPECT_LE(std::fabs(a - b), rel_tol * std::max(std::fabs(a), std::fabs(b)) + 1e-300) << what << ": " << a << " vs " << b;
+  }
+}
+
+void expect_same(const pumploss::test_stand_result& a, const pumploss::test_stand_result& b, double tol) {
+  ASSERT_EQ(a.st, b.st);
+  ASSERT_EQ(a.messages.size(), b.messages.size());
+  for (std::size_t k = 0; k < a.messages.size(); ++k) {
+    EXPECT_EQ(a.messages[k].st, b.messages[k].st) << k;
+    EXPECT_EQ(a.messages[k].row, b.messages[k].row) << k;
+    EXPECT_EQ(a.messages[k].column, b.messages[k].column) << k;
+    EXPECT_EQ(a.messages[k].setting, b.messages[k].setting) << k;
+    EXPECT_EQ(a.messages[k].follows_value, b.messages[k].follows_value) << k;
+    if (tol == 0) {
+      EXPECT_EQ(a.messages[k].text, b.messages[k].text) << k;
+    }
+  }
+  if (pumploss::is_error(a.st)) return;
+  EXPECT_EQ(a.row_point, b.row_point);
+  EXPECT_EQ(a.rows_unsteady, b.rows_unsteady);
+  EXPECT_EQ(a.outliers, b.outliers);
+  EXPECT_EQ(a.excluded, b.excluded);
+  EXPECT_EQ(a.speed_levels, b.speed_levels);
+  EXPECT_EQ(a.pressure_levels, b.pressure_levels);
+  ASSERT_EQ(a.points.size(), b.points.size());
+  for (std::size_t k = 0; k < a.points.size(); ++k) {
+    const auto &p = a.points[k], &q = b.points[k];
+    const std::string at = "point " + std::to_string(k);
+    EXPECT_EQ(p.first_row, q.first_row) << at;
+    EXPECT_EQ(p.rows, q.rows) << at;
+    EXPECT_EQ(p.rows_unsteady, q.rows_unsteady) << at;
+    EXPECT_EQ(p.outlier, q.outlier) << at;
+    EXPECT_EQ(p.excluded, q.excluded) << at;
+    EXPECT_EQ(p.excluded_by_list, q.excluded_by_list) << at;
+    EXPECT_EQ(p.st, q.st) << at;
+    for (const auto& f : {std::make_pair(p.speed_rev_s, q.speed_rev_s), std::make_pair(p.dp_pa, q.dp_pa),
+                          std::make_pair(p.flow_m3_s, q.flow_m3_s), std::make_pair(p.torque_n_m, q.torque_n_m),
+                          std::make_pair(p.mu_pa_s, q.mu_pa_s), std::make_pair(p.eta.eta_t.value, q.eta.eta_t.value),
+                          std::make_pair(p.eta.eta_t.U, q.eta.eta_t.U), std::make_pair(p.ua_flow_m3_s, q.ua_flow_m3_s),
+                          std::make_pair(p.ua_torque_n_m, q.ua_torque_n_m), std::make_pair(p.ua_dp_pa, q.ua_dp_pa),
+                          std::make_pair(p.t_flow, q.t_flow), std::make_pair(p.t_torque, q.t_torque),
+                          std::make_pair(a.drain[k].fraction, b.drain[k].fraction)})
+      expect_near(f.first, f.second, tol, at);
+  }
+  expect_near(a.displacement_m3_rev, b.displacement_m3_rev, tol, "displacement");
+  expect_near(a.u_displacement_m3_rev, b.u_displacement_m3_rev, tol, "u displacement");
+  expect_near(a.fit_density_kg_m3, b.fit_density_kg_m3, tol, "density");
+  expect_near(a.map_temperature_k, b.map_temperature_k, tol, "map temperature");
+  ASSERT_EQ(a.models.size(), b.models.size());
+  for (std::size_t k = 0; k < a.models.size(); ++k) {
+    expect_near(a.models[k].c_s, b.models[k].c_s, tol, "C_s");
+    expect_near(a.models[k].c_v, b.models[k].c_v, tol, "C_v");
+    expect_near(a.models[k].c_f, b.models[k].c_f, tol, "C_f");
+    expect_near(a.models[k].u_c_s, b.models[k].u_c_s, tol, "u C_s");
+  }
+  ASSERT_EQ(a.maps.size(), b.maps.size());
+  for (std::size_t k = 0; k < a.maps.size(); ++k) {
+    ASSERT_EQ(a.maps[k].eta_t.size(), b.maps[k].eta_t.size());
+    for (std::size_t j = 0; j < a.maps[k].eta_t.size(); ++j) expect_near(a.maps[k].eta_t[j], b.maps[k].eta_t[j], tol, "map");
+    EXPECT_EQ(a.maps[k].st, b.maps[k].st);
+  }
+}
+
+}  // namespace
+
+TEST(TestStandStream, LoggedTestBitForBitAsTheWholeTable) {
+  const truth w;
+  const auto oil = vg46();
+  const auto L = make_logged(w, oil);
+  auto s = setup_for(oil);
+  // settling rows, a missing set point, two spoilt set points: with and without each rule
+  std::vector<pumploss::test_stand_setup> setups(5, s);
+  setups[1].fit_schloesser = false;
+  setups[2].exclude_outliers = false;
+  setups[3].exclude_rows = {L.steady[L.spoilt_torque][2], L.steady[L.spoilt_flow][0] - 1};
+  setups[4].drop_unsteady = false;
+  for (const auto& su : setups) {
+    const auto whole = pumploss::reduce_test_stand(su, L.r);
+    ASSERT_TRUE(pumploss::is_usable(whole.st));
+    expect_same(streamed(su, L.r), whole, 0.0);
+  }
+  // one row per set point (the grid of the first tests) and a return-line meter
+  auto g = make_readings(w, oil, [](std::size_t i) { return 318.15 + 0.3 * static_cast<double>(i); }, 0.002);
+  expect_same(streamed(s, g), pumploss::reduce_test_stand(s, g), 0.0);
+  g.outlet_temperature_k = g.drain_temperature_k;
+  g.meter_temperature_k.assign(g.speed_rev_s.size(), 303.15);
+  auto sm = s;
+  sm.meter_at_port = false;
+  sm.meter_pressure_pa = 3e5;
+  expect_same(streamed(sm, g), pumploss::reduce_test_stand(sm, g), 0.0);
+
+  // the memory bound: no more rows held than the longest set point (8 rows here), whatever the count;
+  // the row_point is left empty unless asked for; the point means are the steady rows' (as the
+  // program's baseline file takes them)
+  pumploss::test_stand_stream st(s, columns_of(L.r));
+  feed(st, L.r);
+  const auto res = st.finish();
+  EXPECT_EQ(st.rows(), L.r.speed_rev_s.size());
+  EXPECT_EQ(st.max_held_rows(), 8u);
+  EXPECT_TRUE(res.row_point.empty());
+  ASSERT_EQ(st.point_means().size(), res.points.size());
+  for (std::size_t k = 0; k < res.points.size(); ++k) {
+    EXPECT_EQ(st.point_means()[k].outlet_pressure_pa, mean_of(L.r.outlet_pressure_pa, L.steady[k]));
+    EXPECT_EQ(st.point_means()[k].inlet_temperature_k, mean_of(L.r.inlet_temperature_k, L.steady[k]));
+    EXPECT_TRUE(std::isnan(st.point_means()[k].case_pressure_pa));
+  }
+  EXPECT_EQ(st.finish().st, status::misuse);  // once
+}
+
+TEST(TestStandStream, MessyInputsGiveTheSameRefusalsAndResults) {
+  const truth w;
+  const auto oil = vg46();
+  const auto L = make_logged(w, oil);
+  const auto s = setup_for(oil);
+  auto same = [&](const pumploss::test_stand_setup& su, const pumploss::test_stand_readings& r, double tol) {
+    expect_same(streamed(su, r), pumploss::reduce_test_stand(su, r), tol);
+  };
+  auto cut = [](pumploss::test_stand_readings r, std::size_t n) {
+    for (auto* v : {&r.speed_rev_s, &r.inlet_pressure_pa, &r.outlet_pressure_pa, &r.flow_m3_s, &r.torque_n_m,
+                    &r.drain_flow_m3_s, &r.inlet_temperature_k, &r.drain_temperature_k})
+      v->resize(n);
+    return r;
+  };
+  const std::size_t n = L.r.speed_rev_s.size();
+  same(s, cut(L.r, n - 6), 0.0);  // the last set point cut by the end of the file: 2 settling rows left
+  same(s, cut(L.r, n - 5), 0.0);  // ... 3 rows, one of them steady
+  same(s, pumploss::test_stand_readings{}, 0.0);  // no readings
+  {  // NaN cells and values out of range: the first failing check column by column, not the first row
+    auto r = L.r;
+    r.torque_n_m[3] = std::nan("");
+    same(s, r, 0.0);
+    r.speed_rev_s[40] = -r.speed_rev_s[40];  // a later row, an earlier check: the speed is reported
+    same(s, r, 0.0);
+    const auto res = streamed(s, r);
+    EXPECT_EQ(res.messages.front().row, 40u);
+    pumploss::test_stand_stream st(s, columns_of(r));
+    feed(st, r);
+    const auto res2 = st.finish();
+    EXPECT_EQ(st.describe(res2.messages.front()), pumploss::describe(res2.messages.front(), r));
+    r = L.r;
+    r.outlet_pressure_pa[17] = 0.1e5;  // outlet below inlet
+    same(s, r, 0.0);
+    r.drain_temperature_k[50] = 600;  // ranges come first
+    same(s, r, 0.0);
+  }
+  {  // missing columns and settings
+    auto r = L.r;
+    r.drain_temperature_k.clear();
+    same(s, r, 0.0);
+    r.torque_n_m.clear();
+    same(s, r, 0.0);
+    auto s2 = s;
+    s2.meter_at_port = false;
+    same(s2, L.r, 0.0);
+    s2 = s;
+    s2.kind = pumploss::machine::motor;
+    same(s2, L.r, 0.0);
+    s2 = s;
+    s2.nominal_displacement_m3_rev = -1;
+    same(s2, L.r, 0.0);
+    s2 = s;
+    s2.exclude_rows = {n};
+    same(s2, L.r, 0.0);
+    s2 = s;
+    s2.map_temperature_k = 10.0;
+    same(s2, L.r, 0.0);
+  }
+  {  // a row out of order: a steady row of set point 3 logged in the middle of set point 10. Its set
+     // point 10 comes in two runs; the late rows are judged against the medians of the earlier ones:
+     // the same set points, rows and statuses, the scatter within rounding
+    auto r = L.r;
+    const std::size_t from = L.steady[3][2], to = L.steady[10][2];
+    for (auto* v : {&r.speed_rev_s, &r.inlet_pressure_pa, &r.outlet_pressure_pa, &r.flow_m3_s, &r.torque_n_m,
+                    &r.drain_flow_m3_s, &r.inlet_temperature_k, &r.drain_temperature_k}) {
+      const double x = (*v)[from];
+      v->erase(v->begin() + static_cast<std::ptrdiff_t>(from));
+      v->insert(v->begin() + static_cast<std::ptrdiff_t>(to), x);
+    }
+    const auto whole = pumploss::reduce_test_stand(s, r);
+    ASSERT_TRUE(pumploss::is_usable(whole.st));
+    EXPECT_EQ(whole.points[3].rows, 6u);
+    same(s, r, 1e-9);
+  }
+}

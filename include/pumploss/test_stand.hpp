@@ -34,6 +34,7 @@
 #include <array>
 #include <cstddef>
 #include <limits>
+#include <memory>
 #include <string>
 #include <vector>
 
@@ -295,6 +296,87 @@ struct test_stand_result {
 /// ISO 4409:2019 (test method), ISO 8426-1 (derived displacement), JCGM 100:2008 (uncertainty),
 /// Wilson and Schloesser loss models as in docs/pages/theory_efficiency.md.
 PUMPLOSS_CXX_API test_stand_result reduce_test_stand(const test_stand_setup& setup, const test_stand_readings& readings);
+
+// ---- streaming front end (issue 20): test data fed row by row in bounded memory
+/// One reading of a test (SI), the row of test_stand_readings; a column the data lack stays NaN.
+struct test_stand_row {
+  double speed_rev_s = std::numeric_limits<double>::quiet_NaN();           ///< shaft speed, rev/s
+  double inlet_pressure_pa = std::numeric_limits<double>::quiet_NaN();     ///< gauge, Pa
+  double outlet_pressure_pa = std::numeric_limits<double>::quiet_NaN();    ///< gauge, Pa
+  double flow_m3_s = std::numeric_limits<double>::quiet_NaN();             ///< pump outlet or motor inlet flow as read, m^3/s
+  double torque_n_m = std::numeric_limits<double>::quiet_NaN();            ///< shaft torque, N m
+  double drain_flow_m3_s = std::numeric_limits<double>::quiet_NaN();       ///< case drain flow, m^3/s
+  double inlet_temperature_k = std::numeric_limits<double>::quiet_NaN();   ///< K
+  double outlet_temperature_k = std::numeric_limits<double>::quiet_NaN();  ///< K (optional)
+  double drain_temperature_k = std::numeric_limits<double>::quiet_NaN();   ///< K (optional)
+  double meter_temperature_k = std::numeric_limits<double>::quiet_NaN();   ///< K at the flow meter (optional)
+  double case_pressure_pa = std::numeric_limits<double>::quiet_NaN();      ///< gauge, Pa (optional)
+};
+
+/// reduce_test_stand() with the readings fed one row at a time: the same checks, grouping,
+/// steady-state filter and reduction, and the same result, in memory that does not grow with the
+/// row count (for a logger's file of a million rows).
+///
+/// How: a set point of logged data is a consecutive run of rows. The rows of the run being
+/// logged are held (memory bounded by the longest run: about 150 bytes a row); when a row opens
+/// another set point the run is judged by the steady-state criterion about its medians and folded
+/// into its set point's sums (running sums of every column in row order, the scatter's sum of
+/// squares), then released. The grouping rule is reduce_test_stand()'s: the running means of every
+/// set point are kept, the previous row's set point is tried first, then every earlier one.
+/// Readings are checked as they come; the first failing check of the whole table is reported in
+/// reduce_test_stand()'s order (column by column), with the same message.
+///
+/// Results equal reduce_test_stand()'s bit for bit when every set point is one consecutive run of
+/// rows (logged data). A set point logged again after others (rows that return to an earlier set
+/// point) is merged by the same grouping rule; its later rows are judged against the medians of
+/// its earlier rows (reduce_test_stand() takes the medians of all its rows), its means are the
+/// same sums in the same order, and its scatter is merged by the pairwise formula of T. F. Chan,
+/// G. H. Golub and R. J. LeVeque, "Algorithms for computing the sample variance", The American
+/// Statistician 37 (1983) 242-247: equal within rounding unless a row lies at a steady-state limit.
+/// Besides the open run, the stream holds per set point about 350 bytes, and the viscosity
+/// temperature of the later half of the rows (8 bytes a row: reduce_test_stand() takes the
+/// oil density of the Schloesser terms at reading n / 2, and n is known only at the end).
+/// Nothing throws except std::bad_alloc.
+class test_stand_stream {
+ public:
+  /// Column bits of the constructor: which columns of test_stand_row the data have.
+  static constexpr unsigned speed = 1u << 0, inlet_pressure = 1u << 1, outlet_pressure = 1u << 2, flow = 1u << 3,
+                            torque = 1u << 4, drain_flow = 1u << 5, inlet_temperature = 1u << 6,
+                            outlet_temperature = 1u << 7, drain_temperature = 1u << 8, meter_temperature = 1u << 9,
+                            case_pressure = 1u << 10;
+  /// The columns reduce_test_stand() requires.
+  static constexpr unsigned required = speed | inlet_pressure | outlet_pressure | flow | torque | drain_flow | inlet_temperature;
+  /// Start a reduction.
+  /// @param setup how the test was made (copied)
+  /// @param columns the column bits of the columns the data have (a missing one is reported by finish())
+  /// @param keep_row_point fill the result's row_point (8 bytes a row; false: left empty)
+  PUMPLOSS_CXX_API test_stand_stream(const test_stand_setup& setup, unsigned columns, bool keep_row_point = false);
+  PUMPLOSS_CXX_API ~test_stand_stream();
+  test_stand_stream(const test_stand_stream&) = delete;
+  test_stand_stream& operator=(const test_stand_stream&) = delete;
+  /// Feed the next reading (row index = the number fed before it); ignored after finish().
+  /// @param row the reading (SI; the columns not in `columns` are not read)
+  PUMPLOSS_CXX_API void add(const test_stand_row& row);
+  /// Reduce what was fed, as reduce_test_stand() on the whole table; call once.
+  /// @return the results (row_point empty unless asked for)
+  PUMPLOSS_CXX_API test_stand_result finish();
+  /// @return the readings fed so far
+  PUMPLOSS_CXX_API std::size_t rows() const noexcept;
+  /// @return the most rows held at once (the longest run of one set point, for a memory check)
+  PUMPLOSS_CXX_API std::size_t max_held_rows() const noexcept;
+  /// The mean of every column over each set point's steady rows (after finish(); NaN for a
+  /// column the data lack), one element per result point.
+  /// @return the means
+  PUMPLOSS_CXX_API const std::vector<test_stand_row>& point_means() const noexcept;
+  /// describe() of a message of finish(), with the value of the reading it names.
+  /// @param m a message of finish()
+  /// @return the sentence
+  PUMPLOSS_CXX_API std::string describe(const test_stand_message& m) const;
+
+ private:
+  struct impl;
+  std::unique_ptr<impl> p_;
+};
 
 /// A message as one sentence for a log or a C caller: "reading 8, speed: -8.333 is not a speed
 /// above zero (and below 60000 rpm)", "setting viscosity_at: ...", or the text alone.

@@ -8,12 +8,14 @@
 // takes two bytes: on a grid, a perturbation of up to +/-5 % of a plausible reading, with three
 // codes for NaN, infinity and a sign flip; off the grid, any value over a wide range. A crash,
 // undefined behaviour, an exception, an error without a message, or a usable result with
-// non-finite numbers is a finding.
+// non-finite numbers is a finding; so is a streamed reduction (test_stand_stream, the same
+// readings row by row) that breaks a rule or refuses otherwise before the set points are formed.
 #include <cmath>
 #include <cstdint>
 #include <cstdio>
 #include <cstdlib>
 #include <limits>
+#include <vector>
 
 #include "pumploss/test_stand.hpp"
 
@@ -48,6 +50,43 @@ void check(bool ok, const char* what) {
 }
 
 }  // namespace
+
+// The rules every result keeps (n readings given).
+void check_result(const pumploss::test_stand_setup& s, std::size_t n, const pumploss::test_stand_result& res) {
+  if (pumploss::is_error(res.st)) {
+    check(!res.messages.empty() && pumploss::is_error(res.messages.front().st) && !res.messages.front().text.empty(),
+          "an error without its message");
+    return;
+  }
+  // every reading belongs to one set point or was dropped as settling (issue 16: rows are grouped)
+  check(res.row_point.size() == n && res.drain.size() == res.points.size() && !res.points.empty() &&
+            res.points.size() <= n,
+        "a set point missing");
+  std::size_t counted = res.rows_unsteady;
+  for (const auto& p : res.points) counted += p.rows;
+  check(counted == n, "readings lost between the set points and the settling rows");
+  for (const std::size_t k : res.row_point)
+    check(k == pumploss::test_stand_message::no_row || k < res.points.size(), "a reading in no set point");
+  check(std::isfinite(res.displacement_m3_rev) && res.displacement_m3_rev > 0, "no displacement");
+  for (const auto& p : res.points) {
+    if (!pumploss::is_usable(p.st)) continue;  // an error status comes with NaN numbers, by the rule
+    check(std::isfinite(p.eta.eta_t.value) && std::isfinite(p.eta.eta_t.U), "a usable point with a non-finite number");
+    // the residuals: finite under a usable fit status, NaN under an error one (the missing fit, per point)
+    check(pumploss::is_usable(p.fit_st) == (std::isfinite(p.flow_residual_m3_s) && std::isfinite(p.torque_residual_n_m)),
+          "a point's residuals disagree with its fit status");
+  }
+  check(!res.models.empty() && res.maps.size() == res.models.size(), "no model");
+  std::size_t outlier_reports = 0;  // every flagged set point has its outlier report, and the run says so
+  for (const auto& m : res.messages) outlier_reports += m.st == pumploss::status::outlier ? 1u : 0u;
+  check(outlier_reports == res.outliers && (res.outliers == 0 || res.st == pumploss::status::outlier),
+        "outliers without their status");
+  check(std::isfinite(res.map_temperature_k) && res.map_mu_pa_s > 0, "no map temperature");
+  for (const auto& mp : res.maps) {
+    check(mp.eta_t.size() == s.map_speeds * s.map_pressures, "map size");
+    for (std::size_t k = 0; k < mp.eta_t.size(); ++k)
+      check(pumploss::is_error(mp.st[k]) || std::isfinite(mp.eta_t[k]), "a usable map point with a non-finite number");
+  }
+}
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
   bytes b(data, size);
@@ -107,39 +146,40 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   if (cut == 3 && !r.torque_n_m.empty()) r.torque_n_m.pop_back();
 
   const auto res = pumploss::reduce_test_stand(s, r);
-  if (pumploss::is_error(res.st)) {
-    check(!res.messages.empty() && pumploss::is_error(res.messages.front().st) && !res.messages.front().text.empty(),
-          "an error without its message");
-    return 0;
-  }
-  const std::size_t n = r.speed_rev_s.size();
-  // every reading belongs to one set point or was dropped as settling (issue 16: rows are grouped)
-  check(res.row_point.size() == n && res.drain.size() == res.points.size() && !res.points.empty() &&
-            res.points.size() <= n,
-        "a set point missing");
-  std::size_t counted = res.rows_unsteady;
-  for (const auto& p : res.points) counted += p.rows;
-  check(counted == n, "readings lost between the set points and the settling rows");
-  for (const std::size_t k : res.row_point)
-    check(k == pumploss::test_stand_message::no_row || k < res.points.size(), "a reading in no set point");
-  check(std::isfinite(res.displacement_m3_rev) && res.displacement_m3_rev > 0, "no displacement");
-  for (const auto& p : res.points) {
-    if (!pumploss::is_usable(p.st)) continue;  // an error status comes with NaN numbers, by the rule
-    check(std::isfinite(p.eta.eta_t.value) && std::isfinite(p.eta.eta_t.U), "a usable point with a non-finite number");
-    // the residuals: finite under a usable fit status, NaN under an error one (the missing fit, per point)
-    check(pumploss::is_usable(p.fit_st) == (std::isfinite(p.flow_residual_m3_s) && std::isfinite(p.torque_residual_n_m)),
-          "a point's residuals disagree with its fit status");
-  }
-  check(!res.models.empty() && res.maps.size() == res.models.size(), "no model");
-  std::size_t outlier_reports = 0;  // every flagged set point has its outlier report, and the run says so
-  for (const auto& m : res.messages) outlier_reports += m.st == pumploss::status::outlier ? 1u : 0u;
-  check(outlier_reports == res.outliers && (res.outliers == 0 || res.st == pumploss::status::outlier),
-        "outliers without their status");
-  check(std::isfinite(res.map_temperature_k) && res.map_mu_pa_s > 0, "no map temperature");
-  for (const auto& mp : res.maps) {
-    check(mp.eta_t.size() == s.map_speeds * s.map_pressures, "map size");
-    for (std::size_t k = 0; k < mp.eta_t.size(); ++k)
-      check(pumploss::is_error(mp.st[k]) || std::isfinite(mp.eta_t[k]), "a usable map point with a non-finite number");
+  check_result(s, r.speed_rev_s.size(), res);
+  // the streaming front end (issue 20) fed the same readings row by row, when no column is cut short:
+  // the same rules, and the same refusal while the set points are not formed yet (the checks are shared)
+  if (cut != 3) {
+    const std::vector<double>* cols[] = {&r.speed_rev_s, &r.inlet_pressure_pa, &r.outlet_pressure_pa, &r.flow_m3_s,
+                                         &r.torque_n_m, &r.drain_flow_m3_s, &r.inlet_temperature_k,
+                                         &r.outlet_temperature_k, &r.drain_temperature_k, &r.meter_temperature_k,
+                                         &r.case_pressure_pa};
+    double pumploss::test_stand_row::*fields[] = {
+        &pumploss::test_stand_row::speed_rev_s,         &pumploss::test_stand_row::inlet_pressure_pa,
+        &pumploss::test_stand_row::outlet_pressure_pa,  &pumploss::test_stand_row::flow_m3_s,
+        &pumploss::test_stand_row::torque_n_m,          &pumploss::test_stand_row::drain_flow_m3_s,
+        &pumploss::test_stand_row::inlet_temperature_k, &pumploss::test_stand_row::outlet_temperature_k,
+        &pumploss::test_stand_row::drain_temperature_k, &pumploss::test_stand_row::meter_temperature_k,
+        &pumploss::test_stand_row::case_pressure_pa};
+    unsigned bits = 0;
+    for (unsigned c = 0; c < 11; ++c)
+      if (!cols[c]->empty()) bits |= 1u << c;
+    pumploss::test_stand_stream st(s, bits, true);
+    for (std::size_t i = 0; i < r.speed_rev_s.size(); ++i) {
+      pumploss::test_stand_row row;
+      for (unsigned c = 0; c < 11; ++c)
+        if (!cols[c]->empty()) row.*fields[c] = (*cols[c])[i];
+      st.add(row);
+    }
+    const auto sres = st.finish();
+    check_result(s, r.speed_rev_s.size(), sres);
+    check(sres.st == res.st || !(res.row_point.empty() || sres.row_point.empty()), "the stream refuses differently");
+    if (res.row_point.empty() || sres.row_point.empty()) {
+      const auto &m1 = res.messages.front(), &m2 = sres.messages.front();
+      check(m1.st == m2.st && m1.row == m2.row && m1.column == m2.column && m1.setting == m2.setting &&
+                m1.text == m2.text && m1.follows_value == m2.follows_value,
+            "the stream's refusal has another message");
+    }
   }
   return 0;
 }
