@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <charconv>
 #include <cmath>
+#include <cstdint>
 #include <filesystem>
 #include <fstream>
 #include <stdexcept>
@@ -135,16 +136,62 @@ std::string render_text(const report& r, const display_units& u) {
   return out;
 }
 
+char* format_g10(char* first, char* last, double v) {
+  // %.10g: the value rounded to 10 significant digits d0.d1...d9 x 10^X, written in fixed notation
+  // for -4 <= X < 10 with the trailing zeros removed. Computed as m = round(|v| 10^(9-e)) in
+  // double: 10^k (k <= 15) is exact and the product is within half an ulp (< 1e-6 for m < 2^34),
+  // so m is the correctly rounded mantissa unless the fraction lies within 1e-5 of one half;
+  // those values, zero, and the exponent notation go to std::to_chars.
+  static const double p10[] = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15};
+  auto slow = [&] { return std::to_chars(first, last, v, std::chars_format::general, 10).ptr; };
+  const double a = std::fabs(v);
+  if (!(a >= 1e-4 && a < 9e9) || last - first < 24) return slow();
+  // decimal exponent from the binary one k: floor(k log10 2) = (k 1233) >> 12 for |k| < 1000 is
+  // the exponent or one below it, and one comparison with the next power decides (an inexact
+  // power below 1 misplaces only values within an ulp of it, which the mantissa check mends)
+  static const double up[] = {1e-3, 1e-2, 1e-1, 1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10};
+  int e = (std::ilogb(a) * 1233) >> 12;
+  e = std::min(std::max(e, -4), 9);
+  if (a >= up[e + 4]) e = std::min(e + 1, 9);
+  double s = a * p10[9 - e];
+  if (s < 1e9 && e > -4) s = a * p10[9 - --e];
+  if (!(s >= 1e9 && s < 1e10)) return slow();
+  const double fl = std::floor(s), fr = s - fl;
+  if (std::fabs(fr - 0.5) < 1e-5) return slow();
+  auto m = static_cast<std::uint64_t>(fl) + (fr > 0.5 ? 1u : 0u);
+  if (m == 10000000000u) m = 1000000000u, ++e;
+  if (e > 9) return slow();
+  char d[10];
+  auto hi = static_cast<std::uint32_t>(m / 100000u), lo = static_cast<std::uint32_t>(m % 100000u);
+  for (int i = 4; i >= 0; --i, hi /= 10, lo /= 10) {
+    d[i] = static_cast<char>('0' + hi % 10);
+    d[i + 5] = static_cast<char>('0' + lo % 10);
+  }
+  int nd = 10;  // significant digits left after the trailing zeros
+  while (nd > 1 && d[nd - 1] == '0') --nd;
+  char* p = first;
+  if (v < 0) *p++ = '-';
+  if (e >= 0) {
+    for (int i = 0; i <= e; ++i) *p++ = d[i];
+    if (nd > e + 1) {
+      *p++ = '.';
+      for (int i = e + 1; i < nd; ++i) *p++ = d[i];
+    }
+  } else {
+    *p++ = '0';
+    *p++ = '.';
+    for (int i = -1; i > e; --i) *p++ = '0';
+    for (int i = 0; i < nd; ++i) *p++ = d[i];
+  }
+  return p;
+}
+
 namespace {
-// Append a field, quoted when it holds ',', '"' or a line end (one pass, no copy: a long table's
-// reasons column is most of its bytes).
+// Append a field, quoted when it holds ',', '"' or a line end (a scan without early exit, which
+// the compiler vectorises: a long table's reasons column is most of its bytes).
 void csv_quote(std::string& out, const std::string& s) {
   bool plain = true;
-  for (const char c : s)
-    if (c == ',' || c == '"' || c == '\n') {
-      plain = false;
-      break;
-    }
+  for (const char c : s) plain &= !(c == ',' || c == '"' || c == '\n');
   if (plain) {
     out += s;
     return;
@@ -176,10 +223,9 @@ void csv_row(std::string& out, const table& t, const std::vector<cell>& row, con
       csv_quote(out, *s);
     } else {
       const double v = shown_value(t.cols[j], std::get<double>(row[j]), u);
-      if (std::isfinite(v)) {  // as "{:.10g}" (printf's %.10g), without fmt's slow precision path
+      if (std::isfinite(v)) {  // as "{:.10g}" (printf's %.10g), without the slow precision paths
         char buf[32];
-        const auto res = std::to_chars(buf, buf + sizeof buf, v, std::chars_format::general, 10);
-        out.append(buf, res.ptr);
+        out.append(buf, format_g10(buf, buf + sizeof buf, v));
       }
     }
   }
