@@ -81,14 +81,15 @@ void split_line(int line_no, const std::string& line, char delim, table_error& e
         return;
       }
       i = j;
-    } else {
+      take(std::move(f));
+    } else {  // unquoted (nearly every field): written straight into the reused slot
       const auto comma = line.find(delim, i);
       const std::size_t end = comma == std::string::npos ? line.size() : comma;
-      f.text.assign(trim(std::string_view(line).substr(i, end - i)));
-      if (j < end) f.column = static_cast<int>(j) + 1;
+      if (n == out.size()) out.emplace_back();
+      out[n].text.assign(trim(std::string_view(line).substr(i, end - i)));
+      out[n++].column = j < end ? static_cast<int>(j) + 1 : f.column;
       i = end;
     }
-    take(std::move(f));
     if (i >= line.size()) break;
     ++i;  // past the delimiter
     if (i == line.size()) {  // trailing delimiter: an empty last field
@@ -760,13 +761,14 @@ bool table_stream::next(table_row& row) {
   const bool ok = read_fields(s.line_no, s.fields, s.decimal == 0 ? '.' : s.decimal, s.data, s.file_to_spec, s.si_unit,
                               err, s.number, [&](std::size_t k, double v, const field& f) {
                                 row.values[k] = v;
-                                row.texts[k] = f.text;
                                 row.pos[k] = f.column;
                               });
   if (!ok) {
     s.done = true;
     return false;
   }
+  // the texts change places with the split fields (no copy; split_line assigns them anew)
+  for (std::size_t i = 0; i < s.fields.size(); ++i) row.texts[s.file_to_spec[i]].swap(s.fields[i].text);
   ++s.rows;
   return true;
 }
