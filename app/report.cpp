@@ -251,18 +251,68 @@ std::string render_csv(const table& t, const display_units& u) {
 }
 
 csv_file_writer::csv_file_writer(const table& columns, const display_units& u, std::string path)
-    : t_(columns), u_(u), path_(std::move(path)) {
+    : u_(u), path_(std::move(path)) {
+  t_.name = columns.name;
+  t_.cols = columns.cols;
   if (path_.empty()) return;
   f_ = std::fopen(path_.c_str(), "wb");
   if (f_ == nullptr) throw std::runtime_error(path_ + ": cannot write");
   buf_ = csv_header(t_, u_);
+  worker_ = std::thread([this] { run(); });
 }
 
 csv_file_writer::~csv_file_writer() {
+  stop();
   if (f_ != nullptr) {
     std::fclose(f_);
     std::remove(path_.c_str());
   }
+}
+
+namespace {
+constexpr std::size_t csv_batch = 512;  // rows handed to the writing thread at once
+}
+
+void csv_file_writer::run() {
+  std::unique_lock<std::mutex> lk(m_);
+  while (true) {
+    cv_.wait(lk, [&] { return ready_ || stop_; });
+    if (!ready_) return;  // stopped with nothing left
+    lk.unlock();
+    std::string failed;
+    try {
+      for (std::size_t i = 0; i < work_n_; ++i) {
+        csv_row(buf_, t_, work_[i], u_);
+        if (buf_.size() > (1u << 16)) flush();
+      }
+    } catch (const std::exception& e) {
+      failed = e.what();
+    }
+    lk.lock();
+    if (error_.empty()) error_ = failed;
+    ready_ = false;
+    cv_.notify_all();
+  }
+}
+
+void csv_file_writer::hand_over() {
+  std::unique_lock<std::mutex> lk(m_);
+  cv_.wait(lk, [&] { return !ready_; });
+  if (!error_.empty()) throw std::runtime_error(error_);
+  std::swap(batch_, work_);
+  work_n_ = batch_n_;
+  batch_n_ = 0;
+  ready_ = true;
+  cv_.notify_all();
+}
+
+void csv_file_writer::stop() {
+  {
+    std::lock_guard<std::mutex> lk(m_);
+    stop_ = true;
+  }
+  cv_.notify_all();
+  if (worker_.joinable()) worker_.join();
 }
 
 void csv_file_writer::flush() {
@@ -273,12 +323,16 @@ void csv_file_writer::flush() {
 
 void csv_file_writer::row(const std::vector<cell>& r) {
   if (f_ == nullptr) return;
-  csv_row(buf_, t_, r, u_);
-  if (buf_.size() > (1u << 16)) flush();
+  if (batch_n_ == batch_.size()) batch_.emplace_back();
+  batch_[batch_n_++] = r;  // copy-assignment keeps the strings' storage
+  if (batch_n_ == csv_batch) hand_over();
 }
 
 const std::string& csv_file_writer::release() {
   if (f_ != nullptr) {
+    if (batch_n_ > 0) hand_over();
+    stop();  // the last batch is written before the thread ends
+    if (!error_.empty()) throw std::runtime_error(error_);
     buf_ += csv_footer();
     flush();
     const bool bad = std::fclose(f_) != 0;
