@@ -209,7 +209,7 @@ class prefetched_rows {
       std::exception_ptr failure;
       try {
         while (n < batch && in_.next(mine[n])) ++n;
-      } catch (...) {  // std::bad_alloc: handed to the reading thread
+      } catch (...) {  // std::bad_alloc: rethrown on the caller's thread by next()
         failure = std::current_exception();
       }
       end = n < batch;
