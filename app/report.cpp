@@ -218,19 +218,35 @@ std::string csv_header(const table& t, const display_units& u) {
 }
 
 void csv_row(std::string& out, const table& t, const std::vector<cell>& row, const display_units& u) {
+  // gathered in a local line and appended once (a million rows: no append call per cell)
+  char line[512];
+  std::size_t n = 0;
+  auto spill = [&] {
+    out.append(line, n);
+    n = 0;
+  };
   for (std::size_t j = 0; j < row.size(); ++j) {
-    if (j > 0) out += ",";
+    if (n + 40 > sizeof line) spill();  // room for a delimiter and a number
+    if (j > 0) line[n++] = ',';
     if (const auto* s = std::get_if<std::string>(&row[j])) {
-      csv_quote(out, *s);
+      const bool plain = std::memchr(s->data(), ',', s->size()) == nullptr &&
+                         std::memchr(s->data(), '"', s->size()) == nullptr &&
+                         std::memchr(s->data(), '\n', s->size()) == nullptr;
+      if (plain && n + s->size() < sizeof line) {
+        std::memcpy(line + n, s->data(), s->size());
+        n += s->size();
+      } else {
+        spill();
+        csv_quote(out, *s);
+      }
     } else {
       const double v = shown_value(t.cols[j], std::get<double>(row[j]), u);
-      if (std::isfinite(v)) {  // as "{:.10g}" (printf's %.10g), without the slow precision paths
-        char buf[32];
-        out.append(buf, format_g10(buf, buf + sizeof buf, v));
-      }
+      if (std::isfinite(v))  // as "{:.10g}" (printf's %.10g), without the slow precision paths
+        n = static_cast<std::size_t>(format_g10(line + n, line + sizeof line, v) - line);
     }
   }
-  out += "\n";
+  line[n++] = '\n';
+  spill();
 }
 
 std::string csv_footer() {
