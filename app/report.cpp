@@ -5,6 +5,8 @@
 #include <algorithm>
 #include <charconv>
 #include <cmath>
+#include <cstdint>
+#include <cstring>
 #include <filesystem>
 #include <fstream>
 #include <stdexcept>
@@ -135,16 +137,62 @@ std::string render_text(const report& r, const display_units& u) {
   return out;
 }
 
+char* format_g10(char* first, char* last, double v) {
+  // %.10g: the value rounded to 10 significant digits d0.d1...d9 x 10^X, written in fixed notation
+  // for -4 <= X < 10 with the trailing zeros removed. Computed as m = round(|v| 10^(9-e)) in
+  // double: 10^k (k <= 15) is exact and the product is within half an ulp (< 1e-6 for m < 2^34),
+  // so m is the correctly rounded mantissa unless the fraction lies within 1e-5 of one half;
+  // those values, zero, and the exponent notation go to std::to_chars.
+  static const double p10[] = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15};
+  auto slow = [&] { return std::to_chars(first, last, v, std::chars_format::general, 10).ptr; };
+  const double a = std::fabs(v);
+  if (!(a >= 1e-4 && a < 9e9) || last - first < 24) return slow();
+  // decimal exponent from the binary one k: floor(k log10 2) = (k 1233) >> 12 for |k| < 1000 is
+  // the exponent or one below it, and one comparison with the next power decides (an inexact
+  // power below 1 misplaces only values within an ulp of it, which the mantissa check mends)
+  static const double up[] = {1e-3, 1e-2, 1e-1, 1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10};
+  int e = (std::ilogb(a) * 1233) >> 12;
+  e = std::min(std::max(e, -4), 9);
+  if (a >= up[e + 4]) e = std::min(e + 1, 9);
+  double s = a * p10[9 - e];
+  if (s < 1e9 && e > -4) s = a * p10[9 - --e];
+  if (!(s >= 1e9 && s < 1e10)) return slow();
+  const double fl = std::floor(s), fr = s - fl;
+  if (std::fabs(fr - 0.5) < 1e-5) return slow();
+  auto m = static_cast<std::uint64_t>(fl) + (fr > 0.5 ? 1u : 0u);
+  if (m == 10000000000u) m = 1000000000u, ++e;
+  if (e > 9) return slow();
+  char d[10];
+  auto hi = static_cast<std::uint32_t>(m / 100000u), lo = static_cast<std::uint32_t>(m % 100000u);
+  for (int i = 4; i >= 0; --i, hi /= 10, lo /= 10) {
+    d[i] = static_cast<char>('0' + hi % 10);
+    d[i + 5] = static_cast<char>('0' + lo % 10);
+  }
+  int nd = 10;  // significant digits left after the trailing zeros
+  while (nd > 1 && d[nd - 1] == '0') --nd;
+  char* p = first;
+  if (v < 0) *p++ = '-';
+  if (e >= 0) {
+    for (int i = 0; i <= e; ++i) *p++ = d[i];
+    if (nd > e + 1) {
+      *p++ = '.';
+      for (int i = e + 1; i < nd; ++i) *p++ = d[i];
+    }
+  } else {
+    *p++ = '0';
+    *p++ = '.';
+    for (int i = -1; i > e; --i) *p++ = '0';
+    for (int i = 0; i < nd; ++i) *p++ = d[i];
+  }
+  return p;
+}
+
 namespace {
-// Append a field, quoted when it holds ',', '"' or a line end (one pass, no copy: a long table's
+// Append a field, quoted when it holds ',', '"' or a line end (memchr scans: a long table's
 // reasons column is most of its bytes).
 void csv_quote(std::string& out, const std::string& s) {
-  bool plain = true;
-  for (const char c : s)
-    if (c == ',' || c == '"' || c == '\n') {
-      plain = false;
-      break;
-    }
+  const bool plain = std::memchr(s.data(), ',', s.size()) == nullptr && std::memchr(s.data(), '"', s.size()) == nullptr &&
+                     std::memchr(s.data(), '\n', s.size()) == nullptr;
   if (plain) {
     out += s;
     return;
@@ -170,20 +218,35 @@ std::string csv_header(const table& t, const display_units& u) {
 }
 
 void csv_row(std::string& out, const table& t, const std::vector<cell>& row, const display_units& u) {
+  // gathered in a local line and appended once (a million rows: no append call per cell)
+  char line[512];
+  std::size_t n = 0;
+  auto spill = [&] {
+    out.append(line, n);
+    n = 0;
+  };
   for (std::size_t j = 0; j < row.size(); ++j) {
-    if (j > 0) out += ",";
+    if (n + 40 > sizeof line) spill();  // room for a delimiter and a number
+    if (j > 0) line[n++] = ',';
     if (const auto* s = std::get_if<std::string>(&row[j])) {
-      csv_quote(out, *s);
+      const bool plain = std::memchr(s->data(), ',', s->size()) == nullptr &&
+                         std::memchr(s->data(), '"', s->size()) == nullptr &&
+                         std::memchr(s->data(), '\n', s->size()) == nullptr;
+      if (plain && n + s->size() < sizeof line) {
+        std::memcpy(line + n, s->data(), s->size());
+        n += s->size();
+      } else {
+        spill();
+        csv_quote(out, *s);
+      }
     } else {
       const double v = shown_value(t.cols[j], std::get<double>(row[j]), u);
-      if (std::isfinite(v)) {  // as "{:.10g}" (printf's %.10g), without fmt's slow precision path
-        char buf[32];
-        const auto res = std::to_chars(buf, buf + sizeof buf, v, std::chars_format::general, 10);
-        out.append(buf, res.ptr);
-      }
+      if (std::isfinite(v))  // as "{:.10g}" (printf's %.10g), without the slow precision paths
+        n = static_cast<std::size_t>(format_g10(line + n, line + sizeof line, v) - line);
     }
   }
-  out += "\n";
+  line[n++] = '\n';
+  spill();
 }
 
 std::string csv_footer() {
@@ -205,18 +268,69 @@ std::string render_csv(const table& t, const display_units& u) {
 }
 
 csv_file_writer::csv_file_writer(const table& columns, const display_units& u, std::string path)
-    : t_(columns), u_(u), path_(std::move(path)) {
+    : u_(u), path_(std::move(path)) {
+  t_.name = columns.name;
+  t_.cols = columns.cols;
   if (path_.empty()) return;
   f_ = std::fopen(path_.c_str(), "wb");
   if (f_ == nullptr) throw std::runtime_error(path_ + ": cannot write");
+  std::setvbuf(f_, nullptr, _IONBF, 0);  // buf_ is the buffer: no second copy in stdio
   buf_ = csv_header(t_, u_);
+  worker_ = std::thread([this] { run(); });
 }
 
 csv_file_writer::~csv_file_writer() {
+  stop();
   if (f_ != nullptr) {
     std::fclose(f_);
     std::remove(path_.c_str());
   }
+}
+
+namespace {
+constexpr std::size_t csv_batch = 512;  // rows handed to the writing thread at once
+}
+
+void csv_file_writer::run() {
+  std::unique_lock<std::mutex> lk(m_);
+  while (true) {
+    cv_.wait(lk, [&] { return ready_ || stop_; });
+    if (!ready_) return;  // stopped with nothing left
+    lk.unlock();
+    std::string failed;
+    try {
+      for (std::size_t i = 0; i < work_n_; ++i) {
+        csv_row(buf_, t_, work_[i], u_);
+        if (buf_.size() > (1u << 16)) flush();
+      }
+    } catch (const std::exception& e) {
+      failed = e.what();
+    }
+    lk.lock();
+    if (error_.empty()) error_ = failed;
+    ready_ = false;
+    cv_.notify_all();
+  }
+}
+
+void csv_file_writer::hand_over() {
+  std::unique_lock<std::mutex> lk(m_);
+  cv_.wait(lk, [&] { return !ready_; });
+  if (!error_.empty()) throw std::runtime_error(error_);
+  std::swap(batch_, work_);
+  work_n_ = batch_n_;
+  batch_n_ = 0;
+  ready_ = true;
+  cv_.notify_all();
+}
+
+void csv_file_writer::stop() {
+  {
+    std::lock_guard<std::mutex> lk(m_);
+    stop_ = true;
+  }
+  cv_.notify_all();
+  if (worker_.joinable()) worker_.join();
 }
 
 void csv_file_writer::flush() {
@@ -227,12 +341,16 @@ void csv_file_writer::flush() {
 
 void csv_file_writer::row(const std::vector<cell>& r) {
   if (f_ == nullptr) return;
-  csv_row(buf_, t_, r, u_);
-  if (buf_.size() > (1u << 16)) flush();
+  if (batch_n_ == batch_.size()) batch_.emplace_back();
+  batch_[batch_n_++] = r;  // copy-assignment keeps the strings' storage
+  if (batch_n_ == csv_batch) hand_over();
 }
 
 const std::string& csv_file_writer::release() {
   if (f_ != nullptr) {
+    if (batch_n_ > 0) hand_over();
+    stop();  // the last batch is written before the thread ends
+    if (!error_.empty()) throw std::runtime_error(error_);
     buf_ += csv_footer();
     flush();
     const bool bad = std::fclose(f_) != 0;
