@@ -61,8 +61,10 @@ case "$kind" in
     # no LD_LIBRARY_PATH: the installed program finds the installed libraries by its RUNPATH
     "$exe" --version
     "$exe" units 250 bar psi
-    "$exe" test-stand "$here/examples/demo/test_stand.csv" --setup "$here/examples/demo/test_stand.toml" |
-      grep -q "Test-stand analysis" || { echo "package_check: the installed program's test-stand failed"; exit 1; }
+    # the whole report first (grep -q would close the pipe early: SIGPIPE under pipefail)
+    report="$("$exe" test-stand "$here/examples/demo/test_stand.csv" --setup "$here/examples/demo/test_stand.toml")" ||
+      { echo "package_check: the installed program's test-stand failed"; exit 1; }
+    grep -q "Test-stand analysis" <<<"$report" || { echo "package_check: no test-stand report"; exit 1; }
     echo "installed program: --version, units and test-stand on the demo ran"
     consumer="$build/deb-consumer"
     rm -rf "$consumer"
