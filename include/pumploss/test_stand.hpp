@@ -339,11 +339,18 @@ struct test_stand_row {
 /// Nothing throws except std::bad_alloc.
 class test_stand_stream {
  public:
-  /// Column bits of the constructor: which columns of test_stand_row the data have.
-  static constexpr unsigned speed = 1u << 0, inlet_pressure = 1u << 1, outlet_pressure = 1u << 2, flow = 1u << 3,
-                            torque = 1u << 4, drain_flow = 1u << 5, inlet_temperature = 1u << 6,
-                            outlet_temperature = 1u << 7, drain_temperature = 1u << 8, meter_temperature = 1u << 9,
-                            case_pressure = 1u << 10;
+  // Column bits of the constructor: which columns of test_stand_row the data have.
+  static constexpr unsigned speed = 1u << 0;  ///< column bit: speed
+  static constexpr unsigned inlet_pressure = 1u << 1;  ///< column bit: inlet pressure
+  static constexpr unsigned outlet_pressure = 1u << 2;  ///< column bit: outlet pressure
+  static constexpr unsigned flow = 1u << 3;  ///< column bit: flow
+  static constexpr unsigned torque = 1u << 4;  ///< column bit: torque
+  static constexpr unsigned drain_flow = 1u << 5;  ///< column bit: case drain flow
+  static constexpr unsigned inlet_temperature = 1u << 6;  ///< column bit: inlet temperature
+  static constexpr unsigned outlet_temperature = 1u << 7;  ///< column bit: outlet temperature
+  static constexpr unsigned drain_temperature = 1u << 8;  ///< column bit: drain temperature
+  static constexpr unsigned meter_temperature = 1u << 9;  ///< column bit: flow meter temperature
+  static constexpr unsigned case_pressure = 1u << 10;  ///< column bit: case pressure
   /// The columns reduce_test_stand() requires.
   static constexpr unsigned required = speed | inlet_pressure | outlet_pressure | flow | torque | drain_flow | inlet_temperature;
   /// Start a reduction.
