@@ -320,7 +320,7 @@ def fortran_wrap(head, names, indent="      "):
 
 def write_fortran(funcs, handles, codes, consts, out):
     w = out.write
-    w("! Generated from pumploss.h by tests/capi/capigen.py: do not edit.\n")
+    w("! Generated from pumploss.h by tools/capigen/capigen.py: do not edit.\n")
     w("! pumploss for Fortran 2003: ISO_C_BINDING interfaces of every C API function, the status\n")
     w("! codes, and pumploss_string() to read the C strings of pumploss_version() and\n")
     w("! pumploss_status_message(). Units are SI, as in pumploss.h. Pass strings as 'bar'//C_NULL_CHAR.\n")
