@@ -56,6 +56,40 @@ const char* refusal_column(unsigned bit, bool clearance_from_drain) {
   }
 }
 
+// The short code of one reason bit in health_reasons.csv (the library's enumerator without its
+// "reason_" prefix); health_reason_codes.csv pairs each code with its sentence.
+const char* reason_code(unsigned bit) {
+  switch (bit) {
+    case pumploss::reason_fraction_sound: return "fraction_sound";
+    case pumploss::reason_fraction_acceptable: return "fraction_acceptable";
+    case pumploss::reason_fraction_elevated: return "fraction_elevated";
+    case pumploss::reason_fraction_worn: return "fraction_worn";
+    case pumploss::reason_growth_moderate: return "growth_moderate";
+    case pumploss::reason_growth_large: return "growth_large";
+    case pumploss::reason_drain_hot: return "drain_hot";
+    case pumploss::reason_low_pressure_reading: return "low_pressure_reading";
+    case pumploss::reason_no_baseline: return "no_baseline";
+    case pumploss::reason_no_temperatures: return "no_temperatures";
+    case pumploss::reason_speed_off_rated: return "speed_off_rated";
+    case pumploss::reason_drain_colder: return "drain_colder";
+    case pumploss::reason_state_differs: return "state_differs";
+    case pumploss::reason_below_constant_part: return "below_constant_part";
+    default: return "unknown";
+  }
+}
+constexpr const char* refused_code = "refused";
+
+// health_reason_codes.csv: every code of health_reasons.csv with its sentence.
+table reason_code_legend() {
+  table t;
+  t.name = "reason_codes";
+  t.cols = {{"code", cell_kind::text, D::pressure, 0}, {"meaning", cell_kind::text, D::pressure, 0}};
+  for (unsigned bit = 1; bit <= pumploss::reason_below_constant_part; bit <<= 1)
+    t.rows.push_back({std::string(reason_code(bit)), std::string(pumploss::health_reason_text(bit))});
+  t.rows.push_back({std::string(refused_code), std::string("The reading was not scored; health_refused.csv says why.")});
+  return t;
+}
+
 // Events of the optional 'event' column.
 enum class event_kind { none, oil_change, overhaul, meter_change };
 
@@ -328,6 +362,12 @@ int run_health(const health_options& o) {
              {"verdict", cell_kind::text, D::pressure, 0},
              {"reasons", cell_kind::text, D::pressure, 0},
              {"note", cell_kind::text, D::pressure, 0}};
+  // the CSV gives each row's reasons as short codes (health_reason_codes.csv says what they mean:
+  // a million rows of sentences were most of the bytes written); the text table keeps the sentences
+  table tr_csv;
+  tr_csv.name = tr.name;
+  tr_csv.cols = tr.cols;
+  tr_csv.cols[2].title = "reason codes";
   table tx;
   tx.name = "refused";
   tx.title = "Readings refused (not scored)";
@@ -335,7 +375,7 @@ int run_health(const health_options& o) {
              {"where", cell_kind::text, D::pressure, 0},
              {"reason", cell_kind::text, D::pressure, 0}};
   // the per-row CSVs go out as the rows are judged; the text keeps head and tail
-  csv_file_writer w_t(t, du, scratch_path(o.out, "readings")), w_tr(tr, du, scratch_path(o.out, "reasons")),
+  csv_file_writer w_t(t, du, scratch_path(o.out, "readings")), w_tr(tr_csv, du, scratch_path(o.out, "reasons")),
       w_tx(tx, du, scratch_path(o.out, "refused"));
   head_tail h_t, h_tr, h_tx;
 
@@ -348,8 +388,9 @@ int run_health(const health_options& o) {
     pumploss::health_reading<double> rd;
   };
   std::deque<row_info> waiting;
-  std::map<unsigned, std::string> reasons_text;
+  std::map<unsigned, std::pair<std::string, std::string>> reasons_of;  // sentences and codes of a combination
   std::vector<cell> row_cells(t.cols.size(), 0.0), why_cells(tr.cols.size(), std::string());
+  std::vector<cell> code_cells(tr.cols.size(), std::string());
   std::optional<input_error> failure;
   std::vector<float> plot_x, plot_qn, plot_q;  // scored readings, display units
   auto lower = [](std::string s) {
@@ -404,23 +445,32 @@ int run_health(const health_options& o) {
     w_t.row(c);
     h_t.add(c);
     auto& wr = why_cells;
+    auto& wc = code_cells;
     set_text(wr[0], ri.date);
     set_text(wr[1], refused ? "refused" : pumploss::health_level_name(a.level));
     if (refused) {
       set_text(wr[2], "see the refused readings");
+      set_text(wc[2], refused_code);
     } else {
-      auto& why = reasons_text[a.reasons];  // the sentences of a combination of reasons, made once
-      if (why.empty())
+      auto& why = reasons_of[a.reasons];  // the sentences and codes of a combination of reasons, made once
+      if (why.first.empty())
         for (unsigned bit = 1; bit != 0 && bit <= a.reasons; bit <<= 1)
-          if (a.reasons & bit) why += (why.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
-      set_text(wr[2], why);
+          if (a.reasons & bit) {
+            why.first += (why.first.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
+            why.second += (why.second.empty() ? "" : " ") + std::string(reason_code(bit));
+          }
+      set_text(wr[2], why.first);
+      set_text(wc[2], why.second);
     }
     if (ri.event.empty()) {
       set_text(wr[3], ri.note);
     } else {
       set_text(wr[3], ri.note + (ri.note.empty() ? "" : "; ") + "event: " + ri.event);
     }
-    w_tr.row(wr);
+    wc[0] = wr[0];
+    wc[1] = wr[1];
+    wc[3] = wr[3];
+    w_tr.row(wc);
     h_tr.add(wr);
     if (refused) return;
     plot_x.push_back(static_cast<float>(ri.date_days));
@@ -653,6 +703,8 @@ int run_health(const health_options& o) {
   if (n > text_rows_max)
     r.notes.push_back(fmt::format("the tables show the first and last {} of {} readings; the CSV files hold every row",
                                   text_rows_end, n));
+  r.notes.push_back("health_reasons.csv gives each reading's reasons as codes separated by spaces; "
+                    "health_reason_codes.csv pairs every code with its sentence");
   std::vector<std::string> caution_lines;
   {
     std::string c = pumploss::health_case_drain_caution();
@@ -717,6 +769,7 @@ int run_health(const health_options& o) {
 
   output_set files;
   files.add("health.svg", pl.render());
+  files.add("health_reason_codes.csv", render_csv(reason_code_legend(), du));
   emit(r, files, o.out, du, "health");
   return exit_ok;
 }

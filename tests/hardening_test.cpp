@@ -159,4 +159,31 @@ TEST_F(monitor_fixture, AGivenBaselineCannotBeReplaced) {
   pumploss_health_monitor_destroy(m);
 }
 
+// fuzz_handles (tests/fuzz/corpus/fuzz_handles/finding-drain-check-overflow): a drain check with
+// a tank pressure of -1e300 Pa and the largest double as allowed case pressure. The margin
+// overflowed to infinity: the status became EOVERFLOW, but the four arrays kept their numbers.
+// Now every array is NaN (pass 0) on any error, and an infinite element is itself an overflow.
+TEST(Hardening, DrainCheckThatOverflowsLeavesNaNArrays) {
+  pumploss_line* line = nullptr;
+  ASSERT_EQ(pumploss_line_create(&line), PUMPLOSS_OK);
+  // ISO VG 46 mineral oil, typical catalogue points (common practice, no source)
+  ASSERT_EQ(pumploss_line_set_oil(line, 313.15, 46e-6, 373.15, 6.8e-6, 870.0, 288.15), PUMPLOSS_OK);
+  double t[5], cp[5], margin[5], worst = 0.0;
+  int pass[5];
+  for (int i = 0; i < 5; ++i) pass[i] = 7;
+  const double huge = std::numeric_limits<double>::max();
+  EXPECT_EQ(pumploss_line_drain_check(line, 0.001, 313.15, 313.15, 5, -1e300, huge, t, cp, margin, pass, &worst),
+            PUMPLOSS_EOVERFLOW);
+  EXPECT_TRUE(std::isnan(worst));
+  for (int i = 0; i < 5; ++i) {
+    EXPECT_TRUE(std::isnan(t[i]) && std::isnan(cp[i]) && std::isnan(margin[i])) << i;
+    EXPECT_EQ(pass[i], 0) << i;
+  }
+  // the same line with ordinary limits: finite arrays, usable status
+  const int st = pumploss_line_drain_check(line, 0.001, 273.15, 353.15, 5, 0.0, 2e5, t, cp, margin, pass, &worst);
+  EXPECT_FALSE(st > 0 && st < 100) << st;
+  for (int i = 0; i < 5; ++i) EXPECT_TRUE(std::isfinite(t[i]) && std::isfinite(cp[i]) && std::isfinite(margin[i])) << i;
+  pumploss_line_destroy(line);
+}
+
 }  // namespace

@@ -564,6 +564,9 @@ TEST(CliHealth, DemoMatchesLibrary) {
   const auto d = read_csv(kDemo + "/field_readings.csv", field_columns());
   const auto t = read_out(out + "/health_readings.csv");
   const auto why = read_out(out + "/health_reasons.csv");
+  const auto legend = read_out(out + "/health_reason_codes.csv");
+  std::map<std::string, std::string> code_of;  // sentence -> code
+  for (std::size_t i = 0; i < legend.rows.size(); ++i) code_of[legend.text(i, "meaning")] = legend.text(i, "code");
   ASSERT_EQ(t.rows.size(), d.rows());
   std::size_t refused = 0;
   for (std::size_t i = 0; i < d.rows(); ++i) {
@@ -576,13 +579,17 @@ TEST(CliHealth, DemoMatchesLibrary) {
     if (a.st == pumploss::status::out_of_validity) {
       ++refused;
       EXPECT_EQ(t.text(i, "verdict"), "refused") << i;
+      EXPECT_EQ(why.text(i, "reason codes"), "refused") << i;
       continue;
     }
     EXPECT_LT(rel(t.num(i, "normalised drain flow [L/min]") / 60000, a.drain_at_reference_m3_s), 1e-8) << i;
     EXPECT_EQ(t.text(i, "verdict"), pumploss::health_level_name(a.level)) << i;
     for (unsigned bit = 1; bit <= a.reasons; bit <<= 1)
-      if (a.reasons & bit) {
-        EXPECT_NE(why.text(i, "reasons").find(pumploss::health_reason_text(bit)), std::string::npos) << i;
+      if (a.reasons & bit) {  // the row's codes hold the code of every reason (legend: its sentence)
+        const auto c = code_of.find(pumploss::health_reason_text(bit));
+        ASSERT_NE(c, code_of.end()) << bit;
+        const std::string codes = " " + why.text(i, "reason codes") + " ";
+        EXPECT_NE(codes.find(" " + c->second + " "), std::string::npos) << i << ": " << codes;
       }
   }
   // the demo's truth (generate.py): a zero reading in month 33, a step in month 30

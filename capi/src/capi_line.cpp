@@ -229,19 +229,19 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(const pumploss_line* h,
     if (margin_pa != nullptr) margin_pa[i] = kNaN;
     if (pass != nullptr) pass[i] = 0;
   }
-  return line_call(h, {worst_margin_pa}, [&] {
+  const int code = line_call(h, {worst_margin_pa}, [&] {
     if (!arrays) return status::misuse;
     if (n_temps < 1 || n_temps > 1000) return status::domain;
     if (!h->has_oil) return status::misuse;
     std::vector<pumploss::drain_point<double>> pts(static_cast<std::size_t>(n_temps));
     const auto s = pumploss::drain_check(h->line, h->oil, q_drain_m3_s, t_cold_k, t_max_k, static_cast<int>(n_temps), p_tank_pa,
                                          p_allowed_pa, pts.data());
-    if (is_error(s.st)) {
-      for (size_t i = 0; i < n_temps; ++i) t_k[i] = case_pressure_pa[i] = margin_pa[i] = kNaN;
-      return s.st;
-    }
+    if (is_error(s.st)) return s.st;
     for (size_t i = 0; i < n_temps; ++i) {
       const auto& p = pts[i];
+      // a usable status never comes with a non-finite output (e.g. limits near the largest double)
+      if (!std::isfinite(p.t_k) || !std::isfinite(p.case_pressure_pa) || !std::isfinite(p.margin_pa))
+        return status::overflow;
       t_k[i] = p.t_k;
       case_pressure_pa[i] = p.case_pressure_pa;
       margin_pa[i] = p.margin_pa;
@@ -250,6 +250,15 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_drain_check(const pumploss_line* h,
     *worst_margin_pa = s.worst_margin_pa;
     return s.st;
   });
+  if (code > 0 && code < 100) {  // an error, also one call() found in the scalar output: NaN everywhere
+    for (size_t i = 0; i < n_fill; ++i) {
+      if (t_k != nullptr) t_k[i] = kNaN;
+      if (case_pressure_pa != nullptr) case_pressure_pa[i] = kNaN;
+      if (margin_pa != nullptr) margin_pa[i] = kNaN;
+      if (pass != nullptr) pass[i] = 0;
+    }
+  }
+  return code;
 }
 
 PUMPLOSS_API int PUMPLOSS_CALL pumploss_line_size_drain(const pumploss_line* h, double q_drain_m3_s, double t_cold_k,

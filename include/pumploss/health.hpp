@@ -926,15 +926,32 @@ class health_cusum {
     using std::sqrt;
     T a[4][9] = {};  // normal equations augmented with X'y and the identity (Gauss-Jordan)
     const std::size_t hi = count;
+    // X'X holds sums of integer powers of u (|u| <= history, so below 2^26): summed exactly in
+    // integers, they are the numbers a floating-point sum of the same terms gives; X'y is summed
+    // term by term in reading order
+    long long su[5] = {}, sj[3] = {};  // sums of u^0..u^4 over the window; of u^0..u^2 from j on
     for (std::size_t i = lo; i < hi; ++i) {
+      const long long ui = static_cast<long long>(i) - static_cast<long long>(j), u2 = ui * ui;
+      su[0] += 1;
+      su[1] += ui;
+      su[2] += u2;
+      su[3] += u2 * ui;
+      su[4] += u2 * u2;
+      if (i >= j) {
+        sj[0] += 1;
+        sj[1] += ui;
+        sj[2] += u2;
+      }
       const T u = T(static_cast<double>(i)) - T(static_cast<double>(j));
       const T row[4] = {T(1), u, u * u, i >= j ? T(1) : T(0)};
       const T y = hist[i % history];
-      for (int r = 0; r < 4; ++r) {
-        for (int c = 0; c < 4; ++c) a[r][c] += row[r] * row[c];
-        a[r][4] += row[r] * y;
-      }
+      for (int r = 0; r < 4; ++r) a[r][4] += row[r] * y;
     }
+    for (int r = 0; r < 3; ++r) {
+      for (int c = 0; c < 3; ++c) a[r][c] = T(static_cast<double>(su[r + c]));
+      a[r][3] = a[3][r] = T(static_cast<double>(sj[r]));
+    }
+    a[3][3] = T(static_cast<double>(sj[0]));
     for (int r = 0; r < 4; ++r) a[r][5 + r] = T(1);
     for (int c = 0; c < 4; ++c) {
       int piv = c;
