@@ -56,8 +56,8 @@ const char* refusal_column(unsigned bit, bool clearance_from_drain) {
   }
 }
 
-// The short code of one reason bit in health_reasons.csv (the library's enumerator without its
-// "reason_" prefix); health_reason_codes.csv pairs each code with its sentence.
+// The short code of one reason bit in the reasons CSV (the library's enumerator without its
+// "reason_" prefix); the legend file of the codes pairs each code with its sentence.
 const char* reason_code(unsigned bit) {
   switch (bit) {
     case pumploss::reason_fraction_sound: return "fraction_sound";
@@ -79,7 +79,7 @@ const char* reason_code(unsigned bit) {
 }
 constexpr const char* refused_code = "refused";
 
-// health_reason_codes.csv: every code of health_reasons.csv with its sentence.
+// The legend file of the codes: every code of the reasons CSV with its sentence.
 table reason_code_legend() {
   table t;
   t.name = "reason_codes";
@@ -362,7 +362,7 @@ int run_health(const health_options& o) {
              {"verdict", cell_kind::text, D::pressure, 0},
              {"reasons", cell_kind::text, D::pressure, 0},
              {"note", cell_kind::text, D::pressure, 0}};
-  // the CSV gives each row's reasons as short codes (health_reason_codes.csv says what they mean:
+  // the CSV gives each row's reasons as short codes (the legend file says what they mean:
   // a million rows of sentences were most of the bytes written); the text table keeps the sentences
   table tr_csv;
   tr_csv.name = tr.name;
@@ -450,7 +450,7 @@ int run_health(const health_options& o) {
     set_text(wr[1], refused ? "refused" : pumploss::health_level_name(a.level));
     if (refused) {
       set_text(wr[2], "see the refused readings");
-      set_text(wc[2], refused_code);
+      if (w_tr.active()) set_text(wc[2], refused_code);
     } else {
       auto& why = reasons_of[a.reasons];  // the sentences and codes of a combination of reasons, made once
       if (why.first.empty())
@@ -460,17 +460,19 @@ int run_health(const health_options& o) {
             why.second += (why.second.empty() ? "" : " ") + std::string(reason_code(bit));
           }
       set_text(wr[2], why.first);
-      set_text(wc[2], why.second);
+      if (w_tr.active()) set_text(wc[2], why.second);
     }
     if (ri.event.empty()) {
       set_text(wr[3], ri.note);
     } else {
       set_text(wr[3], ri.note + (ri.note.empty() ? "" : "; ") + "event: " + ri.event);
     }
-    wc[0] = wr[0];
-    wc[1] = wr[1];
-    wc[3] = wr[3];
-    w_tr.row(wc);
+    if (w_tr.active()) {
+      wc[0] = wr[0];
+      wc[1] = wr[1];
+      wc[3] = wr[3];
+      w_tr.row(wc);
+    }
     h_tr.add(wr);
     if (refused) return;
     plot_x.push_back(static_cast<float>(ri.date_days));

@@ -140,6 +140,8 @@ class csv_file_writer {
   csv_file_writer(const csv_file_writer&) = delete;
   csv_file_writer& operator=(const csv_file_writer&) = delete;
   void row(const std::vector<cell>& r);
+  /// Whether rows go to a file (false without an output folder: row() does nothing).
+  bool active() const noexcept { return f_ != nullptr; }
   /// Write the foot and close; the file stays (it is moved by output_set::write_all()).
   /// @return the path
   const std::string& release();

@@ -998,19 +998,15 @@ class health_cusum {
     std::size_t lo = regime;
     if (count > history && lo < count - history) lo = count - history;
     if (count < lo + 3) return T(0);
-    T d[history];
+    T d[history] = {};  // zeroed: keeps the compiler from seeing the selection read an unset element
     std::size_t m = 0;
     for (std::size_t i = lo + 1; i < count; ++i) {
       const T v = hist[i % history] - hist[(i - 1) % history];
       d[m++] = v < T(0) ? -v : v;
     }
-    for (std::size_t i = 1; i < m; ++i)
-      for (std::size_t q = i; q > 0 && d[q] < d[q - 1]; --q) {
-        const T t = d[q];
-        d[q] = d[q - 1];
-        d[q - 1] = t;
-      }
-    const T med = m % 2 ? d[m / 2] : (d[m / 2 - 1] + d[m / 2]) / 2;
+    // the median by selection (the same elements a full sort puts in the middle)
+    std::nth_element(d, d + m / 2, d + m);
+    const T med = m % 2 ? d[m / 2] : (*std::max_element(d, d + m / 2) + d[m / 2]) / 2;
     return med / detail::constant<T>(0.95387255240084L, "0.95387255240084");
   }
   void decide(health_step<T>& step) {
