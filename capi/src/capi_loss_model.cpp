@@ -285,14 +285,20 @@ PUMPLOSS_API int PUMPLOSS_CALL pumploss_model_map(const pumploss_model* model, d
     for (size_t i = 0; i < n_dp; ++i) {
       for (size_t j = 0; j < n_speed; ++j) {
         const auto p = pumploss::loss_model_predict(model->m, dp_pa[i], speed_rev_s[j], mu_pa_s);
-        eta_t[i * n_speed + j] = is_error(p.st) ? kNaN : p.eta_t;
-        status[i * n_speed + j] = static_cast<int>(p.st);
-        if (is_error(p.st)) failed = true;
-        else if (summary == pumploss::status::ok) summary = p.st;
+        // a usable status never comes with a non-finite output (as call_batch() does)
+        const auto st = !is_error(p.st) && !std::isfinite(p.eta_t) ? pumploss::status::overflow : p.st;
+        eta_t[i * n_speed + j] = is_error(st) ? kNaN : p.eta_t;
+        status[i * n_speed + j] = static_cast<int>(st);
+        if (is_error(st)) failed = true;
+        else if (summary == pumploss::status::ok) summary = st;
       }
     }
     return failed ? PUMPLOSS_EPARTIAL : static_cast<int>(summary);
-  } catch (...) {
+  } catch (...) {  // keep the promise: on an error every output is NaN
+    for (size_t i = 0; i < total; ++i) {
+      eta_t[i] = kNaN;
+      status[i] = PUMPLOSS_EINTERNAL;
+    }
     return PUMPLOSS_EINTERNAL;
   }
 }
