@@ -186,23 +186,6 @@ oil_spec read_oil_ref(section& root) {
   return read_oil_table(o);
 }
 
-std::vector<column_spec> stand_columns() {
-  return {
-      {"speed", column_kind::quantity, D::rotational_speed, true},
-      {"inlet pressure", column_kind::quantity, D::pressure, true},
-      {"outlet pressure", column_kind::quantity, D::pressure, true},
-      {"outlet flow", column_kind::quantity, D::volume_flow, false},  // a pump's flow
-      {"inlet flow", column_kind::quantity, D::volume_flow, false},   // a motor's flow
-      {"torque", column_kind::quantity, D::torque, true},
-      {"drain flow", column_kind::quantity, D::volume_flow, true},
-      {"inlet temperature", column_kind::quantity, D::temperature, true},
-      {"outlet temperature", column_kind::quantity, D::temperature, false},
-      {"drain temperature", column_kind::quantity, D::temperature, false},
-      {"case pressure", column_kind::quantity, D::pressure, false},
-      {"meter temperature", column_kind::quantity, D::temperature, false},
-  };
-}
-
 stand_setup read_stand_setup(const std::string& path) {
   using pumploss::displacement_choice;
   using pumploss::viscosity_temperature;
@@ -762,22 +745,6 @@ std::string baseline_file_text(const stand_setup& setup, const std::string& data
   if (has_dt) s += "drain_temperatures = [" + drs + "]\n";
   s += "drain_flows = [" + flows + "]\n";
   return s;
-}
-
-std::vector<column_spec> field_columns() {
-  return {
-      {"date", column_kind::date, D::pressure, true},
-      {"outlet pressure", column_kind::quantity, D::pressure, true},
-      {"oil temperature", column_kind::quantity, D::temperature, true},
-      {"speed", column_kind::quantity, D::rotational_speed, true},
-      {"drain flow", column_kind::quantity, D::volume_flow, true},
-      {"drain temperature", column_kind::quantity, D::temperature, false},
-      {"case pressure", column_kind::quantity, D::pressure, false},
-      {"note", column_kind::text, D::pressure, false},
-      {"operating hours", column_kind::number, D::pressure, false},
-      {"state", column_kind::text, D::pressure, false},
-      {"event", column_kind::text, D::pressure, false},
-  };
 }
 
 }  // namespace plcli

@@ -9,6 +9,7 @@
 #include <string>
 #include <vector>
 
+#include "columns.hpp"
 #include "config.hpp"
 #include "csv.hpp"
 #include "pumploss/fluid.hpp"
@@ -60,8 +61,6 @@ struct stand_setup {
   std::vector<std::pair<std::string, std::string>> job;  ///< optional [job] details (label, text) in report order
 };
 stand_setup read_stand_setup(const std::string& path);
-/// Columns of the test-stand CSV.
-std::vector<column_spec> stand_columns();
 
 /// Case drain line (drain_line.toml).
 struct line_segment {
@@ -157,9 +156,6 @@ pump_spec read_pump(const std::string& path);
 /// @param res the reduction
 std::string baseline_file_text(const stand_setup& setup, const std::string& data_name,
                                const std::vector<pumploss::test_stand_row>& means, const pumploss::test_stand_result& res);
-
-/// Columns of the field-readings CSV.
-std::vector<column_spec> field_columns();
 
 }  // namespace plcli
 

@@ -13,44 +13,19 @@
 #include <string_view>
 #include <vector>
 
+#include "columns.hpp"  // the program's columns (app/)
 #include "pumploss/table_reader.hpp"
 
 namespace {
 using pumploss::column_kind;
 using D = pumploss::dimension;
-
-std::vector<pumploss::column_spec> stand_columns() {
-  return {{"speed", column_kind::quantity, D::rotational_speed, true},
-          {"inlet pressure", column_kind::quantity, D::pressure, true},
-          {"outlet pressure", column_kind::quantity, D::pressure, true},
-          {"outlet flow", column_kind::quantity, D::volume_flow, false},
-          {"inlet flow", column_kind::quantity, D::volume_flow, false},
-          {"torque", column_kind::quantity, D::torque, true},
-          {"drain flow", column_kind::quantity, D::volume_flow, true},
-          {"inlet temperature", column_kind::quantity, D::temperature, true},
-          {"outlet temperature", column_kind::quantity, D::temperature, false},
-          {"drain temperature", column_kind::quantity, D::temperature, false},
-          {"case pressure", column_kind::quantity, D::pressure, false},
-          {"meter temperature", column_kind::quantity, D::temperature, false}};
-}
-
-std::vector<pumploss::column_spec> field_columns() {
-  return {{"date", column_kind::date, D::pressure, true},
-          {"outlet pressure", column_kind::quantity, D::pressure, true},
-          {"oil temperature", column_kind::quantity, D::temperature, true},
-          {"speed", column_kind::quantity, D::rotational_speed, true},
-          {"drain flow", column_kind::quantity, D::volume_flow, true},
-          {"drain temperature", column_kind::quantity, D::temperature, false},
-          {"case pressure", column_kind::quantity, D::pressure, false},
-          {"note", column_kind::text, D::pressure, false}};
-}
 }  // namespace
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
   if (size == 0) return 0;
   static const std::vector<pumploss::column_spec> specs[3] = {
-      stand_columns(),
-      field_columns(),
+      plcli::stand_columns(),
+      plcli::field_columns(),
       {{"p", column_kind::quantity, D::pressure, true},
        {"count", column_kind::number, D::pressure, false, true},
        {"day", column_kind::date, D::pressure, false},

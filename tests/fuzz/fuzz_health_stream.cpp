@@ -12,6 +12,7 @@
 #include <string>
 #include <vector>
 
+#include "columns.hpp"  // the program's columns (app/)
 #include "pumploss/health_series.hpp"
 #include "pumploss/table_reader.hpp"
 
@@ -41,17 +42,17 @@ pumploss::health_reference<double> reference() {
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
   if (size == 0) return 0;
-  static const std::vector<pumploss::column_spec> spec = {
-      {"date", column_kind::date, D::pressure, true},
-      {"outlet pressure", column_kind::quantity, D::pressure, true},
-      {"oil temperature", column_kind::quantity, D::temperature, true},
-      {"speed", column_kind::quantity, D::rotational_speed, true},
-      {"drain flow", column_kind::quantity, D::volume_flow, true},
-      {"drain temperature", column_kind::quantity, D::temperature, false},
-      {"case pressure", column_kind::quantity, D::pressure, false},
-      {"operating hours", column_kind::number, D::pressure, false},
-      {"state", column_kind::text, D::pressure, false},
-      {"event", column_kind::text, D::pressure, false}};
+  static const std::vector<pumploss::column_spec> spec = plcli::field_columns();  // the program's
+  static const auto at = [](const char* name) {  // a column's index in the spec, by its name
+    std::size_t k = 0;
+    while (k < spec.size() && spec[k].name != name) ++k;
+    if (k == spec.size()) std::abort();  // the program's columns changed: this target must follow
+    return k;
+  };
+  static const std::size_t k_date = at("date"), k_out = at("outlet pressure"), k_oil = at("oil temperature"),
+                           k_speed = at("speed"), k_drain = at("drain flow"), k_dt = at("drain temperature"),
+                           k_case = at("case pressure"), k_hours = at("operating hours"), k_state = at("state"),
+                           k_event = at("event");
   static const auto ref = reference();
   static const pumploss::health_bands<double> bands{};
   const auto dialect = static_cast<pumploss::csv_dialect>(data[0] % 4);
@@ -69,15 +70,15 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   while (s.next(row)) {
     if (row.values.size() != spec.size() || row.texts.size() != spec.size()) finding("a row of the wrong width");
     pumploss::health_series_input x;
-    x.reading = {row.values[4], row.values[1], std::isnan(row.values[6]) ? 0.0 : row.values[6], row.values[2],
-                 row.values[3]};
-    x.reading.drain_t_k = row.values[5];
-    x.reading.inlet_t_k = row.values[2];
-    if (row.texts[8] == "deadhead") x.reading.state = pumploss::operating_state::deadhead;
-    if (row.texts[9] == "overhaul") x.event = pumploss::health_event::overhaul;
-    if (row.texts[9] == "meter change") x.event = pumploss::health_event::meter_change;
-    x.time = std::isnan(row.values[7]) ? row.values[0] : row.values[7];
-    x.date = row.values[0];
+    const auto& v = row.values;
+    x.reading = {v[k_drain], v[k_out], std::isnan(v[k_case]) ? 0.0 : v[k_case], v[k_oil], v[k_speed]};
+    x.reading.drain_t_k = v[k_dt];
+    x.reading.inlet_t_k = v[k_oil];
+    if (row.texts[k_state] == "deadhead") x.reading.state = pumploss::operating_state::deadhead;
+    if (row.texts[k_event] == "overhaul") x.event = pumploss::health_event::overhaul;
+    if (row.texts[k_event] == "meter change") x.event = pumploss::health_event::meter_change;
+    x.time = std::isnan(v[k_hours]) ? v[k_date] : v[k_hours];
+    x.date = v[k_date];
     x.row = fed++;
     if (series.feed(x) != pumploss::status::ok) finding("feed refused before finish");
   }
