@@ -3,8 +3,9 @@
 #   1. build them (scripts/web.sh) into OUT;
 #   2. the module in Node against the native C library: every scalar and batch function of
 #      pumploss.h at the same inputs, same status, outputs within a few ulp (web/tests/);
-#   3. the page in headless Chromium, served by a static file server on loopback: the values in
-#      its DOM against the module's, and a screenshot (OUT/screenshot.png);
+#   3. the page in headless Chromium (driven over the DevTools protocol, web/tests/page_capture.mjs),
+#      served by a static file server on loopback: once the page marks itself ready, the values
+#      in its DOM against the module's, and a screenshot (OUT/screenshot.png);
 #   4. module size and call cost against native (ratios, for the performance page; report only).
 # Usage: scripts/web_test.sh NATIVE_BUILD_DIR [OUT]   (a native build with libpumploss*.a)
 set -euo pipefail
@@ -37,20 +38,11 @@ for _ in $(seq 50); do
   "$python" -c "import urllib.request; urllib.request.urlopen('http://127.0.0.1:$port/index.html')" 2>/dev/null && break
   sleep 0.1
 done
-chrome=(chromium --headless --no-sandbox --disable-gpu --disable-quic --no-first-run
-  --disable-background-networking --disable-component-update --disable-sync --hide-scrollbars
-  --virtual-time-budget=15000)
-# Virtual time runs ahead while the WebAssembly compiles off the main thread, so on a busy machine
-# the DOM can be dumped before the first computation: up to three tries, each in a fresh profile.
-for try in 1 2 3; do
-  timeout 120 "${chrome[@]}" --user-data-dir="$work/chrome-dom-$try" --dump-dom \
-    "http://127.0.0.1:$port/index.html" 2>/dev/null > "$work/page_dom.html" || true
-  grep -q 'data-ready="true"' "$work/page_dom.html" && break
-  echo "web_test: the page was not ready in try $try"
-done
+# Chromium is driven over the DevTools protocol and waits, in real time, for the page's own
+# data-ready mark before it takes the DOM and the screenshot (web/tests/page_capture.mjs).
+timeout 180 node web/tests/page_capture.mjs "http://127.0.0.1:$port/index.html" "$work/page_dom.html" \
+  "$work/screenshot.png" "$work/chrome-profile" 90
 node web/tests/page_check.mjs "$work/page_dom.html" "$out"
-timeout 120 "${chrome[@]}" --user-data-dir="$work/chrome-shot" --window-size=1280,1400 \
-  --screenshot="$work/screenshot.png" "http://127.0.0.1:$port/index.html" >/dev/null 2>&1
 [ -s "$work/screenshot.png" ] || { echo "web_test: no screenshot" >&2; exit 1; }
 echo "web: screenshot $work/screenshot.png"
 

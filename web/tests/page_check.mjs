@@ -1,4 +1,4 @@
-// The calculator page as Chromium rendered it (its DOM, dumped headless) against the same
+// The calculator page as Chromium rendered it (its DOM, taken by page_capture.mjs) against the same
 // calculation run here in Node with the same module: every output's SI value (data-si) equal.
 // Usage: node page_check.mjs DUMPED_DOM.html MODULE_DIR
 import { readFileSync } from 'node:fs';
