@@ -166,37 +166,49 @@ std::string scratch_path(const output_options& out, const std::string& name) {
 constexpr std::size_t text_rows_max = 60;
 constexpr std::size_t text_rows_end = 10;
 
-// Keep the head and the tail of a table's rows for the text (the CSV holds every row).
-struct head_tail {
-  std::vector<std::vector<cell>> head, ring;  // the first rows, the last ones in a ring (reused)
+// Keep the head and the tail of a table's rows for the text (the CSV holds every row). The items
+// are kept as they come (a table's cells, or what makes them) and turned into cells at the end,
+// so a long run without CSV files makes cells for the rows shown only.
+template <class Item>
+struct head_tail_of {
+  std::vector<Item> head, ring;  // the first items, the last ones in a ring (reused)
   std::size_t count = 0;
-  void add(const std::vector<cell>& row) {
+  void add(Item item) {
     if (head.size() < text_rows_max) {
-      head.push_back(row);
+      head.push_back(std::move(item));
     } else {
       const std::size_t k = (count - text_rows_max) % text_rows_end;
-      if (ring.size() <= k) ring.push_back(row);
-      else ring[k] = row;  // copy-assignment keeps the strings' storage
+      if (ring.size() <= k) ring.push_back(std::move(item));
+      else ring[k] = std::move(item);
     }
     ++count;
   }
-  void into(table& t, const std::string& csv_name) {
+  /// The rows of the text table: every item up to text_rows_max, else head, a gap row and tail.
+  /// `cells(item)` gives an item's row of cells.
+  template <class Cells>
+  void into(table& t, const std::string& csv_name, Cells&& cells) const {
+    t.rows.clear();
     if (count <= text_rows_max) {
-      t.rows = std::move(head);
+      for (const auto& it : head) t.rows.push_back(cells(it));
       return;
     }
-    const std::size_t after = count - text_rows_max;  // rows past the head, the last of them in the ring
-    std::vector<std::vector<cell>> last(head.end() - static_cast<std::ptrdiff_t>(text_rows_end), head.end());
-    for (std::size_t j = after > text_rows_end ? after - text_rows_end : 0; j < after; ++j)
-      last.push_back(std::move(ring[j % text_rows_end]));
-    t.rows.assign(head.begin(), head.begin() + static_cast<std::ptrdiff_t>(text_rows_end));
+    for (std::size_t i = 0; i < text_rows_end; ++i) t.rows.push_back(cells(head[i]));
     std::vector<cell> gap(t.cols.size(), std::string());
     gap[0] = fmt::format("... {} rows", count - 2 * text_rows_end);
     if (gap.size() > 1) gap[1] = "(all in " + csv_name + ")";
     t.rows.push_back(gap);
-    for (std::size_t i = last.size() - text_rows_end; i < last.size(); ++i) t.rows.push_back(std::move(last[i]));
+    // the last text_rows_end items: the end of the head, then the ring in the order written
+    for (std::size_t k = count - text_rows_end; k < count; ++k) {
+      if (k < text_rows_max) t.rows.push_back(cells(head[k]));
+      else t.rows.push_back(cells(ring[(k - text_rows_max) % text_rows_end]));
+    }
+  }
+  /// The same for items that are rows of cells already.
+  void into(table& t, const std::string& csv_name) const {
+    into(t, csv_name, [](const Item& c) { return c; });
   }
 };
+using head_tail = head_tail_of<std::vector<cell>>;
 
 // The rows of a table_stream read ahead on a second thread, in batches handed over by swapping
 // (no copy): reading and parsing is about a third of the work on a million readings. The stream
@@ -377,7 +389,7 @@ int run_health(const health_options& o) {
   // the per-row CSVs go out as the rows are judged; the text keeps head and tail
   csv_file_writer w_t(t, du, scratch_path(o.out, "readings")), w_tr(tr_csv, du, scratch_path(o.out, "reasons")),
       w_tx(tx, du, scratch_path(o.out, "refused"));
-  head_tail h_t, h_tr, h_tx;
+  head_tail h_tx;
 
   // what a row's result needs once the series hands it back (rows after an overhaul wait a little)
   struct row_info {
@@ -388,9 +400,13 @@ int run_health(const health_options& o) {
     pumploss::health_reading<double> rd;
   };
   std::deque<row_info> waiting;
+  struct reading_rec {  // what makes a reading's rows of the text tables
+    row_info ri;
+    pumploss::health_assessment<double> a;
+  };
+  head_tail_of<reading_rec> h_rd;
   std::map<unsigned, std::pair<std::string, std::string>> reasons_of;  // sentences and codes of a combination
-  std::vector<cell> row_cells(t.cols.size(), 0.0), why_cells(tr.cols.size(), std::string());
-  std::vector<cell> code_cells(tr.cols.size(), std::string());
+  std::vector<cell> row_cells(t.cols.size(), 0.0), code_cells(tr.cols.size(), std::string());
   std::optional<input_error> failure;
   std::vector<float> plot_x, plot_qn, plot_q;  // scored readings, display units
   auto lower = [](std::string s) {
@@ -399,6 +415,51 @@ int run_health(const health_options& o) {
   };
   auto err_at = [&](const row_info& ri, int pos, const char* col, const std::string& what) {
     return input_error(o.readings, ri.line, pos, std::string("column '") + col + "': " + what);
+  };
+  // a reading's row of the readings table, and of the reasons table (sentences for the text,
+  // codes for the CSV)
+  auto fill_reading = [&](const row_info& ri, const pumploss::health_assessment<double>& a, std::vector<cell>& c) {
+    const auto& rd = ri.rd;
+    const bool refused = a.st == status::out_of_validity;
+    set_text(c[0], ri.date);
+    c[1] = rd.outlet_pa;
+    c[2] = ri.oil_t_k;
+    c[3] = rd.speed_rev_s;
+    c[4] = rd.drain_flow_m3_s;
+    if (refused) {
+      for (std::size_t j = 5; j < 10; ++j) set_text(c[j], "-");
+    } else {
+      c[5] = a.drain_at_reference_m3_s;
+      c[6] = a.fraction_at_reference;
+      c[7] = a.growth;
+      c[8] = a.drain_rise_k;
+      c[9] = a.throttling_rise_k;
+    }
+    set_text(c[10], pumploss::operating_state_name(rd.state));
+    set_text(c[11], refused ? "refused" : pumploss::health_level_name(a.level));
+  };
+  auto fill_why = [&](const row_info& ri, const pumploss::health_assessment<double>& a, std::vector<cell>& wr,
+                      bool codes) {
+    const bool refused = a.st == status::out_of_validity;
+    set_text(wr[0], ri.date);
+    set_text(wr[1], refused ? "refused" : pumploss::health_level_name(a.level));
+    if (refused) {
+      set_text(wr[2], codes ? refused_code : "see the refused readings");
+    } else {
+      auto& why = reasons_of[a.reasons];  // the sentences and codes of a combination of reasons, made once
+      if (why.first.empty())
+        for (unsigned bit = 1; bit != 0 && bit <= a.reasons; bit <<= 1)
+          if (a.reasons & bit) {
+            why.first += (why.first.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
+            why.second += (why.second.empty() ? "" : " ") + std::string(reason_code(bit));
+          }
+      set_text(wr[2], codes ? why.second : why.first);
+    }
+    if (ri.event.empty()) {
+      set_text(wr[3], ri.note);
+    } else {
+      set_text(wr[3], ri.note + (ri.note.empty() ? "" : "; ") + "event: " + ri.event);
+    }
   };
   auto on_row = [&](const pumploss::health_series_row& res) {
     row_info ri = std::move(waiting.front());
@@ -424,60 +485,20 @@ int run_health(const health_options& o) {
                                                            pumploss::status_message(static_cast<int>(a.st)));
       return;
     }
-    // one reused row of cells per table: no allocation per reading once the strings have grown
-    auto& c = row_cells;
-    set_text(c[0], ri.date);
-    c[1] = rd.outlet_pa;
-    c[2] = ri.oil_t_k;
-    c[3] = rd.speed_rev_s;
-    c[4] = rd.drain_flow_m3_s;
-    if (refused) {
-      for (std::size_t j = 5; j < 10; ++j) set_text(c[j], "-");
-    } else {
-      c[5] = a.drain_at_reference_m3_s;
-      c[6] = a.fraction_at_reference;
-      c[7] = a.growth;
-      c[8] = a.drain_rise_k;
-      c[9] = a.throttling_rise_k;
-    }
-    set_text(c[10], pumploss::operating_state_name(rd.state));
-    set_text(c[11], refused ? "refused" : pumploss::health_level_name(a.level));
-    w_t.row(c);
-    h_t.add(c);
-    auto& wr = why_cells;
-    auto& wc = code_cells;
-    set_text(wr[0], ri.date);
-    set_text(wr[1], refused ? "refused" : pumploss::health_level_name(a.level));
-    if (refused) {
-      set_text(wr[2], "see the refused readings");
-      if (w_tr.active()) set_text(wc[2], refused_code);
-    } else {
-      auto& why = reasons_of[a.reasons];  // the sentences and codes of a combination of reasons, made once
-      if (why.first.empty())
-        for (unsigned bit = 1; bit != 0 && bit <= a.reasons; bit <<= 1)
-          if (a.reasons & bit) {
-            why.first += (why.first.empty() ? "" : " ") + std::string(pumploss::health_reason_text(bit));
-            why.second += (why.second.empty() ? "" : " ") + std::string(reason_code(bit));
-          }
-      set_text(wr[2], why.first);
-      if (w_tr.active()) set_text(wc[2], why.second);
-    }
-    if (ri.event.empty()) {
-      set_text(wr[3], ri.note);
-    } else {
-      set_text(wr[3], ri.note + (ri.note.empty() ? "" : "; ") + "event: " + ri.event);
+    if (w_t.active()) {  // one reused row of cells per table: no allocation per reading
+      fill_reading(ri, a, row_cells);
+      w_t.row(row_cells);
     }
     if (w_tr.active()) {
-      wc[0] = wr[0];
-      wc[1] = wr[1];
-      wc[3] = wr[3];
-      w_tr.row(wc);
+      fill_why(ri, a, code_cells, true);
+      w_tr.row(code_cells);
     }
-    h_tr.add(wr);
-    if (refused) return;
-    plot_x.push_back(static_cast<float>(ri.date_days));
-    plot_qn.push_back(static_cast<float>(du.show(a.drain_at_reference_m3_s, D::volume_flow)));
-    plot_q.push_back(static_cast<float>(du.show(rd.drain_flow_m3_s, D::volume_flow)));
+    if (!refused) {
+      plot_x.push_back(static_cast<float>(ri.date_days));
+      plot_qn.push_back(static_cast<float>(du.show(a.drain_at_reference_m3_s, D::volume_flow)));
+      plot_q.push_back(static_cast<float>(du.show(rd.drain_flow_m3_s, D::volume_flow)));
+    }
+    h_rd.add({std::move(ri), a});  // the text's cells are made at the end, for the rows it shows
   };
   pumploss::health_series series(ref, bands, on_row);
 
@@ -672,8 +693,16 @@ int run_health(const health_options& o) {
     if (event_notes.size() > text_rows_max) ev += fmt::format("; and {} more", event_notes.size() - text_rows_max);
     r.facts.emplace_back("Events", ev);
   }
-  h_t.into(t, "health_readings.csv");
-  h_tr.into(tr, "health_reasons.csv");
+  h_rd.into(t, "health_readings.csv", [&](const reading_rec& rec) {
+    std::vector<cell> c(t.cols.size(), 0.0);
+    fill_reading(rec.ri, rec.a, c);
+    return c;
+  });
+  h_rd.into(tr, "health_reasons.csv", [&](const reading_rec& rec) {
+    std::vector<cell> c(tr.cols.size(), std::string());
+    fill_why(rec.ri, rec.a, c, false);
+    return c;
+  });
   h_tx.into(tx, "health_refused.csv");
   t.streamed_csv = w_t.release();
   tr.streamed_csv = w_tr.release();
