@@ -72,25 +72,20 @@ struct run {
   }
 };
 
-// The readings of a column by its name ("outlet flow" and "inlet flow" both name the flow).
-const std::vector<double>* column_of(const test_stand_readings& d, const std::string& name) {
-  const std::pair<const char*, const std::vector<double>*> cols[] = {
-      {"speed", &d.speed_rev_s},
-      {"inlet pressure", &d.inlet_pressure_pa},
-      {"outlet pressure", &d.outlet_pressure_pa},
-      {"outlet flow", &d.flow_m3_s},
-      {"inlet flow", &d.flow_m3_s},
-      {"torque", &d.torque_n_m},
-      {"drain flow", &d.drain_flow_m3_s},
-      {"inlet temperature", &d.inlet_temperature_k},
-      {"outlet temperature", &d.outlet_temperature_k},
-      {"drain temperature", &d.drain_temperature_k},
-      {"meter temperature", &d.meter_temperature_k},
-      {"case pressure", &d.case_pressure_pa},
-  };
-  for (const auto& c : cols)
-    if (name == c.first) return c.second;
-  return nullptr;
+// The name of column c (readings_member / row_member order): the flow is the outlet flow of a
+// pump, the inlet flow of a motor.
+const char* column_name(int c, bool pump) {
+  static const char* const names[11] = {"speed",       "inlet pressure",    "outlet pressure",   nullptr,
+                                        "torque",      "drain flow",        "inlet temperature", "outlet temperature",
+                                        "drain temperature", "meter temperature", "case pressure"};
+  return c == 3 ? (pump ? "outlet flow" : "inlet flow") : names[c];
+}
+
+// The column index of a name ("outlet flow" and "inlet flow" both name the flow); -1 for none.
+int column_index(const std::string& name) {
+  for (int c = 0; c < 11; ++c)
+    if (name == column_name(c, true) || name == column_name(c, false)) return c;
+  return -1;
 }
 
 // The columns of a reading by index (test_stand_row's order), in the readings and in a row.
@@ -109,26 +104,25 @@ constexpr double test_stand_row::*row_member[11] = {
 
 // The range of every reading, in the order the checks run (a reader of the file meets them so).
 struct range_check {
-  int col;  // index of readings_member / row_member
-  const char* name;
+  int col;  // index of readings_member / row_member (its name: column_name())
   double lo, hi;
   const char* what;
 };
-std::array<range_check, 11> range_checks(bool pump) {
+std::array<range_check, 11> range_checks() {
   const char* temp = "is not an oil temperature between -50 and 200 degC";
   const char* gauge = "is not a gauge pressure between -1 and 10000 bar";
   const char* flow = "is not a flow between zero and 60000 L/min";
-  return {{{0, "speed", 1e-3, 1e3, "is not a speed above zero (and below 60000 rpm)"},
-           {3, pump ? "outlet flow" : "inlet flow", 0.0, 1.0, flow},
-           {5, "drain flow", 0.0, 1.0, flow},
-           {4, "torque", 0.0, 1e6, "is not a torque between zero and 1e6 N.m"},
-           {6, "inlet temperature", 223.15, 473.15, temp},
-           {7, "outlet temperature", 223.15, 473.15, temp},
-           {8, "drain temperature", 223.15, 473.15, temp},
-           {9, "meter temperature", 223.15, 473.15, temp},
-           {1, "inlet pressure", -1e5, 1e9, gauge},
-           {2, "outlet pressure", -1e5, 1e9, gauge},
-           {10, "case pressure", -1e5, 1e9, gauge}}};
+  return {{{0, 1e-3, 1e3, "is not a speed above zero (and below 60000 rpm)"},
+           {3, 0.0, 1.0, flow},
+           {5, 0.0, 1.0, flow},
+           {4, 0.0, 1e6, "is not a torque between zero and 1e6 N.m"},
+           {6, 223.15, 473.15, temp},
+           {7, 223.15, 473.15, temp},
+           {8, 223.15, 473.15, temp},
+           {9, 223.15, 473.15, temp},
+           {1, -1e5, 1e9, gauge},
+           {2, -1e5, 1e9, gauge},
+           {10, -1e5, 1e9, gauge}}};
 }
 
 // Check the setup's own values (a program's reader checks them too; an embedder may not).
@@ -180,10 +174,8 @@ bool setup_ok(const test_stand_setup& s, run& r) {
 // pressures), then columns_late_ok(): the columns the setup asks for.
 bool columns_ok(const test_stand_setup& s, std::size_t n, const std::size_t (&sizes)[11], run& r) {
   const bool pump = s.kind == machine::pump;
-  const char* flow_col = pump ? "outlet flow" : "inlet flow";
-  const char* names[11] = {"speed",       "inlet pressure",     "outlet pressure",   flow_col,
-                           "torque",      "drain flow",         "inlet temperature", "outlet temperature",
-                           "drain temperature", "meter temperature", "case pressure"};
+  const char* names[11];
+  for (int c = 0; c < 11; ++c) names[c] = column_name(c, pump);
   if (n == 0) return r.fail(status::insufficient_data, no_row, "speed", {}, "no readings"), false;
   for (const int c : {0, 1, 2, 3, 4, 5, 6, 7, 8, 10, 9}) {
     if (sizes[c] == 0 && c <= 6)
@@ -243,11 +235,11 @@ bool readings_ok(const test_stand_setup& s, const test_stand_readings& d, run& r
   std::size_t sizes[11];
   for (int c = 0; c < 11; ++c) sizes[c] = (d.*readings_member[c]).size();
   if (!columns_ok(s, n, sizes, r)) return false;
-  for (const auto& c : range_checks(pump)) {
+  for (const auto& c : range_checks()) {
     const auto& v = d.*readings_member[c.col];
     for (std::size_t i = 0; i < v.size(); ++i)
       if (!(v[i] >= c.lo && v[i] <= c.hi)) {
-        r.fail(status::domain, i, c.name, {}, c.what);
+        r.fail(status::domain, i, column_name(c.col, pump), {}, c.what);
         r.res.messages.back().follows_value = true;
         return false;
       }
@@ -637,7 +629,8 @@ std::string describe(const test_stand_message& m, const test_stand_readings& rea
   if (m.row != no_row) out += "reading " + std::to_string(m.row + 1) + (m.column.empty() ? ": " : ", ");
   if (!m.column.empty()) {
     out += m.column;
-    const auto* v = column_of(readings, m.column);
+    const int c = column_index(m.column);
+    const auto* v = c < 0 ? nullptr : &(readings.*readings_member[c]);
     if (m.follows_value && m.row != no_row && v != nullptr && m.row < v->size()) {
       char buf[48];
       std::snprintf(buf, sizeof buf, " %.6g", (*v)[m.row]);
@@ -1180,11 +1173,11 @@ struct test_stand_stream::impl {
     if (keep_row_point) row_group.push_back(no_row);
     // the values, in reduce_test_stand()'s order of checks
     int check = 0;
-    for (const auto& c : range_checks(pump)) {
+    for (const auto& c : range_checks()) {
       if (check >= fail_check) break;
       const double v = row.*row_member[c.col];
       if (has(c.col) && !(v >= c.lo && v <= c.hi)) {
-        record_failure(check, i, {status::domain, i, c.name, {}, c.what, true}, v);
+        record_failure(check, i, {status::domain, i, column_name(c.col, pump), {}, c.what, true}, v);
         break;
       }
       ++check;
@@ -1192,7 +1185,8 @@ struct test_stand_stream::impl {
     if (fail_check > 11 && (columns & required) == required &&
         !pressures_in_order(pump, row.inlet_pressure_pa, row.outlet_pressure_pa)) {
       test_stand_result scratch;
-      run_record(scratch, [&](run& r) { pressures_out_of_order(pump, i, r); });
+      run r{scratch};
+      pressures_out_of_order(pump, i, r);
       record_failure(11, i, scratch.messages.back(), 0);
     }
     if (fail_check < 13 || (columns & required) != required || !has(c_visc) ||
@@ -1230,12 +1224,6 @@ struct test_stand_stream::impl {
     if (keep_row_point) row_group[i] = k;
     run_rows.push_back(h);
     max_held = std::max(max_held, run_rows.size() + g.pending.size());
-  }
-
-  template <class F>
-  static void run_record(test_stand_result& res, F f) {
-    run r{res};
-    f(r);
   }
 
   test_stand_result finish() {
@@ -1340,7 +1328,8 @@ const std::vector<test_stand_row>& test_stand_stream::point_means() const noexce
 std::string test_stand_stream::describe(const test_stand_message& m) const {
   test_stand_readings one;  // the failing reading's value in a readings of its row alone
   if (m.follows_value && m.row == p_->fail_row && m.row != no_row) {
-    if (const auto* v = column_of(one, m.column)) const_cast<std::vector<double>*>(v)->assign(m.row + 1, p_->fail_value);
+    const int c = column_index(m.column);
+    if (c >= 0) (one.*readings_member[c]).assign(m.row + 1, p_->fail_value);
   }
   return pumploss::describe(m, one);
 }
