@@ -13,6 +13,7 @@
 #   exceeds 200 MB and PUMPLOSS_BENCH_STRICT=1 (default: report only).
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+source "$here/scripts/time_v.sh"
 bin="${1:-$here/build/app/pumploss}"
 n="${2:-1000000}"
 scratch="$(mktemp -d)"
@@ -20,14 +21,10 @@ trap 'rm -rf "$scratch"' EXIT
 cp "$here/examples/demo/oil.toml" "$here/examples/demo/pump_p31_health.toml" "$scratch/"
 /usr/bin/python3 "$here/bench/health_scale.py" generate "$n" "$scratch/readings.csv"
 echo "readings: $n rows, $(du -h "$scratch/readings.csv" | cut -f1)"
-run() {  # label, command...: prints seconds and max RSS (kB)
+run() {  # label, command...: prints the label, wall seconds, max RSS (kB) and CPU seconds
   local label="$1"; shift
   /usr/bin/time -v -o "$scratch/$label.time" "$@" >"$scratch/$label.out" 2>&1 || { cat "$scratch/$label.out"; exit 2; }
-  local s kb
-  s="$(awk -F': ' '/Elapsed \(wall clock\)/ {n=split($2,a,":"); t=0; for(i=1;i<=n;i++) t=t*60+a[i]; print t}' "$scratch/$label.time")"
-  kb="$(awk -F': ' '/Maximum resident set size/ {print $2}' "$scratch/$label.time")"
-  cpu="$(awk -F': ' '/User time|System time/ {t+=$2} END {print t}' "$scratch/$label.time")"
-  echo "$label $s $kb $cpu"
+  echo "$label $(time_v_summary "$scratch/$label.time")"
 }
 hs=() hos=() ps=()
 for _ in $(seq "${PUMPLOSS_BENCH_REPEAT:-3}"); do

@@ -6,6 +6,7 @@
 # Usage: scripts/bench_test_stand_scale.sh [pumploss binary] [N]   (default build/app/pumploss)
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+source "$here/scripts/time_v.sh"
 bin="${1:-$here/build/app/pumploss}"
 n="${2:-1000000}"
 scratch="$(mktemp -d)"
@@ -17,7 +18,5 @@ echo "logged test: $n rows, $(du -h "$scratch/logged.csv" | cut -f1)"
   --out "$scratch/out" >"$scratch/stdout" 2>&1 || { cat "$scratch/stdout"; exit 2; }
 echo "command: $bin test-stand logged.csv --setup test_stand.toml --out out   (N = $n)"
 grep -E "^Set points:" "$scratch/out/test_stand.txt" || true
-awk -F': ' '/Elapsed \(wall clock\)/ {n=split($2,a,":"); t=0; for(i=1;i<=n;i++) t=t*60+a[i]; w=t}
-            /User time|System time/ {c+=$2}
-            /Maximum resident set size/ {kb=$2}
-            END {printf "pumploss test-stand: %.2f s wall, %.2f s CPU, peak RSS %.0f MB\n", w, c, kb/1024}' "$scratch/time"
+read -r wall kb cpu < <(time_v_summary "$scratch/time")
+awk -v w="$wall" -v kb="$kb" -v c="$cpu" 'BEGIN {printf "pumploss test-stand: %.2f s wall, %.2f s CPU, peak RSS %.0f MB\n", w, c, kb/1024}'
