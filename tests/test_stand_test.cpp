@@ -10,6 +10,7 @@
 #include <random>
 
 #include "pumploss/test_stand.hpp"
+#include "test_stand_feed.hpp"
 
 namespace {
 
@@ -586,41 +587,8 @@ TEST(TestStandMap, DefaultsToTheTestedEnvelopeAtTheTestedViscosityTemperature) {
 // refusals, and holds no more than one set point's rows.
 namespace {
 
-// The column bits of the columns a readings struct has.
-unsigned columns_of(const pumploss::test_stand_readings& r) {
-  using S = pumploss::test_stand_stream;
-  const std::pair<const std::vector<double>*, unsigned> c[] = {
-      {&r.speed_rev_s, S::speed},          {&r.inlet_pressure_pa, S::inlet_pressure},
-      {&r.outlet_pressure_pa, S::outlet_pressure}, {&r.flow_m3_s, S::flow},
-      {&r.torque_n_m, S::torque},          {&r.drain_flow_m3_s, S::drain_flow},
-      {&r.inlet_temperature_k, S::inlet_temperature}, {&r.outlet_temperature_k, S::outlet_temperature},
-      {&r.drain_temperature_k, S::drain_temperature}, {&r.meter_temperature_k, S::meter_temperature},
-      {&r.case_pressure_pa, S::case_pressure}};
-  unsigned bits = 0;
-  for (const auto& x : c)
-    if (!x.first->empty()) bits |= x.second;
-  return bits;
-}
-
-// Feed every row of r into a stream.
-void feed(pumploss::test_stand_stream& st, const pumploss::test_stand_readings& r) {
-  auto at = [](const std::vector<double>& v, std::size_t i) { return i < v.size() ? v[i] : std::nan(""); };
-  for (std::size_t i = 0; i < r.speed_rev_s.size(); ++i) {
-    pumploss::test_stand_row row;
-    row.speed_rev_s = r.speed_rev_s[i];
-    row.inlet_pressure_pa = at(r.inlet_pressure_pa, i);
-    row.outlet_pressure_pa = at(r.outlet_pressure_pa, i);
-    row.flow_m3_s = at(r.flow_m3_s, i);
-    row.torque_n_m = at(r.torque_n_m, i);
-    row.drain_flow_m3_s = at(r.drain_flow_m3_s, i);
-    row.inlet_temperature_k = at(r.inlet_temperature_k, i);
-    row.outlet_temperature_k = at(r.outlet_temperature_k, i);
-    row.drain_temperature_k = at(r.drain_temperature_k, i);
-    row.meter_temperature_k = at(r.meter_temperature_k, i);
-    row.case_pressure_pa = at(r.case_pressure_pa, i);
-    st.add(row);
-  }
-}
+using pltest::columns_of;
+using pltest::feed;
 
 pumploss::test_stand_result streamed(const pumploss::test_stand_setup& s, const pumploss::test_stand_readings& r) {
   pumploss::test_stand_stream st(s, columns_of(r), true);

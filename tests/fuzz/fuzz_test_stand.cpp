@@ -15,9 +15,9 @@
 #include <cstdio>
 #include <cstdlib>
 #include <limits>
-#include <vector>
 
 #include "pumploss/test_stand.hpp"
+#include "test_stand_feed.hpp"  // tests/
 
 namespace {
 
@@ -150,27 +150,8 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   // the streaming front end (issue 20) fed the same readings row by row, when no column is cut short:
   // the same rules, and the same refusal while the set points are not formed yet (the checks are shared)
   if (cut != 3) {
-    const std::vector<double>* cols[] = {&r.speed_rev_s, &r.inlet_pressure_pa, &r.outlet_pressure_pa, &r.flow_m3_s,
-                                         &r.torque_n_m, &r.drain_flow_m3_s, &r.inlet_temperature_k,
-                                         &r.outlet_temperature_k, &r.drain_temperature_k, &r.meter_temperature_k,
-                                         &r.case_pressure_pa};
-    double pumploss::test_stand_row::*fields[] = {
-        &pumploss::test_stand_row::speed_rev_s,         &pumploss::test_stand_row::inlet_pressure_pa,
-        &pumploss::test_stand_row::outlet_pressure_pa,  &pumploss::test_stand_row::flow_m3_s,
-        &pumploss::test_stand_row::torque_n_m,          &pumploss::test_stand_row::drain_flow_m3_s,
-        &pumploss::test_stand_row::inlet_temperature_k, &pumploss::test_stand_row::outlet_temperature_k,
-        &pumploss::test_stand_row::drain_temperature_k, &pumploss::test_stand_row::meter_temperature_k,
-        &pumploss::test_stand_row::case_pressure_pa};
-    unsigned bits = 0;
-    for (unsigned c = 0; c < 11; ++c)
-      if (!cols[c]->empty()) bits |= 1u << c;
-    pumploss::test_stand_stream st(s, bits, true);
-    for (std::size_t i = 0; i < r.speed_rev_s.size(); ++i) {
-      pumploss::test_stand_row row;
-      for (unsigned c = 0; c < 11; ++c)
-        if (!cols[c]->empty()) row.*fields[c] = (*cols[c])[i];
-      st.add(row);
-    }
+    pumploss::test_stand_stream st(s, pltest::columns_of(r), true);
+    pltest::feed(st, r);
     const auto sres = st.finish();
     check_result(s, r.speed_rev_s.size(), sres);
     check(sres.st == res.st || !(res.row_point.empty() || sres.row_point.empty()), "the stream refuses differently");
