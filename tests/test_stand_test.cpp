@@ -720,10 +720,9 @@ TEST(TestStandStream, MessyInputsGiveTheSameRefusalsAndResults) {
   auto same = [&](const pumploss::test_stand_setup& su, const pumploss::test_stand_readings& r, double tol) {
     expect_same(streamed(su, r), pumploss::reduce_test_stand(su, r), tol);
   };
-  auto cut = [](pumploss::test_stand_readings r, std::size_t n) {
-    for (auto* v : {&r.speed_rev_s, &r.inlet_pressure_pa, &r.outlet_pressure_pa, &r.flow_m3_s, &r.torque_n_m,
-                    &r.drain_flow_m3_s, &r.inlet_temperature_k, &r.drain_temperature_k})
-      v->resize(n);
+  auto cut = [](pumploss::test_stand_readings r, std::size_t n) {  // every column the readings have
+    for (const auto& c : pltest::stand_columns())
+      if (!(r.*c.column).empty()) (r.*c.column).resize(n);
     return r;
   };
   const std::size_t n = L.r.speed_rev_s.size();
@@ -775,11 +774,12 @@ TEST(TestStandStream, MessyInputsGiveTheSameRefusalsAndResults) {
      // the same set points, rows and statuses, the scatter within rounding
     auto r = L.r;
     const std::size_t from = L.steady[3][2], to = L.steady[10][2];
-    for (auto* v : {&r.speed_rev_s, &r.inlet_pressure_pa, &r.outlet_pressure_pa, &r.flow_m3_s, &r.torque_n_m,
-                    &r.drain_flow_m3_s, &r.inlet_temperature_k, &r.drain_temperature_k}) {
-      const double x = (*v)[from];
-      v->erase(v->begin() + static_cast<std::ptrdiff_t>(from));
-      v->insert(v->begin() + static_cast<std::ptrdiff_t>(to), x);
+    for (const auto& c : pltest::stand_columns()) {
+      auto& v = r.*c.column;
+      if (v.empty()) continue;
+      const double x = v[from];
+      v.erase(v.begin() + static_cast<std::ptrdiff_t>(from));
+      v.insert(v.begin() + static_cast<std::ptrdiff_t>(to), x);
     }
     const auto whole = pumploss::reduce_test_stand(s, r);
     ASSERT_TRUE(pumploss::is_usable(whole.st));
